@@ -1,0 +1,52 @@
+import { defineConfig } from 'vitest/config';
+import preact from '@preact/preset-vite';
+import { VitePWA } from 'vite-plugin-pwa';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+
+const rootDir = import.meta.dirname;
+
+export default defineConfig({
+  root: resolve(rootDir, 'src'),
+  publicDir: resolve(rootDir, 'src/public'),
+  base: './',
+  build: {
+    outDir: resolve(rootDir, 'dist'),
+    emptyOutDir: true,
+    target: 'es2022',
+    // One chunk: lazy chunks can vanish from the precache under a running page after an update.
+    rollupOptions: { output: { inlineDynamicImports: true } },
+  },
+  plugins: [
+    preact(),
+    VitePWA({
+      strategies: 'injectManifest',
+      srcDir: resolve(rootDir, 'sw'),
+      filename: 'sw.ts',
+      injectRegister: false,
+      manifest: false,
+      injectManifest: {
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}'],
+      },
+    }),
+    {
+      // The manifest lives at the repository's top level; ship it beside index.html.
+      name: 'tankside-manifest',
+      apply: 'build',
+      generateBundle() {
+        this.emitFile({ type: 'asset', fileName: 'manifest.webmanifest', source: readManifest() });
+      },
+    },
+  ],
+  test: {
+    root: rootDir,
+    include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
+    exclude: ['test/e2e/**', 'node_modules/**'],
+    environment: 'node',
+    testTimeout: 60_000,
+  },
+});
+
+function readManifest(): string {
+  return readFileSync(resolve(rootDir, 'manifest.webmanifest'), 'utf8');
+}
