@@ -53,9 +53,11 @@ export function parseDecimal(text: string, field: string, options: ParseDecimalO
   const hint = options.decimalSeparator;
   const trimmed = text.trim();
   if (trimmed === '') throw new InputError(field, 'empty', text);
+  // Messages quote what was typed, cut short if someone pasted a paragraph.
+  const shown = trimmed.length > 40 ? `${trimmed.slice(0, 37)}…` : trimmed;
 
   function refuse(why: string): never {
-    throw new InputError(field, 'not-a-number', text, undefined, `${field}: "${text}" is not a number: ${why}.`);
+    throw new InputError(field, 'not-a-number', text, undefined, `${field}: "${shown}" is not a number: ${why}.`);
   }
 
   let sign = 1;
@@ -113,8 +115,8 @@ export function parseDecimal(text: string, field: string, options: ParseDecimalO
       const asDecimal = `${before}.${after}`;
       const asGrouping = `${before}${after}`;
       throw new InputError(field, 'not-a-number', text, undefined,
-        `${field}: "${text}" could mean ${stripZeros(asDecimal)} or ${asGrouping}. ` +
-          `Type it without a thousands separator (${asGrouping}), or with more or fewer decimals.`);
+        `${field}: "${shown}" could mean ${stripZeros(asDecimal)} or ${asGrouping}. ` +
+          `Type "${asGrouping}" for the whole number, or "${before}${only}${after}0" for the decimal.`);
     } else decimal = hint === only ? only : null;
   }
 

@@ -25,7 +25,7 @@ describe('pressure factors against NIST SP 811 (2008) Appendix B.8 / B.9 "Pressu
     ['MPa', 1e6, 'SI prefix mega'],
     ['hPa', 1e2, 'SI prefix hecto'],
     ['Pa', 1, 'SI unit'],
-  ] as const)('1 %s = %d Pa exactly — %s', (unit, pa) => {
+  ] as const)('1 %s = %d Pa exactly — %s', (unit, pa, _source) => {
     expect(pressureToPa(1, unit)).toBe(pa);
     expect(pressureFromPa(pa, unit)).toBe(1);
   });
@@ -41,7 +41,7 @@ describe('pressure factors against NIST SP 811 (2008) Appendix B.8 / B.9 "Pressu
     ['inH2O', '2.490 889', 2, 'B.8 inch of water, conventional'],
     ['inH2O@39.2F', '2.490 82', 2, 'B.8 inch of water (39.2 °F)'],
     ['inH2O@60F', '2.4884', 2, 'B.8 inch of water (60 °F)'],
-  ] as const)('1 %s rounds to %s E+0%d Pa — %s', (unit, printed, exponent) => {
+  ] as const)('1 %s rounds to %s E+0%d Pa — %s', (unit, printed, exponent, _source) => {
     expect(roundsToPrinted(pressureToPa(1, unit), printed, exponent)).toBe(true);
   });
 
