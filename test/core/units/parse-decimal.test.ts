@@ -113,6 +113,11 @@ describe('parseDecimal: refused', () => {
     expect(error.value).toBe(text);
   });
 
+  it('quotes the offending character whole, even outside the basic plane', () => {
+    const error = expectInputError(() => parseDecimal('5\u{1F525}', FIELD), FIELD, 'not-a-number');
+    expect(error.message).toContain('"\u{1F525}"');
+  });
+
   it('a value that is not a string is refused, not coerced', () => {
     expectInputError(() => parseDecimal(undefined as unknown as string, FIELD), FIELD, 'not-a-number');
     expectInputError(() => parseDecimal(12 as unknown as string, FIELD), FIELD, 'not-a-number');
