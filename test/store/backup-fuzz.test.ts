@@ -47,7 +47,9 @@ const structural = fc.record({
   other: fc.nat(),
 });
 
-function applyStructural(text: string, m: fc.RecordValue<typeof structural extends fc.Arbitrary<infer T> ? T : never>): string {
+type Structural = typeof structural extends fc.Arbitrary<infer T> ? T : never;
+
+function applyStructural(text: string, m: Structural): string {
   const doc = JSON.parse(text) as Json;
   const all = nodes(doc);
   const [parent, key] = all[m.at % all.length]!;
