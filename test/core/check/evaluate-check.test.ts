@@ -121,3 +121,9 @@ describe('evaluateCheck', () => {
     );
   });
 });
+
+describe('evaluateCheck, contents too light for the formulation', () => {
+  it('refuses a net weight of micrograms naming the weight field', () => {
+    expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 1e-12 } }))).toThrow(/net weight/);
+  });
+});
