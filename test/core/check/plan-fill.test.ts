@@ -44,6 +44,12 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
     expect(p.largestSafeCharge.waterMassKg).toBeCloseTo(881.667, 2);
     expect(saturation(p.largestSafeCharge.limitTemperatureK).liquid.v * p.largestSafeCharge.waterMassKg).toBeCloseTo(1, 9);
   });
+  it('1.8 m³ at 220 °C with two thirds vapor space needs 518.1 kg, x = 0.0269 (Çengel & Boles, ch. 3 end-of-chapter problem, from memory; answer on a Q&A page)', () => {
+    const v = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1.8 } });
+    const p = planFill(v, request({ targetTemperatureK: 493.15, target: { kind: 'vapor-space-fraction', fraction: 2 / 3 } }));
+    expect(p.waterMassKg).toBeCloseTo(518.1, 0);
+    expect(p.atTarget.quality).toBeCloseTo(0.0269, 3);
+  });
   it('a charge above the safe charge is a DANGER', () => {
     const p = planFill(oneCubicMetre, request({ target: { kind: 'quality', quality: 0 } }));
     expect(p.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'plan-exceeds-safe-charge' });
