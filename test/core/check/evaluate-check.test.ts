@@ -127,3 +127,24 @@ describe('evaluateCheck, contents too light for the formulation', () => {
     expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 1e-12 } }))).toThrow(/net weight/);
   });
 });
+
+describe('every check rule is raised by its scenario', () => {
+  const scenarios: [string, Parameters<typeof testVessel>[0], Partial<Reading>][] = [
+    ['pressure-below-saturation', {}, { pressure: { reference: 'absolute', pressurePa: 120e3 } }],
+    ['superheated-pressure-mismatch', {}, { temperatureK: 423.15, pressure: { reference: 'absolute', pressurePa: 300e3 }, weight: { kind: 'net', netKg: 1 } }],
+    ['quality-band-reaches-liquid-full', {}, { weight: { kind: 'net', netKg: 3610 } }],
+    ['above-design-temperature', { designTemperatureK: 373.15 }, {}],
+    ['pressure-near-relief-set', {}, { temperatureK: 451, pressure: { reference: 'gauge', pressurePa: 0.85e6 }, weight: { kind: 'net', netKg: 200 } }],
+    ['atmosphere-assumed', {}, {}],
+  ];
+  for (const [rule, vesselOver, readingOver] of scenarios) {
+    it(rule, () => {
+      const r = evaluateCheck(testVessel(vesselOver), reading(readingOver));
+      expect(r.cautions.map((c) => c.rule)).toContain(rule);
+    });
+  }
+  it('a measured barometer removes the atmosphere-assumed notice', () => {
+    const r = evaluateCheck(testVessel(), reading({ atmospherePa: 101325 }));
+    expect(r.cautions.map((c) => c.rule)).not.toContain('atmosphere-assumed');
+  });
+});

@@ -84,3 +84,25 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
     }
   });
 });
+
+describe('every plan rule is raised by its scenario', () => {
+  it('plan-target-above-mawp', () => {
+    expect(planFill(oneCubicMetre, request({ targetTemperatureK: 460 })).cautions.map((c) => c.rule)).toContain('plan-target-above-mawp');
+  });
+  it('plan-above-design-temperature', () => {
+    const v = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1 }, designTemperatureK: 380 });
+    expect(planFill(v, request()).cautions.map((c) => c.rule)).toContain('plan-above-design-temperature');
+  });
+  it('plan-does-not-fit: saturated liquid at 7 °C charged at 0.01 °C, where water is less dense (density maximum near 4 °C, IF97)', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 280.15, startTemperatureK: 273.16, target: { kind: 'quality', quality: 0 } }));
+    expect(p.startState.regime).toBe('liquid-full');
+    expect(p.cautions[0]?.rule).toBe('plan-does-not-fit');
+  });
+  it('a charge planned at its target always fits when started warmer than 4 °C', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 473.15, target: { kind: 'quality', quality: 0 } }));
+    expect(p.startState.regime).toBe('two-phase');
+  });
+  it('plan-assumes-air-removed is always there', () => {
+    expect(planFill(oneCubicMetre, request()).cautions.map((c) => c.rule)).toContain('plan-assumes-air-removed');
+  });
+});
