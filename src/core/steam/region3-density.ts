@@ -3,10 +3,10 @@
 //
 // Route (documented because libraries differ near Tc): both saturated phases are roots of
 // Eq. (28) at p = p_s(T) from Eq. (30), iterated until |p − p_s| ≤ 1e-13·p_s. Starting values
-// come from the IAPWS SR1-86(1992) auxiliary equations for saturated densities (an IAPWS-95
-// fit, only a starting point; it sits a little outside IF97's dome near Tc, which is where
-// Newton's method on the outer branches converges without overshooting). The SR5-05 backward
-// equations are not used. Within about 2e-5 K of Tc, Eq. (28) has only one root at p_s(T)
+// come from a table of such roots built at load time (seeded once by the IAPWS SR1-86(1992)
+// auxiliary equations for saturated densities, an IAPWS-95 fit that sits a little outside
+// IF97's dome near Tc, where Newton's method on the outer branches converges without
+// overshooting). The SR5-05 backward equations are not used. Within about 2e-5 K of Tc, Eq. (28) has only one root at p_s(T)
 // (IF97's region 3 and Eq. (30) meet the critical point only to within their tolerances);
 // there both phases are that one root, so v_f = v_g.
 import { IF97 } from './constants.ts';
@@ -68,6 +68,38 @@ function outerRoot(T: number, ps: number, rho0: number, liquid: boolean): number
   return rho;
 }
 
+// Starting values along the line, precomputed at load: the saturated densities solved from
+// the SR1-86 guesses at 96 nodes evenly spaced in √(Tc − T) (the dome's natural variable near
+// the critical point), interpolated linearly. They only seed Newton's method (within ~1e-4 of
+// the root, so two or three steps finish); every returned density is a converged root.
+const SEED_NODES = 96;
+const SEED_S_MAX = Math.sqrt(IF97.Tc - 623.15);
+const SEED_LIQUID = new Float64Array(SEED_NODES);
+const SEED_VAPOR = new Float64Array(SEED_NODES);
+for (let k = 0; k < SEED_NODES; k++) {
+  const sk = (SEED_S_MAX * k) / (SEED_NODES - 1);
+  const T = IF97.Tc - sk * sk;
+  const ps = saturationPressureUnchecked(T);
+  SEED_LIQUID[k] = outerRoot(T, ps, liquidDensityGuess(T), true);
+  SEED_VAPOR[k] = outerRoot(T, ps, vaporDensityGuess(T), false);
+}
+
+/** Scratch output of region3SaturatedDensitySeeds: [ρ_f, ρ_g] starting values in kg/m³. */
+export const SEED3 = new Float64Array(2);
+
+/**
+ * Fills SEED3 with interpolated saturated densities for 623.15 K ≤ T ≤ Tc (not range-checked):
+ * within 2e-4 relative of the roots of Eq. (28) (checked by the tests), so a state more than
+ * 0.1 % outside [v_f, v_g] can be classified without solving.
+ */
+export function region3SaturatedDensitySeeds(T: number): void {
+  const x = (Math.sqrt(Math.max(0, IF97.Tc - T)) / SEED_S_MAX) * (SEED_NODES - 1);
+  const i = Math.min(SEED_NODES - 2, Math.floor(x));
+  const w = x - i;
+  SEED3[0] = (1 - w) * (SEED_LIQUID[i] as number) + w * (SEED_LIQUID[i + 1] as number);
+  SEED3[1] = (1 - w) * (SEED_VAPOR[i] as number) + w * (SEED_VAPOR[i + 1] as number);
+}
+
 // One-entry cache: the check engine asks for the same temperature repeatedly.
 let cachedT = Number.NaN;
 let cachedLiquid = 0;
@@ -86,8 +118,9 @@ export function region3SaturatedDensities(T: number, ps: number): void {
     SAT3[1] = cachedVapor;
     return;
   }
-  let rf = outerRoot(T, ps, liquidDensityGuess(T), true);
-  let rg = outerRoot(T, ps, vaporDensityGuess(T), false);
+  region3SaturatedDensitySeeds(T);
+  let rf = outerRoot(T, ps, SEED3[0] as number, true);
+  let rg = outerRoot(T, ps, SEED3[1] as number, false);
   if (rf < rg) {
     // Only possible where the two branches have merged into one root; both searches found it.
     const mid = 0.5 * (rf + rg);
