@@ -142,8 +142,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   }
 
   if (inv.regime === 'superheated') {
-    const band = result.saturation.pressureBand.plusMinus;
-    if (Math.abs(inv.differenceFromReadingPa) > band) {
+    if (Math.abs(inv.differenceFromReadingPa) > inv.differenceBandPa) {
       out.push(caution('superheated-pressure-mismatch',
         `By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
     }
