@@ -86,10 +86,11 @@ function compressedLiquid1Fast(T: number, v: number, pLow: number, vLow: number,
   for (let k = 0; k < 12 && p <= P_MAX; k++) {
     region1Gibbs(T, p);
     const f = (RT * (G1[1] as number)) / R1_P_STAR - v;
-    if (Math.abs(f) <= 2e-16 * v) return region1State(T, p);
+    if (Math.abs(f) <= 4e-16 * v) return region1State(T, p);
     const step = f / ((RT * (G1[2] as number)) / (R1_P_STAR * R1_P_STAR));
     p -= step;
-    if (Math.abs(step) <= 1e-15 * p) return region1State(T, p);
+    // Quadratic convergence: after a step this small the error is far below v's rounding.
+    if (Math.abs(step) <= 1e-10 * p) return region1State(T, p);
   }
   return compressedLiquid1(T, v, pLow, vLow);
 }
@@ -101,7 +102,7 @@ function vapor2(T: number, v: number, pHigh: number, vHigh: number): PhaseState 
   const piHigh = pHigh * 1e-6;
   // H(πHigh) = πHigh·c·(1 − vHigh/v) ≥ 0 because v ≥ vHigh.
   const fHi = piHigh * solveC * (1 - vHigh / v);
-  const pi = solveBracketed(region2VolumeResidual, 0, -1, piHigh, fHi, 1 / solveC, 1e-15, 1e-15);
+  const pi = solveBracketed(region2VolumeResidual, 0, -1, piHigh, fHi, 1 / solveC, 1e-14, 1e-15);
   return region2State(T, pi * 1e6);
 }
 
@@ -173,7 +174,7 @@ export function stateTV(T: number, v: number): VesselState {
     return single('superheated-vapor', T <= T_13 ? vapor2(T, v, sat.p, g.v) : vaporOrDense(T, v));
   }
   const span = g.v - f.v;
-  // span is 0 only within ~2e-5 K of Tc, where v_f = v_g = v.
+  // span is 0 only within ~5e-5 K of Tc, where v_f = v_g = v.
   const x = span > 0 ? Math.min(1, Math.max(0, (v - f.v) / span)) : 0;
   return {
     phase: 'two-phase',
