@@ -42,6 +42,10 @@ describe('evaluateCheck', () => {
     const r = evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 3800 } }));
     expect(r.inventory.regime).toBe('liquid-full');
     expect(r.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'liquid-full-now' });
+    // A liquid-full vessel above saturation is hydraulic pressure, not air.
+    const high = evaluateCheck(testVessel(), reading({ pressure: { reference: 'gauge', pressurePa: 0.8e6 }, weight: { kind: 'net', netKg: 3800 } }));
+    expect(high.saturation.verdict.verdict).toBe('pressure-above-saturation');
+    expect(rules(high)).not.toContain('noncondensable-gas');
   });
   it('air in the vessel raises the non-condensable gas WARNING with Dalton\'s estimate (field-practice.md §4.2)', () => {
     const r = evaluateCheck(testVessel(), reading({ temperatureK: 115.3 + 273.15, pressure: { reference: 'absolute', pressurePa: 204.7e3 } }));
