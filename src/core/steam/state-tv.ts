@@ -159,7 +159,7 @@ export function stateTV(T: number, v: number): VesselState {
       if (v > vg) return single('superheated-vapor', vapor2(T, v, ps, vg));
     }
   } else {
-    // Seeds are within 2e-4 of v_f, v_g; a 1e-3 margin makes the shortcut safe.
+    // Seeds are within 3e-4 of v_f, v_g; a 1e-3 margin makes the shortcut safe.
     region3SaturatedDensitySeeds(T);
     if (v * (SEED3[0] as number) < 1 - 1e-3) return single('compressed-liquid', direct3(T, v));
     if (v * (SEED3[1] as number) > 1 + 1e-3) return single('superheated-vapor', vaporOrDense(T, v));
