@@ -55,9 +55,12 @@ function outerRoot(T: number, ps: number, rho0: number, liquid: boolean): number
     region3Pressure(rho, T);
     const f = (P3[0] as number) - ps;
     const slope = P3[1] as number;
-    // Converged: finish with the Newton step this evaluation already paid for (near Tc, where
-    // the isotherm is flat, it still moves ρ noticeably).
-    if (Math.abs(f) <= P_REL_TOL * ps) return slope > 0 ? rho - f / slope : rho;
+    if (Math.abs(f) <= P_REL_TOL * ps) {
+      // Converged: finish with the Newton step this evaluation already paid for (near Tc, where
+      // the isotherm is flat, it still moves ρ noticeably), unless a vanishing slope makes it big.
+      const step = f / slope;
+      return slope > 0 && Math.abs(step) <= 1e-6 * rho ? rho - step : rho;
+    }
     if (!(slope > 0)) {
       rho *= outward;
       continue;
