@@ -133,7 +133,7 @@ function vaporOrDense(T: number, v: number): PhaseState {
 /**
  * State of water in a closed rigid vessel at temperature T with specific volume v (V/m).
  * Two-phase when v_f ≤ v ≤ v_g below Tc; otherwise compressed liquid, superheated vapor or
- * (T > 647.096 K) supercritical, with the pressure solved so the state has exactly this v.
+ * (T ≥ 647.096 K) supercritical, with the pressure solved so the state has exactly this v.
  * @param T temperature, K; 273.15 ≤ T ≤ 1073.15
  * @param v specific volume, m³/kg; 0 < v ≤ 1e9
  * @throws InputError 'temperature' or 'specific volume' outside those ranges; 'pressure'
