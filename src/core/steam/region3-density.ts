@@ -10,16 +10,18 @@
 // are not used. Within about 5e-5 K of Tc, Eq. (28) has only one root at p_s(T) (IF97's
 // region 3 and Eq. (30) meet the critical point only to within their tolerances); there both
 // phases are that one root, so v_f = v_g.
-import { IF97 } from './constants.ts';
-import { P3, region3Pressure } from './region3.ts';
-import { saturationPressureUnchecked } from './saturation-line.ts';
-import { solveBracketed } from './solvers.ts';
+import * as constants from './constants.ts';
+import * as region3 from './region3.ts';
+import * as saturationLine from './saturation-line.ts';
+import * as solvers from './solvers.ts';
 
-// Module-local copies of the constants the hot paths read: a bundler inlines imported
-// constants, but Vitest's module runner (which runs the benchmark and the tests) turns every
-// read of an imported binding into a getter call, ~10 ns each on the 2-core CI machine.
-const TC = IF97.Tc; // K
-const RHOC = IF97.rhoc; // kg/m³
+// The imports are read once into module constants: a bundler joins modules into one scope,
+// but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
+// imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const { IF97 } = constants;
+const { P3, region3Pressure } = region3;
+const { saturationPressureUnchecked } = saturationLine;
+const { solveBracketed } = solvers;
 
 /**
  * IAPWS SR1-86(1992), Revised Supplementary Release on Saturation Properties of Ordinary Water
@@ -32,18 +34,18 @@ const C = [-2.0315024, -2.6830294, -5.38626492, -17.2991605, -44.7586581, -63.92
 
 /** Starting value for the saturated-liquid density (kg/m³), SR1-86 Eq. (2). */
 function liquidDensityGuess(T: number): number {
-  const t = Math.cbrt(Math.max(0, 1 - T / TC));
+  const t = Math.cbrt(Math.max(0, 1 - T / IF97.Tc));
   const t2 = t * t, t4 = t2 * t2, t5 = t4 * t, t16 = t4 * t4 * t4 * t4, t43 = t16 * t16 * t5 * t5 * t;
   const t110 = t43 * t43 * t16 * t4 * t4;
-  return RHOC * (1 + B[0] * t + B[1] * t2 + B[2] * t5 + B[3] * t16 + B[4] * t43 + B[5] * t110);
+  return IF97.rhoc * (1 + B[0] * t + B[1] * t2 + B[2] * t5 + B[3] * t16 + B[4] * t43 + B[5] * t110);
 }
 
 /** Starting value for the saturated-vapor density (kg/m³), SR1-86 Eq. (3). */
 function vaporDensityGuess(T: number): number {
-  const t = Math.sqrt(Math.cbrt(Math.max(0, 1 - T / TC))); // θ^(1/6)
+  const t = Math.sqrt(Math.cbrt(Math.max(0, 1 - T / IF97.Tc))); // θ^(1/6)
   const t2 = t * t, t4 = t2 * t2, t8 = t4 * t4, t18 = t8 * t8 * t2, t37 = t18 * t18 * t;
   const t71 = t37 * t18 * t8 * t8;
-  return RHOC * Math.exp(C[0] * t2 + C[1] * t4 + C[2] * t8 + C[3] * t18 + C[4] * t37 + C[5] * t71);
+  return IF97.rhoc * Math.exp(C[0] * t2 + C[1] * t4 + C[2] * t8 + C[3] * t18 + C[4] * t37 + C[5] * t71);
 }
 
 // Eq. (28)'s own rounding noise in p is ~1e-13 relative on the liquid branch (its terms cancel),
@@ -94,7 +96,7 @@ function outerRoot(T: number, ps: number, rho0: number, liquid: boolean): number
 // 0.01 K, so usually two evaluations per phase finish); every returned density is a converged
 // root of Eq. (28).
 const SEED_NODES = 96;
-const SEED_S_MAX = Math.sqrt(TC - 623.15);
+const SEED_S_MAX = Math.sqrt(IF97.Tc - 623.15);
 const SEED_LIQUID = new Float64Array(SEED_NODES);
 const SEED_VAPOR = new Float64Array(SEED_NODES);
 let seedsBuilt = false;
@@ -102,7 +104,7 @@ let seedsBuilt = false;
 function buildSeeds(): void {
   for (let k = SEED_NODES - 1; k >= 0; k--) {
     const sk = (SEED_S_MAX * k) / (SEED_NODES - 1);
-    const T = TC - sk * sk;
+    const T = IF97.Tc - sk * sk;
     const ps = saturationPressureUnchecked(T);
     const last = k === SEED_NODES - 1;
     SEED_LIQUID[k] = outerRoot(T, ps, last ? liquidDensityGuess(T) : (SEED_LIQUID[k + 1] as number), true);
@@ -121,7 +123,7 @@ export const SEED3 = new Float64Array(2);
  */
 export function region3SaturatedDensitySeeds(T: number): void {
   if (!seedsBuilt) buildSeeds();
-  const x = (Math.sqrt(Math.max(0, TC - T)) / SEED_S_MAX) * (SEED_NODES - 1);
+  const x = (Math.sqrt(Math.max(0, IF97.Tc - T)) / SEED_S_MAX) * (SEED_NODES - 1);
   const i = Math.min(SEED_NODES - 2, Math.floor(x));
   const w = x - i;
   if (i < 2) {
@@ -202,7 +204,7 @@ export function region3DensityFromTP(T: number, p: number): number {
   let hi: number;
   let fLo: number;
   let fHi: number;
-  if (T < TC) {
+  if (T < IF97.Tc) {
     const ps = saturationPressureUnchecked(T);
     region3SaturatedDensities(T, ps);
     if (p >= ps) {
@@ -229,11 +231,11 @@ export function region3DensityFromTP(T: number, p: number): number {
     }
   } else {
     // At and above Tc the isotherm rises monotonically; bracket outward from ρc.
-    region3Pressure(RHOC, T);
+    region3Pressure(IF97.rhoc, T);
     const fc = (P3[0] as number) - p;
-    if (fc === 0) return RHOC;
-    lo = RHOC;
-    hi = RHOC;
+    if (fc === 0) return IF97.rhoc;
+    lo = IF97.rhoc;
+    hi = IF97.rhoc;
     fLo = fc;
     fHi = fc;
     if (fc < 0) {

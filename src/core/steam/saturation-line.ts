@@ -2,7 +2,12 @@
 // IAPWS R7-97(2012), Eq. (30) saturation-pressure equation and Eq. (31) saturation-temperature
 // equation; valid 273.15 K ≤ T ≤ 647.096 K, p_s(273.15 K) ≤ p ≤ 22.064 MPa.
 import { InputError } from '../errors.ts';
-import { IF97, T_MIN } from './constants.ts';
+import * as constants from './constants.ts';
+
+// The imports are read once into module constants: a bundler joins modules into one scope,
+// but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
+// imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const { IF97, T_MIN } = constants;
 
 /**
  * IAPWS R7-97(2012), Table 34: coefficients n1 … n10 of Eqs. (29)-(31), dimensionless.
@@ -43,18 +48,13 @@ export const SATURATION_PRESSURE_MIN = saturationPressureUnchecked(T_MIN);
 /** The top of the line: pc, or p_s(Tc) if Eq. (30) lands a few ulp above it (it does, by 2e-8 Pa). */
 export const SATURATION_PRESSURE_MAX = Math.max(IF97.pc, saturationPressureUnchecked(IF97.Tc));
 
-// Module-local copies of the constants the hot paths read: a bundler inlines imported
-// constants, but Vitest's module runner (which runs the benchmark and the tests) turns every
-// read of an imported binding into a getter call, ~10 ns each on the 2-core CI machine.
-const TMIN = T_MIN, TC = IF97.Tc; // K
-
 /**
  * Saturation pressure p_s(T) in Pa, IAPWS-IF97 Eq. (30).
  * @param T temperature, K; 273.15 ≤ T ≤ 647.096
  * @throws InputError field 'temperature' when T is not finite or outside that range
  */
 export function saturationPressure(T: number): number {
-  if (!(T >= TMIN && T <= TC)) throw temperatureError(T);
+  if (!(T >= T_MIN && T <= IF97.Tc)) throw temperatureError(T);
   return saturationPressureUnchecked(T);
 }
 
@@ -70,10 +70,10 @@ export function saturationTemperature(p: number): number {
   }
   // Eq. (31) is Eq. (29) solved for T; at the ends of the line it can land a few ulp outside
   // [273.15 K, Tc]. Clamp so T_s(p) can always be fed back into p_s(T).
-  return Math.min(TC, Math.max(TMIN, saturationTemperatureUnchecked(p)));
+  return Math.min(IF97.Tc, Math.max(T_MIN, saturationTemperatureUnchecked(p)));
 }
 
 function temperatureError(T: number): InputError {
   return new InputError('temperature', Number.isFinite(T) ? 'out-of-range' : 'not-a-number', T,
-    { min: TMIN, max: TC, unit: 'K' });
+    { min: T_MIN, max: IF97.Tc, unit: 'K' });
 }

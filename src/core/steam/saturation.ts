@@ -4,18 +4,23 @@
 // 623.15 K … 647.096 K: both phases from region 3, Eq. (28), iterated to p_s(T) (see
 // region3-density.ts for the route and the last 5e-5 K below Tc).
 import { InputError } from '../errors.ts';
-import { IF97, T_13, T_MIN } from './constants.ts';
+import * as constants from './constants.ts';
 import type { SaturationState } from './phase-state.ts';
-import { region1State } from './region1.ts';
-import { region2State } from './region2.ts';
-import { region3State } from './region3.ts';
-import { region3SaturatedDensities, SAT3 } from './region3-density.ts';
-import { saturationPressureUnchecked } from './saturation-line.ts';
+import * as region1 from './region1.ts';
+import * as region2 from './region2.ts';
+import * as region3 from './region3.ts';
+import * as region3Density from './region3-density.ts';
+import * as saturationLine from './saturation-line.ts';
 
-// Module-local copies of the constants the hot paths read: a bundler inlines imported
-// constants, but Vitest's module runner (which runs the benchmark and the tests) turns every
-// read of an imported binding into a getter call, ~10 ns each on the 2-core CI machine.
-const TMIN = T_MIN, TC = IF97.Tc, T13 = T_13; // K
+// The imports are read once into module constants: a bundler joins modules into one scope,
+// but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
+// imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const { IF97, T_13, T_MIN } = constants;
+const { region1State } = region1;
+const { region2State } = region2;
+const { region3State } = region3;
+const { region3SaturatedDensities, SAT3 } = region3Density;
+const { saturationPressureUnchecked } = saturationLine;
 
 /**
  * Saturated liquid and vapor at temperature T: `{ T, p, liquid, vapor }`, p = p_s(T) in Pa.
@@ -23,9 +28,9 @@ const TMIN = T_MIN, TC = IF97.Tc, T13 = T_13; // K
  * @throws InputError field 'temperature' when T is not finite or outside that range
  */
 export function saturation(T: number): SaturationState {
-  if (!(T >= TMIN && T <= TC)) {
+  if (!(T >= T_MIN && T <= IF97.Tc)) {
     throw new InputError('temperature', Number.isFinite(T) ? 'out-of-range' : 'not-a-number', T,
-      { min: TMIN, max: TC, unit: 'K' });
+      { min: T_MIN, max: IF97.Tc, unit: 'K' });
   }
   return saturationUnchecked(T);
 }
@@ -33,7 +38,7 @@ export function saturation(T: number): SaturationState {
 /** saturation(T) without the range check, for callers that have checked T. */
 export function saturationUnchecked(T: number): SaturationState {
   const p = saturationPressureUnchecked(T);
-  if (T <= T13) return { T, p, liquid: region1State(T, p), vapor: region2State(T, p) };
+  if (T <= T_13) return { T, p, liquid: region1State(T, p), vapor: region2State(T, p) };
   region3SaturatedDensities(T, p);
   const rf = SAT3[0] as number;
   const rg = SAT3[1] as number;

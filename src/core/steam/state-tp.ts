@@ -3,19 +3,25 @@
 // p ≥ p_s(T), else region 2; 623.15 K < T ≤ 863.15 K: region 3 for p > p_B23(T), else region 2;
 // above 863.15 K: region 2.
 import { InputError } from '../errors.ts';
-import { P_MAX, P_MIN, T_13, T_B23_MAX, T_MAX, T_MIN } from './constants.ts';
-import { b23Pressure } from './b23.ts';
+import * as constants from './constants.ts';
+import * as b23 from './b23.ts';
 import type { PhaseState, SteamRegion } from './phase-state.ts';
-import { region1State } from './region1.ts';
-import { region2State } from './region2.ts';
-import { region3State } from './region3.ts';
-import { region3DensityFromTP } from './region3-density.ts';
-import { saturationPressureUnchecked } from './saturation-line.ts';
+import * as region1 from './region1.ts';
+import * as region2 from './region2.ts';
+import * as region3 from './region3.ts';
+import * as region3Density from './region3-density.ts';
+import * as saturationLine from './saturation-line.ts';
 
-// Module-local copies of the constants the hot paths read: a bundler inlines imported
-// constants, but Vitest's module runner (which runs the benchmark and the tests) turns every
-// read of an imported binding into a getter call, ~10 ns each on the 2-core CI machine.
-const T_LO = T_MIN, T_HI = T_MAX, P_LO = P_MIN, P_HI = P_MAX, T13 = T_13, TB23MAX = T_B23_MAX;
+// The imports are read once into module constants: a bundler joins modules into one scope,
+// but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
+// imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const { P_MAX, P_MIN, T_13, T_B23_MAX, T_MAX, T_MIN } = constants;
+const { b23Pressure } = b23;
+const { region1State } = region1;
+const { region2State } = region2;
+const { region3State } = region3;
+const { region3DensityFromTP } = region3Density;
+const { saturationPressureUnchecked } = saturationLine;
 
 // p_s at whole kelvins 273 … 624 K. p_s(T) rises with T, so p_s(⌊T⌋) ≤ p_s(T) ≤ p_s(⌊T⌋ + 1)
 // decides the region without Eq. (30) except within that 1 K band (it only picks the region;
@@ -25,13 +31,13 @@ const PS_WHOLE_K = Float64Array.from({ length: 352 }, (_, k) => saturationPressu
 
 /** Which IF97 region holds (T K, p Pa); inputs must already be in range. */
 export function regionOf(T: number, p: number): SteamRegion {
-  if (T <= T13) {
+  if (T <= T_13) {
     const k = Math.floor(T) - PS_WHOLE_K_FROM;
     if (p >= (PS_WHOLE_K[k + 1] as number)) return 1;
     if (p < (PS_WHOLE_K[k] as number)) return 2;
     return p >= saturationPressureUnchecked(T) ? 1 : 2;
   }
-  if (T <= TB23MAX && p > b23Pressure(T)) return 3;
+  if (T <= T_B23_MAX && p > b23Pressure(T)) return 3;
   return 2;
 }
 
@@ -43,16 +49,20 @@ export function regionOf(T: number, p: number): SteamRegion {
  * @throws InputError field 'temperature' or 'pressure' when not finite or outside those ranges
  */
 export function stateTP(T: number, p: number): PhaseState {
-  if (!(T >= T_LO && T <= T_HI)) {
+  if (!(T >= T_MIN && T <= T_MAX)) {
     throw new InputError('temperature', Number.isFinite(T) ? 'out-of-range' : 'not-a-number', T,
       { min: T_MIN, max: T_MAX, unit: 'K' });
   }
-  if (!(p >= P_LO && p <= P_HI)) {
+  if (!(p >= P_MIN && p <= P_MAX)) {
     throw new InputError('pressure', Number.isFinite(p) ? 'out-of-range' : 'not-a-number', p,
       { min: P_MIN, max: P_MAX, unit: 'Pa' });
   }
-  const region = regionOf(T, p);
-  if (region === 1) return region1State(T, p);
-  if (region === 2) return region2State(T, p);
-  return region3State(region3DensityFromTP(T, p), T, p);
+  switch (regionOf(T, p)) {
+    case 1:
+      return region1State(T, p);
+    case 2:
+      return region2State(T, p);
+    case 3:
+      return region3State(region3DensityFromTP(T, p), T, p);
+  }
 }
