@@ -1,0 +1,59 @@
+// The store's public surface: the rest of the app uses only what is exported here and never sees
+// IndexedDB. All writes use strict durability and resolve only after their transaction committed.
+
+// Connection
+export { openStore, closeStore } from './connection.ts';
+export type { OpenStoreOptions, StoreEvent } from './connection.ts';
+
+// Errors
+export { StoreError } from './errors.ts';
+export type { StoreErrorCode } from './errors.ts';
+
+// Records
+export { GENESIS_HASH } from './records.ts';
+export type {
+  CheckCursor,
+  CheckPage,
+  CheckRecord,
+  IsoDateTime,
+  JsonObject,
+  JsonValue,
+  LongWorkOptions,
+  NewCheck,
+  NewVessel,
+  StoredCaution,
+  TypedInput,
+  VesselPatch,
+  VesselRecord,
+  VesselSpecData,
+} from './records.ts';
+
+// Vessels
+export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
+
+// Checks (append-only)
+export { appendCheck, getCheck, listChecks, checksForVessel } from './checks.ts';
+
+// Settings, drafts, device, persistence
+export {
+  getSetting,
+  putSetting,
+  saveDraft,
+  loadDraft,
+  clearDraft,
+  deviceId,
+  requestPersistence,
+  persistenceState,
+} from './settings.ts';
+export type { PersistenceState } from './settings.ts';
+
+// Integrity, backup, CSV
+export { verifyChains, canonicalJson, computeCheckHash } from './integrity.ts';
+export type { ChainProblem, ChainStatus } from './integrity.ts';
+export { verifyStoredChains } from './verify.ts';
+export { exportBackup, importBackup } from './backup.ts';
+export type { ImportReport } from './backup.ts';
+export { exportCsv } from './csv.ts';
+
+// Time
+export { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';

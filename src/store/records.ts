@@ -1,0 +1,144 @@
+// The shapes the store saves. Everything here is plain JSON (no Date, no undefined inside arrays,
+// no class instances) so a record hashes, exports and imports without conversion.
+
+/** Any JSON value. Numbers must be finite. */
+export type JsonValue = null | boolean | number | string | JsonValue[] | { [key: string]: JsonValue };
+/** A JSON object. */
+export type JsonObject = { [key: string]: JsonValue };
+
+/**
+ * The check engine's VesselSpec (SI), stored exactly as the engine takes it. Kept structural and
+ * loose here so the store does not depend on the engine's evolving shape; the store never reads
+ * inside it.
+ */
+export type VesselSpecData = JsonObject;
+
+/** ISO 8601 date-time with an explicit UTC offset, e.g. "2026-12-01T22:05:00+01:00" (or "...Z"). */
+export type IsoDateTime = string;
+
+/** A vessel in the inventory. Mutable (edit, retire); checks keep their own snapshot of it. */
+export interface VesselRecord {
+  /** UUID. */
+  id: string;
+  /** The plant's tag for the vessel, as written on it (e.g. "FT-204"). 1 to 64 characters. */
+  tag: string;
+  /** `tag` lower-cased, for the case-insensitive prefix search (kept in step by the store). */
+  tagKey: string;
+  description: string;
+  spec: VesselSpecData;
+  /** A retired vessel is hidden from new checks but keeps its history. */
+  retired: boolean;
+  retiredAt: IsoDateTime | null;
+  createdAt: IsoDateTime;
+  updatedAt: IsoDateTime;
+}
+
+/** What the UI passes to add a vessel. */
+export interface NewVessel {
+  tag: string;
+  description?: string;
+  spec: VesselSpecData;
+}
+
+/** What the UI may change on a vessel (retire with retireVessel). */
+export interface VesselPatch {
+  tag?: string;
+  description?: string;
+  spec?: VesselSpecData;
+}
+
+/** One input field as the technician typed it, before any conversion. */
+export interface TypedInput {
+  /** The text exactly as typed (decimal comma and all), e.g. "1,25". */
+  text: string;
+  /** The unit picked beside it, e.g. "bar", "degC", "kg". */
+  unit: string;
+  /** For pressures: whether the value was entered as gauge or absolute. Absent for other quantities. */
+  reference?: 'gauge' | 'absolute';
+}
+
+/** A caution as the check engine reports it (ISO 3864 / ANSI Z535 signal words). */
+export interface StoredCaution {
+  signal: 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
+  message: string;
+  rule: string;
+}
+
+/** What the UI passes to save a check. The store adds id, device, seq, time, hashes. */
+export interface NewCheck {
+  vesselId: string;
+  technician: string;
+  note?: string;
+  /** When the reading was taken; defaults to now. Stored as ISO 8601 with this device's offset. */
+  takenAt?: Date;
+  /** Per field (e.g. "temperature", "pressure", "grossWeight"), the text and unit as typed. */
+  inputs: Record<string, TypedInput>;
+  /** The SI reading passed to evaluateCheck (K, Pa, kg ...), stored as-is. */
+  reading: JsonObject;
+  /** evaluateCheck's result as plain JSON, stored as-is. */
+  result: JsonValue;
+  cautions: StoredCaution[];
+  appVersion: string;
+  formulationId: string;
+  /** For a correction: the id of the check this one corrects (that record stays as it was). */
+  corrects?: string;
+  /** Why the correction was made; required with `corrects`. */
+  reason?: string;
+}
+
+/**
+ * A saved check. Append-only: never overwritten or deleted. `hash` is SHA-256 over the canonical
+ * serialisation of every other field (prevHash included), so each device's records form a chain.
+ */
+export interface CheckRecord {
+  /** UUID (crypto.randomUUID()). */
+  id: string;
+  /** UUID of the device (app install) that saved it. */
+  deviceId: string;
+  /** 1, 2, 3 ... per device, in save order. */
+  seq: number;
+  /** When the reading was taken, ISO 8601 with the device's UTC offset. */
+  time: IsoDateTime;
+  /** `time` as milliseconds since 1970-01-01T00:00:00Z: the sort key (offsets make `time` strings unsortable). */
+  timeMs: number;
+  technician: string;
+  note: string;
+  vesselId: string;
+  /** The vessel as it was when the check was saved. */
+  vessel: { tag: string; spec: VesselSpecData };
+  inputs: Record<string, TypedInput>;
+  reading: JsonObject;
+  result: JsonValue;
+  cautions: StoredCaution[];
+  appVersion: string;
+  formulationId: string;
+  corrects: string | null;
+  reason: string | null;
+  /** The hash of the previous record on this device; 64 zeros for the first. */
+  prevHash: string;
+  /** SHA-256, lower-case hex, of the canonical serialisation of this record without `hash`. */
+  hash: string;
+}
+
+/** Where a page of checks ends; pass it back as `before` to get the next (older) page. */
+export interface CheckCursor {
+  timeMs: number;
+  id: string;
+}
+
+/** One page of checks, newest first. */
+export interface CheckPage {
+  checks: CheckRecord[];
+  /** Cursor for the next older page, or null when there are no more. */
+  next: CheckCursor | null;
+}
+
+/** Optional progress reporting and cancellation for long work (export, import, verification). */
+export interface LongWorkOptions {
+  signal?: AbortSignal;
+  /** Called with records done so far and the total. */
+  onProgress?: (done: number, total: number) => void;
+}
+
+/** The chain hash that the first record on a device points back to. */
+export const GENESIS_HASH = '0'.repeat(64);

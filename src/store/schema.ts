@@ -1,0 +1,156 @@
+// The database schema and its upgrade ladder. Each rung runs only IDB requests on the upgrade
+// transaction (no crypto, no timers, no fetch): anything else would let the transaction commit
+// half-way. Work that needs WebCrypto (hashing records migrated into the chain) is flagged here and
+// finished after open by sealMigratedChecks() in db.ts.
+import type { DBSchema, IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
+import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
+
+export const DB_NAME = 'tankside';
+/**
+ * Schema history:
+ * - v1: vessels (by-tag), checks (by-vessel-time on [vesselId, time]), settings.
+ * - v2: drafts store. Check times carry an offset, so the ISO string does not sort by instant
+ *   ("…T22:05+01:00" is before "…T21:30Z"): every check gets `timeMs`, by-vessel-time is rebuilt
+ *   on [vesselId, timeMs, id] and by-time on [timeMs, id] is added (id breaks ties for paging).
+ * - v3: record integrity. Checks gain deviceId, seq, prevHash, hash, corrects, reason and the
+ *   unique by-device-seq index. Existing checks join this device's chain in time order with empty
+ *   hashes and a seal-pending flag; hashing happens after open.
+ */
+export const DB_VERSION = 3;
+
+/** Keys in the settings store that belong to the store itself; putSetting refuses them. */
+export const RESERVED_SETTING_PREFIX = 'store:';
+export const SETTING_DEVICE_ID = 'store:deviceId';
+export const SETTING_SEAL_PENDING = 'store:sealPending';
+export const SETTING_PERSISTENCE = 'store:persistence';
+
+/** A saved draft: whatever the screen wants back after a reload, with when it was saved. */
+export interface DraftRecord {
+  value: JsonValue;
+  savedAt: IsoDateTime;
+}
+
+export interface TanksideDB extends DBSchema {
+  vessels: {
+    key: string;
+    value: VesselRecord;
+    indexes: { 'by-tag': string };
+  };
+  checks: {
+    key: string;
+    value: CheckRecord;
+    indexes: {
+      'by-vessel-time': [string, number, string];
+      'by-time': [number, string];
+      'by-device-seq': [string, number];
+    };
+  };
+  settings: { key: string; value: JsonValue };
+  drafts: { key: string; value: DraftRecord };
+}
+
+type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
+type RawTx = { objectStore(name: string): IDBObjectStore };
+
+/**
+ * One rung of the ladder. It only issues IDB requests and calls `next` once its last request has
+ * finished, so the following rung never sees half-migrated records (requests from two rungs would
+ * otherwise interleave on the one upgrade transaction).
+ */
+type Rung = (db: IDBPDatabase<TanksideDB>, tx: UpgradeTx, next: () => void) => void;
+
+const RUNGS: readonly { version: number; run: Rung }[] = [
+  {
+    version: 1,
+    run(db, _tx, next) {
+      const vessels = db.createObjectStore('vessels', { keyPath: 'id' });
+      vessels.createIndex('by-tag', 'tagKey');
+      // v1's index on the raw `time` string; rebuilt in v2, hence the cast past today's types.
+      const checks = db.createObjectStore('checks', { keyPath: 'id' }) as unknown as IDBObjectStore;
+      checks.createIndex('by-vessel-time', ['vesselId', 'time']);
+      db.createObjectStore('settings');
+      next();
+    },
+  },
+  {
+    version: 2,
+    run(db, tx, next) {
+      db.createObjectStore('drafts');
+      const checks = tx.objectStore('checks');
+      checks.deleteIndex('by-vessel-time');
+      checks.createIndex('by-vessel-time', ['vesselId', 'timeMs', 'id']);
+      checks.createIndex('by-time', ['timeMs', 'id']);
+      // Records get timeMs below; the indexes pick each one up as it is rewritten.
+      walk(tx, 'checks', undefined, (record) => {
+        const timeMs = Date.parse(String(record['time']));
+        // Every v1 time was valid ISO 8601; a damaged one stays findable at the epoch.
+        record['timeMs'] = Number.isFinite(timeMs) ? timeMs : 0;
+      }, next);
+    },
+  },
+  {
+    version: 3,
+    run(_db, tx, next) {
+      const raw = tx as unknown as RawTx;
+      // The device id is made here if this install never had one, so migrated checks carry it.
+      const idRequest = raw.objectStore('settings').get(SETTING_DEVICE_ID);
+      idRequest.onsuccess = () => {
+        let deviceId = idRequest.result as unknown;
+        if (typeof deviceId !== 'string') {
+          deviceId = crypto.randomUUID();
+          raw.objectStore('settings').put(deviceId, SETTING_DEVICE_ID);
+        }
+        let seq = 0;
+        // Oldest first, so the migrated chain follows the order the checks were taken in.
+        walk(tx, 'checks', 'by-time', (record) => {
+          seq += 1;
+          record['deviceId'] = deviceId;
+          record['seq'] = seq;
+          record['corrects'] = typeof record['corrects'] === 'string' ? record['corrects'] : null;
+          record['reason'] = typeof record['reason'] === 'string' ? record['reason'] : null;
+          // Empty hashes mark "not sealed yet": hashing needs WebCrypto, which cannot run here.
+          record['prevHash'] = '';
+          record['hash'] = '';
+        }, () => {
+          if (seq > 0) raw.objectStore('settings').put(true, SETTING_SEAL_PENDING);
+          // Unique, so two saves racing for the same seq cannot both land.
+          tx.objectStore('checks').createIndex('by-device-seq', ['deviceId', 'seq'], { unique: true });
+          next();
+        });
+      };
+    },
+  },
+];
+
+/** Runs every rung above oldVersion, in order, on the upgrade transaction. */
+export function upgradeSchema(db: IDBPDatabase<TanksideDB>, oldVersion: number, tx: UpgradeTx): void {
+  const pending = RUNGS.filter((rung) => rung.version > oldVersion && rung.version <= DB_VERSION);
+  const step = (i: number): void => {
+    const rung = pending[i];
+    if (rung) rung.run(db, tx, () => step(i + 1));
+  };
+  step(0);
+}
+
+/** Rewrites every record of a store through the upgrade transaction, then calls `done`. */
+function walk(
+  tx: UpgradeTx,
+  storeName: 'checks' | 'vessels',
+  indexName: string | undefined,
+  change: (record: Record<string, unknown>) => void,
+  done: () => void,
+): void {
+  const store = (tx as unknown as RawTx).objectStore(storeName);
+  const request = indexName ? store.index(indexName).openCursor() : store.openCursor();
+  request.onsuccess = () => {
+    const cursor = request.result;
+    if (!cursor) {
+      done();
+      return;
+    }
+    const record = cursor.value as Record<string, unknown>;
+    change(record);
+    cursor.update(record);
+    cursor.continue();
+  };
+}

@@ -1,0 +1,168 @@
+// Settings, drafts, the device id and the persistence request.
+import { getDb } from './connection.ts';
+import { StoreError, storeErrorFromWrite } from './errors.ts';
+import type { IsoDateTime, JsonValue } from './records.ts';
+import { RESERVED_SETTING_PREFIX, SETTING_DEVICE_ID, SETTING_PERSISTENCE } from './schema.ts';
+import { formatIsoWithOffset } from './time.ts';
+import { requireJson, requireText } from './validate.ts';
+
+const STRICT = { durability: 'strict' } as const;
+
+function requireSettingKey(key: string): void {
+  requireText('setting key', key, 1, 100);
+  if (key.startsWith(RESERVED_SETTING_PREFIX)) {
+    throw new StoreError('invalid-record', `setting key: "${key}" is reserved for the store`, 'setting key');
+  }
+}
+
+/** Reads one setting (technician name, preferred units ...), or undefined if never saved. */
+export async function getSetting(key: string): Promise<JsonValue | undefined> {
+  requireSettingKey(key);
+  return (await getDb()).get('settings', key);
+}
+
+/**
+ * Saves one setting as plain JSON. Keys are 1–100 characters and may not start with "store:".
+ * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
+ */
+export async function putSetting(key: string, value: JsonValue): Promise<void> {
+  requireSettingKey(key);
+  requireJson(`setting ${key}`, value);
+  const db = await getDb();
+  const tx = db.transaction('settings', 'readwrite', STRICT);
+  try {
+    await Promise.all([tx.store.put(value, key), tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, `Saving setting ${key}`);
+  }
+}
+
+/**
+ * Saves a draft under `key` (e.g. "new-check"), replacing the previous one. Call it as the user
+ * types: drafts live in IndexedDB, so they survive a reload, a closed tab and an app update.
+ * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
+ */
+export async function saveDraft(key: string, value: JsonValue): Promise<void> {
+  requireText('draft key', key, 1, 100);
+  requireJson(`draft ${key}`, value);
+  const db = await getDb();
+  const tx = db.transaction('drafts', 'readwrite', STRICT);
+  try {
+    await Promise.all([tx.store.put({ value, savedAt: formatIsoWithOffset(new Date(), undefined, true) }, key), tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, 'Saving the draft');
+  }
+}
+
+/** The draft saved under `key`, with when it was saved, or undefined. */
+export async function loadDraft(key: string): Promise<{ value: JsonValue; savedAt: IsoDateTime } | undefined> {
+  requireText('draft key', key, 1, 100);
+  return (await getDb()).get('drafts', key);
+}
+
+/** Removes the draft under `key` (after the check it held was saved, or the user discarded it). */
+export async function clearDraft(key: string): Promise<void> {
+  requireText('draft key', key, 1, 100);
+  const db = await getDb();
+  const tx = db.transaction('drafts', 'readwrite', STRICT);
+  try {
+    await Promise.all([tx.store.delete(key), tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, 'Clearing the draft');
+  }
+}
+
+/** This install's device id (a UUID made on first use), which every check it saves carries. */
+export async function deviceId(): Promise<string> {
+  const db = await getDb();
+  const existing = await db.get('settings', SETTING_DEVICE_ID);
+  if (typeof existing === 'string') return existing;
+  const tx = db.transaction('settings', 'readwrite', STRICT);
+  // Re-read inside the write: another tab may have made one meanwhile.
+  const again = await tx.store.get(SETTING_DEVICE_ID);
+  const id = typeof again === 'string' ? again : crypto.randomUUID();
+  if (typeof again !== 'string') void tx.store.put(id, SETTING_DEVICE_ID);
+  try {
+    await tx.done;
+  } catch (error) {
+    throw storeErrorFromWrite(error, 'Saving the device id');
+  }
+  return id;
+}
+
+/**
+ * Whether the browser keeps Tankside's data until the user clears it:
+ * 'persisted' (granted), 'best-effort' (asked; the browser may evict under storage pressure),
+ * 'not-asked' (no check saved yet), 'unsupported' (no StorageManager here).
+ */
+export interface PersistenceState {
+  state: 'persisted' | 'best-effort' | 'not-asked' | 'unsupported';
+  askedAt: IsoDateTime | null;
+}
+
+function storageManager(): StorageManager | null {
+  const nav = (globalThis as { navigator?: Navigator }).navigator;
+  return nav?.storage && typeof nav.storage.persist === 'function' ? nav.storage : null;
+}
+
+/**
+ * Asks the browser to keep Tankside's data (navigator.storage.persist()) and records when. Firefox
+ * may show a prompt; Chrome and Safari decide silently. The store calls it at the first saved check.
+ */
+export async function requestPersistence(): Promise<PersistenceState> {
+  const manager = storageManager();
+  if (!manager) return { state: 'unsupported', askedAt: null };
+  let granted = false;
+  try {
+    granted = await manager.persist();
+  } catch {
+    granted = false;
+  }
+  const askedAt = formatIsoWithOffset(new Date());
+  const db = await getDb();
+  const tx = db.transaction('settings', 'readwrite', STRICT);
+  try {
+    await Promise.all([tx.store.put({ askedAt, granted }, SETTING_PERSISTENCE), tx.done]);
+  } catch {
+    // Only the record of asking was lost; the browser keeps its own answer.
+  }
+  return { state: granted ? 'persisted' : 'best-effort', askedAt };
+}
+
+/** The current persistence state, for Settings. Reads the browser's live answer where it can. */
+export async function persistenceState(): Promise<PersistenceState> {
+  const manager = storageManager();
+  if (!manager) return { state: 'unsupported', askedAt: null };
+  const asked = (await (await getDb()).get('settings', SETTING_PERSISTENCE)) as { askedAt?: unknown } | undefined;
+  const askedAt = typeof asked?.askedAt === 'string' ? asked.askedAt : null;
+  let persisted = false;
+  try {
+    persisted = typeof manager.persisted === 'function' ? await manager.persisted() : false;
+  } catch {
+    persisted = false;
+  }
+  if (persisted) return { state: 'persisted', askedAt };
+  return { state: askedAt ? 'best-effort' : 'not-asked', askedAt };
+}
+
+let firstAsk: Promise<PersistenceState> | null = null;
+
+/** Asks once per install (and at most once per page), at the first saved check. Never throws. */
+export function askPersistenceOnce(): Promise<PersistenceState | null> {
+  if (!firstAsk) {
+    firstAsk = (async () => {
+      const asked = await (await getDb()).get('settings', SETTING_PERSISTENCE);
+      if (asked !== undefined) return persistenceState();
+      return requestPersistence();
+    })();
+    firstAsk.catch(() => {
+      firstAsk = null;
+    });
+  }
+  return firstAsk.catch(() => null);
+}
+
+/** Forgets the once-per-page memo (tests open fresh databases). */
+export function resetPersistenceMemo(): void {
+  firstAsk = null;
+}

@@ -1,0 +1,114 @@
+// The vessel inventory. Vessels may be edited and retired (never deleted): checks keep a snapshot
+// of the vessel as it was, and a retired vessel keeps its history.
+import { getDb } from './connection.ts';
+import { StoreError, storeErrorFromWrite } from './errors.ts';
+import type { NewVessel, VesselPatch, VesselRecord } from './records.ts';
+import { formatIsoWithOffset } from './time.ts';
+import { cloneJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
+
+const STRICT = { durability: 'strict' } as const;
+export const TAG_MAX = 64;
+export const DESCRIPTION_MAX = 2000;
+
+/** The key the by-tag index holds: case folded the same way on every device. */
+export function tagKeyOf(tag: string): string {
+  return tag.trim().toLowerCase();
+}
+
+function requireTag(tag: unknown): string {
+  const text = requireText('tag', typeof tag === 'string' ? tag.trim() : tag, 1, TAG_MAX);
+  return text;
+}
+
+async function putVessel(record: VesselRecord, what: string): Promise<VesselRecord> {
+  const db = await getDb();
+  const tx = db.transaction('vessels', 'readwrite', STRICT);
+  try {
+    await Promise.all([tx.store.put(record), tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, what);
+  }
+  return record;
+}
+
+/**
+ * Adds a vessel. `tag` is trimmed, 1–64 characters; `description` up to 2000; `spec` is the check
+ * engine's VesselSpec as plain JSON (stored as-is, not interpreted here).
+ * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
+ */
+export async function addVessel(input: NewVessel): Promise<VesselRecord> {
+  const tag = requireTag(input.tag);
+  const description = requireText('description', input.description ?? '', 0, DESCRIPTION_MAX);
+  const spec = cloneJson(requireJsonObject('spec', input.spec));
+  const now = formatIsoWithOffset(new Date(), undefined, true);
+  const record: VesselRecord = {
+    id: crypto.randomUUID(),
+    tag,
+    tagKey: tagKeyOf(tag),
+    description,
+    spec,
+    retired: false,
+    retiredAt: null,
+    createdAt: now,
+    updatedAt: now,
+  };
+  return putVessel(record, `Saving vessel ${tag}`);
+}
+
+/**
+ * Changes a vessel's tag, description or spec. Saved checks keep the snapshot they were taken with.
+ * @throws StoreError('not-found' | 'invalid-record' | 'quota-exceeded' | 'write-failed')
+ */
+export async function updateVessel(id: string, patch: VesselPatch): Promise<VesselRecord> {
+  const existing = await requireVessel(id);
+  const tag = patch.tag === undefined ? existing.tag : requireTag(patch.tag);
+  const description =
+    patch.description === undefined ? existing.description : requireText('description', patch.description, 0, DESCRIPTION_MAX);
+  const spec = patch.spec === undefined ? existing.spec : cloneJson(requireJsonObject('spec', patch.spec));
+  const record: VesselRecord = {
+    ...existing,
+    tag,
+    tagKey: tagKeyOf(tag),
+    description,
+    spec,
+    updatedAt: formatIsoWithOffset(new Date(), undefined, true),
+  };
+  return putVessel(record, `Saving vessel ${tag}`);
+}
+
+/**
+ * Retires a vessel: it drops out of listVessels() by default and cannot get new checks, but its
+ * checks stay. Retiring a retired vessel changes nothing.
+ * @throws StoreError('not-found' | 'quota-exceeded' | 'write-failed')
+ */
+export async function retireVessel(id: string): Promise<VesselRecord> {
+  const existing = await requireVessel(id);
+  if (existing.retired) return existing;
+  const now = formatIsoWithOffset(new Date(), undefined, true);
+  return putVessel({ ...existing, retired: true, retiredAt: now, updatedAt: now }, `Retiring vessel ${existing.tag}`);
+}
+
+/** One vessel, or undefined. */
+export async function getVessel(id: string): Promise<VesselRecord | undefined> {
+  return (await getDb()).get('vessels', id);
+}
+
+async function requireVessel(id: string): Promise<VesselRecord> {
+  requireUuid('vessel id', id);
+  const found = await getVessel(id);
+  if (!found) throw new StoreError('not-found', `No vessel with id ${id}.`, 'vessel id');
+  return found;
+}
+
+/**
+ * Vessels sorted by tag (case-insensitive). `tagPrefix` keeps those whose tag starts with it,
+ * ignoring case and surrounding spaces; retired vessels are left out unless `includeRetired`.
+ */
+export async function listVessels(options: { tagPrefix?: string; includeRetired?: boolean } = {}): Promise<VesselRecord[]> {
+  const db = await getDb();
+  const prefix = tagKeyOf(options.tagPrefix ?? '');
+  // '\uffff' sorts after every character a tag can hold, so [prefix, prefix+'\uffff'] is "starts with".
+  const range = prefix ? IDBKeyRange.bound(prefix, prefix + '\uffff') : undefined;
+  const all = await db.getAllFromIndex('vessels', 'by-tag', range);
+  return options.includeRetired ? all : all.filter((v) => !v.retired);
+}
