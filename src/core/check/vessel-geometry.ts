@@ -1,0 +1,297 @@
+// Internal volume of a closed vessel and the liquid volume ↔ liquid level relation, for vertical
+// and horizontal cylinders with flat, 2:1 semi-ellipsoidal, hemispherical or torispherical
+// (flanged and dished) heads. All dimensions are INSIDE dimensions in metres; the straight length
+// runs between the head tangent lines and must include the heads' straight flanges.
+// Formulas: /work/shared/reference/field-practice.md §5 (closed forms derived there and checked
+// against numerical integration); the torispherical knuckle term is re-derived in the comments.
+
+import { InputError } from '../errors.ts';
+
+/** One head shape. A torispherical head without radii is the standard ASME F&D head. */
+export type HeadSpec =
+  | { kind: 'flat' }
+  | { kind: 'semi-ellipsoidal-2-1' }
+  | { kind: 'hemispherical' }
+  | {
+      kind: 'torispherical';
+      /** Crown (dish) radius L, m; default the inner diameter D (standard ASME F&D). */
+      crownRadiusM?: number;
+      /** Knuckle radius r, m; default 0.06·D (standard ASME F&D). */
+      knuckleRadiusM?: number;
+    };
+
+/** The vessel's shape: a stated internal volume (no level available), or a cylinder with heads. */
+export type VesselGeometry =
+  | { shape: 'stated-volume'; volumeM3: number }
+  | {
+      shape: 'vertical-cylinder' | 'horizontal-cylinder';
+      /** Inner diameter D, m. */
+      innerDiameterM: number;
+      /** Straight length between tangent lines (straight flanges included), m; 0 allowed. */
+      straightLengthM: number;
+      /** Both ends carry this head. */
+      head: HeadSpec;
+    };
+
+export type CylinderGeometry = Extract<VesselGeometry, { shape: 'vertical-cylinder' | 'horizontal-cylinder' }>;
+
+/** Standard ASME flanged-and-dished proportions: crown radius = D, knuckle radius = 6 % of D (common practice, §5.1). */
+export const STANDARD_FD_CROWN_FRACTION = 1;
+export const STANDARD_FD_KNUCKLE_FRACTION = 0.06;
+
+/** Resolved torispherical radii, m. */
+interface Torus {
+  R: number; // cylinder radius
+  L: number; // crown radius
+  r: number; // knuckle radius
+  depth: number; // axial depth h_d
+  z1: number; // crown–knuckle tangent, measured from the apex
+}
+
+function torus(D: number, head: Extract<HeadSpec, { kind: 'torispherical' }>): Torus {
+  const R = D / 2;
+  const L = head.crownRadiusM ?? STANDARD_FD_CROWN_FRACTION * D;
+  const r = head.knuckleRadiusM ?? STANDARD_FD_KNUCKLE_FRACTION * D;
+  // (L − r)² = (R − r)² + (L − h_d)²: the knuckle centre circle lies on the crown sphere shrunk by r.
+  const depth = L - Math.sqrt((L - r) ** 2 - (R - r) ** 2);
+  // L = r = R is a hemisphere made entirely of knuckle: no crown, tangent at the apex.
+  const z1 = L - r > 0 ? L - ((L - depth) * L) / (L - r) : 0;
+  return { R, L, r, depth, z1 };
+}
+
+/** Axial depth of one head, m (0 for flat). D inner diameter, m. */
+export function headDepthM(head: HeadSpec, D: number): number {
+  switch (head.kind) {
+    case 'flat':
+      return 0;
+    case 'semi-ellipsoidal-2-1':
+      return D / 4;
+    case 'hemispherical':
+      return D / 2;
+    case 'torispherical':
+      return torus(D, head).depth;
+  }
+}
+
+/**
+ * Liquid volume in one head with its axis vertical, apex down, filled to depth h from the apex, m³.
+ * Clamped: h ≤ 0 gives 0, h ≥ depth gives the full head.
+ */
+export function bottomHeadVolumeM3(head: HeadSpec, D: number, h: number): number {
+  const R = D / 2;
+  switch (head.kind) {
+    case 'flat':
+      return 0;
+    case 'semi-ellipsoidal-2-1':
+    case 'hemispherical': {
+      const a = head.kind === 'hemispherical' ? R : R / 2;
+      const y = clamp(h, 0, a);
+      return (Math.PI * R * R * y * y * (3 * a - y)) / (3 * a * a);
+    }
+    case 'torispherical': {
+      const t = torus(D, head);
+      const y = clamp(h, 0, t.depth);
+      const cap = (z: number) => (Math.PI * z * z * (3 * t.L - z)) / 3;
+      if (y <= t.z1) return cap(y);
+      // Knuckle slice radius ρ(z) = c + √(r² − u²), u = h_d − z. ∫πρ² dz from z1 to y equals
+      // π[(c² + r²)Δ + 2c(F(u1) − F(u2)) − (u1³ − u2³)/3] with F(u) = ∫√(r² − u²) du.
+      const c = t.R - t.r;
+      const u1 = t.depth - t.z1;
+      const u2 = t.depth - y;
+      const F = (u: number) => 0.5 * (u * Math.sqrt(Math.max(0, t.r * t.r - u * u)) + t.r * t.r * Math.asin(clamp(u / t.r, -1, 1)));
+      const knuckle = Math.PI * ((c * c + t.r * t.r) * (u1 - u2) + 2 * c * (F(u1) - F(u2)) - (u1 ** 3 - u2 ** 3) / 3);
+      return cap(t.z1) + knuckle;
+    }
+  }
+}
+
+/** Full volume of one head, m³ (π·D³/24 for 2:1, π·D³/12 for hemispherical, ≈ 0.0810·D³ for standard F&D). */
+export function headVolumeM3(head: HeadSpec, D: number): number {
+  return bottomHeadVolumeM3(head, D, headDepthM(head, D));
+}
+
+/** Area of a circle of radius ρ lying below the horizontal line at height y above its centre, m². */
+function circleAreaBelow(rho: number, y: number): number {
+  if (rho <= 0 || y <= -rho) return 0;
+  if (y >= rho) return Math.PI * rho * rho;
+  return rho * rho * Math.acos(-y / rho) + y * Math.sqrt(rho * rho - y * y);
+}
+
+/** Slice radius of a head at axial distance z from its apex, m. */
+function headSliceRadius(head: HeadSpec, D: number, z: number): number {
+  const R = D / 2;
+  switch (head.kind) {
+    case 'flat':
+      return R;
+    case 'semi-ellipsoidal-2-1':
+    case 'hemispherical': {
+      const a = head.kind === 'hemispherical' ? R : R / 2;
+      const s = (a - z) / a;
+      return R * Math.sqrt(Math.max(0, 1 - s * s));
+    }
+    case 'torispherical': {
+      const t = torus(D, head);
+      if (z <= t.z1) return Math.sqrt(Math.max(0, t.L * t.L - (t.L - z) ** 2));
+      return t.R - t.r + Math.sqrt(Math.max(0, t.r * t.r - (t.depth - z) ** 2));
+    }
+  }
+}
+
+/** Simpson's rule, n even. */
+function simpson(f: (z: number) => number, a: number, b: number, n: number): number {
+  if (b <= a) return 0;
+  const step = (b - a) / n;
+  let sum = f(a) + f(b);
+  for (let i = 1; i < n; i++) sum += (i % 2 === 1 ? 4 : 2) * f(a + i * step);
+  return (sum * step) / 3;
+}
+
+/**
+ * Liquid volume in one head of a horizontal vessel, filled to depth h from the bottom of the shell, m³.
+ * Ellipsoids and spheres have the closed form π·a·h²·(3R − h)/(6R); the torispherical head is
+ * integrated over axial slices (field-practice.md §5.2), crown and knuckle separately because the
+ * slice radius has a kink in curvature at their tangent.
+ */
+export function horizontalHeadVolumeM3(head: HeadSpec, D: number, h: number): number {
+  const R = D / 2;
+  const y = clamp(h, 0, D);
+  switch (head.kind) {
+    case 'flat':
+      return 0;
+    case 'semi-ellipsoidal-2-1':
+    case 'hemispherical': {
+      const a = head.kind === 'hemispherical' ? R : R / 2;
+      return (Math.PI * a * y * y * (3 * R - y)) / (6 * R);
+    }
+    case 'torispherical': {
+      const t = torus(D, head);
+      const slice = (z: number) => circleAreaBelow(headSliceRadius(head, D, z), y - R);
+      return simpson(slice, 0, t.z1, 400) + simpson(slice, t.z1, t.depth, 400);
+    }
+  }
+}
+
+/** Internal volume of the vessel, m³. Throws InputError if the geometry is invalid (see validateGeometry). */
+export function vesselVolume(geometry: VesselGeometry): number {
+  validateGeometry(geometry);
+  if (geometry.shape === 'stated-volume') return geometry.volumeM3;
+  const D = geometry.innerDiameterM;
+  return Math.PI * (D / 2) ** 2 * geometry.straightLengthM + 2 * headVolumeM3(geometry.head, D);
+}
+
+/** Inside height available to the liquid, m (vertical: 2 head depths + straight length; horizontal: D). */
+export function vesselLevelSpanM(geometry: CylinderGeometry): number {
+  const D = geometry.innerDiameterM;
+  return geometry.shape === 'horizontal-cylinder'
+    ? D
+    : 2 * headDepthM(geometry.head, D) + geometry.straightLengthM;
+}
+
+/**
+ * Liquid volume at level h above the lowest inside point, m³. h in m, 0 ≤ h ≤ vesselLevelSpanM.
+ * Throws InputError ('liquid level') outside that range or if the geometry is invalid.
+ */
+export function liquidVolumeFromLevel(geometry: CylinderGeometry, levelM: number): number {
+  validateGeometry(geometry);
+  const span = vesselLevelSpanM(geometry);
+  if (!Number.isFinite(levelM)) throw new InputError('liquid level', 'not-a-number', levelM, { min: 0, max: span, unit: 'm' });
+  if (levelM < 0 || levelM > span) throw new InputError('liquid level', 'out-of-range', levelM, { min: 0, max: span, unit: 'm' });
+  return volumeAtLevel(geometry, levelM);
+}
+
+function volumeAtLevel(g: CylinderGeometry, h: number): number {
+  const D = g.innerDiameterM;
+  const R = D / 2;
+  if (g.shape === 'horizontal-cylinder') {
+    return circleAreaBelow(R, h - R) * g.straightLengthM + 2 * horizontalHeadVolumeM3(g.head, D, h);
+  }
+  const hd = headDepthM(g.head, D);
+  const full = headVolumeM3(g.head, D);
+  const bottom = bottomHeadVolumeM3(g.head, D, h);
+  const shell = Math.PI * R * R * clamp(h - hd, 0, g.straightLengthM);
+  // The top head is the bottom head inverted: the empty part above the liquid is a bottom-head fill.
+  const topDepth = clamp(h - hd - g.straightLengthM, 0, hd);
+  const top = topDepth > 0 ? full - bottomHeadVolumeM3(g.head, D, hd - topDepth) : 0;
+  return bottom + shell + top;
+}
+
+/**
+ * Liquid level above the lowest inside point for a liquid volume, m. volumeM3 in m³,
+ * 0 ≤ volumeM3 ≤ vesselVolume. V(h) rises monotonically, so bisection converges to the level
+ * within 1e-12 of the span. Throws InputError ('liquid volume') outside that range.
+ */
+export function liquidLevelFromVolume(geometry: CylinderGeometry, volumeM3: number): number {
+  const total = vesselVolume(geometry);
+  const range = { min: 0, max: total, unit: 'm³' };
+  if (!Number.isFinite(volumeM3)) throw new InputError('liquid volume', 'not-a-number', volumeM3, range);
+  if (volumeM3 < 0 || volumeM3 > total * (1 + 1e-12)) throw new InputError('liquid volume', 'out-of-range', volumeM3, range);
+  const span = vesselLevelSpanM(geometry);
+  let lo = 0;
+  let hi = span;
+  for (let i = 0; i < 80 && hi - lo > 1e-12 * span; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (volumeAtLevel(geometry, mid) < volumeM3) lo = mid;
+    else hi = mid;
+  }
+  return 0.5 * (lo + hi);
+}
+
+const MAX_DIMENSION_M = 100;
+const MAX_VOLUME_M3 = 10_000;
+
+/**
+ * Throws InputError unless the geometry closes: positive finite dimensions, and for a torispherical
+ * head a knuckle radius 0 < r ≤ D/2 and a crown radius L ≥ D/2 (else crown and knuckle cannot meet).
+ * Limits: D, L_c ≤ 100 m, stated volume 0 < V ≤ 10 000 m³.
+ */
+export function validateGeometry(geometry: VesselGeometry): void {
+  if (geometry.shape === 'stated-volume') {
+    positive('internal volume', geometry.volumeM3, MAX_VOLUME_M3, 'm³');
+    return;
+  }
+  if (geometry.shape !== 'vertical-cylinder' && geometry.shape !== 'horizontal-cylinder') {
+    throw new InputError('vessel shape', 'out-of-range', String((geometry as { shape: unknown }).shape), undefined,
+      'vessel shape: must be stated-volume, vertical-cylinder or horizontal-cylinder.');
+  }
+  const D = positive('inner diameter', geometry.innerDiameterM, MAX_DIMENSION_M, 'm');
+  const Lc = geometry.straightLengthM;
+  if (!Number.isFinite(Lc)) throw new InputError('straight length', 'not-a-number', Lc, { min: 0, max: MAX_DIMENSION_M, unit: 'm' });
+  if (Lc < 0 || Lc > MAX_DIMENSION_M) throw new InputError('straight length', 'out-of-range', Lc, { min: 0, max: MAX_DIMENSION_M, unit: 'm' });
+  const head = geometry.head;
+  if (head.kind === 'torispherical') {
+    const R = D / 2;
+    if (head.knuckleRadiusM !== undefined) {
+      const r = head.knuckleRadiusM;
+      if (!Number.isFinite(r)) throw new InputError('knuckle radius', 'not-a-number', r, { min: 0, max: R, unit: 'm' });
+      if (r <= 0 || r > R) throw new InputError('knuckle radius', 'inconsistent', r, { min: 0, max: R, unit: 'm' },
+        `knuckle radius: ${r} m does not close the head; it must be above 0 and at most half the inner diameter (${R} m).`);
+    }
+    if (head.crownRadiusM !== undefined) {
+      const L = head.crownRadiusM;
+      const max = MAX_DIMENSION_M;
+      if (!Number.isFinite(L)) throw new InputError('crown radius', 'not-a-number', L, { min: R, max, unit: 'm' });
+      if (L < R || L > max) throw new InputError('crown radius', 'inconsistent', L, { min: R, max, unit: 'm' },
+        `crown radius: ${L} m does not close the head; it must be at least half the inner diameter (${R} m).`);
+    }
+  } else if (head.kind !== 'flat' && head.kind !== 'semi-ellipsoidal-2-1' && head.kind !== 'hemispherical') {
+    throw new InputError('head type', 'out-of-range', String((head as { kind: unknown }).kind), undefined,
+      'head type: must be flat, semi-ellipsoidal-2-1, hemispherical or torispherical.');
+  }
+  if (head.kind === 'flat' && Lc === 0) {
+    throw new InputError('straight length', 'inconsistent', Lc, { min: 0, max: MAX_DIMENSION_M, unit: 'm' },
+      `straight length: a vessel with flat heads has no volume unless the straight length is above 0 m (valid range: above 0 to ${MAX_DIMENSION_M} m).`);
+  }
+}
+
+function positive(field: string, value: number, max: number, unit: string): number {
+  if (!Number.isFinite(value)) throw new InputError(field, 'not-a-number', value, { min: 0, max, unit });
+  if (value <= 0 || value > max) {
+    throw new InputError(field, 'out-of-range', value, { min: 0, max, unit },
+      `${field}: ${value} ${unit} is outside the valid range; it must be above 0 and at most ${max} ${unit}.`);
+  }
+  return value;
+}
+
+function clamp(x: number, lo: number, hi: number): number {
+  return x < lo ? lo : x > hi ? hi : x;
+}
