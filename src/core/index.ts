@@ -1,3 +1,4 @@
 // The one public entry of the core. Everything here is SI: K, Pa, kg, m³, m³/kg, J/kg, J/(kg·K), m/s.
 export { InputError, requireInRange } from './errors.ts';
 export type { InputProblem } from './errors.ts';
+export * from './units/index.ts';
