@@ -1,0 +1,112 @@
+// What the inventory stores about one vessel, in SI, and the rules a stored vessel must satisfy.
+// The store persists VesselSpec as-is, so it is plain data: no classes, no functions.
+
+import { InputError, requireInRange } from '../errors.ts';
+import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
+
+/** Temperature sensor tolerance: an IEC 60751 platinum RTD class, or a stated ± limit. */
+export type TemperatureSensorTolerance =
+  | { kind: 'iec-60751'; sensorClass: 'AA' | 'A' | 'B' }
+  | { kind: 'stated'; toleranceK: number };
+
+/** Instrument accuracies, each a ± limit (the edge of a rectangular distribution). */
+export interface InstrumentAccuracy {
+  /** Pressure gauge or transmitter: span (full scale minus zero), Pa, and accuracy class, % of span. */
+  pressureGauge: { spanPa: number; accuracyPercentOfSpan: number };
+  temperatureSensor: TemperatureSensorTolerance;
+  /** ± limit of one weight reading, kg: at least the scale or load-cell resolution; include tare drift and piping restraint. */
+  weightToleranceKg: number;
+  /** ± limit of the internal volume, % of volume (dimensions, internals, straight flanges). */
+  volumeTolerancePercent: number;
+  /** ± limit of a measured atmospheric (barometer) reading, Pa. */
+  barometerTolerancePa: number;
+}
+
+/** One vessel as the inventory stores it. Pressures marked Gauge are relative to the atmosphere. */
+export interface VesselSpec {
+  /** Plant tag, non-empty. */
+  tag: string;
+  description: string;
+  geometry: VesselGeometry;
+  /** Empty, dry weight on the vessel's scale, kg. */
+  tareKg: number;
+  /** Maximum allowable working pressure, gauge, Pa. */
+  mawpGaugePa: number;
+  /** Design (maximum) temperature, K. */
+  designTemperatureK: number;
+  /** Relief (safety) valve set pressure, gauge, Pa; at most the MAWP. */
+  reliefSetGaugePa: number;
+  /** Rated for full vacuum (external pressure). */
+  vacuumRated: boolean;
+  /** Site atmospheric (station) pressure, Pa; the UI resolves an elevation to this. */
+  siteAtmospherePa: number;
+  /** Surroundings the vessel cools to when idle, K. */
+  ambientTemperatureK: number;
+  instruments: InstrumentAccuracy;
+}
+
+/** Valid ranges, SI. Atmosphere: every inhabited elevation up to the 108.38 kPa record high (field-practice.md §1.3). */
+export const VESSEL_LIMITS = {
+  tareKg: { min: 0, max: 1e6, unit: 'kg' },
+  mawpGaugePa: { min: 0, max: 100e6, unit: 'Pa' },
+  designTemperatureK: { min: 273.16, max: 1073.15, unit: 'K' },
+  siteAtmospherePa: { min: 30e3, max: 110e3, unit: 'Pa' },
+  ambientTemperatureK: { min: 223.15, max: 333.15, unit: 'K' },
+  gaugeSpanPa: { min: 0, max: 100e6, unit: 'Pa' },
+  gaugeAccuracyPercent: { min: 0, max: 10, unit: '% of span' },
+  temperatureToleranceK: { min: 0, max: 50, unit: 'K' },
+  weightToleranceKg: { min: 0, max: 1e5, unit: 'kg' },
+  volumeTolerancePercent: { min: 0, max: 50, unit: '%' },
+  barometerTolerancePa: { min: 0, max: 10e3, unit: 'Pa' },
+} as const;
+
+/**
+ * Throws InputError naming the first field that is empty, not a number, out of range, or
+ * inconsistent with another (relief set pressure above MAWP; geometry that does not close).
+ */
+export function validateVessel(spec: VesselSpec): void {
+  const L = VESSEL_LIMITS;
+  if (typeof spec.tag !== 'string' || spec.tag.trim() === '') throw new InputError('tag', 'empty', String(spec.tag ?? ''));
+  validateGeometry(spec.geometry);
+  inRange('tare weight', spec.tareKg, L.tareKg);
+  if (!Number.isFinite(spec.mawpGaugePa)) throw new InputError('MAWP', 'not-a-number', spec.mawpGaugePa, L.mawpGaugePa);
+  if (spec.mawpGaugePa <= 0 || spec.mawpGaugePa > L.mawpGaugePa.max) {
+    throw new InputError('MAWP', 'out-of-range', spec.mawpGaugePa, L.mawpGaugePa,
+      `MAWP: ${spec.mawpGaugePa} Pa (gauge) is outside the valid range; it must be above 0 and at most ${L.mawpGaugePa.max} Pa.`);
+  }
+  inRange('design temperature', spec.designTemperatureK, L.designTemperatureK);
+  const relief = spec.reliefSetGaugePa;
+  const reliefRange = { min: 0, max: spec.mawpGaugePa, unit: 'Pa' };
+  if (!Number.isFinite(relief)) throw new InputError('relief set pressure', 'not-a-number', relief, reliefRange);
+  if (relief <= 0) {
+    throw new InputError('relief set pressure', 'out-of-range', relief, reliefRange,
+      `relief set pressure: ${relief} Pa (gauge) must be above 0 and at most the MAWP (${spec.mawpGaugePa} Pa).`);
+  }
+  if (relief > spec.mawpGaugePa) {
+    // ASME BPVC VIII-1 UG-134(a): a single device may not be set above MAWP (field-practice.md §6.6).
+    throw new InputError('relief set pressure', 'inconsistent', relief, reliefRange,
+      `relief set pressure: ${relief} Pa (gauge) is above the MAWP (${spec.mawpGaugePa} Pa); it must be at most the MAWP.`);
+  }
+  if (typeof spec.vacuumRated !== 'boolean') throw new InputError('vacuum rating', 'empty', String(spec.vacuumRated));
+  inRange('site atmospheric pressure', spec.siteAtmospherePa, L.siteAtmospherePa);
+  inRange('ambient temperature', spec.ambientTemperatureK, L.ambientTemperatureK);
+  const ins = spec.instruments;
+  inRange('pressure gauge span', ins.pressureGauge.spanPa, L.gaugeSpanPa);
+  if (ins.pressureGauge.spanPa === 0) {
+    throw new InputError('pressure gauge span', 'out-of-range', 0, L.gaugeSpanPa, 'pressure gauge span: must be above 0 Pa.');
+  }
+  inRange('pressure gauge accuracy', ins.pressureGauge.accuracyPercentOfSpan, L.gaugeAccuracyPercent);
+  const sensor = ins.temperatureSensor;
+  if (sensor.kind === 'stated') inRange('temperature sensor tolerance', sensor.toleranceK, L.temperatureToleranceK);
+  else if (sensor.kind !== 'iec-60751' || !['AA', 'A', 'B'].includes(sensor.sensorClass)) {
+    throw new InputError('temperature sensor class', 'out-of-range', String((sensor as { sensorClass?: unknown }).sensorClass), undefined,
+      'temperature sensor class: must be IEC 60751 class AA, A or B, or a stated tolerance in K.');
+  }
+  inRange('weight tolerance', ins.weightToleranceKg, L.weightToleranceKg);
+  inRange('volume tolerance', ins.volumeTolerancePercent, L.volumeTolerancePercent);
+  inRange('barometer tolerance', ins.barometerTolerancePa, L.barometerTolerancePa);
+}
+
+function inRange(field: string, value: number, r: { min: number; max: number; unit: string }): void {
+  requireInRange(field, value, r.min, r.max, r.unit);
+}
