@@ -5,17 +5,21 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 
 const rootDir = import.meta.dirname;
+const packageVersion = (JSON.parse(readFileSync(resolve(rootDir, 'package.json'), 'utf8')) as { version: string }).version;
+// TANKSIDE_BUILD_TAG marks a build variant (the browser tests build a second one to deliver an update).
+const appVersion = process.env.TANKSIDE_BUILD_TAG ? `${packageVersion}+${process.env.TANKSIDE_BUILD_TAG}` : packageVersion;
 
 export default defineConfig({
   root: resolve(rootDir, 'src'),
   publicDir: resolve(rootDir, 'src/public'),
   base: './',
+  define: { __APP_VERSION__: JSON.stringify(appVersion) },
   build: {
     outDir: resolve(rootDir, 'dist'),
     emptyOutDir: true,
     target: 'es2022',
     // One chunk: lazy chunks can vanish from the precache under a running page after an update.
-    rollupOptions: { output: { inlineDynamicImports: true } },
+    rollupOptions: { output: { codeSplitting: false } },
   },
   plugins: [
     preact(),

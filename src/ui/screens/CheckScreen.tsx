@@ -1,0 +1,41 @@
+// New check: pick a vessel, type the readings; the result updates as the person types and the
+// entry is kept as a draft until it is saved to the log.
+import { useMemo } from 'preact/hooks';
+import { ReadingInputs } from '../components/ReadingInputs.tsx';
+import { ResultCard } from '../components/ResultCard.tsx';
+import { SaveCheckForm } from '../components/SaveCheckForm.tsx';
+import { VesselPicker } from '../components/VesselPicker.tsx';
+import { StandingNote } from '../components/StandingNote.tsx';
+import { AtmosphereLine } from '../components/AtmosphereLine.tsx';
+import { useSettings, useVessels } from '../state/app-state.ts';
+import { useDraft } from '../state/drafts.ts';
+import { CHECK_DRAFT_KEY, emptyCheckDraft } from '../state/check-draft.ts';
+import { evaluateDraft } from '../state/check-session.ts';
+import { siteAtmosphere } from '../state/atmosphere.ts';
+import { unitsInForce } from '../state/settings-model.ts';
+
+export function CheckScreen() {
+  const settings = useSettings();
+  const prefs = unitsInForce(settings);
+  const vessels = useVessels();
+  const draft = useDraft(CHECK_DRAFT_KEY, emptyCheckDraft(prefs, settings.technician));
+  const d = draft.value;
+  const vessel = vessels.find((v) => v.id === d.vesselId && !v.retired);
+  const atm = siteAtmosphere(settings.atmosphere);
+  const evaluation = useMemo(() => evaluateDraft(d, vessel, atm, prefs), [d, vessel, settings]);
+  return (
+    <div>
+      <VesselPicker vessels={vessels} value={d.vesselId} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
+      <AtmosphereLine atm={atm} />
+      <ReadingInputs draft={d} onChange={draft.set} errors={evaluation.kind === 'input-error' ? evaluation.errors : {}} />
+      <div aria-live="polite" aria-atomic="true" class="field">
+        {evaluation.kind === 'result' ? <p class="visually-hidden">{evaluation.view.verdict.text}</p> : null}
+        {evaluation.kind === 'incomplete' ? <p>{evaluation.message}</p> : null}
+        {evaluation.kind === 'input-error' && evaluation.general ? <p class="field-error">{evaluation.general}</p> : null}
+      </div>
+      {evaluation.kind === 'result' ? <ResultCard view={evaluation.view} /> : <StandingNote />}
+      <SaveCheckForm draft={d} onChange={draft.set} evaluation={evaluation} vessel={vessel}
+        onSaved={() => draft.set({ ...emptyCheckDraft(prefs, d.technician), vesselId: d.vesselId })} />
+    </div>
+  );
+}

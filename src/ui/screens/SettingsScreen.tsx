@@ -1,0 +1,35 @@
+// Settings: technician name, preferred units, site atmosphere, storage state and the backup reminder.
+import { TextField } from '../components/TextField.tsx';
+import { Choice } from '../components/Choice.tsx';
+import { UnitPrefsPicker } from '../components/UnitPrefsPicker.tsx';
+import { AtmosphereSettings } from '../components/AtmosphereSettings.tsx';
+import { BackupPanel } from '../components/BackupPanel.tsx';
+import { updateSettings, useSettings } from '../state/app-state.ts';
+import type { UnitSystem } from '../state/settings-model.ts';
+
+const SYSTEMS = [
+  { id: 'SI', label: 'SI' },
+  { id: 'US', label: 'US customary' },
+  { id: 'custom', label: 'Per quantity' },
+] as const;
+
+export function SettingsScreen() {
+  const s = useSettings();
+  return (
+    <div>
+      <section class="panel" aria-labelledby="set-who">
+        <h2 id="set-who">Technician</h2>
+        <TextField id="set-tech" label="Your name (saved with each check)" value={s.technician}
+          onInput={(technician) => void updateSettings({ technician })} />
+      </section>
+      <section class="panel" aria-labelledby="set-units">
+        <h2 id="set-units">Units</h2>
+        <Choice<UnitSystem> name="set-system" legend="Preferred units" value={s.unitSystem} options={SYSTEMS}
+          onChange={(unitSystem) => void updateSettings({ unitSystem })} />
+        {s.unitSystem === 'custom' ? <UnitPrefsPicker /> : null}
+      </section>
+      <AtmosphereSettings />
+      <BackupPanel />
+    </div>
+  );
+}
