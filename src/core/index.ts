@@ -2,3 +2,4 @@
 export { InputError, requireInRange } from './errors.ts';
 export type { InputProblem } from './errors.ts';
 export * from './units/index.ts';
+export * from './check/index.ts';

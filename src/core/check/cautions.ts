@@ -1,0 +1,193 @@
+// Cautions: each carries an ISO 3864 / ANSI Z535 signal word, a short message and the rule that
+// raised it. The rule catalogue fixes each rule's signal word, so a rule cannot be raised at two
+// levels by accident. Every result ends with the standing note.
+
+import type { CheckResult } from './evaluate-check.ts';
+import type { FillPlan } from './plan-fill.ts';
+import type { VesselSpec } from './vessel-spec.ts';
+
+export type SignalWord = 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
+
+export interface Caution {
+  signal: SignalWord;
+  message: string;
+  /** Rule id from CAUTION_RULES. */
+  rule: string;
+}
+
+/** Every rule and its signal word. The thresholds live beside the code that raises each rule. */
+export const CAUTION_RULES = {
+  'liquid-full-now': 'DANGER',
+  'pressure-above-mawp': 'DANGER',
+  'pressure-above-relief-set': 'WARNING',
+  'pressure-near-relief-set': 'CAUTION',
+  'liquid-full-on-heating': 'WARNING',
+  'above-design-temperature': 'WARNING',
+  'noncondensable-gas': 'WARNING',
+  'pressure-below-saturation': 'CAUTION',
+  'saturation-check-limits': 'NOTICE',
+  'atmosphere-assumed': 'NOTICE',
+  'superheated-pressure-mismatch': 'CAUTION',
+  'quality-band-reaches-liquid-full': 'CAUTION',
+  'bulk-quality-not-dryness': 'NOTICE',
+  'flash-on-release': 'WARNING',
+  'vacuum-on-cooling': 'WARNING',
+  'scald': 'CAUTION',
+  'plan-exceeds-safe-charge': 'DANGER',
+  'plan-does-not-fit': 'DANGER',
+  'plan-target-above-mawp': 'DANGER',
+  'plan-target-above-relief-set': 'WARNING',
+  'plan-above-design-temperature': 'WARNING',
+  'plan-assumes-air-removed': 'NOTICE',
+  'standing-note': 'NOTICE',
+} as const satisfies Record<string, SignalWord>;
+
+export type CautionRule = keyof typeof CAUTION_RULES;
+
+/** A caution for a catalogued rule. */
+export function caution(rule: CautionRule, message: string): Caution {
+  return { signal: CAUTION_RULES[rule], message, rule };
+}
+
+/** The note every result carries (issue 3, item 7; wording ours). */
+export const STANDING_NOTE: Caution = caution(
+  'standing-note',
+  'Advisory figures only. This app does not replace the vessel\'s inspection regime, local codes ' +
+    '(such as ASME BPVC Section VIII, PED 2014/68/EU and national rules), lockout/tagout procedures ' +
+    'or licensed practice. Nameplate limits and the competent person\'s instructions take precedence.',
+);
+
+const ORDER: Record<SignalWord, number> = { DANGER: 0, WARNING: 1, CAUTION: 2, NOTICE: 3 };
+
+/** Cautions most severe first (stable within a level), the standing note last. */
+export function withStandingNote(list: Caution[]): Caution[] {
+  const sorted = list
+    .map((c, i) => ({ c, i }))
+    .sort((a, b) => ORDER[a.c.signal] - ORDER[b.c.signal] || a.i - b.i)
+    .map(({ c }) => c);
+  return [...sorted, STANDING_NOTE];
+}
+
+/** °C with one decimal, for messages. T in K. */
+export function celsius(temperatureK: number): string {
+  return `${(temperatureK - 273.15).toFixed(1)} °C`;
+}
+
+/** kPa with one decimal, for messages. p in Pa. */
+export function kilopascal(pressurePa: number): string {
+  return `${(pressurePa / 1000).toFixed(1)} kPa`;
+}
+
+/** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association, field-practice.md §6.4). */
+export const SCALD_TEMPERATURE_K = 333.15;
+
+/** Fraction of the relief set pressure at which a reading is flagged (usual ~90 % operating margin; from memory, field-practice.md §6.6). */
+export const NEAR_LIMIT_FRACTION = 0.9;
+
+/** The cautions for one evaluated check (the standing note last). */
+export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, 'cautions'>): Caution[] {
+  const out: Caution[] = [];
+  const r = result.reading;
+  const T = r.temperatureK;
+  const gauge = r.gaugePressurePa;
+  const inv = result.inventory;
+
+  if (inv.regime === 'liquid-full') {
+    const h = inv.hydraulic;
+    out.push(caution('liquid-full-now', h.withinFormulation
+      ? `The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge ` +
+        `(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating. Stop heating and check the weight.`
+      : `The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
+  }
+  if (gauge > vessel.mawpGaugePa) {
+    out.push(caution('pressure-above-mawp', `Gauge pressure ${kilopascal(gauge)} is above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
+  } else if (gauge > vessel.reliefSetGaugePa) {
+    out.push(caution('pressure-above-relief-set', `Gauge pressure ${kilopascal(gauge)} is above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) but the relief device has not relieved it.`));
+  } else if (gauge >= NEAR_LIMIT_FRACTION * vessel.reliefSetGaugePa) {
+    out.push(caution('pressure-near-relief-set', `Gauge pressure ${kilopascal(gauge)} is within 10 % of the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge).`));
+  }
+  const env = result.envelope;
+  if (env && env.first.event === 'liquid-full' && inv.regime !== 'liquid-full') {
+    out.push(caution('liquid-full-on-heating',
+      `This fill goes liquid-full at ${celsius(env.first.temperatureK)}, before the steam reaches the relief set pressure` +
+      `${env.reliefSetTemperatureK === null ? '' : ` (${celsius(env.reliefSetTemperatureK)})`}. Heating past it gives hydraulic overpressure.`));
+  }
+  if (T > vessel.designTemperatureK) {
+    out.push(caution('above-design-temperature', `Temperature ${celsius(T)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
+  }
+
+  const v = result.saturation.verdict;
+  if (v.verdict === 'pressure-above-saturation') {
+    const g = v.noncondensableGas;
+    out.push(caution('noncondensable-gas',
+      `Pressure is ${kilopascal(g.partialPressurePa)} above saturation for ${celsius(T)}: air or another non-condensable gas is likely ` +
+      `(about ${(100 * g.moleFraction).toFixed(1)} % by mole), or the thermometer reads low. The steam is ${g.temperatureShortfallK.toFixed(1)} K ` +
+      `colder than the gauge implies; for sterilisation, the load may not reach temperature.`));
+  } else if (v.verdict === 'pressure-below-saturation') {
+    out.push(caution('pressure-below-saturation',
+      `Pressure is ${kilopascal(-result.saturation.pressureDeviationPa)} below saturation for ${celsius(T)}: suspect a gauge or thermometer fault, ` +
+      `a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapor' : ''}.`));
+  } else {
+    out.push(caution('saturation-check-limits',
+      `Pressure and temperature agree with saturated steam within ±${result.saturation.temperatureBandK.plusMinus.toFixed(2)} K (root-sum-square of the instrument limits). ` +
+      'Agreement cannot show air below a few percent and does not replace an air-removal or non-condensable gas test.'));
+  }
+  if (r.atmosphereSource === 'site' && result.saturation.pressureBand.contributions.atmosphere > 0) {
+    out.push(caution('atmosphere-assumed', 'Gauge pressure was converted with the stored site atmosphere; weather moves it by a few kPa. A barometer reading narrows the band.'));
+  }
+
+  if (inv.regime === 'superheated') {
+    const band = result.saturation.pressureBand.plusMinus;
+    if (Math.abs(inv.differenceFromReadingPa) > band) {
+      out.push(caution('superheated-pressure-mismatch',
+        `By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
+    }
+  }
+  if (inv.regime === 'two-phase') {
+    if (result.inventoryBands && inv.quality - result.inventoryBands.quality.plusMinus <= 0) {
+      out.push(caution('quality-band-reaches-liquid-full', 'Within the weight, temperature and volume tolerances the contents could be liquid-full.'));
+    }
+    out.push(caution('bulk-quality-not-dryness', 'Quality here is the bulk vapor mass fraction of the vessel contents, not the dryness of supply steam (EN 285 dryness value).'));
+  }
+
+  const flash = result.hazards.flash;
+  if (flash && flash.flashFraction > 0) {
+    out.push(caution('flash-on-release',
+      `Liquid released to atmosphere flashes: ${(100 * flash.flashFraction).toFixed(1)} % turns to steam, about ${Math.round(flash.volumeRatio)} times the liquid volume. ` +
+      'Opening a drain, vent, sight-glass cock or door makes a scalding jet.'));
+  }
+  const cooled = result.hazards.cooled;
+  if (cooled.collapseRisk) {
+    out.push(caution('vacuum-on-cooling',
+      `Cooled to ${celsius(cooled.temperatureK)} the vessel falls to ${kilopascal(cooled.gaugePressurePa)} gauge and it is not rated for vacuum: ` +
+      'keep the vacuum breaker or vent working before it cools sealed.'));
+  }
+  if (T >= SCALD_TEMPERATURE_K) {
+    out.push(caution('scald', `Contents at ${celsius(T)}: contact scalds within seconds. Wear face, eye and hand protection.`));
+  }
+  return withStandingNote(out);
+}
+
+/** The cautions for one fill plan (the standing note last). */
+export function cautionsForPlan(vessel: VesselSpec, plan: Omit<FillPlan, 'cautions'>): Caution[] {
+  const out: Caution[] = [];
+  if (plan.startState.regime === 'liquid-full') {
+    out.push(caution('plan-does-not-fit', `The charge does not fit: at the start temperature ${celsius(plan.startTemperatureK)} it would already fill the vessel with liquid.`));
+  }
+  if (plan.waterMassKg > plan.largestSafeCharge.waterMassKg) {
+    out.push(caution('plan-exceeds-safe-charge',
+      `The charge (${plan.waterMassKg.toFixed(1)} kg) is more than the largest safe charge (${plan.largestSafeCharge.waterMassKg.toFixed(1)} kg): ` +
+      `it goes liquid-full at ${plan.envelope.liquidFullTemperatureK === null ? 'no temperature' : celsius(plan.envelope.liquidFullTemperatureK)}, ` +
+      `inside the margin below the relief set pressure's saturation temperature.`));
+  }
+  if (plan.targetGaugePressurePa > vessel.mawpGaugePa) {
+    out.push(caution('plan-target-above-mawp', `At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
+  } else if (plan.targetGaugePressurePa > vessel.reliefSetGaugePa) {
+    out.push(caution('plan-target-above-relief-set', `At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge).`));
+  }
+  if (plan.targetTemperatureK > vessel.designTemperatureK) {
+    out.push(caution('plan-above-design-temperature', `The target ${celsius(plan.targetTemperatureK)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
+  }
+  out.push(caution('plan-assumes-air-removed', 'The plan assumes the air is removed before sealing; air left in raises the pressure above saturation and lowers the steam temperature.'));
+  return withStandingNote(out);
+}

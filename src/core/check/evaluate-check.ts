@@ -1,0 +1,171 @@
+// From one reading on one vessel to a verdict, an inventory with ± bands, the heat-up envelope,
+// the hazard figures and the cautions that apply. Pure, SI, plain serialisable data out.
+
+import { FORMULATION_ID, saturation } from '../steam/index.ts';
+import { cautionsForCheck, type Caution } from './cautions.ts';
+import { heatUpEnvelope, type HeatUpEnvelope } from './heat-up-envelope.ts';
+import { cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type CooledState, type FlashOnRelease, type PressureMargin } from './hazards.ts';
+import { idealGasComparison, type IdealGasComparison } from './ideal-gas.ts';
+import { contentsState, inventoryOf, type Inventory } from './inventory.ts';
+import { resolveReading, type Reading, type ResolvedReading } from './reading.ts';
+import { checkSaturation, type SaturationCheck } from './saturation-consistency.ts';
+import { inventoryBands, netMassToleranceKg, temperatureToleranceK, type InventoryBands } from './uncertainty.ts';
+import { requireFiniteData } from './finite-data.ts';
+import { vesselVolume } from './vessel-geometry.ts';
+import { validateVessel, type VesselSpec } from './vessel-spec.ts';
+
+export interface Hazards {
+  /** Flash of the liquid if released to atmosphere; null when there is no liquid (superheated, or beyond IF97). */
+  flash: FlashOnRelease | null;
+  /** Isentropic expansion work of the whole contents down to atmosphere: an indicator of stored energy, not a blast prediction. */
+  storedEnergy: { expansionWorkJ: number; tntEquivalentKg: number } | null;
+  mawpMargin: PressureMargin;
+  reliefSetMargin: PressureMargin;
+  cooled: CooledState;
+}
+
+export interface CheckResult {
+  formulationId: typeof FORMULATION_ID;
+  reading: ResolvedReading;
+  internalVolumeM3: number;
+  saturation: SaturationCheck;
+  inventory: Inventory | { regime: 'not-weighed' };
+  /** ± bands on quality and liquid mass, two-phase only. */
+  inventoryBands: InventoryBands | null;
+  /** Heat-up envelope of this fill; null when not weighed. */
+  envelope: HeatUpEnvelope | null;
+  hazards: Hazards;
+  idealGas: IdealGasComparison;
+  cautions: Caution[];
+}
+
+/**
+ * Evaluates one reading on one vessel (all SI: K, Pa, kg, m³). Validates both first; throws
+ * InputError naming the field and its valid range (see validateVessel and resolveReading).
+ */
+export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult {
+  validateVessel(vessel);
+  const r = resolveReading(vessel, reading);
+  const V = vesselVolume(vessel.geometry);
+  const T = r.temperatureK;
+  const sat = saturation(T);
+
+  const inventory: CheckResult['inventory'] =
+    r.netMassKg === null
+      ? { regime: 'not-weighed' }
+      : inventoryOf({
+          geometry: vessel.geometry,
+          volumeM3: V,
+          netMassKg: r.netMassKg,
+          temperatureK: T,
+          atmospherePa: r.atmospherePa,
+          mawpGaugePa: vessel.mawpGaugePa,
+          measuredAbsolutePressurePa: r.absolutePressurePa,
+        });
+  const liquidPresent = inventory.regime === 'not-weighed' ? null : inventory.regime !== 'superheated';
+  const saturationCheck = checkSaturation(vessel, r, reading.pressure.reference, liquidPresent);
+
+  const bands =
+    inventory.regime === 'two-phase' && reading.weight.kind !== 'not-weighed'
+      ? inventoryBands({
+          temperatureK: T,
+          massKg: inventory.netMassKg,
+          volumeM3: V,
+          massToleranceKg: netMassToleranceKg(vessel, reading.weight.kind),
+          temperatureToleranceK: temperatureToleranceK(vessel.instruments.temperatureSensor, T),
+          volumeToleranceM3: (vessel.instruments.volumeTolerancePercent / 100) * V,
+        })
+      : null;
+
+  const envelope =
+    r.netMassKg === null
+      ? null
+      : heatUpEnvelope({
+          volumeM3: V,
+          massKg: r.netMassKg,
+          startTemperatureK: T,
+          reliefSetGaugePa: vessel.reliefSetGaugePa,
+          mawpGaugePa: vessel.mawpGaugePa,
+          atmospherePa: r.atmospherePa,
+        });
+
+  const hazards = hazardsOf(vessel, r, inventory, sat, saturationCheck, V);
+  const vapor =
+    inventory.regime === 'superheated'
+      ? idealGasComparison(T, inventory.absolutePressurePa, inventory.meanSpecificVolumeM3PerKg)
+      : idealGasComparison(T, sat.p, sat.vapor.v);
+
+  const partial: Omit<CheckResult, 'cautions'> = {
+    formulationId: FORMULATION_ID,
+    reading: r,
+    internalVolumeM3: V,
+    saturation: saturationCheck,
+    inventory,
+    inventoryBands: bands,
+    envelope,
+    hazards,
+    idealGas: vapor,
+  };
+  return requireFiniteData({ ...partial, cautions: cautionsForCheck(vessel, partial) });
+}
+
+function hazardsOf(
+  vessel: VesselSpec,
+  r: ResolvedReading,
+  inventory: CheckResult['inventory'],
+  sat: ReturnType<typeof saturation>,
+  check: SaturationCheck,
+  V: number,
+): Hazards {
+  const T = r.temperatureK;
+  let flash: FlashOnRelease | null = null;
+  let storedEnergy: Hazards['storedEnergy'] = null;
+  const energy = (workPerKg: number, m: number) => ({ expansionWorkJ: workPerKg * m, tntEquivalentKg: (workPerKg * m) / TNT_ENERGY_J_PER_KG });
+  switch (inventory.regime) {
+    case 'not-weighed':
+      // Liquid assumed present at T: the flash figure per kg still holds.
+      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, null);
+      break;
+    case 'two-phase': {
+      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, inventory.liquidMassKg);
+      const x = inventory.quality;
+      const u = sat.liquid.u + x * (sat.vapor.u - sat.liquid.u);
+      const s = sat.liquid.s + x * (sat.vapor.s - sat.liquid.s);
+      storedEnergy = energy(expansionWorkPerKgJ(u, s, sat.p, r.atmospherePa), inventory.netMassKg);
+      break;
+    }
+    case 'liquid-full': {
+      const found = contentsState(T, inventory.meanSpecificVolumeM3PerKg);
+      if (found.kind === 'state' && found.state.phase !== 'two-phase') {
+        const st = found.state;
+        flash = flashOnRelease(st.h, st.v, r.atmospherePa, inventory.netMassKg);
+        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa), inventory.netMassKg);
+      }
+      break;
+    }
+    case 'superheated': {
+      const found = contentsState(T, inventory.meanSpecificVolumeM3PerKg);
+      if (found.kind === 'state' && found.state.phase !== 'two-phase') {
+        const st = found.state;
+        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa), inventory.netMassKg);
+      }
+      break;
+    }
+  }
+  const gas = check.verdict.verdict === 'pressure-above-saturation' ? check.verdict.noncondensableGas.partialPressurePa : 0;
+  const cooled = cooledState({
+    ambientTemperatureK: vessel.ambientTemperatureK,
+    meanSpecificVolumeM3PerKg: inventory.regime === 'not-weighed' ? null : V / inventory.netMassKg,
+    noncondensablePartialPressurePa: gas,
+    temperatureK: T,
+    atmospherePa: r.atmospherePa,
+    vacuumRated: vessel.vacuumRated,
+  });
+  return {
+    flash,
+    storedEnergy,
+    mawpMargin: pressureMargin(r.gaugePressurePa, vessel.mawpGaugePa),
+    reliefSetMargin: pressureMargin(r.gaugePressurePa, vessel.reliefSetGaugePa),
+    cooled,
+  };
+}

@@ -1,0 +1,188 @@
+// How much water to charge: for a target temperature and a target quality (or vapor-space
+// fraction, or just enough for dry saturated steam), the mass, the gross weight to expect, the
+// ideal-gas estimate and its error, the heat and heat-up time, and the largest safe charge.
+
+import { InputError, requireInRange } from '../errors.ts';
+import { FORMULATION_ID, IF97, saturation } from '../steam/index.ts';
+import { cautionsForPlan, type Caution } from './cautions.ts';
+import { requireFiniteData } from './finite-data.ts';
+import { heatUpEnvelope, saturationTemperatureOrNull, type HeatUpEnvelope } from './heat-up-envelope.ts';
+import { contentsState } from './inventory.ts';
+import { VESSEL_LIMITS, validateVessel, type VesselSpec } from './vessel-spec.ts';
+import { vesselVolume } from './vessel-geometry.ts';
+
+/** What the charge should give at the target temperature. */
+export type FillTarget =
+  | { kind: 'quality'; /** Bulk quality, 0–1. */ quality: number }
+  | { kind: 'vapor-space-fraction'; /** Vapor volume / internal volume, 0–1. */ fraction: number }
+  | { kind: 'dry-saturated' };
+
+export interface FillRequest {
+  /** K, 273.16–647.096. */
+  targetTemperatureK: number;
+  target: FillTarget;
+  /** Temperature the sealed charge starts from, K, 273.16 up to the target. */
+  startTemperatureK: number;
+  /** Heat capacity of the vessel itself, J/K (0 to 1e9); omitted counts as 0. */
+  vesselHeatCapacityJPerK?: number;
+  /** Heater power reaching the contents, W (above 0 to 1e8); omitted gives no heat-up time. */
+  heaterPowerW?: number;
+  /** The largest safe charge must stay two-phase up to T_sat(relief set pressure) + this, K (0–100). */
+  liquidFullMarginK: number;
+  /** Atmosphere for gauge ↔ absolute, Pa (30–110 kPa); omitted uses the vessel's site value. */
+  atmospherePa?: number;
+}
+
+/** Contents of the sealed charge at one temperature. */
+export type ChargeState =
+  | { regime: 'two-phase'; temperatureK: number; absolutePressurePa: number; quality: number; vaporSpaceFraction: number }
+  | { regime: 'liquid-full'; temperatureK: number }
+  | { regime: 'superheated'; temperatureK: number; absolutePressurePa: number };
+
+export interface FillPlan {
+  formulationId: typeof FORMULATION_ID;
+  internalVolumeM3: number;
+  target: FillTarget;
+  targetTemperatureK: number;
+  startTemperatureK: number;
+  atmospherePa: number;
+  /** Water to charge, kg. */
+  waterMassKg: number;
+  /** Tare + charge: what the scale should read, kg. */
+  expectedGrossWeightKg: number;
+  /** p_sat(target), absolute and gauge, Pa. */
+  targetSaturationPressurePa: number;
+  targetGaugePressurePa: number;
+  /** At the target: quality, vapor-space fraction, liquid and vapor mass. */
+  atTarget: { quality: number; vaporSpaceFraction: number; liquidMassKg: number; vaporMassKg: number };
+  /** The same charge with the vapor as an ideal gas (v_g → R·T/p): mass, kg, and its error against IF97, %. */
+  idealGas: { waterMassKg: number; errorPercent: number };
+  /** Heat from start to target, J (internal-energy difference of the charge + vessel heat capacity × ΔT); time in s or null without a heater power. */
+  heat: { contentsJ: number; vesselJ: number; totalJ: number; heatUpTimeS: number | null } | null;
+  startState: ChargeState;
+  /** Largest charge still two-phase up to T_sat(relief) + margin (capped at the critical point). */
+  largestSafeCharge: {
+    limitTemperatureK: number;
+    waterMassKg: number;
+    expectedGrossWeightKg: number;
+    /** Liquid volume of that charge at the start temperature / internal volume. */
+    fillFractionAtStart: number;
+  };
+  envelope: HeatUpEnvelope;
+  cautions: Caution[];
+}
+
+function chargeState(T: number, v: number, V: number): ChargeState {
+  const found = contentsState(T, v);
+  if (found.kind === 'beyond-100-MPa') return { regime: 'liquid-full', temperatureK: T };
+  const s = found.state;
+  if (s.phase === 'two-phase') {
+    return { regime: 'two-phase', temperatureK: T, absolutePressurePa: s.p, quality: s.x, vaporSpaceFraction: (s.x * (V / v) * s.vapor.v) / V };
+  }
+  if (s.phase === 'compressed-liquid' || (s.phase === 'supercritical' && v < 1 / IF97.rhoc)) return { regime: 'liquid-full', temperatureK: T };
+  return { regime: 'superheated', temperatureK: T, absolutePressurePa: s.p };
+}
+
+/**
+ * Plans a charge for a vessel (SI throughout). Throws InputError naming the field: the vessel's
+ * fields (validateVessel), target temperature, start temperature (not above the target), quality
+ * or vapor-space fraction (0–1), vessel heat capacity, heater power, liquid-full margin, atmosphere.
+ */
+export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
+  validateVessel(vessel);
+  const T2 = requireInRange('target temperature', request.targetTemperatureK, IF97.Tt, IF97.Tc, 'K');
+  const T1 = requireInRange('start temperature', request.startTemperatureK, IF97.Tt, IF97.Tc, 'K');
+  if (T1 > T2) {
+    throw new InputError('start temperature', 'inconsistent', T1, { min: IF97.Tt, max: T2, unit: 'K' },
+      `start temperature: ${T1} K is above the target temperature (${T2} K); it must be at most the target.`);
+  }
+  const C = request.vesselHeatCapacityJPerK === undefined ? 0 : requireInRange('vessel heat capacity', request.vesselHeatCapacityJPerK, 0, 1e9, 'J/K');
+  let power: number | null = null;
+  if (request.heaterPowerW !== undefined) {
+    power = requireInRange('heater power', request.heaterPowerW, 0, 1e8, 'W');
+    if (power === 0) throw new InputError('heater power', 'out-of-range', 0, { min: 0, max: 1e8, unit: 'W' }, 'heater power: must be above 0 W (or left out).');
+  }
+  const margin = requireInRange('liquid-full margin', request.liquidFullMarginK, 0, 100, 'K');
+  const A = VESSEL_LIMITS.siteAtmospherePa;
+  const atm = request.atmospherePa === undefined ? vessel.siteAtmospherePa : requireInRange('atmospheric pressure', request.atmospherePa, A.min, A.max, A.unit);
+
+  const V = vesselVolume(vessel.geometry);
+  const sat = saturation(T2);
+  const vf = sat.liquid.v;
+  const vg = sat.vapor.v;
+  const vIdeal = (IF97.R * T2) / sat.p;
+  const target = request.target;
+  let m: number;
+  let mIdeal: number;
+  switch (target.kind) {
+    case 'quality': {
+      const x = requireInRange('quality', target.quality, 0, 1, '1');
+      m = V / (vf + x * (vg - vf));
+      mIdeal = V / (vf + x * (vIdeal - vf));
+      break;
+    }
+    case 'vapor-space-fraction': {
+      const phi = requireInRange('vapor-space fraction', target.fraction, 0, 1, '1');
+      m = ((1 - phi) * V) / vf + (phi * V) / vg;
+      mIdeal = ((1 - phi) * V) / vf + (phi * V) / vIdeal;
+      break;
+    }
+    case 'dry-saturated':
+      m = V / vg;
+      mIdeal = V / vIdeal;
+      break;
+    default:
+      throw new InputError('fill target', 'empty', String((target as { kind?: unknown }).kind ?? ''), undefined,
+        'fill target: give a quality, a vapor-space fraction, or dry saturated.');
+  }
+  const x = vg > vf ? Math.min(1, Math.max(0, (V / m - vf) / (vg - vf))) : 1;
+  const vaporMassKg = x * m;
+
+  const v = V / m;
+  const startState = chargeState(T1, v, V);
+  const start = contentsState(T1, v);
+  const end = contentsState(T2, v);
+  let heat: FillPlan['heat'] = null;
+  if (start.kind === 'state' && end.kind === 'state') {
+    const contentsJ = m * (end.state.u - start.state.u);
+    const vesselJ = C * (T2 - T1);
+    const totalJ = contentsJ + vesselJ;
+    heat = { contentsJ, vesselJ, totalJ, heatUpTimeS: power === null ? null : totalJ / power };
+  }
+
+  const reliefT = saturationTemperatureOrNull(vessel.reliefSetGaugePa + atm);
+  const limitTemperatureK = Math.min(IF97.Tc, (reliefT ?? IF97.Tc) + margin);
+  const safeMass = V / saturation(limitTemperatureK).liquid.v;
+
+  const partial: Omit<FillPlan, 'cautions'> = {
+    formulationId: FORMULATION_ID,
+    internalVolumeM3: V,
+    target,
+    targetTemperatureK: T2,
+    startTemperatureK: T1,
+    atmospherePa: atm,
+    waterMassKg: m,
+    expectedGrossWeightKg: vessel.tareKg + m,
+    targetSaturationPressurePa: sat.p,
+    targetGaugePressurePa: sat.p - atm,
+    atTarget: { quality: x, vaporSpaceFraction: (vaporMassKg * vg) / V, liquidMassKg: m - vaporMassKg, vaporMassKg },
+    idealGas: { waterMassKg: mIdeal, errorPercent: ((mIdeal - m) / m) * 100 },
+    heat,
+    startState,
+    largestSafeCharge: {
+      limitTemperatureK,
+      waterMassKg: safeMass,
+      expectedGrossWeightKg: vessel.tareKg + safeMass,
+      fillFractionAtStart: (safeMass * saturation(T1).liquid.v) / V,
+    },
+    envelope: heatUpEnvelope({
+      volumeM3: V,
+      massKg: m,
+      startTemperatureK: T1,
+      reliefSetGaugePa: vessel.reliefSetGaugePa,
+      mawpGaugePa: vessel.mawpGaugePa,
+      atmospherePa: atm,
+    }),
+  };
+  return requireFiniteData({ ...partial, cautions: cautionsForPlan(vessel, partial) });
+}

@@ -1,0 +1,104 @@
+// Does the pressure agree with the temperature for saturated steam? Compares the absolute pressure
+// with p_sat(T) and the temperature with T_sat(p), inside a band propagated from the instruments.
+// App logic after field-practice.md §7.2; Dalton's law after §4.2.
+
+import { IF97, saturationPressure, saturationTemperature } from '../steam/index.ts';
+import type { ResolvedReading } from './reading.ts';
+import { combineBand, pressureTolerancesPa, temperatureToleranceK, type Band } from './uncertainty.ts';
+import type { VesselSpec } from './vessel-spec.ts';
+
+/** Verdict of the saturation check. */
+export type SaturationVerdict =
+  | { verdict: 'consistent' }
+  | {
+      verdict: 'pressure-above-saturation';
+      /** Dalton's law estimate, assuming liquid present at equilibrium and the temperature right. */
+      noncondensableGas: {
+        /** p_abs − p_sat(T), Pa. */
+        partialPressurePa: number;
+        /** (p_abs − p_sat(T)) / p_abs. */
+        moleFraction: number;
+        /** T_sat(p_abs) − T, K: how far the steam is below the temperature the gauge implies. */
+        temperatureShortfallK: number;
+      };
+    }
+  | {
+      verdict: 'pressure-below-saturation';
+      /** An instrument or atmosphere error, non-equilibrium, or (only with no liquid present) superheated vapor. */
+      superheatPossible: boolean;
+    };
+
+export interface SaturationCheck {
+  absolutePressurePa: number;
+  /** p_sat at the measured temperature, Pa. */
+  saturationPressurePa: number;
+  /** T_sat at the measured absolute pressure, K. */
+  saturationTemperatureK: number;
+  /** p_abs − p_sat(T), Pa. */
+  pressureDeviationPa: number;
+  /** T − T_sat(p_abs), K. */
+  temperatureDeviationK: number;
+  /** dp_sat/dT at the measured temperature, Pa/K. */
+  saturationSlopePaPerK: number;
+  /** Band on p_abs − p_sat(T), Pa. */
+  pressureBand: Band<'pressureGauge' | 'atmosphere' | 'temperatureSensor'>;
+  /** The same band as temperature, K (pressure band ÷ slope). */
+  temperatureBandK: { plusMinus: number; worstCase: number };
+  verdict: SaturationVerdict;
+}
+
+/** Slope of the saturation line, Pa/K, by a central difference kept inside 273.16–647.096 K (no 0/0 at the critical point). */
+export function saturationSlopePaPerK(temperatureK: number): number {
+  const dT = 0.005;
+  const lo = Math.max(IF97.Tt, temperatureK - dT);
+  const hi = Math.min(IF97.Tc, temperatureK + dT);
+  return (saturationPressure(hi) - saturationPressure(lo)) / (hi - lo);
+}
+
+/**
+ * The saturation check for a resolved reading. liquidPresent: true if the inventory shows liquid,
+ * false if it shows none, null if not weighed. Throws InputError only through the steam engine's ranges.
+ */
+export function checkSaturation(
+  vessel: VesselSpec,
+  reading: ResolvedReading,
+  pressureReference: 'gauge' | 'absolute',
+  liquidPresent: boolean | null,
+): SaturationCheck {
+  const T = reading.temperatureK;
+  const p = reading.absolutePressurePa;
+  const pSat = saturationPressure(T);
+  const tSat = saturationTemperature(p);
+  const slope = saturationSlopePaPerK(T);
+  const pTol = pressureTolerancesPa(vessel, reading, pressureReference);
+  const tTol = temperatureToleranceK(vessel.instruments.temperatureSensor, T);
+  const pressureBand = combineBand({
+    pressureGauge: pTol.pressureGauge,
+    atmosphere: pTol.atmosphere,
+    temperatureSensor: slope * tTol,
+  });
+  // Floor at rounding level so a reading exactly at saturation stays consistent at zero tolerance
+  // after gauge ↔ absolute arithmetic.
+  const floor = 1e-9 * p;
+  const U = Math.max(pressureBand.plusMinus, floor);
+  const deviation = p - pSat;
+  let verdict: SaturationVerdict;
+  if (Math.abs(deviation) <= U) verdict = { verdict: 'consistent' };
+  else if (deviation > 0) {
+    verdict = {
+      verdict: 'pressure-above-saturation',
+      noncondensableGas: { partialPressurePa: deviation, moleFraction: deviation / p, temperatureShortfallK: tSat - T },
+    };
+  } else verdict = { verdict: 'pressure-below-saturation', superheatPossible: liquidPresent !== true };
+  return {
+    absolutePressurePa: p,
+    saturationPressurePa: pSat,
+    saturationTemperatureK: tSat,
+    pressureDeviationPa: deviation,
+    temperatureDeviationK: T - tSat,
+    saturationSlopePaPerK: slope,
+    pressureBand: { ...pressureBand, plusMinus: U },
+    temperatureBandK: { plusMinus: U / slope, worstCase: pressureBand.worstCase / slope },
+    verdict,
+  };
+}

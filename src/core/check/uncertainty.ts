@@ -1,0 +1,129 @@
+// Instrument tolerances and how the check combines them.
+//
+// Every instrument figure is a ± limit (class or grade). Independent limits are combined by
+// root-sum-square (RSS) and the arithmetic worst case is reported beside it. RSS is what the
+// verdicts use: the errors of a gauge, a thermometer and a barometer are independent and rarely
+// all at their limits together, and the wider worst-case band would let a few percent of air
+// pass as "consistent" (field-practice.md §3.5: 121 °C field kit, RSS ±1.42 K against worst case
+// ±2.36 K; 1 K of depression is about 3 % air). GUM expanded uncertainty with rectangular
+// limits (U = 2·√(Σa²/3), JCGM 100:2008 §4.3.7) is 1.15 × RSS, close to it.
+
+import { IF97, saturation } from '../steam/index.ts';
+import type { TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
+import type { ResolvedReading } from './reading.ts';
+
+/** Weather swing of station pressure around a stored site value, Pa (field-practice.md §1.3–1.4: about −3 to +4 kPa; ±3 kPa recommended there). */
+export const SITE_ATMOSPHERE_TOLERANCE_PA = 3000;
+
+/** The combination rule the verdicts use. */
+export const COMBINATION_METHOD = 'root-sum-square' as const;
+
+/** A ± band: RSS (used) and worst case (reported), with each input's contribution in the band's unit. */
+export interface Band<K extends string> {
+  method: typeof COMBINATION_METHOD;
+  plusMinus: number;
+  worstCase: number;
+  contributions: Record<K, number>;
+}
+
+/** Combines independent ± contributions (all ≥ 0, same unit). */
+export function combineBand<K extends string>(contributions: Record<K, number>): Band<K> {
+  let sumSquares = 0;
+  let sum = 0;
+  for (const key of Object.keys(contributions) as K[]) {
+    const c = Math.abs(contributions[key]);
+    sumSquares += c * c;
+    sum += c;
+  }
+  return { method: COMBINATION_METHOD, plusMinus: Math.sqrt(sumSquares), worstCase: sum, contributions };
+}
+
+/**
+ * Temperature sensor ± limit at T, K. IEC 60751 Pt100 classes, t in °C: AA ±(0.10 + 0.0017|t|),
+ * A ±(0.15 + 0.002|t|), B ±(0.30 + 0.005|t|) (field-practice.md §3.2, sourced there).
+ * temperatureK in K (any finite value).
+ */
+export function temperatureToleranceK(sensor: TemperatureSensorTolerance, temperatureK: number): number {
+  if (sensor.kind === 'stated') return sensor.toleranceK;
+  const t = Math.abs(temperatureK - 273.15);
+  switch (sensor.sensorClass) {
+    case 'AA':
+      return 0.1 + 0.0017 * t;
+    case 'A':
+      return 0.15 + 0.002 * t;
+    case 'B':
+      return 0.3 + 0.005 * t;
+  }
+}
+
+/** ± limits on the absolute pressure, Pa: the gauge (class × span) and, for a gauge reading, the atmosphere. */
+export function pressureTolerancesPa(
+  vessel: VesselSpec,
+  reading: ResolvedReading,
+  reference: 'gauge' | 'absolute',
+): { pressureGauge: number; atmosphere: number } {
+  const g = vessel.instruments.pressureGauge;
+  const pressureGauge = (g.accuracyPercentOfSpan / 100) * g.spanPa;
+  if (reference === 'absolute') return { pressureGauge, atmosphere: 0 };
+  const atmosphere = reading.atmosphereSource === 'measured' ? vessel.instruments.barometerTolerancePa : SITE_ATMOSPHERE_TOLERANCE_PA;
+  return { pressureGauge, atmosphere };
+}
+
+/** ± limit of the net mass, kg: one weight reading for a net weight; gross and tare (RSS) for a gross weight. */
+export function netMassToleranceKg(vessel: VesselSpec, weightKind: 'gross' | 'net'): number {
+  const a = vessel.instruments.weightToleranceKg;
+  return weightKind === 'gross' ? Math.SQRT2 * a : a;
+}
+
+/** Quality and liquid mass with ± bands propagated from the net mass, temperature and volume limits. */
+export interface InventoryBands {
+  quality: Band<'weight' | 'temperature' | 'volume'>;
+  liquidMassKg: Band<'weight' | 'temperature' | 'volume'>;
+}
+
+/**
+ * First-order propagation through x = (V/m − v_f)/(v_g − v_f) and m_liq = (m·v_g − V)/(v_g − v_f)
+ * (field-practice.md §9): analytic partial derivatives in m and V, a central difference of the
+ * saturation values in T. Limits are ± (same as the instruments'). Valid for a two-phase state:
+ * temperatureK 273.16–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
+ */
+export function inventoryBands(args: {
+  temperatureK: number;
+  massKg: number;
+  volumeM3: number;
+  massToleranceKg: number;
+  temperatureToleranceK: number;
+  volumeToleranceM3: number;
+}): InventoryBands {
+  const { temperatureK: T, massKg: m, volumeM3: V } = args;
+  const at = (t: number) => {
+    const s = saturation(t);
+    const vf = s.liquid.v;
+    const vg = s.vapor.v;
+    return { vf, vg, x: (V / m - vf) / (vg - vf), mLiq: (m * vg - V) / (vg - vf) };
+  };
+  const here = at(T);
+  const vfg = here.vg - here.vf;
+  // Stay off the critical point itself, where v_g − v_f = 0.
+  const dT = 0.01;
+  const top = IF97.Tc - 1e-6;
+  let hi = Math.min(top, T + dT);
+  let lo = Math.max(IF97.Tt, T - dT);
+  if (hi <= lo) lo = hi - dT;
+  if (hi <= lo) hi = lo + dT;
+  const a = at(lo);
+  const b = at(hi);
+  const dxdT = (b.x - a.x) / (hi - lo);
+  const dmLiqdT = (b.mLiq - a.mLiq) / (hi - lo);
+  const quality = combineBand({
+    weight: ((V / (m * m)) / vfg) * args.massToleranceKg,
+    temperature: Math.abs(dxdT) * args.temperatureToleranceK,
+    volume: (1 / (m * vfg)) * args.volumeToleranceM3,
+  });
+  const liquidMassKg = combineBand({
+    weight: (here.vg / vfg) * args.massToleranceKg,
+    temperature: Math.abs(dmLiqdT) * args.temperatureToleranceK,
+    volume: (1 / vfg) * args.volumeToleranceM3,
+  });
+  return { quality, liquidMassKg };
+}

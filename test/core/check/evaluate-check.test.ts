@@ -1,0 +1,90 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { evaluateCheck } from '../../../src/core/check/evaluate-check.ts';
+import type { Reading } from '../../../src/core/check/reading.ts';
+import { STANDING_NOTE } from '../../../src/core/check/cautions.ts';
+import { InputError } from '../../../src/core/errors.ts';
+import { saturation, saturationPressure } from '../../../src/core/steam/index.ts';
+import { testVessel } from './test-vessel.ts';
+
+const reading = (over: Partial<Reading> = {}): Reading => ({
+  time: '2026-03-14T09:30:00+01:00',
+  temperatureK: 394.15,
+  pressure: { reference: 'gauge', pressurePa: saturationPressure(394.15) - 101325 },
+  weight: { kind: 'net', netKg: 1000 },
+  ...over,
+});
+const rules = (r: ReturnType<typeof evaluateCheck>) => r.cautions.map((c) => c.rule);
+
+describe('evaluateCheck', () => {
+  it('a steady 121 °C check: consistent, two-phase, bands, envelope, hazards, standing note last', () => {
+    const r = evaluateCheck(testVessel(), reading());
+    expect(r.formulationId).toMatch(/IAPWS-IF97/);
+    expect(r.saturation.verdict.verdict).toBe('consistent');
+    expect(r.inventory.regime).toBe('two-phase');
+    expect(r.inventoryBands).not.toBeNull();
+    expect(r.envelope?.first.event).toBeDefined();
+    expect(r.hazards.flash?.flashFraction).toBeCloseTo(0.0395, 3);
+    expect(r.hazards.cooled.collapseRisk).toBe(true);
+    expect(r.cautions.at(-1)).toEqual(STANDING_NOTE);
+    expect(rules(r)).toEqual(expect.arrayContaining(['flash-on-release', 'vacuum-on-cooling', 'scald', 'bulk-quality-not-dryness', 'saturation-check-limits']));
+  });
+  it('a vessel filled 95 % with water at 20 °C is flagged to go liquid-full far below 120 °C (field-practice.md §6.3)', () => {
+    const v = testVessel();
+    const V = 3.845;
+    const m = (0.95 * V) / saturation(293.15).liquid.v;
+    const r = evaluateCheck(v, reading({ temperatureK: 293.15, pressure: { reference: 'absolute', pressurePa: saturationPressure(293.15) }, weight: { kind: 'net', netKg: m } }));
+    expect(r.envelope?.first.event).toBe('liquid-full');
+    expect(r.envelope!.liquidFullTemperatureK! - 273.15).toBeLessThan(115);
+    expect(rules(r)).toContain('liquid-full-on-heating');
+  });
+  it('a liquid-full reading is a DANGER with the hydraulic pressure against the MAWP', () => {
+    const r = evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 3800 } }));
+    expect(r.inventory.regime).toBe('liquid-full');
+    expect(r.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'liquid-full-now' });
+  });
+  it('air in the vessel raises the non-condensable gas WARNING with Dalton\'s estimate (field-practice.md §4.2)', () => {
+    const r = evaluateCheck(testVessel(), reading({ temperatureK: 115.3 + 273.15, pressure: { reference: 'absolute', pressurePa: 204.7e3 } }));
+    expect(r.saturation.verdict.verdict).toBe('pressure-above-saturation');
+    expect(rules(r)).toContain('noncondensable-gas');
+  });
+  it('gauge above MAWP is a DANGER; above the relief set pressure a WARNING', () => {
+    const hot = evaluateCheck(testVessel(), reading({ temperatureK: 460, pressure: { reference: 'gauge', pressurePa: 1.05e6 }, weight: { kind: 'net', netKg: 200 } }));
+    expect(rules(hot)).toContain('pressure-above-mawp');
+    const warm = evaluateCheck(testVessel(), reading({ temperatureK: 456, pressure: { reference: 'gauge', pressurePa: 0.95e6 }, weight: { kind: 'net', netKg: 200 } }));
+    expect(rules(warm)).toContain('pressure-above-relief-set');
+  });
+  it('not weighed: the saturation check still runs, no inventory', () => {
+    const r = evaluateCheck(testVessel(), reading({ weight: { kind: 'not-weighed' } }));
+    expect(r.inventory).toEqual({ regime: 'not-weighed' });
+    expect(r.envelope).toBeNull();
+    expect(r.inventoryBands).toBeNull();
+  });
+  it('bad input throws InputError naming the field, never a result', () => {
+    expect(() => evaluateCheck(testVessel({ reliefSetGaugePa: 2e6 }), reading())).toThrow(InputError);
+    expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'gross', grossKg: 100 } }))).toThrow(/gross weight/);
+    expect(() => evaluateCheck(testVessel(), reading({ temperatureK: 200 }))).toThrow(/temperature/);
+  });
+  it('results are plain serialisable data without NaN over random valid readings (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 273.16, max: 640, noNaN: true }),
+        fc.double({ min: 0.5, max: 2, noNaN: true }),
+        fc.oneof(fc.constant(null), fc.double({ min: 0.01, max: 4000, noNaN: true })),
+        (T, pressureFactor, net) => {
+          const pAbs = Math.min(22e6, Math.max(700, saturationPressure(T) * pressureFactor));
+          const r = evaluateCheck(testVessel(), reading({
+            temperatureK: T,
+            pressure: { reference: 'absolute', pressurePa: pAbs },
+            weight: net === null ? { kind: 'not-weighed' } : { kind: 'net', netKg: net },
+          }));
+          const text = JSON.stringify(r);
+          expect(text).not.toMatch(/NaN|Infinity|null,"?undefined/);
+          expect(JSON.parse(text)).toEqual(r);
+          expect(r.cautions.at(-1)?.rule).toBe('standing-note');
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+});

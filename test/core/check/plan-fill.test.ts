@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import { planFill, type FillRequest } from '../../../src/core/check/plan-fill.ts';
+import { InputError } from '../../../src/core/errors.ts';
+import { saturation } from '../../../src/core/steam/index.ts';
+import { testVessel } from './test-vessel.ts';
+
+const oneCubicMetre = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1 }, tareKg: 400 });
+const request = (over: Partial<FillRequest> = {}): FillRequest => ({
+  targetTemperatureK: 394.15,
+  target: { kind: 'dry-saturated' },
+  startTemperatureK: 293.15,
+  liquidFullMarginK: 5,
+  ...over,
+});
+
+describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin/python3, IAPWS97 T/x states)', () => {
+  it('dry saturated at 121 °C in 1 m³: 1.1556 kg, gross = tare + charge, heat 2.787 MJ from 20 °C', () => {
+    const p = planFill(oneCubicMetre, request({ heaterPowerW: 2000 }));
+    expect(p.waterMassKg).toBeCloseTo(1.15561, 4);
+    expect(p.expectedGrossWeightKg).toBeCloseTo(401.15561, 4);
+    expect(p.heat!.contentsJ / 2786580).toBeCloseTo(1, 3);
+    expect(p.heat!.heatUpTimeS).toBeCloseTo(p.heat!.totalJ / 2000, 9);
+    expect(p.atTarget.quality).toBeCloseTo(1, 9);
+  });
+  it('the ideal-gas estimate of a dry saturated charge is off by Z − 1 = −2.5 % at 121 °C (field-practice.md §8)', () => {
+    const p = planFill(oneCubicMetre, request());
+    expect(p.idealGas.errorPercent).toBeCloseTo(-2.46, 1);
+  });
+  it('quality 0.5 at 150 °C: 5.0814 kg, heat 7.640 MJ', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 423.15, target: { kind: 'quality', quality: 0.5 } }));
+    expect(p.waterMassKg).toBeCloseTo(5.08139, 4);
+    expect(p.heat!.contentsJ / 7640451).toBeCloseTo(1, 3);
+  });
+  it('vapor-space fraction 0.3 at 134 °C: 652.48 kg, heat 313.68 MJ; vessel heat capacity adds C·ΔT', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 407.15, target: { kind: 'vapor-space-fraction', fraction: 0.3 }, vesselHeatCapacityJPerK: 5e5 }));
+    expect(p.waterMassKg).toBeCloseTo(652.484, 2);
+    expect(p.atTarget.vaporSpaceFraction).toBeCloseTo(0.3, 9);
+    expect(p.heat!.contentsJ / 313677307).toBeCloseTo(1, 3);
+    expect(p.heat!.vesselJ).toBeCloseTo(5e5 * 114, 6);
+  });
+  it('largest safe charge stays two-phase up to T_sat(relief) + margin: relief 0.9 MPa g → 179.9 °C, +5 K → 881.67 kg per m³', () => {
+    const p = planFill(oneCubicMetre, request());
+    expect(p.largestSafeCharge.limitTemperatureK).toBeCloseTo(453.0932 + 5, 3);
+    expect(p.largestSafeCharge.waterMassKg).toBeCloseTo(881.667, 2);
+    expect(saturation(p.largestSafeCharge.limitTemperatureK).liquid.v * p.largestSafeCharge.waterMassKg).toBeCloseTo(1, 9);
+  });
+  it('a charge above the safe charge is a DANGER', () => {
+    const p = planFill(oneCubicMetre, request({ target: { kind: 'quality', quality: 0 } }));
+    expect(p.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'plan-exceeds-safe-charge' });
+    expect(p.cautions.at(-1)?.rule).toBe('standing-note');
+  });
+  it('a target above the relief set pressure is a WARNING', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 455 }));
+    expect(p.cautions.map((c) => c.rule)).toContain('plan-target-above-relief-set');
+  });
+  it('results are plain data without NaN (JSON round trip)', () => {
+    const p = planFill(oneCubicMetre, request({ heaterPowerW: 1000 }));
+    expect(JSON.parse(JSON.stringify(p))).toEqual(p);
+  });
+  it('refuses bad requests naming the field', () => {
+    const cases: [Partial<FillRequest>, string][] = [
+      [{ targetTemperatureK: 650 }, 'target temperature'],
+      [{ startTemperatureK: 400 }, 'start temperature'],
+      [{ target: { kind: 'quality', quality: 1.2 } }, 'quality'],
+      [{ target: { kind: 'vapor-space-fraction', fraction: -0.1 } }, 'vapor-space fraction'],
+      [{ heaterPowerW: 0 }, 'heater power'],
+      [{ vesselHeatCapacityJPerK: -1 }, 'vessel heat capacity'],
+      [{ liquidFullMarginK: -1 }, 'liquid-full margin'],
+    ];
+    for (const [over, field] of cases) {
+      try {
+        planFill(oneCubicMetre, request(over));
+        expect.unreachable();
+      } catch (e) {
+        expect(e).toBeInstanceOf(InputError);
+        expect((e as InputError).field).toBe(field);
+      }
+    }
+  });
+});
