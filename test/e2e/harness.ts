@@ -105,3 +105,27 @@ export async function screenshot(page: Page, name: string, fullPage = true): Pro
   mkdirSync(SCREENS_DIR, { recursive: true });
   await page.screenshot({ path: join(SCREENS_DIR, `${name}.png`), fullPage });
 }
+
+/** Picks the option whose text starts with `tag` in a vessel <select>. */
+export async function pickVessel(page: Page, selector: string, tag: string): Promise<void> {
+  const value = await page.$eval(selector, (el, t) => {
+    const opt = [...(el as HTMLSelectElement).options].find((o) => o.text.startsWith(t));
+    return opt?.value ?? '';
+  }, tag);
+  if (!value) throw new Error(`no vessel ${tag} in ${selector}`);
+  await page.selectOption(selector, value);
+}
+
+/** Interactive elements smaller than 48 px in either direction (inline text links excepted). */
+export async function smallTargets(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const out: string[] = [];
+    for (const el of document.querySelectorAll<HTMLElement>('button, select, input, textarea, a.button, nav a, .switch label, label.row')) {
+      if (el instanceof HTMLInputElement && (el.type === 'radio' || el.type === 'checkbox')) continue;
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 && r.height === 0) continue;
+      if (r.height < 47.5 || r.width < 47.5) out.push(`${el.tagName.toLowerCase()}#${el.id || el.textContent?.trim().slice(0, 20)} ${Math.round(r.width)}x${Math.round(r.height)}`);
+    }
+    return out;
+  });
+}
