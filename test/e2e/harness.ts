@@ -79,10 +79,8 @@ export async function launch(profileDir: string, colorScheme: 'light' | 'dark' =
 
 /** Waits until a service worker is activated and controls the page. */
 export async function waitForControl(page: Page): Promise<void> {
-  await page.waitForFunction(async () => {
-    const reg = await navigator.serviceWorker.getRegistration();
-    return reg?.active?.state === 'activated' && navigator.serviceWorker.controller !== null;
-  }, undefined, { timeout: 30_000, polling: 200 });
+  // A synchronous predicate: waitForFunction treats a returned promise as truthy.
+  await page.waitForFunction(() => navigator.serviceWorker.controller?.state === 'activated', undefined, { timeout: 30_000, polling: 200 });
 }
 
 export interface AxeViolation { id: string; impact: string | null; help: string; nodes: { target: unknown[] }[] }
