@@ -21,7 +21,7 @@ describe('every screen', () => {
     await page.goto(`${server.url}#/vessels`);
     await waitForControl(page);
     await page.getByRole('button', { name: 'Load demo plant' }).click();
-    await expect.poll(() => page.getByRole('link', { name: /DEMO-/ }).count()).toBe(4);
+    await page.getByRole('link', { name: /DEMO-JK-04/ }).waitFor();
   });
   afterAll(async () => {
     await ctx.close();
@@ -39,10 +39,20 @@ describe('every screen', () => {
     await screenshot(page, `${name}-dark`);
     await page.emulateMedia({ colorScheme: 'light' });
     await page.setViewportSize({ width: 320, height: 700 });
-    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
-    expect(overflow, `${name}: sideways scroll at 320 px`).toBe(0);
-    await page.setViewportSize({ width: 360, height: 780 });
+    try {
+      const wide = await page.evaluate(() => [...document.querySelectorAll('body *')]
+        .filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 0.5)
+        .map((el) => `${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''}.${el.className}`).slice(0, 5));
+      expect(wide, `${name}: elements wider than 320 px`).toEqual([]);
+    } finally {
+      await page.setViewportSize({ width: 360, height: 780 });
+    }
   }
+
+  it('refuses inline script (the CSP allows only the app\'s own files)', async () => {
+    await expect(page.addScriptTag({ content: 'window.inlineRan = true' })).rejects.toThrow(/Content Security Policy/);
+    expect(await page.evaluate(() => 'inlineRan' in window)).toBe(false);
+  });
 
   it('Vessels list with the demo plant', async () => {
     await inspect('01-vessels');
