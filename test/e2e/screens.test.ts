@@ -111,7 +111,7 @@ describe('every screen', () => {
     await expect.poll(() => entry.count()).toBe(1);
     await inspect('06-log');
     await entry.click();
-    await expect.poll(() => page.getByText('151,8 degC').count()).toBe(1);
+    await expect.poll(() => page.getByText('151,8 °C').count()).toBe(1);
     expect(await page.getByText('IAPWS-IF97', { exact: false }).count()).toBeGreaterThan(0);
     await inspect('07-log-record');
   });

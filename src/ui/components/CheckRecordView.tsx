@@ -7,6 +7,7 @@ import { hrefFor } from '../router.ts';
 import { viewOfRecord } from '../state/check-session.ts';
 import { useSettings } from '../state/app-state.ts';
 import { unitsInForce } from '../state/settings-model.ts';
+import { unitLabel } from '../state/unit-labels.ts';
 
 const INPUT_NAMES: Record<string, string> = { temperature: 'Temperature', pressure: 'Pressure', grossWeight: 'Gross weight' };
 
@@ -15,7 +16,7 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
   const view = viewOfRecord(r, prefs);
   const inputs = Object.entries(r.inputs).map(([k, v]) => ({
     label: INPUT_NAMES[k] ?? k,
-    value: `${v.text} ${v.unit}${v.reference ? ` (${v.reference})` : ''}`,
+    value: `${v.text} ${unitLabel(v.unit)}${v.reference ? ` (${v.reference})` : ''}`,
   }));
   return (
     <div>
