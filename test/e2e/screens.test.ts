@@ -116,6 +116,22 @@ describe('every screen', () => {
     await inspect('07-log-record');
   });
 
+  it('Retiring a vessel keeps its checks', async () => {
+    await page.getByRole('link', { name: 'Vessels' }).click();
+    await page.getByRole('link', { name: /DEMO-FT-02/ }).click();
+    const history = page.getByRole('region', { name: 'Checks of this vessel' }).getByRole('link');
+    await expect.poll(() => history.count()).toBe(1);
+    await page.getByRole('button', { name: 'Retire vessel' }).click();
+    await page.getByRole('button', { name: 'Tap again to retire' }).click();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(0);
+    await page.getByLabel('Show retired vessels').check();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02 \(retired\)/ }).count()).toBe(1);
+    await page.getByRole('link', { name: 'Check' }).click();
+    expect(await page.locator('#pick-vessel option', { hasText: 'DEMO-FT-02' }).count()).toBe(0);
+    await page.getByRole('link', { name: 'Log' }).click();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(1);
+  });
+
   it('Convert', async () => {
     await page.getByRole('link', { name: 'Convert' }).click();
     await page.selectOption('#conv-pressure-unit', 'bar');

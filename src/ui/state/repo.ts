@@ -65,6 +65,11 @@ export async function recentChecks(limit = 100): Promise<CheckRecord[]> {
   return (await store.listChecks({ limit })).checks;
 }
 
+/** One vessel's checks, newest first (a retired vessel keeps them). */
+export async function checksOfVessel(vesselId: string, limit = 20): Promise<CheckRecord[]> {
+  return (await store.checksForVessel(vesselId, { limit })).checks;
+}
+
 export function saveDraft(key: string, value: unknown): Promise<void> {
   return store.saveDraft(key, JSON.parse(JSON.stringify(value)) as JsonValue);
 }
