@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import {
-  DIST, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl,
+  DIST, SCREENS_DIR, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl,
   type StaticServer,
 } from './harness.ts';
 
@@ -79,6 +79,7 @@ describe('every screen', () => {
     expect(await page.locator('svg.picture').count()).toBe(2);
     expect(await page.locator('.standing-note').count()).toBe(1);
     await inspect('03-check');
+    await page.locator('.pictures').screenshot({ path: `${SCREENS_DIR}/03-check-pictures.png` });
     await page.fill('#chk-tech', 'Demo Technician');
     await page.getByRole('button', { name: 'Save check' }).click();
     await expect.poll(() => page.getByText('Saved to the log').count()).toBe(1);
