@@ -143,6 +143,28 @@ describe('every screen', () => {
     await inspect('08-convert');
   });
 
+  it('works from the keyboard alone', async () => {
+    await page.goto(`${server.url}#/vessels`);
+    // The screen heading takes focus on every screen change; the menu sits just before it.
+    await expect.poll(() => page.evaluate(() => document.activeElement?.tagName)).toBe('H1');
+    let focused = '';
+    for (let i = 0; i < 8 && focused !== 'Convert'; i++) {
+      await page.keyboard.press('Shift+Tab');
+      focused = await page.evaluate(() => document.activeElement?.textContent?.trim() ?? '');
+    }
+    expect(focused).toBe('Convert');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.tagName)).toBe('H1');
+    let id = '';
+    for (let i = 0; i < 10 && id !== 'conv-pressure'; i++) {
+      await page.keyboard.press('Tab');
+      id = await page.evaluate(() => document.activeElement?.id ?? '');
+    }
+    expect(id).toBe('conv-pressure');
+    await page.keyboard.type('1,5');
+    await expect.poll(() => page.locator('table tbody tr').count()).toBeGreaterThan(5);
+  });
+
   it('Settings', async () => {
     await page.getByRole('link', { name: 'Settings' }).click();
     await page.getByLabel('Elevation').check();
