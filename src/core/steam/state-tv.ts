@@ -10,14 +10,22 @@ import { InputError } from '../errors.ts';
 import { IF97, P_MAX, T_13, T_B23_MAX, T_MAX, T_MIN } from './constants.ts';
 import { b23Pressure } from './b23.ts';
 import type { PhaseState, VesselState } from './phase-state.ts';
-import { G1, region1Gibbs, region1State, region1Volume } from './region1.ts';
+import { G1, region1Gibbs, region1State, region1Volume, region1VolumeSlope } from './region1.ts';
 import { G2, region2Residual, region2State, region2Volume } from './region2.ts';
 import { P3, region3Pressure, region3State } from './region3.ts';
+import { region3SaturatedDensitySeeds, SEED3 } from './region3-density.ts';
 import { saturationUnchecked } from './saturation.ts';
+import { saturationPressureUnchecked } from './saturation-line.ts';
 import { solveBracketed } from './solvers.ts';
 
 /** Largest specific volume accepted (m³/kg); keeps p = R·T/v above stateTP's 1e-6 Pa floor. */
 export const V_MAX = 1e9;
+
+/**
+ * Below this v (m³/kg) stateTV checks the liquid side first: v_f ≤ 1.75e-3 and v_g ≥ 8.8e-3
+ * m³/kg up to 623.15 K, so either choice is only a matter of speed.
+ */
+const LIQUID_SIDE_BELOW = 5e-3;
 
 /** Density above which a region 3 state is certainly above 100 MPa (kg/m³), with 0.1 % margin. */
 const RHO_3_MAX = 1.001 / region1Volume(T_13, P_MAX);
@@ -67,6 +75,26 @@ function compressedLiquid1(T: number, v: number, pLow: number, vLow: number): Ph
   return region1State(T, p);
 }
 
+/**
+ * The same liquid, faster: Newton's method from the tangent at saturation (slopeLow =
+ * (∂v/∂p)_T there). A liquid's v(p) is decreasing and convex, so the iterates climb to the root
+ * from below; past 100 MPa, or if they ever fail to settle, the bracketed solve above decides.
+ */
+function compressedLiquid1Fast(T: number, v: number, pLow: number, vLow: number, slopeLow: number): PhaseState {
+  const RT = IF97.R * T;
+  let p = pLow + (v - vLow) / slopeLow;
+  for (let k = 0; k < 12 && p <= P_MAX; k++) {
+    region1Gibbs(T, p);
+    const f = (RT * (G1[1] as number)) / R1_P_STAR - v;
+    if (Math.abs(f) <= 4e-16 * v) return region1State(T, p);
+    const step = f / ((RT * (G1[2] as number)) / (R1_P_STAR * R1_P_STAR));
+    p -= step;
+    // Quadratic convergence: after a step this small the error is far below v's rounding.
+    if (Math.abs(step) <= 1e-10 * p) return region1State(T, p);
+  }
+  return compressedLiquid1(T, v, pLow, vLow);
+}
+
 /** Region 2 vapor at T whose volume is v, knowing v ≥ v(T, pHigh). */
 function vapor2(T: number, v: number, pHigh: number, vHigh: number): PhaseState {
   solveT = T;
@@ -74,7 +102,7 @@ function vapor2(T: number, v: number, pHigh: number, vHigh: number): PhaseState 
   const piHigh = pHigh * 1e-6;
   // H(πHigh) = πHigh·c·(1 − vHigh/v) ≥ 0 because v ≥ vHigh.
   const fHi = piHigh * solveC * (1 - vHigh / v);
-  const pi = solveBracketed(region2VolumeResidual, 0, -1, piHigh, fHi, 1 / solveC, 1e-15, 1e-15);
+  const pi = solveBracketed(region2VolumeResidual, 0, -1, piHigh, fHi, 1 / solveC, 1e-14, 1e-15);
   return region2State(T, pi * 1e6);
 }
 
@@ -119,6 +147,23 @@ export function stateTV(T: number, v: number): VesselState {
       { min: 0, max: V_MAX, unit: 'm³/kg' });
   }
   if (T >= IF97.Tc) return single('supercritical', vaporOrDense(T, v));
+  // Single-phase states are classified before the full saturation state is built: one side of
+  // the dome is enough to know v is outside it.
+  if (T <= T_13) {
+    const ps = saturationPressureUnchecked(T);
+    if (v < LIQUID_SIDE_BELOW) {
+      const vf = region1Volume(T, ps);
+      if (v < vf) return single('compressed-liquid', compressedLiquid1Fast(T, v, ps, vf, region1VolumeSlope(T)));
+    } else {
+      const vg = region2Volume(T, ps);
+      if (v > vg) return single('superheated-vapor', vapor2(T, v, ps, vg));
+    }
+  } else {
+    // Seeds are within 2e-4 of v_f, v_g; a 1e-3 margin makes the shortcut safe.
+    region3SaturatedDensitySeeds(T);
+    if (v * (SEED3[0] as number) < 1 - 1e-3) return single('compressed-liquid', direct3(T, v));
+    if (v * (SEED3[1] as number) > 1 + 1e-3) return single('superheated-vapor', vaporOrDense(T, v));
+  }
   const sat = saturationUnchecked(T);
   const f = sat.liquid;
   const g = sat.vapor;
@@ -129,7 +174,7 @@ export function stateTV(T: number, v: number): VesselState {
     return single('superheated-vapor', T <= T_13 ? vapor2(T, v, sat.p, g.v) : vaporOrDense(T, v));
   }
   const span = g.v - f.v;
-  // span is 0 only within ~2e-5 K of Tc, where v_f = v_g = v.
+  // span is 0 only within ~5e-5 K of Tc, where v_f = v_g = v.
   const x = span > 0 ? Math.min(1, Math.max(0, (v - f.v) / span)) : 0;
   return {
     phase: 'two-phase',
