@@ -34,7 +34,7 @@ export const TEXT_LIMITS = {
 const MAX_INPUTS = 32;
 const MAX_CAUTIONS = 64;
 /** How often appendCheck recomputes when another tab moved the chain head under it. */
-const CHAIN_RETRIES = 5;
+const CHAIN_RETRIES = 10;
 
 /** Checks a TypedInput map; shared with the backup reader. */
 export function requireInputs(field: string, value: unknown): Record<string, TypedInput> {
@@ -178,6 +178,13 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
 /** One check, or undefined. */
 export async function getCheck(id: string): Promise<CheckRecord | undefined> {
   return (await getDb()).get('checks', id);
+}
+
+/** The corrections saved for a check, oldest first (a correction may itself be corrected). */
+export async function correctionsOf(checkId: string): Promise<CheckRecord[]> {
+  requireUuid('check id', checkId);
+  const found = await (await getDb()).getAllFromIndex('checks', 'by-corrects', checkId);
+  return found.sort((a, b) => a.timeMs - b.timeMs || (a.id < b.id ? -1 : 1));
 }
 
 function requireLimit(limit: number | undefined): number {

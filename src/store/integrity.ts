@@ -14,54 +14,83 @@ import { StoreError } from './errors.ts';
  *   inside an array
  */
 export function canonicalJson(value: unknown): string {
-  const parts: string[] = [];
-  write(value, parts, '');
-  return parts.join('');
+  try {
+    return encode(value);
+  } catch (error) {
+    if (error !== NOT_JSON) throw error;
+    // Slow path, only to name the offending field.
+    throw new StoreError('invalid-record', describeNotJson(value, ''), firstBadPath(value, '') || undefined);
+  }
 }
 
-function write(value: unknown, out: string[], path: string): void {
-  if (value === null) {
-    out.push('null');
-    return;
-  }
+const NOT_JSON = Symbol('not JSON');
+
+// Hot path (every record hashed, exported or cloned): plain string building, no path tracking.
+function encode(value: unknown): string {
+  if (value === null) return 'null';
   switch (typeof value) {
-    case 'boolean':
-      out.push(value ? 'true' : 'false');
-      return;
-    case 'number':
-      if (!Number.isFinite(value)) {
-        throw new StoreError('invalid-record', `${path || 'value'}: ${value} is not a finite number`, path || undefined);
-      }
-      out.push(Object.is(value, -0) ? '0' : String(value));
-      return;
     case 'string':
-      out.push(JSON.stringify(value));
-      return;
+      return JSON.stringify(value);
+    case 'number':
+      if (!Number.isFinite(value)) throw NOT_JSON;
+      return value === 0 ? '0' : String(value); // -0 === 0, so −0 is written as 0
+    case 'boolean':
+      return value ? 'true' : 'false';
     case 'object': {
       if (Array.isArray(value)) {
-        out.push('[');
-        value.forEach((item, i) => {
-          if (i > 0) out.push(',');
-          if (item === undefined) throw new StoreError('invalid-record', `${path}[${i}]: undefined in an array`, `${path}[${i}]`);
-          write(item, out, `${path}[${i}]`);
-        });
-        out.push(']');
-        return;
+        let out = '[';
+        for (let i = 0; i < value.length; i += 1) {
+          const item: unknown = value[i];
+          if (item === undefined) throw NOT_JSON;
+          out += (i > 0 ? ',' : '') + encode(item);
+        }
+        return out + ']';
       }
       const record = value as Record<string, unknown>;
-      const keys = Object.keys(record).filter((k) => record[k] !== undefined).sort();
-      out.push('{');
-      keys.forEach((key, i) => {
-        if (i > 0) out.push(',');
-        out.push(JSON.stringify(key), ':');
-        write(record[key], out, path ? `${path}.${key}` : key);
-      });
-      out.push('}');
-      return;
+      const keys = Object.keys(record).sort();
+      let out = '{';
+      let first = true;
+      for (const key of keys) {
+        const item = record[key];
+        if (item === undefined) continue;
+        out += (first ? '' : ',') + JSON.stringify(key) + ':' + encode(item);
+        first = false;
+      }
+      return out + '}';
     }
     default:
-      throw new StoreError('invalid-record', `${path || 'value'}: a ${typeof value} cannot be stored`, path || undefined);
+      throw NOT_JSON;
   }
+}
+
+/** Dotted path of the first value encode() refuses, or '' for the value itself. */
+function firstBadPath(value: unknown, path: string): string | null {
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return null;
+  if (typeof value === 'number') return Number.isFinite(value) ? null : path;
+  if (typeof value !== 'object') return path;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i += 1) {
+      if (value[i] === undefined) return `${path}[${i}]`;
+      const bad = firstBadPath(value[i], `${path}[${i}]`);
+      if (bad !== null) return bad;
+    }
+    return null;
+  }
+  for (const key of Object.keys(value).sort()) {
+    const item = (value as Record<string, unknown>)[key];
+    if (item === undefined) continue;
+    const bad = firstBadPath(item, path ? `${path}.${key}` : key);
+    if (bad !== null) return bad;
+  }
+  return null;
+}
+
+function describeNotJson(value: unknown, path: string): string {
+  const at = firstBadPath(value, path) ?? '';
+  let v: unknown = value;
+  for (const part of at.match(/[^.[\]]+/g) ?? []) v = (v as Record<string, unknown>)?.[part];
+  const what = typeof v === 'number' ? `${v} is not a finite number` : v === undefined ? 'undefined in an array' : `a ${typeof v} cannot be stored`;
+  return `${at || 'value'}: ${what}`;
 }
 
 /** The content a check's hash covers: every field except `hash` itself (prevHash included). */
