@@ -2,7 +2,7 @@
 // the record saved to the log. All computation is the core's.
 import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '../../core/index.ts';
 import type { Reading } from '../../core/index.ts';
-import type { CheckRecord, JsonObject, JsonValue, TypedInput, VesselRecord } from '../../store/index.ts';
+import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
 import * as repo from './repo.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { readingFromDraft, type ReadingField } from './check-reading.ts';
@@ -50,8 +50,8 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
     note: d.note,
     takenAt: new Date(e.reading.time),
     inputs,
-    reading: JSON.parse(JSON.stringify(e.reading)) as JsonObject,
-    result: JSON.parse(JSON.stringify(e.result)) as JsonValue,
+    reading: e.reading,
+    result: e.result,
     cautions: e.result.cautions,
     appVersion: __APP_VERSION__,
     formulationId: e.result.formulationId,

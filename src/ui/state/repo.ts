@@ -42,11 +42,11 @@ export function getVessel(id: string): Promise<VesselRecord | undefined> {
 }
 
 export function addVessel(tag: string, description: string, spec: object): Promise<VesselRecord> {
-  return store.addVessel({ tag, description, spec: spec as store.VesselSpecData });
+  return store.addVessel({ tag, description, spec });
 }
 
 export function updateVessel(id: string, tag: string, description: string, spec: object): Promise<VesselRecord> {
-  return store.updateVessel(id, { tag, description, spec: spec as store.VesselSpecData });
+  return store.updateVessel(id, { tag, description, spec });
 }
 
 export function retireVessel(id: string): Promise<VesselRecord> {
