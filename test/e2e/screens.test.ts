@@ -1,6 +1,7 @@
 // Every screen, as a phone shows it: axe-core finds no violations (light and dark scheme), nothing
 // scrolls sideways at 320 px, touch targets are at least 48 px, and a 360×780 screenshot of each
 // is saved in test-results/screens/ for a person to look at.
+import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import {
@@ -170,5 +171,13 @@ describe('every screen', () => {
     await page.getByLabel('Elevation').check();
     await page.fill('#set-elev', '350');
     await inspect('09-settings');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export full backup (JSON)' }).click(),
+    ]);
+    const backup = JSON.parse(readFileSync((await download.path())!, 'utf8')) as { vessels: { tag: string }[]; checks: unknown[] };
+    expect(backup.vessels.map((v) => v.tag)).toContain('DEMO-FT-02');
+    expect(backup.checks).toHaveLength(1);
+    await expect.poll(() => page.getByText(/Last backup: \d{4}-/).count()).toBe(1);
   });
 });

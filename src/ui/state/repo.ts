@@ -97,9 +97,11 @@ export async function persistenceLabel(): Promise<string> {
   }
 }
 
-/** The full backup as a file to download. */
-export async function exportBackup(): Promise<{ name: string; blob: Blob }> {
-  const text = await store.exportBackup();
-  const stamp = new Date().toISOString().slice(0, 10);
-  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([text], { type: 'application/json' }) };
+/** The full backup (JSON) or the log as CSV, as a file to download. */
+export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string; blob: Blob }> {
+  const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);
+  if (kind === 'csv') {
+    return { name: `tankside-log-${stamp}.csv`, blob: new Blob([await store.exportCsv()], { type: 'text/csv' }) };
+  }
+  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([await store.exportBackup()], { type: 'application/json' }) };
 }
