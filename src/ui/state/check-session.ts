@@ -58,13 +58,23 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
   });
 }
 
-/** The saved result as the screen shows it (from the stored result and vessel snapshot; nothing recomputed). */
-export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView {
-  return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+/**
+ * The saved result as the screen shows it, from the stored result and vessel snapshot (nothing
+ * recomputed); undefined if this version cannot read a result saved by another version.
+ */
+export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | undefined {
+  try {
+    return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+  } catch {
+    return undefined;
+  }
 }
 
 /** A one-line verdict for the log list. */
 export function verdictOfRecord(r: CheckRecord): string {
-  const result = r.result as unknown as CheckResult;
-  return verdictText(result).text;
+  try {
+    return verdictText(r.result as unknown as CheckResult).text;
+  } catch {
+    return 'Result saved by another app version';
+  }
 }
