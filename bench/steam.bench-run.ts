@@ -7,7 +7,7 @@ import { saturation, saturationPressure, stateTP, stateTV } from '../src/core/in
 import { b23Pressure } from '../src/core/steam/b23.ts';
 
 const N = 1024;
-const RUNS = 15;
+const RUNS = 25;
 
 interface Case {
   name: string;
@@ -105,11 +105,11 @@ it('prints ns per call for the steam engine (results are finite)', () => {
   for (const c of cases) {
     const { a, b, call } = c;
     for (let i = 0; i < N; i++) checksum += call(a[i] as number, b[i] as number); // warm-up
-    // ~20 ms per run: as many passes over the inputs as the warm-up pass says fit
+    // ~8 ms per run: as many passes over the inputs as the warm-up pass says fit
     const w0 = process.hrtime.bigint();
     for (let i = 0; i < N; i++) checksum += call(a[i] as number, b[i] as number);
     const passNs = Number(process.hrtime.bigint() - w0);
-    const reps = Math.max(1, Math.round(20e6 / passNs));
+    const reps = Math.max(1, Math.round(8e6 / passNs));
     const perCall: number[] = [];
     for (let r = 0; r < RUNS; r++) {
       const t0 = process.hrtime.bigint();
@@ -117,8 +117,9 @@ it('prints ns per call for the steam engine (results are finite)', () => {
       perCall.push(Number(process.hrtime.bigint() - t0) / (reps * N));
     }
     const sorted = [...perCall].sort((x, y) => x - y);
-    lines.push(`${c.name.padEnd(42)} ${median(perCall).toFixed(0).padStart(7)} ns   (runs ${(sorted[0] as number).toFixed(0)}–${(sorted[sorted.length - 1] as number).toFixed(0)})`);
+    lines.push(`${c.name.padEnd(42)} ${median(perCall).toFixed(0).padStart(7)} ns   (fastest run ${(sorted[0] as number).toFixed(0)} ns)`);
   }
-  console.log(`\nsteam engine, ns per call (median of ${RUNS} runs, ${N} inputs each)\n${lines.join('\n')}\n`);
+  // The fastest run shows the figure without other processes competing for the CPU.
+  console.log(`\nsteam engine, ns per call: median of ${RUNS} runs over ${N} inputs each\n${lines.join('\n')}\n`);
   expect(Number.isFinite(checksum)).toBe(true);
 });

@@ -51,9 +51,11 @@ function region2VolumeResidual(pi: number, out: Float64Array): void {
   out[1] = solveC - grp - pi * (G2[2] as number);
 }
 
+/** The state at (T, v) needs more than 100 MPa; `estimatePa` is the best lower bound known. */
 function pressureTooHigh(T: number, v: number, estimatePa: number): InputError {
   return new InputError('pressure', 'out-of-range', estimatePa, { min: 0, max: P_MAX, unit: 'Pa' },
-    `pressure: liquid at ${T} K filling ${v} m³/kg would be above ${P_MAX} Pa, the upper limit of IAPWS-IF97.`);
+    `pressure: water at ${T} K with ${v} m³/kg would be above ${P_MAX} Pa, the upper limit of IAPWS-IF97 ` +
+      '(a liquid-full vessel).');
 }
 
 /** Region 1 liquid at T whose volume is v, knowing v < v(T, pLow). */
@@ -109,7 +111,7 @@ function vapor2(T: number, v: number, pHigh: number, vHigh: number): PhaseState 
 /** Region 3 state with density 1/v at T; throws above 100 MPa. */
 function direct3(T: number, v: number): PhaseState {
   const rho = 1 / v;
-  if (rho > RHO_3_MAX) throw pressureTooHigh(T, v, Number.POSITIVE_INFINITY);
+  if (rho > RHO_3_MAX) throw pressureTooHigh(T, v, P_MAX);
   region3Pressure(rho, T);
   const p = P3[0] as number;
   if (!(p <= P_MAX * (1 + 1e-9))) throw pressureTooHigh(T, v, p);
@@ -131,7 +133,7 @@ function vaporOrDense(T: number, v: number): PhaseState {
 /**
  * State of water in a closed rigid vessel at temperature T with specific volume v (V/m).
  * Two-phase when v_f ≤ v ≤ v_g below Tc; otherwise compressed liquid, superheated vapor or
- * (T > 647.096 K) supercritical, with the pressure solved so the state has exactly this v.
+ * (T ≥ 647.096 K) supercritical, with the pressure solved so the state has exactly this v.
  * @param T temperature, K; 273.15 ≤ T ≤ 1073.15
  * @param v specific volume, m³/kg; 0 < v ≤ 1e9
  * @throws InputError 'temperature' or 'specific volume' outside those ranges; 'pressure'
@@ -159,7 +161,7 @@ export function stateTV(T: number, v: number): VesselState {
       if (v > vg) return single('superheated-vapor', vapor2(T, v, ps, vg));
     }
   } else {
-    // Seeds are within 2e-4 of v_f, v_g; a 1e-3 margin makes the shortcut safe.
+    // Seeds are within 3e-4 of v_f, v_g; a 1e-3 margin makes the shortcut safe.
     region3SaturatedDensitySeeds(T);
     if (v * (SEED3[0] as number) < 1 - 1e-3) return single('compressed-liquid', direct3(T, v));
     if (v * (SEED3[1] as number) > 1 + 1e-3) return single('superheated-vapor', vaporOrDense(T, v));

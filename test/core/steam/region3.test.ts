@@ -1,0 +1,20 @@
+// Region 3, Eq. (28) of IAPWS R7-97(2012): the optimised φ(δ, τ) against a plain term-by-term sum of
+// Table 30. Published values: test/reference/if97-tables.test.ts (Table 33).
+import fc from 'fast-check';
+import { describe, it } from 'vitest';
+import { F3, REGION3_TABLE, region3Helmholtz } from '../../../src/core/steam/region3.ts';
+import { expectClose, plainSums } from './plain-sums.ts';
+
+describe('region 3 basic equation, term by term', () => {
+  it('region 3, Eq. (28): φ and five derivatives', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 623.15, max: 863.15, noNaN: true }), fc.double({ min: 50, max: 800, noNaN: true }), (T, rho) => {
+        const d = rho / 322, t = 647.096 / T, n1 = REGION3_TABLE.n1;
+        const s = plainSums(REGION3_TABLE.I, REGION3_TABLE.J, REGION3_TABLE.n, d, t);
+        region3Helmholtz(rho, T);
+        expectClose(F3, [n1 * Math.log(d) + s[0]!, n1 / d + s[1]!, -n1 / (d * d) + s[2]!, s[3]!, s[4]!, s[5]!], `T=${T} rho=${rho}`);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
