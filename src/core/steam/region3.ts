@@ -93,14 +93,25 @@ export function region3Helmholtz(rho: number, T: number): void {
 /** Scratch output of region3Pressure: [p Pa, (∂p/∂ρ)_T Pa·m³/kg]. */
 export const P3 = new Float64Array(2);
 
-/** Fills P3 with Eq. (28)'s pressure and its density slope at (ρ kg/m³, T K); no range checks. */
+/**
+ * Fills P3 with Eq. (28)'s pressure and its density slope at (ρ kg/m³, T K), from φ_δ and φ_δδ
+ * only (a third of region3Helmholtz' sums: this is what every density solve iterates on).
+ * No range checks, no allocation.
+ */
 export function region3Pressure(rho: number, T: number): void {
-  region3Helmholtz(rho, T);
-  const d = F3[6] as number;
-  const dfd = d * (F3[1] as number);
+  const d = rho / IF97.rhoc;
+  region3Powers(d, IF97.Tc / T);
+  let fd = 0, fdd = 0;
+  for (let k = 0; k < TERMS; k++) {
+    const t = (N_[k] as number) * (D_POW[IDX_I[k] as number] as number) * (T_POW[IDX_J[k] as number] as number);
+    fd += (W_I[k] as number) * t;
+    fdd += (W_II[k] as number) * t;
+  }
+  // δ·φ_δ = n1 + Σ n·I·δ^I·τ^J and δ²·φ_δδ = −n1 + Σ n·I(I−1)·δ^I·τ^J
+  const dfd = n1 + fd;
   const RT = IF97.R * T;
   P3[0] = rho * RT * dfd;
-  P3[1] = RT * (2 * dfd + d * d * (F3[2] as number));
+  P3[1] = RT * (2 * dfd + fdd - n1);
 }
 
 /**

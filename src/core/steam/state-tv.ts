@@ -10,8 +10,8 @@ import { InputError } from '../errors.ts';
 import { IF97, P_MAX, T_13, T_B23_MAX, T_MAX, T_MIN } from './constants.ts';
 import { b23Pressure } from './b23.ts';
 import type { PhaseState, VesselState } from './phase-state.ts';
-import { G1, region1Gibbs, region1State, region1Volume, region1VolumeSlope } from './region1.ts';
-import { G2, region2Residual, region2State, region2Volume } from './region2.ts';
+import { G1, region1PressureDerivatives, region1State, region1Volume, region1VolumeSlope } from './region1.ts';
+import { G2, region2PressureDerivatives, region2State, region2Volume } from './region2.ts';
 import { P3, region3Pressure, region3State } from './region3.ts';
 import { region3SaturatedDensitySeeds, SEED3 } from './region3-density.ts';
 import { saturationUnchecked } from './saturation.ts';
@@ -37,7 +37,7 @@ let solveC = 0;
 
 const R1_P_STAR = 16.53e6;
 function region1Residual(p: number, out: Float64Array): void {
-  region1Gibbs(solveT, p);
+  region1PressureDerivatives(solveT, p);
   const RT = IF97.R * solveT;
   out[0] = (RT * (G1[1] as number)) / R1_P_STAR - solveV;
   out[1] = (RT * (G1[2] as number)) / (R1_P_STAR * R1_P_STAR);
@@ -45,7 +45,7 @@ function region1Residual(p: number, out: Float64Array): void {
 
 /** H(π) = π·c − (1 + π·γʳ_π), c = v / (R·T / 1 MPa): zero where region 2 gives v; H(0) = −1. */
 function region2VolumeResidual(pi: number, out: Float64Array): void {
-  region2Residual(solveT, pi * 1e6);
+  region2PressureDerivatives(solveT, pi * 1e6);
   const grp = G2[1] as number;
   out[0] = pi * solveC - 1 - pi * grp;
   out[1] = solveC - grp - pi * (G2[2] as number);
@@ -86,7 +86,7 @@ function compressedLiquid1Fast(T: number, v: number, pLow: number, vLow: number,
   const RT = IF97.R * T;
   let p = pLow + (v - vLow) / slopeLow;
   for (let k = 0; k < 12 && p <= P_MAX; k++) {
-    region1Gibbs(T, p);
+    region1PressureDerivatives(T, p);
     const f = (RT * (G1[1] as number)) / R1_P_STAR - v;
     if (Math.abs(f) <= 4e-16 * v) return region1State(T, p);
     const step = f / ((RT * (G1[2] as number)) / (R1_P_STAR * R1_P_STAR));

@@ -3,7 +3,7 @@
 // Published values: test/reference/if97-tables.test.ts (Table 5).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { G1, REGION1_TABLE, region1Gibbs } from '../../../src/core/steam/region1.ts';
+import { G1, REGION1_TABLE, region1Gibbs, region1PressureDerivatives } from '../../../src/core/steam/region1.ts';
 import { expectClose, plainSums } from './plain-sums.ts';
 
 describe('region 1 basic equation, term by term', () => {
@@ -17,6 +17,17 @@ describe('region 1 basic equation, term by term', () => {
         expectClose(G1, [g, -ga, gaa, gb, gbb, -gab], `T=${T} p=${p}`);
       }),
       { numRuns: 300 },
+    );
+  });
+  it('region1PressureDerivatives gives the same γ_π, γ_ππ as the full evaluation', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 273.15, max: 623.15, noNaN: true }), fc.double({ min: 1e3, max: 100e6, noNaN: true }), (T, p) => {
+        region1Gibbs(T, p);
+        const full = [G1[1] as number, G1[2] as number];
+        region1PressureDerivatives(T, p);
+        expect([G1[1], G1[2]]).toEqual(full);
+      }),
+      { numRuns: 200 },
     );
   });
 });
