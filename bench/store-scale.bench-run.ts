@@ -46,10 +46,12 @@ describe(`store at scale (${CHECKS} checks, ${VESSELS} vessels)`, () => {
     await useFactory(new IDBFactory());
     const [home, genMs] = await timed(() => benchChecks(1, CHECKS, vessels));
     const [, seedMs] = await timed(() => writeRaw(vessels, home));
+    const homeHead = home[CHECKS - 1]!.hash;
+    home.length = 0; // only the store holds the log from here on
     console.log(`set-up (not a target): generate and hash ${CHECKS} checks ${(genMs / 1000).toFixed(2)} s, raw write ${(seedMs / 1000).toFixed(2)} s`);
 
     const [chains, verifyMs] = await timed(() => verifyStoredChains());
-    expect(chains).toEqual([{ deviceId: benchId(1, 0), status: 'ok', count: CHECKS, headSeq: CHECKS, headHash: home[CHECKS - 1]!.hash }]);
+    expect(chains).toEqual([{ deviceId: benchId(1, 0), status: 'ok', count: CHECKS, headSeq: CHECKS, headHash: homeHead }]);
     report('chain verification', verifyMs, 2000);
 
     const [csv, csvMs] = await timed(() => exportCsv());
