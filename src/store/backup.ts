@@ -486,7 +486,7 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
           request.addEventListener('success', () => options.onProgress?.(at, total));
         }
       }
-      if (request && to < count) request.addEventListener('success', () => issue(to));
+      if (request && to < count) request.addEventListener('success', () => cancelled || issue(to));
     };
     issue(0);
   };
