@@ -1,10 +1,69 @@
-// The only module that touches navigator.serviceWorker.
+// The only module that touches navigator.serviceWorker. It registers the worker once, tells the
+// page when a new version is installed and waiting, and applies it only when the person asks:
+// flush the entry in progress, ask the waiting worker to take over (SKIP_WAITING), then reload
+// exactly once when it takes control. A page never reloads on its own, so no entry is cut off.
 import { Workbox } from 'workbox-window';
 
-/** Registers the service worker in production builds; a no-op in dev and where unsupported. */
-export function startServiceWorker(): Workbox | undefined {
-  if (!('serviceWorker' in navigator) || import.meta.env.DEV) return undefined;
-  const wb = new Workbox('./sw.js', { scope: './' });
-  void wb.register();
-  return wb;
+/** Saves whatever is being typed; must resolve only once it is stored. */
+export type FlushBeforeReload = () => Promise<void>;
+
+const UPDATE_POLL_MS = 60 * 60 * 1000;
+
+let workbox: Workbox | undefined;
+let updateReady = false;
+let reloadRequested = false;
+let flushBeforeReload: FlushBeforeReload = () => Promise.resolve();
+const readyListeners = new Set<() => void>();
+
+/**
+ * Registers the service worker in production builds (a no-op in dev and where unsupported).
+ * `flush` runs before an accepted update reloads the page.
+ */
+export function startServiceWorker(flush: FlushBeforeReload): void {
+  flushBeforeReload = flush;
+  if (workbox || !('serviceWorker' in navigator) || import.meta.env.DEV) return;
+  workbox = new Workbox('./sw.js', { scope: './' });
+  // 'waiting' covers both a worker installed during this visit and one left waiting by an
+  // earlier visit or another tab (event.wasWaitingBeforeRegister).
+  workbox.addEventListener('waiting', () => {
+    updateReady = true;
+    for (const listener of readyListeners) listener();
+  });
+  void workbox.register().then((registration) => {
+    if (registration) pollForUpdates(registration);
+  }, () => undefined);
+}
+
+/** True once a new version is installed and waiting for the person to accept it. */
+export function isUpdateReady(): boolean {
+  return updateReady;
+}
+
+/** Calls `listener` when a new version becomes ready; returns the unsubscribe function. */
+export function onUpdateReady(listener: () => void): () => void {
+  readyListeners.add(listener);
+  return () => readyListeners.delete(listener);
+}
+
+/**
+ * Applies the waiting version: saves the entry in progress first (if that fails, nothing happens
+ * and the error propagates, so the person keeps the page they have), then reloads once.
+ */
+export async function applyUpdate(): Promise<void> {
+  if (!workbox || !updateReady) return;
+  await flushBeforeReload();
+  navigator.serviceWorker.addEventListener('controllerchange', () => {
+    // Guarded: DevTools "update on reload" and repeated skips can fire this more than once.
+    if (reloadRequested) return;
+    reloadRequested = true;
+    window.location.reload();
+  });
+  workbox.messageSkipWaiting();
+}
+
+/** Long-lived installed apps seldom navigate; look for a new worker now and then when online. */
+function pollForUpdates(registration: ServiceWorkerRegistration): void {
+  window.setInterval(() => {
+    if (navigator.onLine) registration.update().catch(() => undefined);
+  }, UPDATE_POLL_MS);
 }

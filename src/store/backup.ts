@@ -6,11 +6,11 @@
 // here and identical is skipped; a check whose content does not match its hash, whose link to the
 // previous record fails, or that collides with a different record here is rejected with its
 // reason; everything else is added, all in one transaction.
-import type { IDBPDatabase } from 'idb';
+import { unwrap, type IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
-import { canonicalJson, ChainVerifier, computeCheckHash, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { canonicalJson, ChainVerifier, computeCheckHashes, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -74,16 +74,23 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   const vessels = await tx.objectStore('vessels').getAll();
   const total = await tx.objectStore('checks').count();
   const index = tx.objectStore('checks').index('by-device-seq');
-  const checkLines: string[] = [];
+  // One string per page (its records' lines joined), so the finished text is one join of about
+  // total / PAGE parts and each page's record objects can go as soon as it is written.
+  const checkParts: string[] = [];
   const heads: ChainHead[] = [];
-  let after: [string, number] | null = null;
+  let done = 0;
+  let next = index.getAll(undefined, PAGE);
   for (;;) {
+    const batch: CheckRecord[] = await next;
     throwIfAborted(options.signal);
-    const range: IDBKeyRange | undefined = after ? IDBKeyRange.lowerBound(after, true) : undefined;
-    const batch: CheckRecord[] = await index.getAll(range, PAGE);
     if (batch.length === 0) break;
-    for (const r of batch) {
-      checkLines.push(canonicalJson(r));
+    const last: CheckRecord = batch[batch.length - 1]!;
+    // The next page is read while this one is written out (same snapshot: same transaction).
+    next = batch.length === PAGE ? index.getAll(IDBKeyRange.lowerBound([last.deviceId, last.seq], true), PAGE) : Promise.resolve([]);
+    const lineTexts = new Array<string>(batch.length);
+    for (let i = 0; i < batch.length; i += 1) {
+      const r = batch[i]!;
+      lineTexts[i] = canonicalJson(r);
       const head = heads[heads.length - 1];
       if (head && head.deviceId === r.deviceId) {
         head.count += 1;
@@ -93,16 +100,16 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
         heads.push({ deviceId: r.deviceId, count: 1, headSeq: r.seq, headHash: r.hash });
       }
     }
-    options.onProgress?.(checkLines.length, total);
-    const last: CheckRecord = batch[batch.length - 1]!;
-    after = [last.deviceId, last.seq];
+    checkParts.push(lineTexts.join(',\n'));
+    done += batch.length;
+    options.onProgress?.(done, total);
   }
   await tx.done;
   const exportedAt = formatIsoWithOffset(new Date());
   return (
     `{"format":${JSON.stringify(BACKUP_FORMAT)},"formatVersion":${BACKUP_FORMAT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},\n` +
     `"vessels":[${lines(vessels.map((v) => canonicalJson(v)))}],\n` +
-    `"checks":[${lines(checkLines)}],\n` +
+    `"checks":[${lines(checkParts)}],\n` +
     `"chains":[${lines(heads.map((h) => canonicalJson(h)))}]}\n`
   );
 }
@@ -239,12 +246,17 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
   if (text.length > limits.maxChars) throw bad('file', `${text.length} characters; at most ${limits.maxChars}`);
   let raw: unknown;
   try {
-    raw = JSON.parse(text, (key, value: unknown) => {
-      // JSON.parse makes "__proto__" an own property (no prototype change), but a consumer that
-      // later copies records with Object.assign or a spread could still be steered; refuse them all.
-      if (FORBIDDEN_KEYS.has(key)) throw new ForbiddenKey(key);
-      return value;
-    });
+    // JSON.parse makes "__proto__" an own property (no prototype change), but a consumer that
+    // later copies records with Object.assign or a spread could still be steered; refuse them all.
+    // A key can spell a forbidden name only literally or through a \u escape (the names are
+    // letters and underscores): text with neither cannot hold one, and skips the reviver, which
+    // makes parsing several times slower.
+    raw = mayHoldForbiddenKey(text)
+      ? JSON.parse(text, (key, value: unknown) => {
+          if (FORBIDDEN_KEYS.has(key)) throw new ForbiddenKey(key);
+          return value;
+        })
+      : JSON.parse(text);
   } catch (error) {
     if (error instanceof ForbiddenKey) throw bad('file', `the key "${error.key}" is not allowed anywhere in a backup`);
     // Includes nesting too deep for the parser (a RangeError from the engine).
@@ -282,6 +294,13 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
   };
 }
 
+/** False only when no key in `text` can be one of FORBIDDEN_KEYS once parsed. */
+export function mayHoldForbiddenKey(text: string): boolean {
+  if (text.includes('\\u')) return true;
+  for (const name of FORBIDDEN_KEYS) if (text.includes(name)) return true;
+  return false;
+}
+
 class ForbiddenKey extends Error {
   constructor(readonly key: string) {
     super(key);
@@ -304,6 +323,54 @@ interface MergePlan {
   report: ImportReport;
 }
 
+/**
+ * Requests per window while reading or writing a whole file's worth of records in one transaction.
+ * Issuing 100 000 at once would queue 100 000 request objects (and, for writes, their cloned
+ * records) before the first one runs; windows keep that bounded, and cost one round trip each.
+ */
+const REQUEST_WINDOW = 1000;
+
+/** `request` for every item, at most REQUEST_WINDOW outstanding; results in item order. */
+async function inWindows<T, R>(items: readonly T[], request: (item: T) => Promise<R>): Promise<R[]> {
+  const out: R[] = [];
+  for (let start = 0; start < items.length; start += REQUEST_WINDOW) {
+    out.push(...(await Promise.all(items.slice(start, start + REQUEST_WINDOW).map(request))));
+  }
+  return out;
+}
+
+/** Keys read per getAllKeys while looking for the file's ids. */
+const KEY_PAGE = 10 * REQUEST_WINDOW;
+
+/**
+ * Which of `ids` the store holds. Instead of one get per id, the sorted ids are taken
+ * REQUEST_WINDOW at a time and the keys the store holds between the first and last id of each
+ * window are read with getAllKeys, at most KEY_PAGE per request. The windows' ranges do not
+ * overlap, so all of it reads each stored key at most once, in about ids / 1000 + stored / 10 000
+ * requests, with at most KEY_PAGE keys in hand at a time.
+ */
+export async function storedIds(
+  store: { getAllKeys(range: IDBKeyRange, count: number): Promise<string[]> },
+  ids: readonly string[],
+  pageSize = KEY_PAGE,
+): Promise<Set<string>> {
+  const sorted = [...ids].sort(); // IndexedDB orders string keys by code units too
+  const wanted = new Set(ids);
+  const found = new Set<string>();
+  for (let start = 0; start < sorted.length; start += REQUEST_WINDOW) {
+    const last = sorted[Math.min(sorted.length, start + REQUEST_WINDOW) - 1]!;
+    let range = IDBKeyRange.bound(sorted[start]!, last);
+    for (;;) {
+      const keys = await store.getAllKeys(range, pageSize);
+      for (const key of keys) if (wanted.has(key)) found.add(key);
+      const after = keys[keys.length - 1];
+      if (keys.length < pageSize || after === undefined || after === last) break;
+      range = IDBKeyRange.bound(after, last, true);
+    }
+  }
+  return found;
+}
+
 function byInstant(a: string, b: string): number {
   return (parseIsoWithOffset(a) ?? 0) - (parseIsoWithOffset(b) ?? 0);
 }
@@ -321,10 +388,16 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
     list.push(i);
   });
   const deviceIds = [...devices.keys()].sort();
-  // All requests issued at once and awaited together: one read snapshot, no interleaved non-IDB work.
+  // One read snapshot with nothing but IndexedDB requests awaited inside it, issued REQUEST_WINDOW
+  // at a time (each window as soon as the previous one has answered).
   const [existingVessels, existingById, existingRanges] = await Promise.all([
-    Promise.all(doc.vessels.map((v) => vesselStore.get(v.id))),
-    Promise.all(doc.checks.map((c) => checkStore.get(c.id))),
+    inWindows(doc.vessels, (v) => vesselStore.get(v.id)),
+    (async () => {
+      const here = await storedIds(checkStore, doc.checks.map((c) => c.id));
+      const hits = doc.checks.filter((c) => here.has(c.id));
+      const records = new Map((await inWindows(hits, (c) => checkStore.get(c.id))).map((r, i) => [hits[i]!.id, r]));
+      return doc.checks.map((c) => records.get(c.id));
+    })(),
     Promise.all(
       deviceIds.map((d) => {
         let lo = Infinity;
@@ -428,23 +501,42 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
     }
   };
   options.signal?.addEventListener('abort', onAbort);
-  let done = base;
   const every = progressStep(total);
-  const step = () => {
-    done += 1;
-    if (done % every === 0) options.onProgress?.(done, total);
-  };
-  const work = async () => {
-    const vessels = tx.objectStore('vessels');
-    const checks = tx.objectStore('checks');
-    await Promise.all([
-      ...plan.vesselWrites.map((v) => vessels.put(v).then(step)),
-      // add(), never put(): a check that is somehow already here aborts the lot instead of being overwritten.
-      ...plan.checkAdds.map((c) => checks.add(c).then(step)),
-    ]);
+  const work = () => {
+    // Plain requests, REQUEST_WINDOW at a time, the next window issued from the success of the
+    // last request of the one before (requests run in order), so no await per record and no
+    // non-IDB work inside the transaction. The first request that fails aborts it, which tx.done
+    // reports; so does an exception thrown while issuing a later window.
+    const raw = unwrap(tx);
+    const vessels = raw.objectStore('vessels');
+    const checks = raw.objectStore('checks');
+    const vesselCount = plan.vesselWrites.length;
+    const count = vesselCount + plan.checkAdds.length;
+    const issue = (from: number) => {
+      const to = Math.min(count, from + REQUEST_WINDOW);
+      let request: IDBRequest | null = null;
+      for (let i = from; i < to; i += 1) {
+        // add(), never put(), for checks: one that is somehow already here aborts the lot instead of being overwritten.
+        request = i < vesselCount ? vessels.put(plan.vesselWrites[i]!) : checks.add(plan.checkAdds[i - vesselCount]!);
+        if ((i + 1) % every === 0) {
+          const at = base + i + 1;
+          request.addEventListener('success', () => options.onProgress?.(at, total));
+        }
+      }
+      if (request && to < count) request.addEventListener('success', () => cancelled || issue(to));
+    };
+    issue(0);
   };
   try {
-    await Promise.all([work(), tx.done]);
+    try {
+      work();
+    } catch (error) {
+      // A request refused on the spot (none is expected of validated records): undo the ones issued.
+      tx.abort();
+      tx.done.catch(() => {});
+      throw error;
+    }
+    await tx.done;
   } catch (error) {
     if (cancelled || options.signal?.aborted) throw new StoreError('cancelled', 'Import cancelled; nothing was changed.');
     if ((error as { name?: unknown }).name === 'ConstraintError') throw error;
@@ -467,12 +559,17 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   const db = await getDb();
   await sealMigratedChecks(db);
   const total = doc.checks.length * 2 + doc.vessels.length;
-  const hashes: string[] = [];
-  for (const c of doc.checks) {
-    throwIfAborted(options.signal);
-    hashes.push(await computeCheckHash(c));
-    if (hashes.length % progressStep(total) === 0) options.onProgress?.(hashes.length, total);
-  }
+  // Hashed before any transaction opens (WebCrypto is not IndexedDB work), many digests at a time.
+  const every = progressStep(total);
+  let reported = 0;
+  const hashes = await computeCheckHashes(doc.checks, {
+    signal: options.signal,
+    onProgress: (done) => {
+      if (done - reported < every) return;
+      reported = done;
+      options.onProgress?.(done, total);
+    },
+  });
   for (let attempt = 0; ; attempt += 1) {
     throwIfAborted(options.signal);
     const plan = await planMerge(db, doc, hashes);

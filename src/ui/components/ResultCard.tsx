@@ -1,0 +1,33 @@
+// A computed result: verdict, figures with their ± bands, hazards, cautions, the standing note
+// and the two pictures. The live region announces the verdict as the readings change.
+import type { ResultView } from '../state/result-view.ts';
+import { CautionList } from './CautionList.tsx';
+import { Figures } from './Figures.tsx';
+import { SaturationChart } from './SaturationChart.tsx';
+import { StandingNote } from './StandingNote.tsx';
+import { VesselSketch } from './VesselSketch.tsx';
+
+export function ResultCard({ view, heading = 'Result' }: { view: ResultView; heading?: string }) {
+  return (
+    <section class="panel" aria-labelledby="result-h">
+      <h2 id="result-h">{heading}</h2>
+      <p class={`verdict verdict-${view.verdict.tone}`}>{view.verdict.text}</p>
+      <Figures figures={view.figures} />
+      {view.hazards.length ? (
+        <>
+          <h3>Hazards</h3>
+          <ul>{view.hazards.map((h) => <li key={h}>{h}</li>)}</ul>
+        </>
+      ) : null}
+      <h3>Cautions</h3>
+      <CautionList cautions={view.cautions} />
+      {view.chart || view.sketch ? (
+        <div class="pictures">
+          {view.chart ? <SaturationChart data={view.chart} /> : null}
+          {view.sketch ? <VesselSketch data={view.sketch} /> : null}
+        </div>
+      ) : null}
+      <StandingNote />
+    </section>
+  );
+}

@@ -1,0 +1,77 @@
+// Add or edit one vessel; retire it (it keeps its history and drops out of new checks).
+import { useState } from 'preact/hooks';
+import { VesselFields } from './VesselFields.tsx';
+import { VesselHistory } from './VesselHistory.tsx';
+import { navigate } from '../router.ts';
+import * as repo from '../state/repo.ts';
+import type { VesselRecord } from '../state/repo.ts';
+import { refreshVessels, useSettings } from '../state/app-state.ts';
+import { atmosphereDefaults, unitsInForce } from '../state/settings-model.ts';
+import { emptyVesselForm, type FormField, type VesselForm } from '../state/vessel-form.ts';
+import { formFromSpec, specFromForm } from '../state/vessel-spec.ts';
+import { isDemoVessel } from '../state/demo-plant.ts';
+import { shortTime } from '../state/format.ts';
+
+export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) {
+  const settings = useSettings();
+  const prefs = unitsInForce(settings);
+  const [form, setForm] = useState<VesselForm>(() =>
+    vessel ? formFromSpec(vessel.spec, prefs) : emptyVesselForm(prefs, atmosphereDefaults(settings, prefs)));
+  const [errors, setErrors] = useState<Partial<Record<FormField, string>>>({});
+  const [status, setStatus] = useState('');
+  const [confirmRetire, setConfirmRetire] = useState(false);
+  const set = (change: Partial<VesselForm>) => setForm({ ...form, ...change });
+
+  const save = async (ev: Event) => {
+    ev.preventDefault();
+    const built = specFromForm(form);
+    if (!built.ok) {
+      setErrors(built.errors);
+      setStatus(`Not saved: ${Object.values(built.errors)[0] ?? 'check the fields'}`);
+      return;
+    }
+    setErrors({});
+    try {
+      if (vessel) await repo.updateVessel(vessel.id, built.spec.tag, built.spec.description, built.spec);
+      else await repo.addVessel(built.spec.tag, built.spec.description, built.spec);
+      await refreshVessels();
+      navigate('vessels');
+    } catch (e) {
+      setStatus(`Not saved: ${repo.storageMessage(e)}`);
+    }
+  };
+
+  const retire = async () => {
+    if (!vessel) return;
+    if (!confirmRetire) { setConfirmRetire(true); return; }
+    try {
+      await repo.retireVessel(vessel.id);
+      await refreshVessels();
+      navigate('vessels');
+    } catch (e) {
+      setStatus(`Not retired: ${repo.storageMessage(e)}`);
+    }
+  };
+
+  return (
+    <>
+    <form onSubmit={(ev) => void save(ev)} noValidate>
+      <h2>{vessel ? `Vessel ${vessel.tag}` : 'New vessel'}</h2>
+      {vessel && isDemoVessel(vessel) ? <p><span class="demo-tag">DEMO DATA</span> An invented vessel for trying the app.</p> : null}
+      {vessel?.retired ? <p>Retired {vessel.retiredAt ? shortTime(vessel.retiredAt) : ''}. Its checks stay in the log.</p> : null}
+      <VesselFields form={form} set={set} errors={errors} />
+      <p aria-live="polite" class={status ? 'field-error' : ''}>{status}</p>
+      <div class="row">
+        {vessel?.retired ? null : <button type="submit" class="primary">Save vessel</button>}
+        <button type="button" onClick={() => navigate('vessels')}>Back to the list</button>
+        {vessel && !vessel.retired ? (
+          <button type="button" class="danger" onClick={() => void retire()}>
+            {confirmRetire ? 'Tap again to retire' : 'Retire vessel'}
+          </button>
+        ) : null}
+      </div>
+    </form>
+    {vessel ? <VesselHistory vesselId={vessel.id} /> : null}
+    </>
+  );
+}

@@ -1,0 +1,107 @@
+// The UI's only door to the store: small functions in the words the screens use.
+import * as store from '../../store/index.ts';
+import type { CheckRecord, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
+import { StoreError } from '../../store/index.ts';
+import type { AppSettings } from './settings-model.ts';
+
+export type { CheckRecord, VesselRecord } from '../../store/index.ts';
+
+const SETTINGS_KEY = 'app-settings';
+
+export function openAppStore(onEvent: (message: string) => void): Promise<void> {
+  return store.openStore({
+    onEvent(event) {
+      if (event.type === 'blocked') onEvent('Another Tankside tab is open with an older version. Close it to continue.');
+      if (event.type === 'closed-for-upgrade') onEvent('A newer version of Tankside was opened in another tab. Reload this page to continue.');
+    },
+  });
+}
+
+/** A store or core failure in words for the person (the store's messages already name the field). */
+export function storageMessage(e: unknown): string {
+  if (e instanceof StoreError) return e.message;
+  if (e instanceof Error) return e.message;
+  return String(e);
+}
+
+export async function loadSettings(): Promise<Partial<AppSettings>> {
+  const stored = await store.getSetting(SETTINGS_KEY);
+  return stored && typeof stored === 'object' && !Array.isArray(stored) ? (stored as Partial<AppSettings>) : {};
+}
+
+export function saveSettings(s: AppSettings): Promise<void> {
+  return store.putSetting(SETTINGS_KEY, JSON.parse(JSON.stringify(s)) as JsonValue);
+}
+
+export function listVessels(includeRetired = true): Promise<VesselRecord[]> {
+  return store.listVessels({ includeRetired });
+}
+
+export function getVessel(id: string): Promise<VesselRecord | undefined> {
+  return store.getVessel(id);
+}
+
+export function addVessel(tag: string, description: string, spec: object): Promise<VesselRecord> {
+  return store.addVessel({ tag, description, spec });
+}
+
+export function updateVessel(id: string, tag: string, description: string, spec: object): Promise<VesselRecord> {
+  return store.updateVessel(id, { tag, description, spec });
+}
+
+export function retireVessel(id: string): Promise<VesselRecord> {
+  return store.retireVessel(id);
+}
+
+export function appendCheck(check: NewCheck): Promise<CheckRecord> {
+  return store.appendCheck(check);
+}
+
+export function getCheck(id: string): Promise<CheckRecord | undefined> {
+  return store.getCheck(id);
+}
+
+export async function recentChecks(limit = 100): Promise<CheckRecord[]> {
+  return (await store.listChecks({ limit })).checks;
+}
+
+/** One vessel's checks, newest first (a retired vessel keeps them). */
+export async function checksOfVessel(vesselId: string, limit = 20): Promise<CheckRecord[]> {
+  return (await store.checksForVessel(vesselId, { limit })).checks;
+}
+
+export function saveDraft(key: string, value: unknown): Promise<void> {
+  return store.saveDraft(key, JSON.parse(JSON.stringify(value)) as JsonValue);
+}
+
+export async function loadDraft<T>(key: string): Promise<T | undefined> {
+  return (await store.loadDraft(key))?.value as T | undefined;
+}
+
+export function clearDraft(key: string): Promise<void> {
+  return store.clearDraft(key);
+}
+
+/** The browser's answer about keeping this app's data, in words. */
+export async function persistenceLabel(): Promise<string> {
+  try {
+    const p = await store.persistenceState();
+    switch (p.state) {
+      case 'persisted': return 'kept until you clear it (persistent)';
+      case 'best-effort': return 'best effort: the browser may clear it when the phone runs short of space';
+      case 'not-asked': return 'best effort (Tankside asks the browser to keep it at the first saved check)';
+      case 'unsupported': return 'this browser cannot promise to keep it';
+    }
+  } catch (e) {
+    return `unknown (${storageMessage(e)})`;
+  }
+}
+
+/** The full backup (JSON) or the log as CSV, as a file to download. */
+export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string; blob: Blob }> {
+  const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);
+  if (kind === 'csv') {
+    return { name: `tankside-log-${stamp}.csv`, blob: new Blob([await store.exportCsv()], { type: 'text/csv' }) };
+  }
+  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([await store.exportBackup()], { type: 'application/json' }) };
+}

@@ -1,0 +1,15 @@
+// What the screens show for a computed result: already worded and formatted, so components only lay it out.
+import type { StoredCaution as Caution } from '../../store/index.ts';
+import type { ChartData } from '../components/SaturationChart.tsx';
+import type { SketchData } from '../components/VesselSketch.tsx';
+
+export interface Figure { label: string; value: string }
+
+export interface ResultView {
+  verdict: { tone: 'ok' | 'bad'; text: string };
+  figures: readonly Figure[];
+  hazards: readonly string[];
+  cautions: readonly Caution[];
+  chart?: ChartData | undefined;
+  sketch?: SketchData | undefined;
+}

@@ -1,0 +1,72 @@
+// The vessel editor's fields exactly as typed, with the units chosen beside them.
+import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import type { HeadKind, SensorChoice, Shape } from './vessel-spec.ts';
+import type { UnitPrefs } from './settings-model.ts';
+
+export interface VesselForm {
+  tag: string;
+  description: string;
+  shape: Shape;
+  diameterM: string;
+  straightLengthM: string;
+  head: HeadKind;
+  volume: string;
+  volumeUnit: VolumeUnit;
+  volumeTolPercent: string;
+  tare: string;
+  massUnit: MassUnit;
+  weightTol: string;
+  pressureUnit: PressureUnit;
+  mawp: string;
+  relief: string;
+  vacuumRated: 'yes' | 'no';
+  gaugeSpan: string;
+  gaugeAccuracyPercent: string;
+  temperatureUnit: TemperatureUnit;
+  designTemperature: string;
+  ambientTemperature: string;
+  sensor: SensorChoice;
+  sensorTol: string;
+  atmosphereMode: 'elevation' | 'pressure';
+  elevationM: string;
+  atmosphere: string;
+  barometerTol: string;
+}
+
+export type FormField = keyof VesselForm;
+
+/** A new vessel's form: common values filled in where the trade has a usual default. */
+export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: string; pressureText?: string }): VesselForm {
+  const us = u.temperature === 'degF' || u.temperature === 'degR';
+  return {
+    tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', head: 'semi-ellipsoidal-2-1',
+    volume: '', volumeUnit: u.volume, volumeTolPercent: '2',
+    tare: '', massUnit: u.mass, weightTol: '',
+    pressureUnit: u.pressure, mawp: '', relief: '', vacuumRated: 'no', gaugeSpan: '', gaugeAccuracyPercent: '1',
+    temperatureUnit: u.temperature, designTemperature: '', ambientTemperature: us ? '68' : '20',
+    sensor: 'B', sensorTol: '',
+    atmosphereMode: siteAtmosphere.elevationM !== undefined ? 'elevation' : 'pressure',
+    elevationM: siteAtmosphere.elevationM ?? '', atmosphere: siteAtmosphere.pressureText ?? '',
+    barometerTol: '',
+  };
+}
+
+export const SHAPES: readonly { id: Shape; label: string }[] = [
+  { id: 'vertical-cylinder', label: 'Vertical cylinder' },
+  { id: 'horizontal-cylinder', label: 'Horizontal cylinder' },
+  { id: 'stated-volume', label: 'Volume only (no level)' },
+];
+
+export const HEADS: readonly { id: HeadKind; label: string }[] = [
+  { id: 'semi-ellipsoidal-2-1', label: '2:1 semi-ellipsoidal' },
+  { id: 'torispherical', label: 'Torispherical (standard F&D)' },
+  { id: 'hemispherical', label: 'Hemispherical' },
+  { id: 'flat', label: 'Flat' },
+];
+
+export const SENSORS: readonly { id: SensorChoice; label: string }[] = [
+  { id: 'AA', label: 'RTD, IEC 60751 class AA' },
+  { id: 'A', label: 'RTD, IEC 60751 class A' },
+  { id: 'B', label: 'RTD, IEC 60751 class B' },
+  { id: 'stated', label: 'Stated tolerance' },
+];

@@ -1,0 +1,102 @@
+// The vessel editor's text fields ↔ the check engine's VesselSpec (SI). Parsing and unit
+// conversion go through the core, and the engine's own validateVessel has the last word; every
+// refused field gets its own message.
+import {
+  InputError, massFromKg, massToKg, pressureFromPa, pressureToPa, temperatureDifferenceFromK,
+  temperatureDifferenceToK, temperatureFromK, temperatureToK, volumeFromM3, volumeToM3, atmosphereFromElevation,
+} from '../../core/index.ts';
+import type { HeadSpec, VesselGeometry } from '../../core/check/vessel-geometry.ts';
+import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
+import { formatEditable, readNumber } from './format.ts';
+import type { UnitPrefs } from './settings-model.ts';
+import type { FormField, VesselForm } from './vessel-form.ts';
+import { messageOf } from './atmosphere.ts';
+
+export type { VesselSpec } from '../../core/check/vessel-spec.ts';
+export type Shape = VesselGeometry['shape'];
+export type HeadKind = HeadSpec['kind'];
+export type SensorChoice = 'AA' | 'A' | 'B' | 'stated';
+
+export type SpecResult = { ok: true; spec: VesselSpec } | { ok: false; errors: Partial<Record<FormField, string>> };
+
+/** The engine's field names (InputError.field) → the editor's inputs. */
+const ENGINE_FIELDS: Record<string, FormField> = {
+  tag: 'tag', 'tare weight': 'tare', MAWP: 'mawp', 'design temperature': 'designTemperature',
+  'relief set pressure': 'relief', 'site atmospheric pressure': 'atmosphere', 'ambient temperature': 'ambientTemperature',
+  'pressure gauge span': 'gaugeSpan', 'pressure gauge accuracy': 'gaugeAccuracyPercent', 'temperature sensor tolerance': 'sensorTol',
+  'weight tolerance': 'weightTol', 'volume tolerance': 'volumeTolPercent', 'barometer tolerance': 'barometerTol',
+  'inner diameter': 'diameterM', 'straight length': 'straightLengthM', volume: 'volume', 'internal volume': 'volume',
+};
+
+/** Builds the SI VesselSpec from the form, or names every field that cannot be read. */
+export function specFromForm(f: VesselForm): SpecResult {
+  const errors: Partial<Record<FormField, string>> = {};
+  const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
+    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
+  };
+  const geometry: VesselGeometry = f.shape === 'stated-volume'
+    ? { shape: 'stated-volume', volumeM3: read('volume', 'internal volume', (v) => volumeToM3(v, f.volumeUnit)) }
+    : { shape: f.shape, innerDiameterM: read('diameterM', 'inner diameter'), straightLengthM: read('straightLengthM', 'straight length'), head: { kind: f.head } };
+  const pa = (n: number) => pressureToPa(n, f.pressureUnit);
+  const spec: VesselSpec = {
+    tag: f.tag.trim(),
+    description: f.description.trim(),
+    geometry,
+    tareKg: read('tare', 'tare weight', (n) => massToKg(n, f.massUnit)),
+    mawpGaugePa: read('mawp', 'MAWP', pa),
+    designTemperatureK: read('designTemperature', 'design temperature', (n) => temperatureToK(n, f.temperatureUnit)),
+    reliefSetGaugePa: read('relief', 'relief set pressure', pa),
+    vacuumRated: f.vacuumRated === 'yes',
+    siteAtmospherePa: f.atmosphereMode === 'elevation'
+      ? read('elevationM', 'elevation', atmosphereFromElevation)
+      : read('atmosphere', 'site atmospheric pressure', pa),
+    ambientTemperatureK: read('ambientTemperature', 'ambient temperature', (n) => temperatureToK(n, f.temperatureUnit)),
+    instruments: {
+      pressureGauge: { spanPa: read('gaugeSpan', 'pressure gauge span', pa), accuracyPercentOfSpan: read('gaugeAccuracyPercent', 'pressure gauge accuracy') },
+      temperatureSensor: f.sensor === 'stated'
+        ? { kind: 'stated', toleranceK: read('sensorTol', 'temperature sensor tolerance', (n) => temperatureDifferenceToK(n, f.temperatureUnit)) }
+        : { kind: 'iec-60751', sensorClass: f.sensor },
+      weightToleranceKg: read('weightTol', 'weight tolerance', (n) => massToKg(n, f.massUnit)),
+      volumeTolerancePercent: read('volumeTolPercent', 'volume tolerance'),
+      barometerTolerancePa: f.atmosphereMode === 'elevation' ? 0 : read('barometerTol', 'barometer tolerance', pa),
+    },
+  };
+  if (Object.keys(errors).length) return { ok: false, errors };
+  try {
+    validateVessel(spec);
+  } catch (e) {
+    const field = e instanceof InputError ? ENGINE_FIELDS[e.field] ?? 'tag' : 'tag';
+    return { ok: false, errors: { [field]: messageOf(e) } };
+  }
+  return { ok: true, spec };
+}
+
+/** The form for a stored vessel, values shown in the preferred units. */
+export function formFromSpec(stored: object, u: UnitPrefs): VesselForm {
+  const s = stored as VesselSpec;
+  const g = s.geometry;
+  const n = (x: number) => formatEditable(x);
+  const p = (x: number) => n(pressureFromPa(x, u.pressure));
+  const ins = s.instruments;
+  const sensor = ins.temperatureSensor;
+  return {
+    tag: s.tag, description: s.description,
+    shape: g.shape,
+    diameterM: g.shape === 'stated-volume' ? '' : n(g.innerDiameterM),
+    straightLengthM: g.shape === 'stated-volume' ? '' : n(g.straightLengthM),
+    head: g.shape === 'stated-volume' ? 'semi-ellipsoidal-2-1' : g.head.kind,
+    volume: g.shape === 'stated-volume' ? n(volumeFromM3(g.volumeM3, u.volume)) : '',
+    volumeUnit: u.volume, volumeTolPercent: n(ins.volumeTolerancePercent),
+    tare: n(massFromKg(s.tareKg, u.mass)), massUnit: u.mass, weightTol: n(massFromKg(ins.weightToleranceKg, u.mass)),
+    pressureUnit: u.pressure, mawp: p(s.mawpGaugePa), relief: p(s.reliefSetGaugePa),
+    vacuumRated: s.vacuumRated ? 'yes' : 'no',
+    gaugeSpan: p(ins.pressureGauge.spanPa), gaugeAccuracyPercent: n(ins.pressureGauge.accuracyPercentOfSpan),
+    temperatureUnit: u.temperature,
+    designTemperature: n(temperatureFromK(s.designTemperatureK, u.temperature)),
+    ambientTemperature: n(temperatureFromK(s.ambientTemperatureK, u.temperature)),
+    sensor: sensor.kind === 'stated' ? 'stated' : sensor.sensorClass,
+    sensorTol: sensor.kind === 'stated' ? n(temperatureDifferenceFromK(sensor.toleranceK, u.temperature)) : '',
+    atmosphereMode: 'pressure', elevationM: '', atmosphere: p(s.siteAtmospherePa),
+    barometerTol: p(ins.barometerTolerancePa),
+  };
+}
