@@ -50,9 +50,15 @@ export default defineConfig({
     {
       // The manifest lives at the repository's top level; ship it beside index.html.
       name: 'tankside-manifest',
-      apply: 'build',
       generateBundle() {
         this.emitFile({ type: 'asset', fileName: 'manifest.webmanifest', source: readManifest() });
+      },
+      configureServer(server) {
+        // The dev server serves the same top-level manifest, so `npm start` links no missing file.
+        server.middlewares.use('/manifest.webmanifest', (_req, res) => {
+          res.setHeader('Content-Type', 'application/manifest+json');
+          res.end(readManifest());
+        });
       },
     },
   ],
