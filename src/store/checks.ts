@@ -273,17 +273,19 @@ export async function sealMigratedChecks(db: IDBPDatabase<TanksideDB>): Promise<
     prev = { deviceId: r.deviceId, hash };
   }
   const tx = db.transaction(['checks', 'settings'], 'readwrite', STRICT);
-  try {
-    if ((await tx.objectStore('settings').get(SETTING_SEAL_PENDING)) === true) {
-      for (const r of sealed) {
-        const current = await tx.objectStore('checks').get(r.id);
-        if (!current || current.hash !== '') continue;
-        // The one place a saved check is rewritten: filling in the hash a migration could not.
-        await tx.objectStore('checks').put(r);
-      }
-      await tx.objectStore('settings').delete(SETTING_SEAL_PENDING);
+  const writeAll = async () => {
+    if ((await tx.objectStore('settings').get(SETTING_SEAL_PENDING)) !== true) return;
+    for (const r of sealed) {
+      const current = await tx.objectStore('checks').get(r.id);
+      if (!current || current.hash !== '') continue;
+      // The one place a saved check is rewritten: filling in the hash a migration could not.
+      await tx.objectStore('checks').put(r);
     }
-    await tx.done;
+    await tx.objectStore('settings').delete(SETTING_SEAL_PENDING);
+  };
+  try {
+    // Both observed at once, so an abort mid-loop cannot leave tx.done rejected and unheard.
+    await Promise.all([writeAll(), tx.done]);
   } catch (error) {
     throw storeErrorFromWrite(error, 'Sealing migrated checks');
   }

@@ -2,7 +2,7 @@
 // transaction (no crypto, no timers, no fetch): anything else would let the transaction commit
 // half-way. Work that needs WebCrypto (hashing records migrated into the chain) is flagged here and
 // finished after open by sealMigratedChecks() in db.ts.
-import type { DBSchema, IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
+import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
 
 export const DB_NAME = 'tankside';
@@ -50,7 +50,6 @@ export interface TanksideDB extends DBSchema {
 }
 
 type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
-type RawTx = { objectStore(name: string): IDBObjectStore };
 
 /**
  * One rung of the ladder. It only issues IDB requests and calls `next` once its last request has
@@ -91,7 +90,8 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
   {
     version: 3,
     run(_db, tx, next) {
-      const raw = tx as unknown as RawTx;
+      // Plain IDB requests (idb's wrappers return promises; a cursor walk needs onsuccess).
+      const raw = unwrap(tx) as IDBTransaction;
       // The device id is made here if this install never had one, so migrated checks carry it.
       const idRequest = raw.objectStore('settings').get(SETTING_DEVICE_ID);
       idRequest.onsuccess = () => {
@@ -140,7 +140,7 @@ function walk(
   change: (record: Record<string, unknown>) => void,
   done: () => void,
 ): void {
-  const store = (tx as unknown as RawTx).objectStore(storeName);
+  const store = (unwrap(tx) as IDBTransaction).objectStore(storeName);
   const request = indexName ? store.index(indexName).openCursor() : store.openCursor();
   request.onsuccess = () => {
     const cursor = request.result;

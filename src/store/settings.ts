@@ -78,12 +78,17 @@ export async function deviceId(): Promise<string> {
   const existing = await db.get('settings', SETTING_DEVICE_ID);
   if (typeof existing === 'string') return existing;
   const tx = db.transaction('settings', 'readwrite', STRICT);
-  // Re-read inside the write: another tab may have made one meanwhile.
-  const again = await tx.store.get(SETTING_DEVICE_ID);
-  const id = typeof again === 'string' ? again : crypto.randomUUID();
-  if (typeof again !== 'string') void tx.store.put(id, SETTING_DEVICE_ID);
+  const write = async () => {
+    // Re-read inside the write: another tab may have made one meanwhile.
+    const again = await tx.store.get(SETTING_DEVICE_ID);
+    if (typeof again === 'string') return again;
+    const made = crypto.randomUUID();
+    await tx.store.put(made, SETTING_DEVICE_ID);
+    return made;
+  };
+  let id: string;
   try {
-    await tx.done;
+    [id] = await Promise.all([write(), tx.done]);
   } catch (error) {
     throw storeErrorFromWrite(error, 'Saving the device id');
   }

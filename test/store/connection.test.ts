@@ -1,0 +1,74 @@
+// The connection's life: blocked by an older tab, blocking a newer one, terminated by the browser.
+import 'fake-indexeddb/auto';
+import { IDBFactory, forceCloseDatabase } from 'fake-indexeddb';
+import { unwrap } from 'idb';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { addVessel, closeStore, listVessels, openStore, type StoreEvent } from '../../src/store/index.ts';
+import { getDb } from '../../src/store/connection.ts';
+import { DB_NAME } from '../../src/store/schema.ts';
+import { SPEC } from './fixtures.ts';
+
+let events: StoreEvent[] = [];
+beforeEach(() => {
+  (globalThis as { indexedDB: IDBFactory }).indexedDB = new IDBFactory();
+  events = [];
+});
+afterEach(async () => {
+  await closeStore();
+});
+
+function rawOpen(version: number, onUpgrade?: (db: IDBDatabase) => void): Promise<IDBDatabase> {
+  return new Promise((resolve, reject) => {
+    const request = indexedDB.open(DB_NAME, version);
+    request.onupgradeneeded = () => onUpgrade?.(request.result);
+    request.onsuccess = () => resolve(request.result);
+    request.onerror = () => reject(request.error);
+  });
+}
+
+describe('connection', () => {
+  it('blocked: an older tab holding v1 open delays the upgrade; the store says so, then opens when it closes', async () => {
+    const olderTab = await rawOpen(1, (db) => {
+      db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+      db.createObjectStore('checks', { keyPath: 'id' }).createIndex('by-vessel-time', ['vesselId', 'time']);
+      db.createObjectStore('settings');
+    });
+    // The older tab has no versionchange handler, like a build from before the handler existed.
+    let opened = false;
+    const opening = openStore({ onEvent: (e) => events.push(e) }).then(() => (opened = true));
+    await vi.waitFor(() => expect(events).toEqual([{ type: 'blocked' }]));
+    expect(opened).toBe(false);
+    olderTab.close();
+    await opening;
+    expect(await listVessels()).toEqual([]);
+  });
+
+  it('blocking: a newer version opening elsewhere closes this connection and tells the app to reload', async () => {
+    await openStore({ onEvent: (e) => events.push(e) });
+    await addVessel({ tag: 'FT-1', spec: SPEC });
+    const newer = await rawOpen(4); // resolves only because the store closed its connection
+    expect(newer.version).toBe(4);
+    expect(events).toEqual([{ type: 'closed-for-upgrade' }]);
+    await expect(listVessels()).rejects.toMatchObject({ name: 'StoreError', code: 'closed-for-upgrade' });
+    newer.close();
+  });
+
+  it('terminated: an abnormal close is reported and the next call reopens', async () => {
+    await openStore({ onEvent: (e) => events.push(e) });
+    const v = await addVessel({ tag: 'FT-1', spec: SPEC });
+    forceCloseDatabase(unwrap(await getDb()) as never);
+    await new Promise((r) => setTimeout(r, 0));
+    expect(events).toEqual([{ type: 'terminated' }]);
+    expect(await listVessels()).toEqual([v]);
+  });
+
+  it('unavailable: no IndexedDB gives a typed error', async () => {
+    const saved = globalThis.indexedDB;
+    (globalThis as { indexedDB?: unknown }).indexedDB = undefined;
+    try {
+      await expect(openStore()).rejects.toMatchObject({ code: 'unavailable' });
+    } finally {
+      (globalThis as { indexedDB: unknown }).indexedDB = saved;
+    }
+  });
+});

@@ -1,0 +1,233 @@
+// Every rung of the upgrade ladder, opened over data that the older schema wrote. The old schemas
+// are written out here by hand with raw IndexedDB, as those versions created them, so the test does
+// not borrow the code under test to make its starting point.
+import 'fake-indexeddb/auto';
+import { IDBFactory } from 'fake-indexeddb';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import {
+  appendCheck,
+  checksForVessel,
+  closeStore,
+  getSetting,
+  getVessel,
+  listChecks,
+  loadDraft,
+  openStore,
+  saveDraft,
+  verifyStoredChains,
+  GENESIS_HASH,
+  type StoreEvent,
+} from '../../src/store/index.ts';
+import { getDb } from '../../src/store/connection.ts';
+import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
+import { computeCheckHash } from '../../src/store/integrity.ts';
+import { failWritesOverQuota, sampleCheck } from './fixtures.ts';
+
+const VESSEL_ID = '6f0c8a52-3c1d-4e8a-9b2f-0d7e5a1c4b93';
+const SPEC = { volumeM3: 1.8, tareKg: 950 };
+
+function vesselV1() {
+  return {
+    id: VESSEL_ID, tag: 'CR-3', tagKey: 'cr-3', description: 'condensate receiver', spec: SPEC,
+    retired: false, retiredAt: null, createdAt: '2026-11-01T08:00:00+01:00', updatedAt: '2026-11-01T08:00:00+01:00',
+  };
+}
+
+/** A v1 check: no timeMs, no chain fields. Times carry different offsets on purpose. */
+function checkV1(id: string, time: string) {
+  const { vesselId: _v, takenAt: _t, corrects: _c, reason: _r, ...rest } = sampleCheck(VESSEL_ID);
+  return { id, time, vesselId: VESSEL_ID, vessel: { tag: 'CR-3', spec: SPEC }, ...rest, note: `v1 ${time}` };
+}
+
+// Instants: 21:05Z, 21:30Z, 20:00Z. As strings the first sorts last-but-one; by instant it is second.
+const V1_CHECKS = [
+  checkV1('00000000-0000-4000-8000-000000000001', '2026-12-01T22:05:00+01:00'),
+  checkV1('00000000-0000-4000-8000-000000000002', '2026-12-01T21:30:00Z'),
+  checkV1('00000000-0000-4000-8000-000000000003', '2026-12-01T15:00:00-05:00'),
+];
+const NEWEST_FIRST = ['00000000-0000-4000-8000-000000000002', '00000000-0000-4000-8000-000000000001', '00000000-0000-4000-8000-000000000003'];
+
+function rawOpen(version: number, upgrade: (db: IDBDatabase) => void): Promise<IDBDatabase> {
+  return new Promise((resolve, reject) => {
+    const request = indexedDB.open(DB_NAME, version);
+    request.onupgradeneeded = () => upgrade(request.result);
+    request.onsuccess = () => resolve(request.result);
+    request.onerror = () => reject(request.error);
+  });
+}
+
+function rawWrite(db: IDBDatabase, writes: [store: string, value: unknown, key?: IDBValidKey][]): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const tx = db.transaction([...new Set(writes.map((w) => w[0]))], 'readwrite');
+    for (const [store, value, key] of writes) tx.objectStore(store).put(value, key);
+    tx.oncomplete = () => resolve();
+    tx.onerror = () => reject(tx.error);
+  });
+}
+
+/** Schema v1 exactly as it shipped. */
+function createV1(db: IDBDatabase): void {
+  db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+  db.createObjectStore('checks', { keyPath: 'id' }).createIndex('by-vessel-time', ['vesselId', 'time']);
+  db.createObjectStore('settings');
+}
+
+/** Schema v2 exactly as it shipped (a fresh v2 install). */
+function createV2(db: IDBDatabase): void {
+  db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+  const checks = db.createObjectStore('checks', { keyPath: 'id' });
+  checks.createIndex('by-vessel-time', ['vesselId', 'timeMs', 'id']);
+  checks.createIndex('by-time', ['timeMs', 'id']);
+  db.createObjectStore('settings');
+  db.createObjectStore('drafts');
+}
+
+function describeSchema(db: IDBDatabase) {
+  const tx = db.transaction([...db.objectStoreNames]);
+  return Object.fromEntries(
+    [...db.objectStoreNames].map((name) => {
+      const store = tx.objectStore(name);
+      return [name, [...store.indexNames].map((i) => `${i}:${JSON.stringify(store.index(i).keyPath)}${store.index(i).unique ? ':unique' : ''}`)];
+    }),
+  );
+}
+
+const CURRENT_SCHEMA = {
+  checks: [
+    'by-device-seq:["deviceId","seq"]:unique',
+    'by-time:["timeMs","id"]',
+    'by-vessel-time:["vesselId","timeMs","id"]',
+  ],
+  drafts: [],
+  settings: [],
+  vessels: ['by-tag:"tagKey"'],
+};
+
+let events: StoreEvent[] = [];
+beforeEach(() => {
+  (globalThis as { indexedDB: IDBFactory }).indexedDB = new IDBFactory();
+  events = [];
+});
+afterEach(async () => {
+  await closeStore();
+});
+
+async function expectMigratedV1Checks() {
+  const { checks } = await listChecks();
+  expect(checks.map((c) => c.id)).toEqual(NEWEST_FIRST);
+  const byId = new Map(checks.map((c) => [c.id, c]));
+  for (const old of V1_CHECKS) {
+    const now = byId.get(old.id)!;
+    // Everything v1 stored is still there, unchanged.
+    expect(now).toMatchObject(old);
+    expect(now.timeMs).toBe(Date.parse(old.time));
+    expect(now.corrects).toBeNull();
+    expect(now.reason).toBeNull();
+    expect(now.hash).toBe(await computeCheckHash(now));
+  }
+  // One chain in the order the checks were taken: 20:00Z, 21:05Z, 21:30Z.
+  const chain = [...checks].reverse();
+  expect(chain.map((c) => c.seq)).toEqual([1, 2, 3]);
+  expect(chain[0]!.prevHash).toBe(GENESIS_HASH);
+  expect(chain[1]!.prevHash).toBe(chain[0]!.hash);
+  expect(chain[2]!.prevHash).toBe(chain[1]!.hash);
+  expect(new Set(chain.map((c) => c.deviceId)).size).toBe(1);
+  const db = await getDb();
+  expect(chain[0]!.deviceId).toBe(await db.get('settings', SETTING_DEVICE_ID));
+  expect(await db.get('settings', SETTING_SEAL_PENDING)).toBeUndefined();
+  expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 3, headSeq: 3 }]);
+  // The chain carries on from the migrated head.
+  const next = await appendCheck(sampleCheck(VESSEL_ID));
+  expect(next).toMatchObject({ seq: 4, prevHash: chain[2]!.hash, deviceId: chain[0]!.deviceId });
+}
+
+describe('upgrade ladder', () => {
+  it('a fresh install gets the whole current schema', async () => {
+    await openStore();
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect(DB_VERSION).toBe(3);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+  });
+
+  it('v1 → v3: keeps vessels, checks and settings; adds timeMs, drafts, indexes and the hash chain', async () => {
+    const old = await rawOpen(1, createV1);
+    await rawWrite(old, [
+      ['vessels', vesselV1()],
+      ...V1_CHECKS.map((c): [string, unknown] => ['checks', c]),
+      ['settings', 'R. Okafor', 'technicianName'],
+    ]);
+    old.close();
+
+    await openStore({ onEvent: (e) => events.push(e) });
+    const db = await getDb();
+    expect(db.version).toBe(3);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    expect(await getVessel(VESSEL_ID)).toEqual(vesselV1());
+    expect(await getSetting('technicianName')).toBe('R. Okafor');
+    expect(await loadDraft('new-check')).toBeUndefined();
+    await saveDraft('new-check', { temperature: '151' });
+    expect((await checksForVessel(VESSEL_ID)).checks.map((c) => c.id)).toEqual(NEWEST_FIRST);
+    await expectMigratedV1Checks();
+    expect(events).toEqual([]);
+  });
+
+  it('v2 → v3: keeps drafts and checks; chains the checks in time order', async () => {
+    const old = await rawOpen(2, createV2);
+    const v2Checks = V1_CHECKS.map((c) => ({ ...c, timeMs: Date.parse(c.time) }));
+    await rawWrite(old, [
+      ['vessels', vesselV1()],
+      ...v2Checks.map((c): [string, unknown] => ['checks', c]),
+      ['drafts', { value: { temperature: '15' }, savedAt: '2026-12-01T22:00:00.000+01:00' }, 'new-check'],
+    ]);
+    old.close();
+
+    await openStore();
+    const db = await getDb();
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    expect(await loadDraft('new-check')).toEqual({ value: { temperature: '15' }, savedAt: '2026-12-01T22:00:00.000+01:00' });
+    await expectMigratedV1Checks();
+  });
+
+  it('v1 with no checks: no seal pending, chain starts at seq 1', async () => {
+    const old = await rawOpen(1, createV1);
+    await rawWrite(old, [['vessels', vesselV1()]]);
+    old.close();
+    await openStore();
+    const db = await getDb();
+    expect(await db.get('settings', SETTING_SEAL_PENDING)).toBeUndefined();
+    expect(await appendCheck(sampleCheck(VESSEL_ID))).toMatchObject({ seq: 1, prevHash: GENESIS_HASH });
+  });
+
+  it('if sealing the migrated checks fails (disk full), they stay pending and the next save seals them first', async () => {
+    const old = await rawOpen(1, createV1);
+    await rawWrite(old, [['vessels', vesselV1()], ...V1_CHECKS.map((c): [string, unknown] => ['checks', c])]);
+    old.close();
+    const restore = failWritesOverQuota((value) => typeof (value as { hash?: unknown }).hash === 'string');
+    try {
+      await openStore();
+    } finally {
+      restore();
+    }
+    const db = await getDb();
+    expect(await db.get('settings', SETTING_SEAL_PENDING)).toBe(true);
+    const pending = await db.getAll('checks');
+    expect(pending.map((c) => c.hash)).toEqual(['', '', '']);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'unsealed', at: { seq: 1 } }]);
+    const next = await appendCheck(sampleCheck(VESSEL_ID));
+    expect(next.seq).toBe(4);
+    expect(await db.get('settings', SETTING_SEAL_PENDING)).toBeUndefined();
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 4, headSeq: 4, headHash: next.hash }]);
+  });
+
+  it('a v3 database reopens untouched', async () => {
+    await openStore();
+    await closeStore();
+    const old = await rawOpen(3, () => {
+      throw new Error('no upgrade expected');
+    });
+    old.close();
+    await openStore();
+    expect((await getDb()).version).toBe(3);
+  });
+});
