@@ -85,8 +85,9 @@ export interface TrendGeometry {
 
 /** Round tick values covering [min, max]: steps of 1, 2 or 5 × 10^n, about `count` of them. */
 export function niceTicks(min: number, max: number, count = 4): number[] {
-  if (!(max > min)) {
-    const pad = Math.abs(min) > 0 ? Math.abs(min) * 0.1 : 1;
+  // A flat (or vanishingly narrow) series still gets an axis: widen it around its value.
+  if (!(max - min >= 1e-6 * Math.max(1, Math.abs(min), Math.abs(max)))) {
+    const pad = Math.max(Math.abs(min) * 0.1, 1e-3);
     return niceTicks(min - pad, max + pad, count);
   }
   const raw = (max - min) / count;
