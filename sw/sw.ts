@@ -11,6 +11,12 @@ cleanupOutdatedCaches();
 precacheAndRoute(self.__WB_MANIFEST);
 registerRoute(new NavigationRoute(createHandlerBoundToURL('index.html')));
 
+// Take control of pages opened before the first install finished, so a first visit is already
+// offline-ready. This only adopts uncontrolled pages; a new version still waits for the person.
+self.addEventListener('activate', (event: ExtendableEvent) => {
+  event.waitUntil(self.clients.claim());
+});
+
 self.addEventListener('message', (event: ExtendableMessageEvent) => {
   if (isSkipWaitingRequest(event.data)) void self.skipWaiting();
 });

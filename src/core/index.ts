@@ -2,4 +2,5 @@
 export { InputError, requireInRange } from './errors.ts';
 export type { InputProblem } from './errors.ts';
 export * from './units/index.ts';
+export * from './steam/index.ts';
 export * from './check/index.ts';

@@ -10,7 +10,7 @@ import type { IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
-import { canonicalJson, ChainVerifier, computeCheckHash, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { canonicalJson, ChainVerifier, computeCheckHash, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -20,7 +20,12 @@ import { DESCRIPTION_MAX, TAG_MAX, tagKeyOf } from './vessels.ts';
 export const BACKUP_FORMAT = 'tankside-backup';
 export const BACKUP_FORMAT_VERSION = 1;
 /** Refused before parsing: a file longer than maxChars (UTF-16 code units), or holding more records. */
-export const BACKUP_LIMITS = { maxChars: 300_000_000, maxVessels: 100_000, maxChecks: 1_000_000 } as const;
+export interface BackupLimits {
+  maxChars: number;
+  maxVessels: number;
+  maxChecks: number;
+}
+export const BACKUP_LIMITS: Readonly<BackupLimits> = { maxChars: 300_000_000, maxVessels: 100_000, maxChecks: 1_000_000 };
 
 /** Where each device's chain ended when the backup was made. */
 export interface ChainHead {
@@ -229,9 +234,9 @@ function requireList(field: string, value: unknown, max: number): unknown[] {
  * format or formatVersion, unknown or missing fields, wrong types or ranges, duplicate ids.
  * @throws StoreError('invalid-backup') naming the first bad field
  */
-export function parseBackup(text: string): BackupDocument {
+export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKUP_LIMITS): BackupDocument {
   if (typeof text !== 'string') throw bad('file', 'expected text');
-  if (text.length > BACKUP_LIMITS.maxChars) throw bad('file', `${text.length} characters; at most ${BACKUP_LIMITS.maxChars}`);
+  if (text.length > limits.maxChars) throw bad('file', `${text.length} characters; at most ${limits.maxChars}`);
   let raw: unknown;
   try {
     raw = JSON.parse(text, (key, value: unknown) => {
@@ -251,9 +256,9 @@ export function parseBackup(text: string): BackupDocument {
   if (top['formatVersion'] !== BACKUP_FORMAT_VERSION) throw bad('formatVersion', `expected ${BACKUP_FORMAT_VERSION}`);
   requireKeys('file', top, TOP_KEYS);
   requireIso('exportedAt', top['exportedAt']);
-  const vessels = requireList('vessels', top['vessels'], BACKUP_LIMITS.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
-  const checks = requireList('checks', top['checks'], BACKUP_LIMITS.maxChecks).map((c, i) => validateCheck(`checks[${i}]`, c));
-  const chains = requireList('chains', top['chains'], BACKUP_LIMITS.maxChecks).map((h, i) => {
+  const vessels = requireList('vessels', top['vessels'], limits.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
+  const checks = requireList('checks', top['checks'], limits.maxChecks).map((c, i) => validateCheck(`checks[${i}]`, c));
+  const chains = requireList('chains', top['chains'], limits.maxChecks).map((h, i) => {
     const head = requireObject(`chains[${i}]`, h);
     requireKeys(`chains[${i}]`, head, CHAIN_KEYS);
     within(() => requireUuid(`chains[${i}].deviceId`, head['deviceId']));
@@ -416,9 +421,10 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
   };
   options.signal?.addEventListener('abort', onAbort);
   let done = base;
+  const every = progressStep(total);
   const step = () => {
     done += 1;
-    if (done % 500 === 0) options.onProgress?.(done, total);
+    if (done % every === 0) options.onProgress?.(done, total);
   };
   const work = async () => {
     const vessels = tx.objectStore('vessels');
@@ -457,7 +463,7 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   for (const c of doc.checks) {
     throwIfAborted(options.signal);
     hashes.push(await computeCheckHash(c));
-    if (hashes.length % 500 === 0) options.onProgress?.(hashes.length, total);
+    if (hashes.length % progressStep(total) === 0) options.onProgress?.(hashes.length, total);
   }
   for (let attempt = 0; ; attempt += 1) {
     throwIfAborted(options.signal);

@@ -1,12 +1,128 @@
 // CSV export of the check log: one row per check, SI units in the header, ISO 8601 times, text
-// cells neutralised against spreadsheet formula injection.
-import { StoreError } from './errors.ts';
-import type { LongWorkOptions } from './records.ts';
+// cells neutralised against spreadsheet formula injection. RFC 4180 quoting, CRLF line ends.
+import { getDb } from './connection.ts';
+import { throwIfAborted } from './integrity.ts';
+import type { CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
+import { requireUuid } from './validate.ts';
+
+type Cell = string | number | boolean | null;
+
+/** Reads a value at a dotted path inside plain JSON, or undefined. */
+function at(value: JsonValue | undefined, path: string): JsonValue | undefined {
+  let v: JsonValue | undefined = value;
+  for (const key of path.split('.')) {
+    if (v === null || typeof v !== 'object' || Array.isArray(v) || !Object.hasOwn(v, key)) return undefined;
+    v = v[key];
+  }
+  return v;
+}
+
+/** A scalar from the record's JSON, or null (empty cell) for anything else or nothing. */
+function scalar(value: JsonValue | undefined): Cell {
+  return typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' ? value : null;
+}
+
+const SIGNAL_ORDER = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
 
 /**
- * The whole log (or one vessel's) as CSV text, oldest first.
- * @throws StoreError('cancelled') if options.signal aborts
+ * The columns, in order. Result paths follow the check engine's CheckResult (src/core/README.md);
+ * a path a record does not have gives an empty cell, so older records export too.
  */
-export async function exportCsv(_options: LongWorkOptions & { vesselId?: string } = {}): Promise<string> {
-  throw new StoreError('write-failed', 'exportCsv is not implemented yet');
+export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => Cell }[] = [
+  { header: 'time (ISO 8601)', cell: (r) => r.time },
+  { header: 'vessel tag', cell: (r) => r.vessel.tag },
+  { header: 'technician', cell: (r) => r.technician },
+  { header: 'verdict', cell: (r) => scalar(at(r.result, 'saturation.verdict.verdict')) },
+  { header: 'highest signal word', cell: (r) => SIGNAL_ORDER.find((s) => r.cautions.some((c) => c.signal === s)) ?? null },
+  { header: 'temperature (K)', cell: (r) => scalar(at(r.reading, 'temperatureK')) },
+  { header: 'pressure as entered (Pa)', cell: (r) => scalar(at(r.reading, 'pressure.pressurePa')) },
+  { header: 'pressure reference', cell: (r) => scalar(at(r.reading, 'pressure.reference')) },
+  { header: 'absolute pressure (Pa)', cell: (r) => scalar(at(r.result, 'reading.absolutePressurePa')) },
+  { header: 'atmosphere (Pa)', cell: (r) => scalar(at(r.result, 'reading.atmospherePa')) },
+  { header: 'saturation pressure at temperature (Pa)', cell: (r) => scalar(at(r.result, 'saturation.saturationPressurePa')) },
+  { header: 'pressure deviation from saturation (Pa)', cell: (r) => scalar(at(r.result, 'saturation.pressureDeviationPa')) },
+  { header: 'pressure band plus/minus (Pa)', cell: (r) => scalar(at(r.result, 'saturation.pressureBand.plusMinus')) },
+  { header: 'net mass (kg)', cell: (r) => scalar(at(r.result, 'reading.netMassKg')) },
+  { header: 'regime', cell: (r) => scalar(at(r.result, 'inventory.regime')) },
+  { header: 'quality (kg/kg)', cell: (r) => scalar(at(r.result, 'inventory.quality')) },
+  { header: 'liquid mass (kg)', cell: (r) => scalar(at(r.result, 'inventory.liquidMassKg')) },
+  { header: 'vapor mass (kg)', cell: (r) => scalar(at(r.result, 'inventory.vaporMassKg')) },
+  { header: 'liquid level (m)', cell: (r) => scalar(at(r.result, 'inventory.liquidLevel.levelM')) },
+  {
+    header: 'inputs as typed',
+    cell: (r) =>
+      Object.entries(r.inputs)
+        .map(([name, i]) => `${name}=${i.text} ${i.unit}${i.reference ? ` ${i.reference}` : ''}`)
+        .join('; '),
+  },
+  { header: 'cautions', cell: (r) => r.cautions.map((c) => `${c.signal}: ${c.message}`).join(' | ') },
+  { header: 'note', cell: (r) => r.note },
+  { header: 'corrects check id', cell: (r) => r.corrects },
+  { header: 'correction reason', cell: (r) => r.reason },
+  { header: 'check id', cell: (r) => r.id },
+  { header: 'vessel id', cell: (r) => r.vesselId },
+  { header: 'device id', cell: (r) => r.deviceId },
+  { header: 'seq', cell: (r) => r.seq },
+  { header: 'app version', cell: (r) => r.appVersion },
+  { header: 'formulation', cell: (r) => r.formulationId },
+  { header: 'hash (SHA-256)', cell: (r) => r.hash },
+];
+
+/**
+ * One CSV cell. Numbers are written as numbers (ECMAScript shortest form, which general CSV
+ * readers parse back exactly); text beginning with = + - @, tab or CR gets a leading apostrophe so
+ * a spreadsheet shows it instead of running it as a formula (common practice, OWASP "CSV
+ * injection"); text with a comma, quote or line break is quoted, quotes doubled (RFC 4180).
+ */
+export function csvCell(value: Cell): string {
+  if (value === null) return '';
+  if (typeof value === 'number') return Number.isFinite(value) ? (Object.is(value, -0) ? '0' : String(value)) : '';
+  if (typeof value === 'boolean') return value ? 'true' : 'false';
+  const text = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+  return /[",\r\n]/.test(text) || text !== text.trim() ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+/** CSV text (header + one row per record) for records already in hand. */
+export function csvFromChecks(records: Iterable<CheckRecord>): string {
+  const rows = [CSV_COLUMNS.map((c) => csvCell(c.header)).join(',')];
+  for (const r of records) rows.push(CSV_COLUMNS.map((c) => csvCell(c.cell(r))).join(','));
+  return rows.join('\r\n') + '\r\n';
+}
+
+const PAGE = 1000;
+
+/**
+ * The log (all of it, or one vessel's) as CSV text, oldest first, read in pages from one snapshot.
+ * @throws StoreError('invalid-record') for a bad vesselId; ('cancelled') if options.signal aborts
+ */
+export async function exportCsv(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string> {
+  if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
+  const db = await getDb();
+  const tx = db.transaction('checks');
+  const index = options.vesselId ? tx.store.index('by-vessel-time') : tx.store.index('by-time');
+  const all: IDBKeyRange | undefined = options.vesselId
+    ? IDBKeyRange.bound([options.vesselId], [options.vesselId, Infinity, []])
+    : undefined;
+  const total = options.vesselId ? await index.count(all) : await tx.store.count();
+  const parts: string[] = [csvFromChecks([]).slice(0, -2)];
+  let done = 0;
+  let lastKey: IDBValidKey | null = null;
+  for (;;) {
+    throwIfAborted(options.signal);
+    let range: IDBKeyRange | undefined = all;
+    if (lastKey !== null) {
+      range = options.vesselId
+        ? IDBKeyRange.bound(lastKey, [options.vesselId, Infinity, []], true)
+        : IDBKeyRange.lowerBound(lastKey, true);
+    }
+    const batch: CheckRecord[] = await index.getAll(range, PAGE);
+    if (batch.length === 0) break;
+    for (const r of batch) parts.push(CSV_COLUMNS.map((c) => csvCell(c.cell(r))).join(','));
+    done += batch.length;
+    options.onProgress?.(done, total);
+    const last: CheckRecord = batch[batch.length - 1]!;
+    lastKey = options.vesselId ? [last.vesselId, last.timeMs, last.id] : [last.timeMs, last.id];
+  }
+  await tx.done;
+  return parts.join('\r\n') + '\r\n';
 }

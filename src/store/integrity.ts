@@ -126,7 +126,7 @@ export async function verifyChains(records: Iterable<CheckRecord>, options: Long
       throwIfAborted(options.signal);
       await verifier.push(r);
       done += 1;
-      if (done % 500 === 0 || done === total) options.onProgress?.(done, total);
+      if (done % progressStep(total) === 0 || done === total) options.onProgress?.(done, total);
     }
   }
   return verifier.results();
@@ -181,6 +181,11 @@ export class ChainVerifier {
           : { deviceId, status: 'ok' as const, count: s.count, headSeq: s.expectedSeq - 1, headHash: s.prevHash },
       );
   }
+}
+
+/** Report progress about 200 times over a job of `total` steps, however large. */
+export function progressStep(total: number): number {
+  return Math.max(1, Math.floor(total / 200));
 }
 
 export function throwIfAborted(signal: AbortSignal | undefined): void {

@@ -79,10 +79,8 @@ export async function launch(profileDir: string, colorScheme: 'light' | 'dark' =
 
 /** Waits until a service worker is activated and controls the page. */
 export async function waitForControl(page: Page): Promise<void> {
-  await page.waitForFunction(async () => {
-    const reg = await navigator.serviceWorker.getRegistration();
-    return reg?.active?.state === 'activated' && navigator.serviceWorker.controller !== null;
-  }, undefined, { timeout: 30_000, polling: 200 });
+  // A synchronous predicate: waitForFunction treats a returned promise as truthy.
+  await page.waitForFunction(() => navigator.serviceWorker.controller?.state === 'activated', undefined, { timeout: 30_000, polling: 200 });
 }
 
 export interface AxeViolation { id: string; impact: string | null; help: string; nodes: { target: unknown[] }[] }
@@ -91,8 +89,10 @@ const AXE_SOURCE = readFileSync(join(ROOT, 'node_modules/axe-core/axe.min.js'), 
 
 /** axe-core's violations on the page as it stands (WCAG 2.x A and AA rules plus best practice). */
 export async function axeViolations(page: Page): Promise<{ id: string; help: string; targets: string }[]> {
+  // The page's CSP (script-src 'self') refuses an inline <script> (page.addScriptTag), as it
+  // should; DevTools-protocol evaluation is outside the page's policy.
   const injected = await page.evaluate(() => 'axe' in window);
-  if (!injected) await page.addScriptTag({ content: AXE_SOURCE });
+  if (!injected) await page.evaluate(AXE_SOURCE);
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ violations: AxeViolation[] }> } }).axe;
     const result = await axe.run(document, { resultTypes: ['violations'] });
@@ -101,7 +101,39 @@ export async function axeViolations(page: Page): Promise<{ id: string; help: str
   return violations.map((v) => ({ id: v.id, help: v.help, targets: v.nodes.map((n) => JSON.stringify(n.target)).join(' ') }));
 }
 
-export async function screenshot(page: Page, name: string, fullPage = true): Promise<void> {
+/** A full-page screenshot; with TANKSIDE_SLICES=1 also phone-screen-high slices for close reading. */
+export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENS_DIR, { recursive: true });
-  await page.screenshot({ path: join(SCREENS_DIR, `${name}.png`), fullPage });
+  await page.screenshot({ path: join(SCREENS_DIR, `${name}.png`), fullPage: true });
+  if (!process.env.TANKSIDE_SLICES) return;
+  const dir = join(SCREENS_DIR, 'slices');
+  mkdirSync(dir, { recursive: true });
+  const { width, height } = await page.evaluate(() => ({ width: document.documentElement.clientWidth, height: document.documentElement.scrollHeight }));
+  for (let y = 0, i = 1; y < height; y += 780, i++) {
+    await page.screenshot({ path: join(dir, `${name}-${i}.png`), fullPage: true, clip: { x: 0, y, width, height: Math.min(780, height - y) } });
+  }
+}
+
+/** Picks the option whose text starts with `tag` in a vessel <select>. */
+export async function pickVessel(page: Page, selector: string, tag: string): Promise<void> {
+  const value = await page.$eval(selector, (el, t) => {
+    const opt = [...(el as HTMLSelectElement).options].find((o) => o.text.startsWith(t));
+    return opt?.value ?? '';
+  }, tag);
+  if (!value) throw new Error(`no vessel ${tag} in ${selector}`);
+  await page.selectOption(selector, value);
+}
+
+/** Interactive elements smaller than 48 px in either direction (inline text links excepted). */
+export async function smallTargets(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const out: string[] = [];
+    for (const el of document.querySelectorAll<HTMLElement>('button, select, input, textarea, a.button, nav a, .switch label, label.row')) {
+      if (el instanceof HTMLInputElement && (el.type === 'radio' || el.type === 'checkbox')) continue;
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 && r.height === 0) continue;
+      if (r.height < 47.5 || r.width < 47.5) out.push(`${el.tagName.toLowerCase()}#${el.id || el.textContent?.trim().slice(0, 20)} ${Math.round(r.width)}x${Math.round(r.height)}`);
+    }
+    return out;
+  });
 }

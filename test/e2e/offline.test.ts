@@ -2,7 +2,7 @@
 // whole job still works: add a vessel, enter a check, see the verdict, save it; then the browser
 // is closed and relaunched with the same profile, still offline, and the check is in the log.
 import { afterAll, describe, expect, it } from 'vitest';
-import { DIST, launch, startServer, tempProfile, waitForControl } from './harness.ts';
+import { DIST, launch, pickVessel, startServer, tempProfile, waitForControl } from './harness.ts';
 
 describe('offline first use and restart', () => {
   const profile = tempProfile();
@@ -32,21 +32,25 @@ describe('offline first use and restart', () => {
     await page.fill('#v-tag', 'E2E-101');
     await page.fill('#v-desc', 'Browser test vessel');
     await page.selectOption('#v-shape', 'vertical-cylinder');
-    await page.fill('#v-diameter', '1');
-    await page.fill('#v-length', '2');
+    await page.fill('#v-diameterM', '1');
+    await page.fill('#v-straightLengthM', '2');
     await page.selectOption('#v-tare-unit', 'kg');
     await page.fill('#v-tare', '500');
+    await page.fill('#v-weightTol', '2');
     await page.selectOption('#v-mawp-unit', 'kPa');
     await page.fill('#v-mawp', '500');
     await page.fill('#v-relief', '450');
-    await page.fill('#v-ptol', '5');
-    await page.fill('#v-mtol', '2');
+    await page.fill('#v-gaugeSpan', '1000');
+    await page.selectOption('#v-design-unit', 'degC');
+    await page.fill('#v-design', '180');
+    await page.fill('#v-ambientTemperature', '20');
+    await page.fill('#v-barometerTol', '0,5');
     await page.getByRole('button', { name: 'Save vessel' }).click();
     await expect.poll(() => page.getByRole('link', { name: /E2E-101/ }).count()).toBe(1);
 
     // Enter a check (a decimal comma in the pressure) and see the verdict.
     await page.getByRole('link', { name: 'Check' }).click();
-    await page.selectOption('#pick-vessel', { label: 'E2E-101 — Browser test vessel' });
+    await pickVessel(page, '#pick-vessel', 'E2E-101');
     await page.selectOption('#chk-temperature-unit', 'degC');
     await page.fill('#chk-temperature', '120');
     await page.selectOption('#chk-pressure-unit', 'kPa');

@@ -3,7 +3,7 @@
 import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DIST, ROOT, launch, startServer, tempProfile, waitForControl } from './harness.ts';
+import { DIST, ROOT, launch, pickVessel, startServer, tempProfile, waitForControl } from './harness.ts';
 
 const NEXT = join(ROOT, 'test-results/dist-next');
 
@@ -29,7 +29,7 @@ describe('app update during an entry', () => {
     await page.getByRole('button', { name: 'Load demo plant' }).click();
     await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(1);
     await page.getByRole('link', { name: 'Check' }).click();
-    await page.selectOption('#pick-vessel', { label: /DEMO-FT-02/ as unknown as string });
+    await pickVessel(page, '#pick-vessel', 'DEMO-FT-02');
     await page.fill('#chk-temperature', '151,8');
     await page.fill('#chk-pressure', '400');
 

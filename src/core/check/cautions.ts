@@ -81,7 +81,12 @@ export function kilopascal(pressurePa: number): string {
 /** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association, field-practice.md §6.4). */
 export const SCALD_TEMPERATURE_K = 333.15;
 
-/** Fraction of the relief set pressure at which a reading is flagged (usual ~90 % operating margin; from memory, field-practice.md §6.6). */
+/**
+ * Fraction of the relief set pressure at which a reading is flagged: conventional relief valves
+ * want the operating pressure about 10 % below set to avoid simmer and premature opening (API RP
+ * 521 Fig. 2 shows a 10 % margin, per http://instrumentation.processengineer.info/relief-device-set-pressures.html ;
+ * the ~10 % below set for conventional valves per an eng-tips thread on PSV set pressure; field-practice.md §6.6).
+ */
 export const NEAR_LIMIT_FRACTION = 0.9;
 
 /** The cautions for one evaluated check (the standing note last). */

@@ -1,7 +1,11 @@
 // From one reading on one vessel to a verdict, an inventory with ± bands, the heat-up envelope,
 // the hazard figures and the cautions that apply. Pure, SI, plain serialisable data out.
 
+import { InputError } from '../errors.ts';
 import { FORMULATION_ID, saturation } from '../steam/index.ts';
+
+/** Largest v = V/m the steam engine's stateTV accepts, m³/kg (its documented range). */
+const MAX_SPECIFIC_VOLUME_M3_PER_KG = 1e9;
 import { cautionsForCheck, type Caution } from './cautions.ts';
 import { heatUpEnvelope, type HeatUpEnvelope } from './heat-up-envelope.ts';
 import { cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type CooledState, type FlashOnRelease, type PressureMargin } from './hazards.ts';
@@ -47,6 +51,14 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
   validateVessel(vessel);
   const r = resolveReading(vessel, reading);
   const V = vesselVolume(vessel.geometry);
+  if (r.netMassKg !== null && V / r.netMassKg > MAX_SPECIFIC_VOLUME_M3_PER_KG) {
+    // Milligrams in a vessel: below what stateTV accepts, and far below any scale's resolution.
+    const field = reading.weight.kind === 'gross' ? 'gross weight' : 'net weight';
+    const minNet = V / MAX_SPECIFIC_VOLUME_M3_PER_KG;
+    const min = reading.weight.kind === 'gross' ? vessel.tareKg + minNet : minNet;
+    throw new InputError(field, 'out-of-range', reading.weight.kind === 'gross' ? reading.weight.grossKg : r.netMassKg,
+      { min, max: 1e7, unit: 'kg' }, `${field}: the contents are too light to evaluate; the net weight must be at least ${minNet} kg.`);
+  }
   const T = r.temperatureK;
   const sat = saturation(T);
 

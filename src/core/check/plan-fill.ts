@@ -111,28 +111,32 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
   const vf = sat.liquid.v;
   const vg = sat.vapor.v;
   const vIdeal = (IF97.R * T2) / sat.p;
-  const target = request.target;
+  const requested = request.target;
+  let target: FillTarget;
   let m: number;
   let mIdeal: number;
-  switch (target.kind) {
+  switch (requested?.kind) {
     case 'quality': {
-      const x = requireInRange('quality', target.quality, 0, 1, '1');
+      const x = requireInRange('quality', requested.quality, 0, 1, '1');
+      target = { kind: 'quality', quality: x };
       m = V / (vf + x * (vg - vf));
       mIdeal = V / (vf + x * (vIdeal - vf));
       break;
     }
     case 'vapor-space-fraction': {
-      const phi = requireInRange('vapor-space fraction', target.fraction, 0, 1, '1');
+      const phi = requireInRange('vapor-space fraction', requested.fraction, 0, 1, '1');
+      target = { kind: 'vapor-space-fraction', fraction: phi };
       m = ((1 - phi) * V) / vf + (phi * V) / vg;
       mIdeal = ((1 - phi) * V) / vf + (phi * V) / vIdeal;
       break;
     }
     case 'dry-saturated':
+      target = { kind: 'dry-saturated' };
       m = V / vg;
       mIdeal = V / vIdeal;
       break;
     default:
-      throw new InputError('fill target', 'empty', String((target as { kind?: unknown }).kind ?? ''), undefined,
+      throw new InputError('fill target', 'empty', String((requested as { kind?: unknown } | undefined)?.kind ?? ''), undefined,
         'fill target: give a quality, a vapor-space fraction, or dry saturated.');
   }
   const x = vg > vf ? Math.min(1, Math.max(0, (V / m - vf) / (vg - vf))) : 1;

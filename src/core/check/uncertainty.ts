@@ -28,14 +28,11 @@ export interface Band<K extends string> {
 
 /** Combines independent ± contributions (all ≥ 0, same unit). */
 export function combineBand<K extends string>(contributions: Record<K, number>): Band<K> {
-  let sumSquares = 0;
-  let sum = 0;
-  for (const key of Object.keys(contributions) as K[]) {
-    const c = Math.abs(contributions[key]);
-    sumSquares += c * c;
-    sum += c;
-  }
-  return { method: COMBINATION_METHOD, plusMinus: Math.sqrt(sumSquares), worstCase: sum, contributions };
+  const parts = (Object.keys(contributions) as K[]).map((key) => Math.abs(contributions[key]));
+  // Math.hypot scales before squaring, so tiny or huge parts neither underflow nor overflow.
+  const plusMinus = Math.hypot(...parts);
+  const worstCase = parts.reduce((a, b) => a + b, 0);
+  return { method: COMBINATION_METHOD, plusMinus, worstCase, contributions };
 }
 
 /**

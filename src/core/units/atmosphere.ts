@@ -48,6 +48,19 @@ const { p0, T0, lapseRate: L, g0, molarMass: M, gasConstant: R, earthRadius: r0 
 /** g0·M/(R*·L) = 5.255 876… */
 const EXPONENT = (g0 * M) / (R * L);
 
+/** Geopotential altitudes atmosphereFromGeopotentialAltitude accepts, m'. */
+export const GEOPOTENTIAL_ALTITUDE_RANGE_M = { min: -500, max: 11000 } as const;
+
+/** The troposphere formula itself, in geopotential metres; callers check the range. */
+function troposphere(geopotentialM: number): number {
+  return p0 * Math.pow(1 - (L * geopotentialM) / T0, EXPONENT);
+}
+
+/** The standard's H = r0·Z/(r0 + Z): geopotential from geometric altitude (eq. 19). */
+function geopotentialFromGeometric(elevationM: number): number {
+  return (r0 * elevationM) / (r0 + elevationM);
+}
+
 /**
  * Standard atmospheric pressure at a site elevation, Pa: U.S. Standard Atmosphere 1976, troposphere,
  * p = p0 · (1 − L·H/T0)^(g0·M/(R*·L))  (the standard's eq. 33a, written with L as a positive lapse rate).
@@ -55,7 +68,7 @@ const EXPONENT = (g0 * M) / (R * L);
  * The input is geometric elevation (what a map, a survey or GPS gives, metres above mean sea level).
  * The formula is written in geopotential altitude H, so the elevation Z is converted first by the
  * standard's H = r0·Z/(r0 + Z). The difference is small (1.7 Pa at 1 000 m) but converting keeps the
- * result on the standard's published geometric-altitude table.
+ * result on the standard's geometric-altitude table, which is the one a site elevation is looked up in.
  *
  * This is the standard atmosphere, not today's weather: the real pressure at a site moves by about
  * ±3 kPa. Use a measured barometric (station, not sea-level-reduced) pressure where there is one.
@@ -68,8 +81,22 @@ export function atmosphereFromElevation(elevationM: number): number {
   if (elevationM < ELEVATION_RANGE_M.min || elevationM > ELEVATION_RANGE_M.max) {
     throw new InputError(field, 'out-of-range', elevationM, { ...ELEVATION_RANGE_M, unit: 'm' });
   }
-  const geopotentialM = (r0 * elevationM) / (r0 + elevationM);
-  return p0 * Math.pow(1 - (L * geopotentialM) / T0, EXPONENT);
+  return troposphere(geopotentialFromGeometric(elevationM));
+}
+
+/**
+ * Standard atmospheric pressure at a geopotential altitude, Pa (the same formula without the
+ * geometric-to-geopotential step; the standard's layer table is in geopotential metres).
+ * @param geopotentialM geopotential altitude, −500 m' to 11 000 m' (the top of the troposphere).
+ * @throws InputError 'not-a-number' or 'out-of-range' naming "geopotential altitude".
+ */
+export function atmosphereFromGeopotentialAltitude(geopotentialM: number): number {
+  const field = 'geopotential altitude';
+  requireFinite(field, geopotentialM);
+  if (geopotentialM < GEOPOTENTIAL_ALTITUDE_RANGE_M.min || geopotentialM > GEOPOTENTIAL_ALTITUDE_RANGE_M.max) {
+    throw new InputError(field, 'out-of-range', geopotentialM, { ...GEOPOTENTIAL_ALTITUDE_RANGE_M, unit: 'm' });
+  }
+  return troposphere(geopotentialM);
 }
 
 /**
@@ -81,8 +108,8 @@ export function atmosphereFromElevation(elevationM: number): number {
 export function elevationFromAtmosphere(atmospherePa: number): number {
   const field = 'atmospheric pressure';
   requireFinite(field, atmospherePa);
-  const min = atmosphereFromElevation(ELEVATION_RANGE_M.max);
-  const max = atmosphereFromElevation(ELEVATION_RANGE_M.min);
+  const min = troposphere(geopotentialFromGeometric(ELEVATION_RANGE_M.max));
+  const max = troposphere(geopotentialFromGeometric(ELEVATION_RANGE_M.min));
   if (atmospherePa < min || atmospherePa > max) {
     throw new InputError(field, 'out-of-range', atmospherePa, { min, max, unit: 'Pa' });
   }

@@ -53,9 +53,11 @@ export function parseDecimal(text: string, field: string, options: ParseDecimalO
   const hint = options.decimalSeparator;
   const trimmed = text.trim();
   if (trimmed === '') throw new InputError(field, 'empty', text);
+  // Messages quote what was typed, cut short if someone pasted a paragraph.
+  const shown = trimmed.length > 40 ? `${trimmed.slice(0, 37)}…` : trimmed;
 
   function refuse(why: string): never {
-    throw new InputError(field, 'not-a-number', text, undefined, `${field}: "${text}" is not a number: ${why}.`);
+    throw new InputError(field, 'not-a-number', text, undefined, `${field}: "${shown}" is not a number: ${why}.`);
   }
 
   let sign = 1;
@@ -71,8 +73,10 @@ export function parseDecimal(text: string, field: string, options: ParseDecimalO
   const digits: string[] = [];
   const seps: Separator[] = [];
   let run = '';
-  for (let i = 0; i < body.length; i++) {
-    const ch = body[i] ?? '';
+  // By code point, so that an emoji or other astral character is quoted whole in the message.
+  const chars = Array.from(body);
+  for (let i = 0; i < chars.length; i++) {
+    const ch = chars[i] ?? '';
     if (ch >= '0' && ch <= '9') {
       run += ch;
       continue;
@@ -110,11 +114,12 @@ export function parseDecimal(text: string, field: string, options: ParseDecimalO
     const couldBeGrouping = spaces === 0 && after.length === 3 && isFirstGroup(before) && seps.length === 1;
     if (!couldBeGrouping) decimal = only;
     else if (hint === undefined) {
-      const asDecimal = `${before}.${after}`;
-      const asGrouping = `${before}${after}`;
+      const minus = sign < 0 ? '\u2212' : '';
+      const asDecimal = minus + String(Number(`${before}.${after}`));
+      const asGrouping = `${minus}${before}${after}`;
       throw new InputError(field, 'not-a-number', text, undefined,
-        `${field}: "${text}" could mean ${stripZeros(asDecimal)} or ${asGrouping}. ` +
-          `Type it without a thousands separator (${asGrouping}), or with more or fewer decimals.`);
+        `${field}: "${shown}" could mean ${asDecimal} or ${asGrouping}. ` +
+          `Type "${asGrouping}" for the whole number, or "${minus}${before}${only}${after}0" for the decimal.`);
     } else decimal = hint === only ? only : null;
   }
 
@@ -157,6 +162,3 @@ function isFirstGroup(run: string): boolean {
   return run.length >= 1 && run.length <= 3 && run[0] !== '0';
 }
 
-function stripZeros(decimalText: string): string {
-  return String(Number(decimalText));
-}

@@ -2,7 +2,8 @@
 import { useEffect, useState } from 'preact/hooks';
 import * as repo from '../state/repo.ts';
 import { updateSettings, useSettings } from '../state/app-state.ts';
-import { isoWithOffset, shortTime } from '../state/format.ts';
+import { shortTime } from '../state/format.ts';
+import { formatIsoWithOffset } from '../../store/index.ts';
 
 export function BackupPanel() {
   const s = useSettings();
@@ -18,7 +19,7 @@ export function BackupPanel() {
       a.download = file.name;
       a.click();
       setTimeout(() => URL.revokeObjectURL(url), 10_000);
-      await updateSettings({ lastBackup: isoWithOffset(new Date()) });
+      await updateSettings({ lastBackup: formatIsoWithOffset(new Date()) });
       setMessage(`Exported ${file.name}. Keep it somewhere other than this phone.`);
     } catch (e) {
       setMessage(`Export failed: ${repo.storageMessage(e)}`);

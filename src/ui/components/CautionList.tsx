@@ -1,11 +1,13 @@
 // Cautions with their ISO 3864 / ANSI Z535 signal words, most severe first.
 import type { StoredCaution as Caution } from '../../store/index.ts';
 
+const STANDING_RULE = 'standing-note';
 const ORDER = { DANGER: 0, WARNING: 1, CAUTION: 2, NOTICE: 3 } as const;
 
 export function CautionList({ cautions }: { cautions: readonly Caution[] }) {
-  if (cautions.length === 0) return <p>No cautions apply to these inputs.</p>;
-  const sorted = [...cautions].sort((a, b) => ORDER[a.signal] - ORDER[b.signal]);
+  // The standing note is shown on its own beside every result.
+  const sorted = cautions.filter((c) => c.rule !== STANDING_RULE).sort((a, b) => ORDER[a.signal] - ORDER[b.signal]);
+  if (sorted.length === 0) return <p>No cautions apply to these inputs.</p>;
   return (
     <ul class="cautions" aria-label="Cautions">
       {sorted.map((c) => (

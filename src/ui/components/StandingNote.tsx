@@ -1,9 +1,6 @@
-// Shown with every result: the app informs, it does not decide.
+// Shown with every result: the app informs, it does not decide. The wording is the core's.
+import { STANDING_NOTE } from '../../core/index.ts';
+
 export function StandingNote() {
-  return (
-    <p class="standing-note">
-      These figures support, and never replace, the vessel's inspection regime, local codes and
-      licensed practice. If a figure looks wrong, stop and ask the person responsible for the vessel.
-    </p>
-  );
+  return <p class="standing-note"><span class="signal signal-NOTICE">NOTICE</span> {STANDING_NOTE.message}</p>;
 }

@@ -11,7 +11,7 @@ export function VesselList({ vessels, empty }: { vessels: readonly VesselRecord[
         <li key={v.id}>
           <a class="button list-button" href={hrefFor('vessels', v.id)}>
             <strong>{v.tag}{v.retired ? ' (retired)' : ''}</strong>
-            {isDemoVessel(v) ? <span class="demo-tag">DEMO DATA</span> : null} {v.description}
+            {isDemoVessel(v) ? <span class="demo-tag">DEMO DATA</span> : null} {v.description.replace(/^DEMO DATA: /, '')}
           </a>
         </li>
       ))}

@@ -9,6 +9,8 @@ export interface SketchData {
   low: number;
   high: number;
   caption: string;
+  /** What the percentage is of: 'of inside height' or 'of the volume'. */
+  note: string;
 }
 
 export function VesselSketch({ data }: { data: SketchData }) {
@@ -30,7 +32,7 @@ export function VesselSketch({ data }: { data: SketchData }) {
       </g>
       <line class="svg-level" x1={x0 - 8} x2={x0 + w + 8} y1={yAt(data.level)} y2={yAt(data.level)} />
       <rect class="svg-shell" x={x0} y={y0} width={w} height={h} rx={r} ry={vertical ? 40 : r} fill-opacity="0" />
-      <text class="svg-text" x={W / 2} y={H - 4} text-anchor="middle">{Math.round(data.level * 100)} % of inside height</text>
+      <text class="svg-text" x={W / 2} y={H - 4} text-anchor="middle">{Math.round(data.level * 100)} % {data.note}</text>
     </svg>
   );
 }

@@ -13,6 +13,7 @@ import { CHECK_DRAFT_KEY, emptyCheckDraft } from '../state/check-draft.ts';
 import { evaluateDraft } from '../state/check-session.ts';
 import { siteAtmosphere } from '../state/atmosphere.ts';
 import { unitsInForce } from '../state/settings-model.ts';
+import { hrefFor } from '../router.ts';
 
 export function CheckScreen() {
   const settings = useSettings();
@@ -22,11 +23,14 @@ export function CheckScreen() {
   const d = draft.value;
   const vessel = vessels.find((v) => v.id === d.vesselId && !v.retired);
   const atm = siteAtmosphere(settings.atmosphere);
-  const evaluation = useMemo(() => evaluateDraft(d, vessel, atm, prefs), [d, vessel, settings]);
+  const measured = settings.atmosphere.mode === 'barometer' && atm.ok ? atm.pressurePa : undefined;
+  const evaluation = useMemo(() => evaluateDraft(d, vessel, measured, prefs), [d, vessel, settings]);
   return (
     <div>
       <VesselPicker vessels={vessels} value={d.vesselId} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
-      <AtmosphereLine atm={atm} />
+      {settings.atmosphere.mode === 'barometer' ? <AtmosphereLine atm={atm} /> : (
+        <p class="hint">Gauge readings are referred to the vessel's own site atmosphere. Enter today's barometer reading in <a href={hrefFor('settings')}>Settings</a> to use it instead.</p>
+      )}
       <ReadingInputs draft={d} onChange={draft.set} errors={evaluation.kind === 'input-error' ? evaluation.errors : {}} />
       <div aria-live="polite" aria-atomic="true" class="field">
         {evaluation.kind === 'result' ? <p class="visually-hidden">{evaluation.view.verdict.text}</p> : null}

@@ -5,6 +5,7 @@ import * as repo from './repo.ts';
 import type { VesselRecord } from './repo.ts';
 import { shared, useShared } from './observable.ts';
 import { DEFAULT_SETTINGS, type AppSettings } from './settings-model.ts';
+import { setDecimalSeparator } from './format.ts';
 
 const settingsState = shared<AppSettings>(DEFAULT_SETTINGS);
 const vesselsState = shared<readonly VesselRecord[]>([]);
@@ -13,7 +14,7 @@ const saveErrorState = shared<string>('');
 /** Loads what every screen needs; call once before the first render. */
 export async function loadAppState(): Promise<void> {
   const [settings, vessels] = await Promise.all([repo.loadSettings(), repo.listVessels()]);
-  settingsState.set({ ...DEFAULT_SETTINGS, ...settings });
+  applySettings({ ...DEFAULT_SETTINGS, ...settings });
   vesselsState.set(vessels);
 }
 
@@ -37,7 +38,7 @@ export function reportSaveError(message: string): void {
 /** Applies a change to the settings and stores it. */
 export async function updateSettings(change: Partial<AppSettings>): Promise<void> {
   const next = { ...settingsState.get(), ...change };
-  settingsState.set(next);
+  applySettings(next);
   try {
     await repo.saveSettings(next);
     saveErrorState.set('');
@@ -48,4 +49,9 @@ export async function updateSettings(change: Partial<AppSettings>): Promise<void
 
 export async function refreshVessels(): Promise<void> {
   vesselsState.set(await repo.listVessels());
+}
+
+function applySettings(s: AppSettings): void {
+  setDecimalSeparator(s.decimalSeparator);
+  settingsState.set(s);
 }

@@ -1,10 +1,10 @@
 // The site's atmospheric pressure, from the settings record, for gauge ↔ absolute conversions.
+import { readNumber } from './format.ts';
 import {
   InputError,
   ATMOSPHERE_RANGE_PA,
   STANDARD_ATMOSPHERE_PA,
   atmosphereFromElevation,
-  parseDecimal,
   pressureToPa,
 } from '../../core/index.ts';
 import type { SiteAtmosphere } from './settings-model.ts';
@@ -20,13 +20,13 @@ export function siteAtmosphere(a: SiteAtmosphere): AtmosphereResult {
       case 'standard':
         return { ok: true, pressurePa: STANDARD_ATMOSPHERE_PA, source: 'standard atmosphere (101.325 kPa)' };
       case 'barometer': {
-        const pa = pressureToPa(parseDecimal(a.text, 'barometer reading'), a.unit);
+        const pa = pressureToPa(readNumber(a.text, 'barometer reading'), a.unit);
         const { min, max } = ATMOSPHERE_RANGE_PA;
         if (!(pa >= min && pa <= max)) throw new InputError('barometer reading', 'out-of-range', a.text, { min, max, unit: 'Pa' });
         return { ok: true, pressurePa: pa, source: `barometer reading ${a.text} ${a.unit}` };
       }
       case 'elevation': {
-        const m = parseDecimal(a.text, 'elevation');
+        const m = readNumber(a.text, 'elevation');
         return { ok: true, pressurePa: atmosphereFromElevation(m), source: `elevation ${a.text} m` };
       }
     }

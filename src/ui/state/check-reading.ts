@@ -1,5 +1,6 @@
 // The check entry as typed → the engine's Reading (SI). Each field's parse error names the field.
-import { massToKg, parseDecimal, pressureToPa, temperatureToK } from '../../core/index.ts';
+import { readNumber } from './format.ts';
+import { massToKg, pressureToPa, temperatureToK } from '../../core/index.ts';
 import type { Reading } from '../../core/check/reading.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { messageOf } from './atmosphere.ts';
@@ -24,7 +25,7 @@ export function readingFromDraft(d: CheckDraft, measuredAtmospherePa: number | u
   const errors: Partial<Record<ReadingField, string>> = {};
   const read = (field: ReadingField, words: string, text: string, convert: (n: number) => number): number => {
     if (text.trim() === '') return NaN;
-    try { return convert(parseDecimal(text, words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
+    try { return convert(readNumber(text, words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
   };
   const temperatureK = read('temperature', 'temperature', d.temperature.text, (n) => temperatureToK(n, d.temperature.unit));
   const pressurePa = read('pressure', 'pressure', d.pressure.text, (n) => pressureToPa(n, d.pressure.unit));

@@ -1,10 +1,10 @@
 // Convert screen logic: one pressure in every unit (gauge and absolute at the site atmosphere),
 // and temperature ↔ saturation pressure. All arithmetic goes through the core.
+import { readNumber } from './format.ts';
 import {
   PRESSURE_UNITS,
   absoluteFromGauge,
   gaugeFromAbsolute,
-  parseDecimal,
   pressureFromPa,
   pressureToPa,
   saturationPressure,
@@ -25,7 +25,7 @@ export type PressureTable = { ok: true; rows: PressureRow[] } | { ok: false; err
 export function pressureInAllUnits(text: string, unit: PressureUnit, kind: PressureKind, atmospherePa: number): PressureTable {
   if (text.trim() === '') return { ok: 'empty' };
   try {
-    const entered = pressureToPa(parseDecimal(text, 'pressure'), unit);
+    const entered = pressureToPa(readNumber(text, 'pressure'), unit);
     const absolutePa = kind === 'absolute' ? entered : absoluteFromGauge(entered, atmospherePa);
     const gaugePa = gaugeFromAbsolute(absolutePa, atmospherePa);
     const rows = PRESSURE_UNITS.map((u) => ({
@@ -51,7 +51,7 @@ export function saturationFromTemperature(
 ): SaturationAnswer {
   if (text.trim() === '') return { ok: 'empty' };
   try {
-    const T = temperatureToK(parseDecimal(text, 'temperature'), tUnit);
+    const T = temperatureToK(readNumber(text, 'temperature'), tUnit);
     const p = saturationPressure(T);
     return {
       ok: true,
@@ -70,7 +70,7 @@ export function saturationFromPressure(
 ): SaturationAnswer {
   if (text.trim() === '') return { ok: 'empty' };
   try {
-    const entered = pressureToPa(parseDecimal(text, 'pressure'), pUnit);
+    const entered = pressureToPa(readNumber(text, 'pressure'), pUnit);
     const p = kind === 'absolute' ? entered : absoluteFromGauge(entered, atmospherePa);
     const T = saturationTemperature(p);
     return {

@@ -1,27 +1,37 @@
-// Display formatting only: numbers for people, never fed back into a calculation.
+// Reading and showing numbers at the UI's edge, with the person's decimal separator. The parsing
+// and formatting rules are the core's; this module only supplies the separator setting.
+import { formatNumber as coreFormat, parseDecimal, type DecimalSeparator } from '../../core/index.ts';
 
-import { formatNumber as coreFormat } from '../../core/index.ts';
+let separator: DecimalSeparator = '.';
+
+/** The separator of the device's locale, the default until the person picks one. */
+export function localeDecimalSeparator(): DecimalSeparator {
+  const part = new Intl.NumberFormat().formatToParts(1.5).find((p) => p.type === 'decimal');
+  return part?.value === ',' ? ',' : '.';
+}
+
+export function setDecimalSeparator(s: DecimalSeparator): void {
+  separator = s;
+}
+
+/** What a person typed → one finite number; InputError naming `field` otherwise. */
+export function readNumber(text: string, field: string): number {
+  return parseDecimal(text, field, { decimalSeparator: separator });
+}
 
 /** A number to `significant` digits for display; a non-finite value shows as a dash. */
 export function formatNumber(value: number, significant = 4): string {
-  return coreFormat(value, { significant });
+  return coreFormat(value, { significant, decimalSeparator: separator });
+}
+
+/** A number with a fixed number of decimals. */
+export function formatFixed(value: number, decimals: number): string {
+  return coreFormat(value, { decimals, decimalSeparator: separator });
 }
 
 /** A value with its ± band, e.g. "412.3 ± 1.2". */
 export function formatWithBand(value: number, band: number, significant = 4): string {
   return `${formatNumber(value, significant)} ± ${formatNumber(Math.abs(band), 2)}`;
-}
-
-/** ISO 8601 local time with offset, e.g. 2026-12-01T14:05:00+01:00 (the form the log stores). */
-export function isoWithOffset(date: Date): string {
-  const pad = (n: number) => String(Math.trunc(Math.abs(n))).padStart(2, '0');
-  const offsetMin = -date.getTimezoneOffset();
-  const sign = offsetMin >= 0 ? '+' : '-';
-  return (
-    `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}` +
-    `T${pad(date.getHours())}:${pad(date.getMinutes())}:${pad(date.getSeconds())}` +
-    `${sign}${pad(offsetMin / 60)}:${pad(offsetMin % 60)}`
-  );
 }
 
 /** A stored ISO 8601 time shown briefly, e.g. "2026-12-01 14:05". */

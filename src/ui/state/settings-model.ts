@@ -1,5 +1,6 @@
 // The app's own settings (stored through the store's settings functions as one record).
-import { formatNumber, parseDecimal, pressureFromPa, pressureToPa } from '../../core/index.ts';
+import { formatNumber, localeDecimalSeparator, readNumber } from './format.ts';
+import { pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/index.ts';
 import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
 
 export type UnitSystem = 'SI' | 'US' | 'custom';
@@ -22,6 +23,8 @@ export interface AppSettings {
   unitSystem: UnitSystem;
   units: UnitPrefs;
   atmosphere: SiteAtmosphere;
+  /** How numbers are typed and shown: decimal point or decimal comma. */
+  decimalSeparator: DecimalSeparator;
   /** ISO 8601 time of the last export the person made, if any. */
   lastBackup?: string;
 }
@@ -36,6 +39,7 @@ export const DEFAULT_SETTINGS: AppSettings = {
   unitSystem: 'SI',
   units: UNIT_PRESETS.SI,
   atmosphere: { mode: 'standard' },
+  decimalSeparator: typeof Intl === 'undefined' ? '.' : localeDecimalSeparator(),
 };
 
 /** The unit set in force for a settings record. */
@@ -49,10 +53,10 @@ export function atmosphereDefaults(s: AppSettings, u: UnitPrefs): { elevationM?:
   if (a.mode === 'elevation') return { elevationM: a.text };
   if (a.mode === 'barometer') {
     try {
-      return { pressureText: formatNumber(pressureFromPa(pressureToPa(parseDecimal(a.text, 'barometer reading'), a.unit), u.pressure), { significant: 6 }) };
+      return { pressureText: formatNumber(pressureFromPa(pressureToPa(readNumber(a.text, 'barometer reading'), a.unit), u.pressure), 6) };
     } catch {
       return {};
     }
   }
-  return { pressureText: formatNumber(pressureFromPa(101_325, u.pressure), { significant: 6 }) };
+  return { pressureText: formatNumber(pressureFromPa(101_325, u.pressure), 6) };
 }

@@ -2,12 +2,12 @@
 // conversion go through the core, and the engine's own validateVessel has the last word; every
 // refused field gets its own message.
 import {
-  InputError, massFromKg, massToKg, parseDecimal, pressureFromPa, pressureToPa, temperatureDifferenceFromK,
+  InputError, massFromKg, massToKg, pressureFromPa, pressureToPa, temperatureDifferenceFromK,
   temperatureDifferenceToK, temperatureFromK, temperatureToK, volumeFromM3, volumeToM3, atmosphereFromElevation,
 } from '../../core/index.ts';
 import type { HeadSpec, VesselGeometry } from '../../core/check/vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
-import { formatNumber } from './format.ts';
+import { formatNumber, readNumber } from './format.ts';
 import type { UnitPrefs } from './settings-model.ts';
 import type { FormField, VesselForm } from './vessel-form.ts';
 import { messageOf } from './atmosphere.ts';
@@ -32,7 +32,7 @@ const ENGINE_FIELDS: Record<string, FormField> = {
 export function specFromForm(f: VesselForm): SpecResult {
   const errors: Partial<Record<FormField, string>> = {};
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
-    try { return convert(parseDecimal(f[field], words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
+    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
   };
   const geometry: VesselGeometry = f.shape === 'stated-volume'
     ? { shape: 'stated-volume', volumeM3: read('volume', 'internal volume', (v) => volumeToM3(v, f.volumeUnit)) }

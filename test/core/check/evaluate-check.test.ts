@@ -65,6 +65,39 @@ describe('evaluateCheck', () => {
     expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'gross', grossKg: 100 } }))).toThrow(/gross weight/);
     expect(() => evaluateCheck(testVessel(), reading({ temperatureK: 200 }))).toThrow(/temperature/);
   });
+  it('over random cylinder vessels, quality and masses match a recomputation here from saturation values (field-practice.md §9; fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom('vertical-cylinder' as const, 'horizontal-cylinder' as const),
+        fc.constantFrom({ kind: 'flat' as const }, { kind: 'semi-ellipsoidal-2-1' as const }, { kind: 'hemispherical' as const }, { kind: 'torispherical' as const }),
+        fc.double({ min: 0.3, max: 3, noNaN: true }),
+        fc.double({ min: 0.1, max: 8, noNaN: true }),
+        fc.double({ min: 290, max: 600, noNaN: true }),
+        fc.double({ min: 0.0005, max: 0.9995, noNaN: true }),
+        (shape, head, D, Lc, T, x) => {
+          const vessel = testVessel({ geometry: { shape, innerDiameterM: D, straightLengthM: Lc, head } });
+          const s = saturation(T);
+          const R = D / 2;
+          // Independent volume: cylinder + two heads from the closed forms of field-practice.md §5.1.
+          const headV = head.kind === 'flat' ? 0 : head.kind === 'hemispherical' ? (Math.PI * D ** 3) / 12
+            : head.kind === 'semi-ellipsoidal-2-1' ? (Math.PI * D ** 3) / 24 : null;
+          const r = evaluateCheck(vessel, reading({ temperatureK: T, pressure: { reference: 'absolute', pressurePa: s.p }, weight: { kind: 'net', netKg: 1 } }));
+          const V = r.internalVolumeM3;
+          if (headV !== null) expect(V / (Math.PI * R * R * Lc + 2 * headV)).toBeCloseTo(1, 10);
+          const m = V / (s.liquid.v + x * (s.vapor.v - s.liquid.v));
+          const e = evaluateCheck(vessel, reading({ temperatureK: T, pressure: { reference: 'absolute', pressurePa: s.p }, weight: { kind: 'net', netKg: m } }));
+          expect(e.inventory.regime).toBe('two-phase');
+          if (e.inventory.regime !== 'two-phase') return;
+          const mg = ((V / m - s.liquid.v) / (s.vapor.v - s.liquid.v)) * m;
+          expect(e.inventory.vaporMassKg / mg).toBeCloseTo(1, 8);
+          expect(e.inventory.liquidMassKg + e.inventory.vaporMassKg).toBeCloseTo(m, 8);
+          expect(e.inventory.liquidLevel!.levelFraction).toBeGreaterThanOrEqual(0);
+          expect(e.inventory.liquidLevel!.levelFraction).toBeLessThanOrEqual(1);
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
   it('results are plain serialisable data without NaN over random valid readings (fast-check)', () => {
     fc.assert(
       fc.property(
@@ -86,5 +119,32 @@ describe('evaluateCheck', () => {
       ),
       { numRuns: 150 },
     );
+  });
+});
+
+describe('evaluateCheck, contents too light for the formulation', () => {
+  it('refuses a net weight of micrograms naming the weight field', () => {
+    expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 1e-12 } }))).toThrow(/net weight/);
+  });
+});
+
+describe('every check rule is raised by its scenario', () => {
+  const scenarios: [string, Parameters<typeof testVessel>[0], Partial<Reading>][] = [
+    ['pressure-below-saturation', {}, { pressure: { reference: 'absolute', pressurePa: 120e3 } }],
+    ['superheated-pressure-mismatch', {}, { temperatureK: 423.15, pressure: { reference: 'absolute', pressurePa: 300e3 }, weight: { kind: 'net', netKg: 1 } }],
+    ['quality-band-reaches-liquid-full', {}, { weight: { kind: 'net', netKg: 3610 } }],
+    ['above-design-temperature', { designTemperatureK: 373.15 }, {}],
+    ['pressure-near-relief-set', {}, { temperatureK: 451, pressure: { reference: 'gauge', pressurePa: 0.85e6 }, weight: { kind: 'net', netKg: 200 } }],
+    ['atmosphere-assumed', {}, {}],
+  ];
+  for (const [rule, vesselOver, readingOver] of scenarios) {
+    it(rule, () => {
+      const r = evaluateCheck(testVessel(vesselOver), reading(readingOver));
+      expect(r.cautions.map((c) => c.rule)).toContain(rule);
+    });
+  }
+  it('a measured barometer removes the atmosphere-assumed notice', () => {
+    const r = evaluateCheck(testVessel(), reading({ atmospherePa: 101325 }));
+    expect(r.cautions.map((c) => c.rule)).not.toContain('atmosphere-assumed');
   });
 });

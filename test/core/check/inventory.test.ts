@@ -23,12 +23,23 @@ const stated = (volumeM3: number): VesselGeometry => ({ shape: 'stated-volume', 
 const example: VesselGeometry = { shape: 'horizontal-cylinder', innerDiameterM: 1.2, straightLengthM: 3, head: { kind: 'semi-ellipsoidal-2-1' } };
 
 describe('inventory, textbook rigid tanks', () => {
-  it('10 kg of water at 90 °C, 8 kg liquid: V = 4.73 m³ (Çengel & Boles, Thermodynamics: An Engineering Approach, ch. 3 worked example; from memory)', () => {
+  it('10 kg of water at 90 °C, 8 kg liquid: V = 4.73 m³, p = 70.183 kPa (Çengel & Boles, Thermodynamics: An Engineering Approach, ch. 3 worked example; from memory, its table values v_f 0.001036, v_g 2.3593 m³/kg corroborated by a Q&A page quoting the 5th edition)', () => {
     // Forward: the book's tank volume with its 10 kg gives back 8 kg of liquid and x = 0.2.
     const inv = twoPhase(inventory(stated(4.73), 10, 363.15));
     expect(inv.liquidMassKg).toBeCloseTo(8, 1);
     expect(inv.quality).toBeCloseTo(0.2, 2);
     expect(inv.saturationPressurePa / 1000).toBeCloseTo(70.18, 1);
+  });
+  it('22 kg of water at 127 °C, 9 kg liquid: V = 9.449 m³, p = 246.878 kPa (rigid-tank textbook exercise, answer worked on a Q&A page with steam-table v_f 0.00106683, v_g 0.72721 m³/kg)', () => {
+    const inv = twoPhase(inventory(stated(9.449), 22, 400.15));
+    expect(inv.liquidMassKg).toBeCloseTo(9, 1);
+    expect(inv.saturationPressurePa / 1000).toBeCloseTo(246.88, 0);
+  });
+  it('1.8 m³ at 220 °C, one third liquid by volume: 518.1 kg, x = 0.0269, p = 2320 kPa (Çengel & Boles, ch. 3 end-of-chapter problem, from memory; answer worked on a Q&A page with v_f 0.001190, v_g 0.08609 m³/kg)', () => {
+    const inv = twoPhase(inventory(stated(1.8), 518.1, 493.15));
+    expect(inv.quality).toBeCloseTo(0.0269, 3);
+    expect(inv.vaporSpaceFraction).toBeCloseTo(2 / 3, 2);
+    expect(inv.saturationPressurePa / 1000).toBeCloseTo(2320, -1);
   });
   it('50 kg of saturated liquid at 90 °C fills 0.0518 m³ (Çengel & Boles, ch. 3 worked example; from memory)', () => {
     const inv = inventory(stated(0.0518), 50, 363.15);

@@ -44,6 +44,12 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
     expect(p.largestSafeCharge.waterMassKg).toBeCloseTo(881.667, 2);
     expect(saturation(p.largestSafeCharge.limitTemperatureK).liquid.v * p.largestSafeCharge.waterMassKg).toBeCloseTo(1, 9);
   });
+  it('1.8 m³ at 220 °C with two thirds vapor space needs 518.1 kg, x = 0.0269 (Çengel & Boles, ch. 3 end-of-chapter problem, from memory; answer on a Q&A page)', () => {
+    const v = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1.8 } });
+    const p = planFill(v, request({ targetTemperatureK: 493.15, target: { kind: 'vapor-space-fraction', fraction: 2 / 3 } }));
+    expect(p.waterMassKg).toBeCloseTo(518.1, 0);
+    expect(p.atTarget.quality).toBeCloseTo(0.0269, 3);
+  });
   it('a charge above the safe charge is a DANGER', () => {
     const p = planFill(oneCubicMetre, request({ target: { kind: 'quality', quality: 0 } }));
     expect(p.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'plan-exceeds-safe-charge' });
@@ -76,5 +82,27 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
         expect((e as InputError).field).toBe(field);
       }
     }
+  });
+});
+
+describe('every plan rule is raised by its scenario', () => {
+  it('plan-target-above-mawp', () => {
+    expect(planFill(oneCubicMetre, request({ targetTemperatureK: 460 })).cautions.map((c) => c.rule)).toContain('plan-target-above-mawp');
+  });
+  it('plan-above-design-temperature', () => {
+    const v = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1 }, designTemperatureK: 380 });
+    expect(planFill(v, request()).cautions.map((c) => c.rule)).toContain('plan-above-design-temperature');
+  });
+  it('plan-does-not-fit: saturated liquid at 7 °C charged at 0.01 °C, where water is less dense (density maximum near 4 °C, IF97)', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 280.15, startTemperatureK: 273.16, target: { kind: 'quality', quality: 0 } }));
+    expect(p.startState.regime).toBe('liquid-full');
+    expect(p.cautions[0]?.rule).toBe('plan-does-not-fit');
+  });
+  it('a charge planned at its target always fits when started warmer than 4 °C', () => {
+    const p = planFill(oneCubicMetre, request({ targetTemperatureK: 473.15, target: { kind: 'quality', quality: 0 } }));
+    expect(p.startState.regime).toBe('two-phase');
+  });
+  it('plan-assumes-air-removed is always there', () => {
+    expect(planFill(oneCubicMetre, request()).cautions.map((c) => c.rule)).toContain('plan-assumes-air-removed');
   });
 });

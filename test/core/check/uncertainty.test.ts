@@ -5,10 +5,12 @@ import { saturation } from '../../../src/core/steam/index.ts';
 import { testVessel } from './test-vessel.ts';
 
 describe('instrument tolerances', () => {
-  it('IEC 60751 at 121 °C: AA ±0.31, A ±0.39, B ±0.91 K (field-practice.md §3.2, computed there)', () => {
-    expect(temperatureToleranceK({ kind: 'iec-60751', sensorClass: 'AA' }, 394.15)).toBeCloseTo(0.31, 2);
-    expect(temperatureToleranceK({ kind: 'iec-60751', sensorClass: 'A' }, 394.15)).toBeCloseTo(0.39, 2);
-    expect(temperatureToleranceK({ kind: 'iec-60751', sensorClass: 'B' }, 394.15)).toBeCloseTo(0.91, 2);
+  it('IEC 60751 at 121 °C: AA ±0.31, A ±0.39, B ±0.91 K (field-practice.md §3.2, rounded there; exact 0.3057 / 0.392 / 0.905)', () => {
+    const at121 = (sensorClass: 'AA' | 'A' | 'B') => temperatureToleranceK({ kind: 'iec-60751', sensorClass }, 394.15);
+    expect(at121('AA')).toBeCloseTo(0.1 + 0.0017 * 121, 12);
+    expect(at121('A')).toBeCloseTo(0.15 + 0.002 * 121, 12);
+    expect(at121('B')).toBeCloseTo(0.3 + 0.005 * 121, 12);
+    for (const [c, rounded] of [['AA', 0.31], ['A', 0.39], ['B', 0.91]] as const) expect(Math.abs(at121(c) - rounded)).toBeLessThan(0.006);
   });
   it('a stated tolerance is used as given', () => {
     expect(temperatureToleranceK({ kind: 'stated', toleranceK: 0.7 }, 400)).toBe(0.7);

@@ -1,0 +1,183 @@
+// Densities for region 3, whose basic equation, Eq. (28), gives p(ρ, T): the saturated liquid
+// and vapor densities at p_s(T) for 623.15 K < T ≤ Tc, and the density at a given (T, p).
+//
+// Route (documented because libraries differ near Tc): both saturated phases are roots of
+// Eq. (28) at p = p_s(T) from Eq. (30), iterated until |p − p_s| ≤ 1e-13·p_s. Starting values
+// come from the IAPWS SR1-86(1992) auxiliary equations for saturated densities (an IAPWS-95
+// fit, only a starting point; it sits a little outside IF97's dome near Tc, which is where
+// Newton's method on the outer branches converges without overshooting). The SR5-05 backward
+// equations are not used. Within about 2e-5 K of Tc, Eq. (28) has only one root at p_s(T)
+// (IF97's region 3 and Eq. (30) meet the critical point only to within their tolerances);
+// there both phases are that one root, so v_f = v_g.
+import { IF97 } from './constants.ts';
+import { P3, region3Pressure } from './region3.ts';
+import { saturationPressureUnchecked } from './saturation-line.ts';
+import { solveBracketed } from './solvers.ts';
+
+/**
+ * IAPWS SR1-86(1992), Revised Supplementary Release on Saturation Properties of Ordinary Water
+ * Substance, Eq. (2) saturated-liquid density b1 … b6 (exponents 1/3, 2/3, 5/3, 16/3, 43/3,
+ * 110/3 of θ = 1 − T/Tc) and Eq. (3) saturated-vapor density c1 … c6 (exponents 2/6, 4/6, 8/6,
+ * 18/6, 37/6, 71/6), dimensionless, ρ/ρc. Used only as starting values.
+ */
+const B = [1.99274064, 1.09965342, -0.510839303, -1.75493479, -45.5170352, -6.74694450e5] as const;
+const C = [-2.0315024, -2.6830294, -5.38626492, -17.2991605, -44.7586581, -63.9201063] as const;
+
+/** Starting value for the saturated-liquid density (kg/m³), SR1-86 Eq. (2). */
+function liquidDensityGuess(T: number): number {
+  const t = Math.cbrt(Math.max(0, 1 - T / IF97.Tc));
+  const t2 = t * t, t4 = t2 * t2, t5 = t4 * t, t16 = t4 * t4 * t4 * t4, t43 = t16 * t16 * t5 * t5 * t;
+  const t110 = t43 * t43 * t16 * t4 * t4;
+  return IF97.rhoc * (1 + B[0] * t + B[1] * t2 + B[2] * t5 + B[3] * t16 + B[4] * t43 + B[5] * t110);
+}
+
+/** Starting value for the saturated-vapor density (kg/m³), SR1-86 Eq. (3). */
+function vaporDensityGuess(T: number): number {
+  const t = Math.sqrt(Math.cbrt(Math.max(0, 1 - T / IF97.Tc))); // θ^(1/6)
+  const t2 = t * t, t4 = t2 * t2, t8 = t4 * t4, t18 = t8 * t8 * t2, t37 = t18 * t18 * t;
+  const t71 = t37 * t18 * t8 * t8;
+  return IF97.rhoc * Math.exp(C[0] * t2 + C[1] * t4 + C[2] * t8 + C[3] * t18 + C[4] * t37 + C[5] * t71);
+}
+
+const P_REL_TOL = 1e-13;
+
+/**
+ * Root of Eq. (28) at p = ps on the liquid (outward = larger ρ) or vapor branch, by Newton's
+ * method from the outside. Where the slope is not positive (inside the unstable part of the
+ * isotherm) it steps outward instead, so it can only settle on the outermost root.
+ */
+function outerRoot(T: number, ps: number, rho0: number, liquid: boolean): number {
+  const outward = liquid ? 1.002 : 1 / 1.002;
+  let rho = rho0;
+  for (let k = 0; k < 400; k++) {
+    region3Pressure(rho, T);
+    const f = (P3[0] as number) - ps;
+    const slope = P3[1] as number;
+    if (Math.abs(f) <= P_REL_TOL * ps) return rho;
+    if (!(slope > 0)) {
+      rho *= outward;
+      continue;
+    }
+    let next = rho - f / slope;
+    // Near Tc the slope can be tiny; never jump more than 5 % in one step.
+    if (next > rho * 1.05) next = rho * 1.05;
+    else if (next < rho / 1.05) next = rho / 1.05;
+    if (Math.abs(next - rho) <= 1e-15 * rho) return next;
+    rho = next;
+  }
+  return rho;
+}
+
+// One-entry cache: the check engine asks for the same temperature repeatedly.
+let cachedT = Number.NaN;
+let cachedLiquid = 0;
+let cachedVapor = 0;
+
+/** Scratch output of region3SaturatedDensities: [ρ_f, ρ_g] in kg/m³. */
+export const SAT3 = new Float64Array(2);
+
+/**
+ * Fills SAT3 with the saturated liquid and vapor densities from Eq. (28) at p_s(T), for
+ * 623.15 K < T ≤ 647.096 K (not range-checked). ρ_f ≥ ρ_g always.
+ */
+export function region3SaturatedDensities(T: number, ps: number): void {
+  if (T === cachedT) {
+    SAT3[0] = cachedLiquid;
+    SAT3[1] = cachedVapor;
+    return;
+  }
+  let rf = outerRoot(T, ps, liquidDensityGuess(T), true);
+  let rg = outerRoot(T, ps, vaporDensityGuess(T), false);
+  if (rf < rg) {
+    // Only possible where the two branches have merged into one root; both searches found it.
+    const mid = 0.5 * (rf + rg);
+    rf = mid;
+    rg = mid;
+  }
+  cachedT = T;
+  cachedLiquid = rf;
+  cachedVapor = rg;
+  SAT3[0] = rf;
+  SAT3[1] = rg;
+}
+
+// The (T, p) of the current solve, read by pressureResidual (module scope: no closure per call).
+let solveT = 0;
+let solvePressure = 0;
+function pressureResidual(rho: number, out: Float64Array): void {
+  region3Pressure(rho, solveT);
+  out[0] = (P3[0] as number) - solvePressure;
+  out[1] = P3[1] as number;
+}
+
+/**
+ * Density (kg/m³) at which Eq. (28) gives pressure p at temperature T, on the branch a
+ * single-phase region 3 state at (T, p) belongs to: liquid for p ≥ p_s(T) below Tc, vapor for
+ * p < p_s(T), the one branch at and above Tc. Converges to |Δp| ≤ 1e-13·p.
+ * @param T K, 623.15 < T ≤ 863.15 (not range-checked)
+ * @param p Pa, inside region 3 at T (not range-checked)
+ */
+export function region3DensityFromTP(T: number, p: number): number {
+  solveT = T;
+  solvePressure = p;
+  const fTol = P_REL_TOL * p;
+  let lo: number;
+  let hi: number;
+  let fLo: number;
+  let fHi: number;
+  if (T < IF97.Tc) {
+    const ps = saturationPressureUnchecked(T);
+    region3SaturatedDensities(T, ps);
+    if (p >= ps) {
+      // Liquid branch: from ρ_f outward until Eq. (28) passes p.
+      lo = SAT3[0] as number;
+      fLo = ps - p;
+      hi = lo;
+      fHi = fLo;
+      while (fHi < 0) {
+        hi *= 1.1;
+        region3Pressure(hi, T);
+        fHi = (P3[0] as number) - p;
+      }
+    } else {
+      hi = SAT3[1] as number;
+      fHi = ps - p;
+      lo = hi;
+      fLo = fHi;
+      while (fLo > 0) {
+        lo /= 1.1;
+        region3Pressure(lo, T);
+        fLo = (P3[0] as number) - p;
+      }
+    }
+  } else {
+    // At and above Tc the isotherm rises monotonically; bracket outward from ρc.
+    region3Pressure(IF97.rhoc, T);
+    const fc = (P3[0] as number) - p;
+    if (fc === 0) return IF97.rhoc;
+    lo = IF97.rhoc;
+    hi = IF97.rhoc;
+    fLo = fc;
+    fHi = fc;
+    if (fc < 0) {
+      while (fHi < 0) {
+        lo = hi;
+        fLo = fHi;
+        hi *= 1.1;
+        region3Pressure(hi, T);
+        fHi = (P3[0] as number) - p;
+      }
+    } else {
+      while (fLo > 0) {
+        hi = lo;
+        fHi = fLo;
+        lo /= 1.1;
+        region3Pressure(lo, T);
+        fLo = (P3[0] as number) - p;
+      }
+    }
+  }
+  // Start from the secant through the bracket; Newton does the rest.
+  const x0 = lo - (fLo * (hi - lo)) / (fHi - fLo);
+  return solveBracketed(pressureResidual, lo, fLo, hi, fHi, x0, fTol, 1e-15);
+}

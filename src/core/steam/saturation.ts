@@ -1,0 +1,36 @@
+// Saturated liquid and vapor at a temperature, over the whole saturation line.
+// 273.15 K … 623.15 K: region 1 (liquid) and region 2 (vapor) at p_s(T) from Eq. (30) — the
+// boundary ownership of IAPWS R7-97(2012), where both regions include 623.15 K.
+// 623.15 K … 647.096 K: both phases from region 3, Eq. (28), iterated to p_s(T) (see
+// region3-density.ts for the route and the last 2e-5 K below Tc).
+import { InputError } from '../errors.ts';
+import { IF97, T_13, T_MIN } from './constants.ts';
+import type { SaturationState } from './phase-state.ts';
+import { region1State } from './region1.ts';
+import { region2State } from './region2.ts';
+import { region3State } from './region3.ts';
+import { region3SaturatedDensities, SAT3 } from './region3-density.ts';
+import { saturationPressureUnchecked } from './saturation-line.ts';
+
+/**
+ * Saturated liquid and vapor at temperature T: `{ T, p, liquid, vapor }`, p = p_s(T) in Pa.
+ * @param T temperature, K; 273.15 ≤ T ≤ 647.096
+ * @throws InputError field 'temperature' when T is not finite or outside that range
+ */
+export function saturation(T: number): SaturationState {
+  if (!(T >= T_MIN && T <= IF97.Tc)) {
+    throw new InputError('temperature', Number.isFinite(T) ? 'out-of-range' : 'not-a-number', T,
+      { min: T_MIN, max: IF97.Tc, unit: 'K' });
+  }
+  return saturationUnchecked(T);
+}
+
+/** saturation(T) without the range check, for callers that have checked T. */
+export function saturationUnchecked(T: number): SaturationState {
+  const p = saturationPressureUnchecked(T);
+  if (T <= T_13) return { T, p, liquid: region1State(T, p), vapor: region2State(T, p) };
+  region3SaturatedDensities(T, p);
+  const rf = SAT3[0] as number;
+  const rg = SAT3[1] as number;
+  return { T, p, liquid: region3State(rf, T, p), vapor: region3State(rg, T, p) };
+}

@@ -1,0 +1,70 @@
+// One check from entry to log: the draft → Reading → evaluateCheck → what the screen shows, and
+// the record saved to the log. All computation is the core's.
+import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '../../core/index.ts';
+import type { Reading } from '../../core/index.ts';
+import type { CheckRecord, JsonObject, JsonValue, TypedInput, VesselRecord } from '../../store/index.ts';
+import * as repo from './repo.ts';
+import type { CheckDraft } from './check-draft.ts';
+import { readingFromDraft, type ReadingField } from './check-reading.ts';
+import { messageOf } from './atmosphere.ts';
+import { resultView, verdictText } from './result-text.ts';
+import type { ResultView } from './result-view.ts';
+import type { UnitPrefs } from './settings-model.ts';
+
+export type Evaluation =
+  | { kind: 'incomplete'; message: string }
+  | { kind: 'input-error'; errors: Partial<Record<ReadingField, string>>; general?: string }
+  | { kind: 'result'; view: ResultView; reading: Reading; result: CheckResult };
+
+const ENGINE_FIELDS: Record<string, ReadingField> = {
+  temperature: 'temperature', pressure: 'pressure', 'gross weight': 'gross', 'net weight': 'gross',
+};
+
+/** Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any. */
+export function evaluateDraft(
+  d: CheckDraft, vessel: VesselRecord | undefined, measuredAtmospherePa: number | undefined, prefs: UnitPrefs,
+): Evaluation {
+  if (!vessel) return { kind: 'incomplete', message: 'Choose a vessel to see the result.' };
+  const r = readingFromDraft(d, measuredAtmospherePa);
+  if (r.kind !== 'reading') return r;
+  const spec = vessel.spec as unknown as VesselSpec;
+  try {
+    const result = evaluateCheck(spec, r.reading);
+    return { kind: 'result', view: resultView(result, spec, prefs), reading: r.reading, result };
+  } catch (e) {
+    if (e instanceof InputError && ENGINE_FIELDS[e.field]) return { kind: 'input-error', errors: { [ENGINE_FIELDS[e.field]!]: e.message } };
+    return { kind: 'input-error', errors: {}, general: `No result: ${messageOf(e)}` };
+  }
+}
+
+/** Appends the check to the log; resolves once the store has committed it. */
+export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evaluation, { kind: 'result' }>): Promise<CheckRecord> {
+  const inputs: Record<string, TypedInput> = {
+    temperature: { text: d.temperature.text, unit: d.temperature.unit },
+    pressure: { text: d.pressure.text, unit: d.pressure.unit, reference: d.pressure.kind },
+  };
+  if (d.gross.text.trim() !== '') inputs.grossWeight = { text: d.gross.text, unit: d.gross.unit };
+  return repo.appendCheck({
+    vesselId: vessel.id,
+    technician: d.technician.trim(),
+    note: d.note,
+    takenAt: new Date(e.reading.time),
+    inputs,
+    reading: JSON.parse(JSON.stringify(e.reading)) as JsonObject,
+    result: JSON.parse(JSON.stringify(e.result)) as JsonValue,
+    cautions: e.result.cautions,
+    appVersion: __APP_VERSION__,
+    formulationId: e.result.formulationId,
+  });
+}
+
+/** The saved result as the screen shows it (from the stored result and vessel snapshot; nothing recomputed). */
+export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView {
+  return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+}
+
+/** A one-line verdict for the log list. */
+export function verdictOfRecord(r: CheckRecord): string {
+  const result = r.result as unknown as CheckResult;
+  return verdictText(result).text;
+}

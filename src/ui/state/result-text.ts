@@ -1,0 +1,143 @@
+// A CheckResult (SI) in words and preferred units for the result card. Values come from the
+// engine; this module converts units for display and picks the words.
+import {
+  MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, liquidLevelFromVolume, massFromKg, pressureFromPa,
+  temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM, vesselVolume,
+  type CheckResult, type VesselSpec,
+} from '../../core/index.ts';
+import { saturationChartData } from './chart-data.ts';
+import { formatNumber, formatWithBand } from './format.ts';
+import type { Figure, ResultView } from './result-view.ts';
+import type { SketchData } from '../components/VesselSketch.tsx';
+import type { UnitPrefs } from './settings-model.ts';
+
+const label = (list: readonly { id: string; label: string }[], id: string) => list.find((u) => u.id === id)?.label ?? id;
+
+function units(u: UnitPrefs) {
+  const pl = label(PRESSURE_UNITS, u.pressure), tl = label(TEMPERATURE_UNITS, u.temperature);
+  const ml = label(MASS_UNITS, u.mass), vl = label(VOLUME_UNITS, u.volume);
+  return {
+    p: (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 5)} ${pl}`,
+    pBand: (pa: number, band: number) => `${formatWithBand(pressureFromPa(pa, u.pressure), pressureFromPa(band, u.pressure), 5)} ${pl}`,
+    t: (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 5)} ${tl}`,
+    dt: (k: number, band: number) => `${formatWithBand(temperatureDifferenceFromK(k, u.temperature), temperatureDifferenceFromK(band, u.temperature), 3)} ${tl}`,
+    m: (kg: number) => `${formatNumber(massFromKg(kg, u.mass), 5)} ${ml}`,
+    mBand: (kg: number, band: number) => `${formatWithBand(massFromKg(kg, u.mass), massFromKg(band, u.mass), 5)} ${ml}`,
+    v: (m3: number) => `${formatNumber(volumeFromM3(m3, u.volume), 4)} ${vl}`,
+  };
+}
+
+/** The headline: does the gauge agree with the thermometer, and is anything at DANGER. */
+export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string } {
+  const danger = r.cautions.some((c) => c.signal === 'DANGER');
+  const v = r.saturation.verdict;
+  const words =
+    v.verdict === 'consistent' ? 'Gauge and thermometer agree for saturated steam (within the instrument band).'
+    : v.verdict === 'pressure-above-saturation' ? 'Pressure is above saturation for this temperature: air or other gas is likely present, or an instrument is off.'
+    : `Pressure is below saturation for this temperature: an instrument or the atmosphere is off, or the vessel is not at equilibrium${v.superheatPossible ? ', or the steam is superheated' : ''}.`;
+  return { tone: danger || v.verdict !== 'consistent' ? 'bad' : 'ok', text: danger ? `DANGER. ${words}` : words };
+}
+
+/** Everything the result card shows. */
+export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): ResultView {
+  const f = units(u);
+  const s = r.saturation;
+  const figures: Figure[] = [
+    { label: 'Absolute pressure', value: f.p(s.absolutePressurePa) },
+    { label: 'Saturation pressure at the temperature', value: f.p(s.saturationPressurePa) },
+    { label: 'Pressure minus saturation', value: f.pBand(s.pressureDeviationPa, s.pressureBand.plusMinus) },
+    { label: 'Saturation temperature at the pressure', value: f.t(s.saturationTemperatureK) },
+    { label: 'Temperature minus saturation', value: f.dt(s.temperatureDeviationK, s.temperatureBandK.plusMinus) },
+    { label: 'Atmosphere used', value: `${f.p(r.reading.atmospherePa)} (${r.reading.atmosphereSource === 'measured' ? 'barometer reading' : "vessel's site value"})` },
+  ];
+  if (s.verdict.verdict === 'pressure-above-saturation') {
+    const g = s.verdict.noncondensableGas;
+    figures.push({ label: 'Gas partial pressure (estimate)', value: `${f.p(g.partialPressurePa)}, ${formatNumber(g.moleFraction * 100, 3)} % by moles` });
+  }
+  const inv = r.inventory;
+  let sketch: SketchData | undefined;
+  const vertical = spec.geometry.shape !== 'horizontal-cylinder';
+  const orientation = vertical ? 'vertical' : 'horizontal';
+  switch (inv.regime) {
+    case 'not-weighed':
+      figures.push({ label: 'Contents', value: 'not weighed (enter the gross weight for mass, quality and level)' });
+      break;
+    case 'two-phase': {
+      const b = r.inventoryBands;
+      figures.push(
+        { label: 'Net contents', value: f.m(inv.netMassKg) },
+        { label: 'Quality (steam mass fraction)', value: b ? `${formatWithBand(inv.quality * 100, b.quality.plusMinus * 100, 3)} %` : `${formatNumber(inv.quality * 100, 3)} %` },
+        { label: 'Liquid mass', value: b ? f.mBand(inv.liquidMassKg, b.liquidMassKg.plusMinus) : f.m(inv.liquidMassKg) },
+        { label: 'Steam mass', value: f.m(inv.vaporMassKg) },
+        { label: 'Liquid volume', value: f.v(inv.liquidVolumeM3) },
+      );
+      const band = levelBand(spec, inv.liquidVolumeM3, b ? b.liquidMassKg.plusMinus * inv.liquidSpecificVolumeM3PerKg : 0);
+      if (inv.liquidLevel && band) {
+        figures.push({ label: 'Liquid level', value: `${formatWithBand(inv.liquidLevel.levelM * 1000, band.plusMinusM * 1000, 4)} mm (${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of inside height)` });
+        sketch = { orientation, level: inv.liquidLevel.levelFraction, low: band.low, high: band.high, caption: `Vessel sketch: liquid at ${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of the inside height`, note: 'of inside height' };
+      } else {
+        const share = 1 - inv.vaporSpaceFraction;
+        figures.push({ label: 'Liquid share of the volume', value: `${formatNumber(share * 100, 3)} % (no level: volume only)` });
+        sketch = { orientation, level: share, low: share, high: share, caption: `Vessel sketch: liquid is ${formatNumber(share * 100, 3)} % of the volume`, note: 'of the volume' };
+      }
+      break;
+    }
+    case 'liquid-full':
+      figures.push({ label: 'Contents', value: `${f.m(inv.netMassKg)}, liquid-full: no steam space` });
+      if (inv.hydraulic.withinFormulation) figures.push({ label: 'Hydraulic pressure of this fill', value: `${f.p(inv.hydraulic.gaugePressurePa)} gauge` });
+      sketch = { orientation, level: 1, low: 1, high: 1, caption: 'Vessel sketch: full of liquid', note: 'of inside height' };
+      break;
+    case 'superheated':
+      figures.push(
+        { label: 'Contents', value: `${f.m(inv.netMassKg)}, all steam (superheated)` },
+        { label: 'Pressure this mass gives', value: `${f.p(inv.absolutePressurePa)} absolute` },
+      );
+      sketch = { orientation, level: 0, low: 0, high: 0, caption: 'Vessel sketch: no liquid', note: 'of inside height' };
+      break;
+  }
+  const tolK = temperatureToleranceK(spec.instruments.temperatureSensor, r.reading.temperatureK);
+  const c = s.pressureBand.contributions;
+  return {
+    verdict: verdictText(r),
+    figures,
+    hazards: hazardLines(r, f),
+    cautions: r.cautions,
+    chart: saturationChartData({
+      temperatureK: r.reading.temperatureK, absolutePressurePa: s.absolutePressurePa,
+      temperatureTolK: tolK, pressureTolPa: Math.hypot(c.pressureGauge, c.atmosphere),
+    }, u),
+    sketch,
+  };
+}
+
+function hazardLines(r: CheckResult, f: ReturnType<typeof units>): string[] {
+  const h = r.hazards;
+  const out = [
+    `Margin to MAWP: ${f.p(h.mawpMargin.marginPa)} (at ${formatNumber(h.mawpMargin.fractionOfLimit * 100, 3)} % of MAWP).`,
+    `Margin to the relief set pressure: ${f.p(h.reliefSetMargin.marginPa)} (at ${formatNumber(h.reliefSetMargin.fractionOfLimit * 100, 3)} %).`,
+  ];
+  if (h.flash) {
+    out.push(`If liquid escapes, ${formatNumber(h.flash.flashFraction * 100, 3)} % of it flashes to steam (${formatNumber(h.flash.volumeRatio, 3)} times its volume)` +
+      (h.flash.totalFlashSteamVolumeM3 !== null ? `; all of it would make ${f.v(h.flash.totalFlashSteamVolumeM3)} of steam.` : '.'));
+  }
+  if (h.storedEnergy) out.push(`Stored expansion energy ${formatNumber(h.storedEnergy.expansionWorkJ / 1e6, 3)} MJ (about ${formatNumber(h.storedEnergy.tntEquivalentKg, 2)} kg TNT equivalent; an indicator, not a blast prediction).`);
+  out.push(`Sealed and cooled to ${f.t(h.cooled.temperatureK)}: ${f.p(h.cooled.absolutePressurePa)} absolute` +
+    (h.cooled.collapseRisk ? ', below atmosphere in a vessel not rated for vacuum.' : h.cooled.belowAtmosphere ? ', below atmosphere (rated for vacuum).' : '.'));
+  const e = r.envelope;
+  if (e && e.first.event !== 'none') {
+    const what = { 'liquid-full': 'goes liquid-full', 'all-vapor': 'becomes all steam', 'relief-set-pressure': 'reaches the relief set pressure', mawp: 'reaches MAWP' }[e.first.event];
+    out.push(e.first.alreadyReached ? `On heating this fill already ${what}.` : `On heating, this fill first ${what} at ${f.t(e.first.temperatureK)}.`);
+  }
+  return out;
+}
+
+/** Level band from a liquid-volume band through the vessel geometry (core functions). */
+function levelBand(spec: VesselSpec, liquidM3: number, plusMinusM3: number): { low: number; high: number; plusMinusM: number } | undefined {
+  const g = spec.geometry;
+  if (g.shape === 'stated-volume') return undefined;
+  const span = vesselLevelSpanM(g);
+  const V = vesselVolume(g);
+  const lo = liquidLevelFromVolume(g, Math.max(0, liquidM3 - plusMinusM3));
+  const hi = liquidLevelFromVolume(g, Math.min(V, liquidM3 + plusMinusM3));
+  return { low: lo / span, high: hi / span, plusMinusM: (hi - lo) / 2 };
+}

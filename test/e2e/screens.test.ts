@@ -1,0 +1,135 @@
+// Every screen, as a phone shows it: axe-core finds no violations (light and dark scheme), nothing
+// scrolls sideways at 320 px, touch targets are at least 48 px, and a 360×780 screenshot of each
+// is saved in test-results/screens/ for a person to look at.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import {
+  DIST, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl,
+  type StaticServer,
+} from './harness.ts';
+
+describe('every screen', () => {
+  const profile = tempProfile();
+  let server: StaticServer;
+  let ctx: BrowserContext;
+  let page: Page;
+
+  beforeAll(async () => {
+    server = await startServer(DIST);
+    ctx = await launch(profile.dir);
+    page = ctx.pages()[0] ?? (await ctx.newPage());
+    await page.goto(`${server.url}#/vessels`);
+    await waitForControl(page);
+    await page.getByRole('button', { name: 'Load demo plant' }).click();
+    await page.getByRole('link', { name: /DEMO-JK-04/ }).waitFor();
+  });
+  afterAll(async () => {
+    await ctx.close();
+    await server.close();
+    profile.remove();
+  });
+
+  async function inspect(name: string): Promise<void> {
+    await page.waitForTimeout(150);
+    expect(await axeViolations(page), `${name}: axe`).toEqual([]);
+    expect(await smallTargets(page), `${name}: touch targets`).toEqual([]);
+    await screenshot(page, name);
+    await page.emulateMedia({ colorScheme: 'dark' });
+    expect(await axeViolations(page), `${name} (dark): axe`).toEqual([]);
+    await screenshot(page, `${name}-dark`);
+    await page.emulateMedia({ colorScheme: 'light' });
+    await page.setViewportSize({ width: 320, height: 700 });
+    try {
+      const wide = await page.evaluate(() => [...document.querySelectorAll('body *')]
+        .filter((el) => el.getBoundingClientRect().right > document.documentElement.clientWidth + 0.5)
+        .map((el) => `${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''}.${el.className}`).slice(0, 5));
+      expect(wide, `${name}: elements wider than 320 px`).toEqual([]);
+    } finally {
+      await page.setViewportSize({ width: 360, height: 780 });
+    }
+  }
+
+  it('refuses inline script (the CSP allows only the app\'s own files)', async () => {
+    await expect(page.addScriptTag({ content: 'window.inlineRan = true' })).rejects.toThrow(/Content Security Policy/);
+    expect(await page.evaluate(() => 'inlineRan' in window)).toBe(false);
+  });
+
+  it('Vessels list with the demo plant', async () => {
+    await inspect('01-vessels');
+    expect(await page.getByText('DEMO DATA').count()).toBeGreaterThan(3);
+  });
+
+  it('Vessel editor', async () => {
+    await page.getByRole('link', { name: /DEMO-FT-02/ }).click();
+    await expect.poll(() => page.inputValue('#v-tag')).toBe('DEMO-FT-02');
+    await inspect('02-vessel-editor');
+  });
+
+  it('New check with a result', async () => {
+    await page.getByRole('link', { name: 'Check' }).click();
+    await pickVessel(page, '#pick-vessel', 'DEMO-FT-02');
+    await page.selectOption('#chk-temperature-unit', 'degC');
+    await page.fill('#chk-temperature', '151,8');
+    await page.selectOption('#chk-pressure-unit', 'kPa');
+    await page.fill('#chk-pressure', '400');
+    await page.selectOption('#chk-gross-unit', 'kg');
+    await page.fill('#chk-gross', '612');
+    await expect.poll(() => page.locator('.verdict').count()).toBe(1);
+    expect(await page.locator('[aria-live="polite"]').count()).toBeGreaterThan(0);
+    expect(await page.locator('svg.picture').count()).toBe(2);
+    expect(await page.locator('.standing-note').count()).toBe(1);
+    await inspect('03-check');
+    await page.fill('#chk-tech', 'Demo Technician');
+    await page.getByRole('button', { name: 'Save check' }).click();
+    await expect.poll(() => page.getByText('Saved to the log').count()).toBe(1);
+  });
+
+  it('New check refusing bad input with a message naming the field', async () => {
+    await page.fill('#chk-temperature', '15a');
+    await expect.poll(() => page.locator('#chk-temperature-error').textContent()).toMatch(/temperature/);
+    await inspect('04-check-error');
+    await page.fill('#chk-temperature', '');
+  });
+
+  it('Fill plan', async () => {
+    await page.getByRole('link', { name: 'Fill' }).click();
+    await pickVessel(page, '#fill-vessel', 'DEMO-FT-02');
+    await page.selectOption('#fill-target-unit', 'degC');
+    await page.fill('#fill-target', '150');
+    await page.getByLabel('Steam space').check();
+    await page.fill('#fill-value', '40');
+    await page.fill('#fill-start', '20');
+    await page.fill('#fill-margin', '10');
+    await expect.poll(() => page.locator('.verdict').count()).toBe(1);
+    expect(await page.locator('.standing-note').count()).toBe(1);
+    await inspect('05-fill-plan');
+  });
+
+  it('Log and one record', async () => {
+    await page.getByRole('link', { name: 'Log' }).click();
+    const entry = page.getByRole('link', { name: /DEMO-FT-02/ });
+    await expect.poll(() => entry.count()).toBe(1);
+    await inspect('06-log');
+    await entry.click();
+    await expect.poll(() => page.getByText('151,8 degC').count()).toBe(1);
+    expect(await page.getByText('IAPWS-IF97', { exact: false }).count()).toBeGreaterThan(0);
+    await inspect('07-log-record');
+  });
+
+  it('Convert', async () => {
+    await page.getByRole('link', { name: 'Convert' }).click();
+    await page.selectOption('#conv-pressure-unit', 'bar');
+    await page.fill('#conv-pressure', '2,5');
+    await page.selectOption('#sat-t-unit', 'degC');
+    await page.fill('#sat-t', '100');
+    await expect.poll(() => page.locator('table tbody tr').count()).toBeGreaterThan(5);
+    await inspect('08-convert');
+  });
+
+  it('Settings', async () => {
+    await page.getByRole('link', { name: 'Settings' }).click();
+    await page.getByLabel('Elevation').check();
+    await page.fill('#set-elev', '350');
+    await inspect('09-settings');
+  });
+});

@@ -1,0 +1,252 @@
+import { afterEach, describe, expect, it } from 'vitest';
+import { IDBFactory } from 'fake-indexeddb';
+import {
+  closeStore,
+  computeCheckHash,
+  exportBackup,
+  importBackup,
+  listVessels,
+  updateVessel,
+  verifyStoredChains,
+  type CheckRecord,
+} from '../../src/store/index.ts';
+import { BACKUP_LIMITS, parseBackup } from '../../src/store/backup.ts';
+import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
+import { failWritesOverQuota } from './fixtures.ts';
+
+afterEach(async () => {
+  await closeStore();
+});
+
+const withoutExportedAt = (text: string) => text.replace(/"exportedAt":"[^"]*"/, '"exportedAt":""');
+
+function edit(backup: string, change: (doc: { vessels: Record<string, unknown>[]; checks: Record<string, unknown>[]; chains: unknown[] } & Record<string, unknown>) => void): string {
+  const doc = JSON.parse(backup);
+  change(doc);
+  return JSON.stringify(doc);
+}
+
+describe('export and import', () => {
+  it('round trip: another profile gets identical records; export → import → export is byte-identical apart from exportedAt', async () => {
+    const source = await makeDeviceWithBackup(8);
+    const before = await dump();
+    await useDevice(new IDBFactory());
+    const report = await importBackup(source.backup);
+    expect(report.checks.added).toHaveLength(9);
+    expect(report.vessels.added).toHaveLength(2);
+    expect(report.checks.rejected).toEqual([]);
+    expect(report.warnings).toEqual([]);
+    expect(report.fileChains).toMatchObject([{ status: 'ok', count: 9, headSeq: 9 }]);
+    expect(await dump()).toEqual(before);
+    expect(withoutExportedAt(await exportBackup())).toBe(withoutExportedAt(source.backup));
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 9 }]);
+  });
+
+  it('the file is documented JSON: format, version, exportedAt with offset, one record per line', async () => {
+    const { backup } = await makeDeviceWithBackup(2);
+    const doc = parseBackup(backup);
+    expect(doc.format).toBe('tankside-backup');
+    expect(doc.formatVersion).toBe(1);
+    expect(doc.exportedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(Z|[+-]\d\d:\d\d)$/);
+    // Header, then each section with one record per line (2 vessels, 3 checks, 1 chain head).
+    const recordLines = backup.split('\n').filter((l) => l.startsWith('{"') && !l.startsWith('{"format"'));
+    expect(recordLines).toHaveLength(2 + 3 + 1);
+    for (const line of recordLines) expect(() => JSON.parse(line.replace(/,$/, ''))).not.toThrow();
+    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":1,"exportedAt":')).toBe(true);
+  });
+
+  it('importing the same file again adds nothing and reports every record as already here', async () => {
+    const { backup } = await makeDeviceWithBackup(4);
+    const before = await dump();
+    const report = await importBackup(backup);
+    expect(report.checks.added).toEqual([]);
+    expect(report.checks.skipped).toHaveLength(5);
+    expect(report.vessels.skipped.map((s) => s.why)).toEqual(['already here, identical', 'already here, identical']);
+    expect(await dump()).toEqual(before);
+  });
+
+  it('merges another device\'s log beside this one; both chains stay intact', async () => {
+    const other = await makeDeviceWithBackup(5, 'OT');
+    await useDevice(new IDBFactory());
+    await seedDevice(3, 'HM');
+    const report = await importBackup(other.backup);
+    expect(report.checks.added).toHaveLength(6);
+    expect((await listVessels({ includeRetired: true })).map((v) => v.tag)).toEqual(['HM-1', 'HM-2', 'OT-1', 'OT-2']);
+    const chains = await verifyStoredChains();
+    expect(chains.map((c) => [c.status, c.count])).toEqual(
+      expect.arrayContaining([['ok', 6], ['ok', 4]]),
+    );
+  });
+
+  it('a later backup of the same device adds only the new records, linked to those already here', async () => {
+    const device = await makeDeviceWithBackup(3);
+    const early = device.backup;
+    await useDevice(device.factory);
+    await seedDevice(2, 'LT');
+    const late = await exportBackup();
+    await useDevice(new IDBFactory());
+    await importBackup(early);
+    const report = await importBackup(late);
+    expect(report.checks.skipped).toHaveLength(4);
+    expect(report.checks.added).toHaveLength(3);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 7 }]);
+  });
+
+  it('one changed field in the file: exactly that record is rejected, with the reason', async () => {
+    const { backup } = await makeDeviceWithBackup(6);
+    const doc = JSON.parse(backup);
+    const target = doc.checks[3];
+    target.reading.pressurePa += 1;
+    await useDevice(new IDBFactory());
+    const report = await importBackup(JSON.stringify(doc));
+    expect(report.checks.rejected).toEqual([{ id: target.id, why: expect.stringMatching(/content does not match its hash/) }]);
+    expect(report.checks.added).toHaveLength(6);
+    expect(report.fileChains).toMatchObject([{ status: 'broken', problem: 'content-changed', at: { id: target.id, seq: 4 } }]);
+    expect((await dump()).checks.map((c) => c.id)).not.toContain(target.id);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'missing-seq', at: { seq: 5 } }]);
+  });
+
+  it('a record re-hashed after editing breaks the next link: that next record is rejected', async () => {
+    const { backup } = await makeDeviceWithBackup(4);
+    const doc = JSON.parse(backup);
+    doc.checks[1].note = 'rewritten';
+    doc.checks[1].hash = await computeCheckHash(doc.checks[1]);
+    await useDevice(new IDBFactory());
+    const report = await importBackup(JSON.stringify(doc));
+    expect(report.checks.rejected).toEqual([{ id: doc.checks[2].id, why: expect.stringMatching(/prevHash is not the hash of seq 2/) }]);
+  });
+
+  it('a different record under an id already here is rejected; the one here is kept', async () => {
+    const { backup } = await makeDeviceWithBackup(3);
+    const before = await dump();
+    const doc = JSON.parse(backup);
+    doc.checks[0].note = 'other';
+    doc.checks[0].hash = await computeCheckHash(doc.checks[0]);
+    const report = await importBackup(JSON.stringify(doc));
+    expect(report.checks.rejected).toEqual([{ id: doc.checks[0].id, why: 'a different check with this id is already here' }]);
+    expect(await dump()).toEqual(before);
+  });
+
+  it('a newer edit of a vessel replaces the one here; an older one is skipped', async () => {
+    const { backup } = await makeDeviceWithBackup(1);
+    const [v] = await listVessels();
+    await updateVessel(v!.id, { description: 'edited here later' });
+    const report = await importBackup(backup);
+    expect(report.vessels.skipped).toContainEqual({ id: v!.id, why: expect.stringMatching(/edited at the same time or later/) });
+    const newer = edit(backup, (doc) => {
+      const mine = doc.vessels.find((x) => x['id'] === v!.id)!;
+      mine['description'] = 'edited elsewhere, even later';
+      mine['updatedAt'] = '2099-01-01T00:00:00+00:00';
+    });
+    expect((await importBackup(newer)).vessels.updated).toEqual([v!.id]);
+    expect((await listVessels()).find((x) => x.id === v!.id)!.description).toBe('edited elsewhere, even later');
+  });
+
+  it('warns when the file stops before the chain head it names', async () => {
+    const { backup } = await makeDeviceWithBackup(3);
+    const cut = edit(backup, (doc) => void doc.checks.pop());
+    await useDevice(new IDBFactory());
+    const report = await importBackup(cut);
+    expect(report.warnings).toEqual([expect.stringMatching(/exported up to seq 4 but holds records only up to seq 3/)]);
+  });
+});
+
+describe('hostile and damaged files change nothing', () => {
+  async function expectRefused(text: string, field: string | RegExp) {
+    const before = await dump();
+    const attempt = importBackup(text);
+    await expect(attempt).rejects.toMatchObject({ name: 'StoreError', code: 'invalid-backup' });
+    const error = (await attempt.catch((e: unknown) => e)) as { field: string };
+    if (typeof field === 'string') expect(error.field).toBe(field);
+    else expect(error.field).toMatch(field);
+    expect(await dump()).toEqual(before);
+  }
+
+  it('refuses prototype keys anywhere, unknown and missing fields, bad types and ranges', async () => {
+    const { backup } = await makeDeviceWithBackup(2);
+    await useDevice(new IDBFactory());
+    await seedDevice(1, 'HM');
+    const v0 = backup.indexOf('"vessels":[\n{') + '"vessels":[\n{'.length;
+    await expectRefused(backup.slice(0, v0) + '"__proto__":{"retired":true},' + backup.slice(v0), 'file');
+    await expectRefused(backup.replace('"inputs":{', '"inputs":{"constructor":{"text":"1","unit":"K"},'), 'file');
+    await expectRefused(backup.replace('"reading":{', '"reading":{"prototype":1,'), 'file');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['extra'] = 1)), 'checks[0].extra');
+    await expectRefused(edit(backup, (d) => void delete d.checks[1]!['hash']), 'checks[1].hash');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['seq'] = 0)), 'checks[0].seq');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['seq'] = 1.5)), 'checks[0].seq');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['time'] = '2026-12-01 22:05')), 'checks[0].time');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['timeMs'] = 5)), 'checks[0].timeMs');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['technician'] = 'x'.repeat(101))), 'checks[0].technician');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['cautions'] = [{ signal: 'ALARM', message: 'm', rule: 'r' }])), 'checks[0].cautions[0].signal');
+    await expectRefused(edit(backup, (d) => void (d.checks[0]!['hash'] = 'A'.repeat(64))), 'checks[0].hash');
+    await expectRefused(edit(backup, (d) => void (d.vessels[0]!['tagKey'] = 'nope')), 'vessels[0].tagKey');
+    await expectRefused(edit(backup, (d) => void (d.vessels[1]!['id'] = d.vessels[0]!['id'])), 'vessels[1]');
+    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 2)), 'formatVersion');
+    await expectRefused(edit(backup, (d) => void (d['format'] = 'other')), 'format');
+    await expectRefused(edit(backup, (d) => void (d['extra'] = true)), 'file.extra');
+    await expectRefused(backup.slice(0, -10), 'file');
+    await expectRefused('', 'file');
+    await expectRefused('[]', 'file');
+    await expectRefused('null', 'file');
+  });
+
+  it('names a newer format version so the user knows to update', async () => {
+    const { backup } = await makeDeviceWithBackup(1);
+    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 2)))).rejects.toThrow(/newer Tankside/);
+  });
+
+  it('refuses a file over the size or count limits before parsing it', async () => {
+    const { backup } = await makeDeviceWithBackup(3);
+    expect(() => parseBackup(backup, { ...BACKUP_LIMITS, maxChars: backup.length - 1 })).toThrow(/characters; at most/);
+    expect(() => parseBackup(backup, { ...BACKUP_LIMITS, maxChecks: 3 })).toThrow(/checks: 4 entries; at most 3/);
+    expect(parseBackup(backup, { ...BACKUP_LIMITS, maxChars: backup.length }).checks).toHaveLength(4);
+  });
+});
+
+describe('all or nothing', () => {
+  it('a write failing over quota mid-import leaves nothing written', async () => {
+    const { backup } = await makeDeviceWithBackup(6);
+    const doc = JSON.parse(backup);
+    await useDevice(new IDBFactory());
+    await seedDevice(1, 'HM');
+    const before = await dump();
+    const victim = doc.checks[4].id as string;
+    const restore = failWritesOverQuota((value) => (value as CheckRecord).id === victim);
+    try {
+      await expect(importBackup(backup)).rejects.toMatchObject({ code: 'quota-exceeded' });
+    } finally {
+      restore();
+    }
+    expect(await dump()).toEqual(before);
+    expect((await importBackup(backup)).checks.added).toHaveLength(7);
+  });
+
+  it('cancelled while hashing or while writing: nothing written', async () => {
+    const { backup } = await makeDeviceWithBackup(6);
+    await useDevice(new IDBFactory());
+    const before = await dump();
+    for (const at of [1, 9, 13]) {
+      const controller = new AbortController();
+      const seen: number[] = [];
+      const attempt = importBackup(backup, {
+        signal: controller.signal,
+        onProgress: (done) => {
+          seen.push(done);
+          if (done >= at) controller.abort();
+        },
+      });
+      await expect(attempt).rejects.toMatchObject({ code: 'cancelled' });
+      expect(seen.length).toBeGreaterThan(0);
+      expect(await dump()).toEqual(before);
+    }
+  });
+
+  it('reports progress up to the total', async () => {
+    const { backup } = await makeDeviceWithBackup(3);
+    await useDevice(new IDBFactory());
+    const seen: [number, number][] = [];
+    await importBackup(backup, { onProgress: (d, t) => seen.push([d, t]) });
+    expect(seen.at(-1)).toEqual([4 * 2 + 2, 4 * 2 + 2]);
+    expect(seen.map((s) => s[0])).toEqual([...seen.map((s) => s[0])].sort((a, b) => a - b));
+  });
+});

@@ -1,0 +1,110 @@
+import { describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
+import fc from 'fast-check';
+import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
+import { addVessel, appendCheck, exportCsv, type CheckRecord } from '../../src/store/index.ts';
+import { csvCell, csvFromChecks, CSV_COLUMNS } from '../../src/store/csv.ts';
+
+useFreshDatabase();
+
+/** A result shaped like the check engine's CheckResult (invented test numbers). */
+function result(i: number) {
+  return {
+    reading: { absolutePressurePa: 501325 + i, gaugePressurePa: 400000 + i, atmospherePa: 101325, netMassKg: 1250.5 },
+    saturation: { saturationPressurePa: 500120.25, pressureDeviationPa: -1204.75 + i, pressureBand: { plusMinus: 9000 }, verdict: { verdict: 'consistent' } },
+    inventory: { regime: 'two-phase', quality: 1.25e-7 * (i + 1), liquidMassKg: 1249.875, vaporMassKg: 0.625, liquidLevel: { levelM: 0.8125 } },
+  };
+}
+
+// papaparse would turn ISO 8601 text into a Date (losing the offset); the time column stays text.
+const parse = (text: string) =>
+  Papa.parse<Record<string, unknown>>(text, { header: true, dynamicTyping: (f) => f !== 'time (ISO 8601)', skipEmptyLines: true });
+
+describe('CSV export', () => {
+  it('one row per check, SI units in the header, ISO 8601 times, numbers that parse back as numbers (papaparse)', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    const saved: CheckRecord[] = [];
+    for (let i = 0; i < 3; i += 1) {
+      saved.push(
+        await appendCheck(
+          sampleCheck(v.id, {
+            takenAt: new Date(Date.parse('2026-12-01T06:00:00Z') + i * 3_600_000),
+            reading: { temperatureK: 424.95 + i, pressure: { reference: 'gauge', pressurePa: 400000 + i }, weight: { kind: 'gross', grossKg: 2450 } },
+            result: result(i),
+          }),
+        ),
+      );
+    }
+    const text = await exportCsv();
+    const parsed = parse(text);
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.meta.fields).toEqual(CSV_COLUMNS.map((c) => c.header));
+    for (const h of ['temperature (K)', 'absolute pressure (Pa)', 'liquid mass (kg)', 'quality (kg/kg)', 'liquid level (m)']) {
+      expect(parsed.meta.fields).toContain(h);
+    }
+    expect(parsed.data).toHaveLength(3);
+    parsed.data.forEach((row, i) => {
+      const r = saved[i]!;
+      expect(row['time (ISO 8601)']).toBe(r.time);
+      expect(Date.parse(String(row['time (ISO 8601)']))).toBe(r.timeMs);
+      expect(row['temperature (K)']).toBe(424.95 + i);
+      expect(row['pressure as entered (Pa)']).toBe(400000 + i);
+      expect(row['pressure deviation from saturation (Pa)']).toBe(-1204.75 + i);
+      expect(row['quality (kg/kg)']).toBe(1.25e-7 * (i + 1));
+      expect(row['liquid level (m)']).toBe(0.8125);
+      expect(row['verdict']).toBe('consistent');
+      expect(row['highest signal word']).toBe('CAUTION');
+      expect(row['seq']).toBe(i + 1);
+      // Fields come out in key order: the store keeps records in canonical form.
+      expect(row['inputs as typed']).toBe('grossWeight=2450 kg; pressure=4,0 bar gauge; temperature=151,8 degC');
+    });
+  });
+
+  it('neutralises text that a spreadsheet would run as a formula; quotes commas, quotes and line breaks', async () => {
+    const v = await addVessel({ tag: '=FT', spec: SPEC });
+    const notes = ['=HYPERLINK("http://x","y")', '+1', '-2+3', '@SUM(A1)', '\tTAB', '\rCR', 'plain, with "quotes"\nand a line', '2+2'];
+    for (const note of notes) await appendCheck(sampleCheck(v.id, { note, technician: '-Ana' }));
+    const parsed = parse(await exportCsv({ vesselId: v.id }));
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.data.map((r) => r['note']).sort()).toEqual(
+      ["'=HYPERLINK(\"http://x\",\"y\")", "'+1", "'-2+3", "'@SUM(A1)", "'\tTAB", "'\rCR", 'plain, with "quotes"\nand a line', '2+2'].sort(),
+    );
+    for (const row of parsed.data) {
+      expect(row['vessel tag']).toBe("'=FT");
+      expect(row['technician']).toBe("'-Ana");
+    }
+  });
+
+  it('no text cell a reader sees can start a formula; every number reads back exactly (property)', () => {
+    // papaparse converts numbers only below 2^53 in magnitude; larger ones stay text by its design.
+    const number = fc.double({ noNaN: true, min: -(2 ** 53) + 1, max: 2 ** 53 - 1 });
+    fc.assert(
+      fc.property(fc.oneof(fc.string(), number), (value) => {
+        const cell = csvCell(value);
+        const back = (Papa.parse<unknown[]>(`${cell}\r\n`, { dynamicTyping: true }).data[0] ?? [])[0];
+        if (typeof value === 'number') {
+          expect(back).toBe(Object.is(value, -0) ? 0 : value);
+        } else if (value !== '') {
+          expect(String(back ?? '')).not.toMatch(/^[=+\-@\t\r]/);
+        }
+      }),
+    );
+  });
+
+  it('lists one vessel only, oldest first, with progress and cancel', async () => {
+    const a = await addVessel({ tag: 'A', spec: SPEC });
+    const b = await addVessel({ tag: 'B', spec: SPEC });
+    await appendCheck(sampleCheck(a.id, { takenAt: new Date('2026-12-01T08:00:00Z') }));
+    await appendCheck(sampleCheck(b.id, { takenAt: new Date('2026-12-01T07:00:00Z') }));
+    await appendCheck(sampleCheck(a.id, { takenAt: new Date('2026-12-01T06:00:00Z') }));
+    const seen: [number, number][] = [];
+    const rows = parse(await exportCsv({ vesselId: a.id, onProgress: (d, t) => seen.push([d, t]) })).data;
+    expect(rows.map((r) => Date.parse(String(r['time (ISO 8601)'])))).toEqual([Date.parse('2026-12-01T06:00:00Z'), Date.parse('2026-12-01T08:00:00Z')]);
+    expect(seen.at(-1)).toEqual([2, 2]);
+    expect(parse(await exportCsv()).data.map((r) => r['vessel tag'])).toEqual(['A', 'B', 'A']);
+    const controller = new AbortController();
+    controller.abort();
+    await expect(exportCsv({ signal: controller.signal })).rejects.toMatchObject({ code: 'cancelled' });
+    expect(csvFromChecks([])).toBe(CSV_COLUMNS.map((c) => csvCell(c.header)).join(',') + '\r\n');
+  });
+});

@@ -1,0 +1,51 @@
+// The vessel editor's fields ↔ VesselSpec. Factors: NIST SP 811 (psi, lb, °F).
+import { describe, expect, it } from 'vitest';
+import { formFromSpec, specFromForm } from '../../src/ui/state/vessel-spec.ts';
+import { emptyVesselForm, type VesselForm } from '../../src/ui/state/vessel-form.ts';
+import { UNIT_PRESETS } from '../../src/ui/state/settings-model.ts';
+
+const filled: VesselForm = {
+  ...emptyVesselForm(UNIT_PRESETS.SI, { pressureText: '101.325' }),
+  tag: 'T-1', description: 'test', diameterM: '1,2', straightLengthM: '2', tare: '800', weightTol: '2',
+  mawp: '500', relief: '450', gaugeSpan: '1000', designTemperature: '180', barometerTol: '0,2',
+};
+
+describe('vessel form', () => {
+  it('builds an SI spec the engine accepts', () => {
+    const r = specFromForm(filled);
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } });
+    expect(r.spec.mawpGaugePa).toBe(500_000);
+    expect(r.spec.siteAtmospherePa).toBeCloseTo(101_325, 6);
+    expect(r.spec.designTemperatureK).toBeCloseTo(453.15, 10);
+    expect(r.spec.instruments.temperatureSensor).toEqual({ kind: 'iec-60751', sensorClass: 'B' });
+  });
+
+  it('shows a stored spec in US customary units and reads it back', () => {
+    const r = specFromForm(filled);
+    if (!r.ok) throw new Error('spec');
+    const us = formFromSpec(r.spec, UNIT_PRESETS.US);
+    expect(Number(us.mawp)).toBeCloseTo(72.5189, 3); // 500 kPa / 6.894757 kPa per psi
+    expect(Number(us.tare)).toBeCloseTo(1763.698, 2); // 800 kg / 0.45359237
+    const back = specFromForm(us);
+    if (!back.ok) throw new Error(JSON.stringify(back.errors));
+    expect(back.spec.mawpGaugePa).toBeCloseTo(500_000, -1);
+    expect(back.spec.tareKg).toBeCloseTo(800, 2);
+    expect(back.spec.designTemperatureK).toBeCloseTo(453.15, 3);
+  });
+
+  it('names the bad field and keeps the others', () => {
+    const r = specFromForm({ ...filled, mawp: 'abc', tare: '' });
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors.mawp).toMatch(/MAWP/);
+    expect(r.errors.tare).toMatch(/tare/);
+    expect(r.errors.relief).toBeUndefined();
+  });
+
+  it('passes on the engine refusing a relief set pressure above the MAWP', () => {
+    const r = specFromForm({ ...filled, relief: '600' });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.errors.relief).toMatch(/relief set pressure/);
+  });
+});
