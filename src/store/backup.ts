@@ -202,7 +202,7 @@ function validateCheck(field: string, value: unknown): CheckRecord {
   });
   requireSeq(`${field}.seq`, c['seq']);
   const ms = requireIso(`${field}.time`, c['time']);
-  if (c['timeMs'] !== Math.floor(ms / 1000) * 1000 && c['timeMs'] !== ms) throw bad(`${field}.timeMs`, 'does not match time');
+  if (c['timeMs'] !== ms) throw bad(`${field}.timeMs`, 'does not match time');
   const vessel = requireObject(`${field}.vessel`, c['vessel']);
   requireKeys(`${field}.vessel`, vessel, ['tag', 'spec']);
   within(() => {
@@ -242,11 +242,13 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
     raw = JSON.parse(text, (key, value: unknown) => {
       // JSON.parse makes "__proto__" an own property (no prototype change), but a consumer that
       // later copies records with Object.assign or a spread could still be steered; refuse them all.
-      if (FORBIDDEN_KEYS.has(key)) throw new RangeError(`forbidden key "${key}"`);
+      if (FORBIDDEN_KEYS.has(key)) throw new ForbiddenKey(key);
       return value;
     });
   } catch (error) {
-    throw bad('file', error instanceof RangeError ? (error.message as string) : 'not valid JSON');
+    if (error instanceof ForbiddenKey) throw bad('file', `the key "${error.key}" is not allowed anywhere in a backup`);
+    // Includes nesting too deep for the parser (a RangeError from the engine).
+    throw bad('file', 'not valid JSON');
   }
   const top = requireObject('file', raw);
   if (top['format'] !== BACKUP_FORMAT) throw bad('format', `expected "${BACKUP_FORMAT}"`);
@@ -278,6 +280,12 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
     checks,
     chains,
   };
+}
+
+class ForbiddenKey extends Error {
+  constructor(readonly key: string) {
+    super(key);
+  }
 }
 
 function requireUnique(field: string, ids: string[]): void {

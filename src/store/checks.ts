@@ -180,6 +180,13 @@ export async function getCheck(id: string): Promise<CheckRecord | undefined> {
   return (await getDb()).get('checks', id);
 }
 
+/** The corrections saved for a check, oldest first (a correction may itself be corrected). */
+export async function correctionsOf(checkId: string): Promise<CheckRecord[]> {
+  requireUuid('check id', checkId);
+  const found = await (await getDb()).getAllFromIndex('checks', 'by-corrects', checkId);
+  return found.sort((a, b) => a.timeMs - b.timeMs || (a.id < b.id ? -1 : 1));
+}
+
 function requireLimit(limit: number | undefined): number {
   const n = limit ?? 50;
   if (!Number.isInteger(n) || n < 1 || n > 1000) throw invalid('limit', `${n}; allowed 1 to 1000`);

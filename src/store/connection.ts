@@ -84,7 +84,7 @@ function open(): Promise<IDBPDatabase<TanksideDB>> {
 export async function openStore(opts: OpenStoreOptions = {}): Promise<void> {
   options = opts;
   closedForUpgrade = false;
-  await getDb();
+  await connect();
 }
 
 /** Closes the connection (tests, or before deleting data). The next call reopens. */
@@ -95,7 +95,22 @@ export async function closeStore(): Promise<void> {
 }
 
 /** The open database, opening it if needed. */
-export function getDb(): Promise<IDBPDatabase<TanksideDB>> {
+export async function getDb(): Promise<IDBPDatabase<TanksideDB>> {
+  const db = await connect();
+  try {
+    // A connection the browser closed without a close event (a page restored from the back/forward
+    // cache, Safari's storage process restarting) throws InvalidStateError on transaction(): probe
+    // with an unused read-only transaction (it commits empty) and reopen once if so.
+    db.transaction('settings');
+    return db;
+  } catch (error) {
+    if ((error as { name?: unknown }).name !== 'InvalidStateError') throw error;
+    connection = null;
+    return connect();
+  }
+}
+
+function connect(): Promise<IDBPDatabase<TanksideDB>> {
   if (closedForUpgrade) {
     return Promise.reject(
       new StoreError('closed-for-upgrade', 'A newer version of Tankside is open in another tab. Reload this page to continue.'),

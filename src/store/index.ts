@@ -32,7 +32,7 @@ export type {
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
 
 // Checks (append-only)
-export { appendCheck, getCheck, listChecks, checksForVessel } from './checks.ts';
+export { appendCheck, getCheck, listChecks, checksForVessel, correctionsOf } from './checks.ts';
 
 // Settings, drafts, device, persistence
 export {
@@ -51,9 +51,9 @@ export type { PersistenceState } from './settings.ts';
 export { verifyChains, canonicalJson, computeCheckHash } from './integrity.ts';
 export type { ChainProblem, ChainStatus } from './integrity.ts';
 export { verifyStoredChains } from './verify.ts';
-export { exportBackup, importBackup } from './backup.ts';
-export type { ImportReport } from './backup.ts';
-export { exportCsv } from './csv.ts';
+export { exportBackup, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
+export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
+export { exportCsv, csvFromChecks } from './csv.ts';
 
 // Time
 export { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';

@@ -33,18 +33,21 @@ export interface VesselRecord {
   updatedAt: IsoDateTime;
 }
 
-/** What the UI passes to add a vessel. */
+/**
+ * What the UI passes to add a vessel. `spec` may be any object type (the engine's VesselSpec
+ * interface included); the store checks at run time that it is plain JSON and keeps a copy.
+ */
 export interface NewVessel {
   tag: string;
   description?: string;
-  spec: VesselSpecData;
+  spec: object;
 }
 
 /** What the UI may change on a vessel (retire with retireVessel). */
 export interface VesselPatch {
   tag?: string;
   description?: string;
-  spec?: VesselSpecData;
+  spec?: object;
 }
 
 /** One input field as the technician typed it, before any conversion. */
@@ -73,11 +76,11 @@ export interface NewCheck {
   takenAt?: Date;
   /** Per field (e.g. "temperature", "pressure", "grossWeight"), the text and unit as typed. */
   inputs: Record<string, TypedInput>;
-  /** The SI reading passed to evaluateCheck (K, Pa, kg ...), stored as-is. */
-  reading: JsonObject;
-  /** evaluateCheck's result as plain JSON, stored as-is. */
-  result: JsonValue;
-  cautions: StoredCaution[];
+  /** The SI reading passed to evaluateCheck (K, Pa, kg ...), stored as-is (checked to be plain JSON). */
+  reading: object;
+  /** evaluateCheck's result, stored as-is (checked to be plain JSON). */
+  result: object;
+  cautions: readonly StoredCaution[];
   appVersion: string;
   formulationId: string;
   /** For a correction: the id of the check this one corrects (that record stays as it was). */

@@ -12,8 +12,8 @@ export const DB_NAME = 'tankside';
  * - v2: drafts store. Check times carry an offset, so the ISO string does not sort by instant
  *   ("…T22:05+01:00" is before "…T21:30Z"): every check gets `timeMs`, by-vessel-time is rebuilt
  *   on [vesselId, timeMs, id] and by-time on [timeMs, id] is added (id breaks ties for paging).
- * - v3: record integrity. Checks gain deviceId, seq, prevHash, hash, corrects, reason and the
- *   unique by-device-seq index. Existing checks join this device's chain in time order with empty
+ * - v3: record integrity. Checks gain deviceId, seq, prevHash, hash, corrects, reason, the
+ *   unique by-device-seq index and by-corrects. Existing checks join this device's chain in time order with empty
  *   hashes and a seal-pending flag; hashing happens after open.
  */
 export const DB_VERSION = 3;
@@ -43,6 +43,7 @@ export interface TanksideDB extends DBSchema {
       'by-vessel-time': [string, number, string];
       'by-time': [number, string];
       'by-device-seq': [string, number];
+      'by-corrects': string;
     };
   };
   settings: { key: string; value: JsonValue };
@@ -115,6 +116,8 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
           if (seq > 0) raw.objectStore('settings').put(true, SETTING_SEAL_PENDING);
           // Unique, so two saves racing for the same seq cannot both land.
           tx.objectStore('checks').createIndex('by-device-seq', ['deviceId', 'seq'], { unique: true });
+          // Sparse: null is not a key, so only corrections are in it.
+          tx.objectStore('checks').createIndex('by-corrects', 'corrects');
           next();
         });
       };

@@ -188,6 +188,7 @@ describe('hostile and damaged files change nothing', () => {
     await expectRefused('', 'file');
     await expectRefused('[]', 'file');
     await expectRefused('null', 'file');
+    await expectRefused('['.repeat(200_000) + ']'.repeat(200_000), 'file');
   });
 
   it('names a newer format version so the user knows to update', async () => {

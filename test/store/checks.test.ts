@@ -6,6 +6,7 @@ import {
   appendCheck,
   checksForVessel,
   computeCheckHash,
+  correctionsOf,
   deviceId,
   getCheck,
   listChecks,
@@ -64,6 +65,9 @@ describe('appendCheck', () => {
     expect(fix.id).not.toBe(original.id);
     expect(fix).toMatchObject({ corrects: original.id, reason: 'pressure was absolute, not gauge', seq: 2 });
     expect(await getCheck(original.id)).toEqual(original);
+    const second = await appendCheck(sampleCheck(v.id, { corrects: original.id, reason: 'and the note was wrong' }));
+    expect(await correctionsOf(original.id)).toEqual([fix, second].sort((a, b) => (a.id < b.id ? -1 : 1)));
+    expect(await correctionsOf(fix.id)).toEqual([]);
     // The write path uses add(): the same id cannot land twice.
     const db = await getDb();
     await expect((async () => db.add('checks', { ...original, note: 'edited' }))()).rejects.toMatchObject({ name: 'ConstraintError' });

@@ -62,6 +62,14 @@ describe('connection', () => {
     expect(await listVessels()).toEqual([v]);
   });
 
+  it('a connection closed behind the store\'s back (no close event) is reopened on the next call', async () => {
+    await openStore({ onEvent: (e) => events.push(e) });
+    const v = await addVessel({ tag: 'FT-1', spec: SPEC });
+    (unwrap(await getDb()) as IDBDatabase).close();
+    expect(await listVessels()).toEqual([v]);
+    expect(events).toEqual([]);
+  });
+
   it('unavailable: no IndexedDB gives a typed error', async () => {
     const saved = globalThis.indexedDB;
     (globalThis as { indexedDB?: unknown }).indexedDB = undefined;

@@ -94,6 +94,7 @@ function describeSchema(db: IDBDatabase) {
 
 const CURRENT_SCHEMA = {
   checks: [
+    'by-corrects:"corrects"',
     'by-device-seq:["deviceId","seq"]:unique',
     'by-time:["timeMs","id"]',
     'by-vessel-time:["vesselId","timeMs","id"]',
