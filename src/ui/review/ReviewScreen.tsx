@@ -17,6 +17,10 @@ import { SIGNALS, VERDICTS } from './record-facts.ts';
 
 const VERDICT_IDS = VERDICTS.map((v) => v.id);
 
+function afterPaint(): Promise<void> {
+  return new Promise((done) => requestAnimationFrame(() => setTimeout(done, 0)));
+}
+
 export function ReviewScreen() {
   const [vessels, setVessels] = useState<VesselRecord[]>([]);
   const [form, setForm] = useState<FilterForm>(EMPTY_FORM);
@@ -29,6 +33,9 @@ export function ReviewScreen() {
   const [totals, setTotals] = useState<{ value: Totals | null; complete: boolean }>({ value: null, complete: false });
   const [readError, setReadError] = useState('');
   const [generation, setGeneration] = useState(0);
+  // Counts first pages shown: lets a test or benchmark see that the rows now belong to the new filter.
+  const [shown, setShown] = useState(0);
+  const [reportFor, setReportFor] = useState<string | null>(null);
   const pager = useRef<ReviewPager | null>(null);
 
   useEffect(() => { void listVessels({ includeRetired: true }).then(setVessels, () => setVessels([])); }, [generation]);
@@ -47,7 +54,10 @@ export function ReviewScreen() {
         setRows(first.rows.map(rowView));
         setMore(first.more);
         setLoading(false);
-        // Totals walk the whole match after the first rows are up, so they never delay them.
+        setShown((n) => n + 1);
+        // Totals walk the whole match once the first rows are painted, so they never delay them.
+        await afterPaint();
+        if (stop.signal.aborted) return;
         const done = await countTotals(filter, { signal: stop.signal, onProgress: (t) => setTotals({ value: t, complete: false }) });
         if (done) setTotals({ value: done, complete: true });
       } catch (e) {
@@ -88,14 +98,20 @@ export function ReviewScreen() {
   const vessel = filter.vesselId ? vessels.find((v) => v.id === filter.vesselId) : undefined;
 
   return (
-    <div class="review-screen">
+    <div class="review-screen" data-shown={shown}>
       <div class="no-print">
         <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />
         {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
         <ReviewTotals totals={totals.value} complete={totals.complete} />
         <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
       </div>
-      {vessel ? <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} /> : (
+      {vessel && reportFor === vessel.id ? (
+        <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} />
+      ) : vessel ? (
+        <p class="panel no-print">
+          <button type="button" class="primary" onClick={() => setReportFor(vessel.id)}>Trend and report for {vessel.tag}</button>
+        </p>
+      ) : (
         <p class="panel muted no-print">Pick a vessel in the filter for its trend chart and printable report.</p>
       )}
       <div class="no-print">

@@ -1,7 +1,7 @@
 // Export (CSV, JSON backup) and import of a backup from another device, with the import's report.
 import { useState } from 'preact/hooks';
 import { WorkProgress } from './WorkProgress.tsx';
-import { importFile, makeExport, offerDownload, type ExportKind, type ImportOutcome } from './transfer.ts';
+import { fileSizeText, importFile, makeExport, offerDownload, type ExportKind, type ImportOutcome } from './transfer.ts';
 import { useLongWork } from './use-long-work.ts';
 import { ImportReportView } from './ImportReportView.tsx';
 
@@ -10,6 +10,7 @@ export function TransferPanel({ onImported }: { onImported(): void }) {
   const [message, setMessage] = useState('');
   const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
   const [file, setFile] = useState<File | null>(null);
+  const [runs, setRuns] = useState(0);
   const busy = work.running !== null;
 
   const exportAs = async (kind: ExportKind) => {
@@ -18,7 +19,7 @@ export function TransferPanel({ onImported }: { onImported(): void }) {
       const made = await work.run(kind === 'csv' ? 'Writing the CSV' : 'Writing the backup', (o) => makeExport(kind, o));
       if (made) {
         offerDownload(made);
-        setMessage(`Ready: ${made.name} (${Math.ceil(made.size / 1024).toLocaleString('en-GB')} KB).`);
+        setMessage(`Ready: ${made.name} (${fileSizeText(made.size)}).`);
       }
     } catch (e) {
       setMessage(`Export stopped: ${e instanceof Error ? e.message : String(e)}`);
@@ -30,6 +31,7 @@ export function TransferPanel({ onImported }: { onImported(): void }) {
     const result = await work.run('Importing the backup', (o) => importFile(file, o));
     if (result) {
       setOutcome(result);
+      setRuns((n) => n + 1);
       if (result.kind === 'done') onImported();
     }
   };
@@ -50,7 +52,7 @@ export function TransferPanel({ onImported }: { onImported(): void }) {
       </div>
       <button type="button" class="primary" onClick={() => void runImport()} disabled={busy || !file}>Import and merge</button>
       <WorkProgress work={work} id="transfer-progress" />
-      {outcome ? <ImportReportView outcome={outcome} /> : null}
+      {outcome ? <div data-import-run={runs}><ImportReportView outcome={outcome} /></div> : null}
     </section>
   );
 }

@@ -18,6 +18,11 @@ export async function makeExport(kind: ExportKind, options: LongWorkOptions & { 
   return new File([text], exportFileName(kind, new Date()), { type });
 }
 
+/** A file size for people, e.g. "1,234 KB". */
+export function fileSizeText(bytes: number): string {
+  return `${Math.ceil(bytes / 1024).toLocaleString('en-GB')} KB`;
+}
+
 /** Offers a file as a download (an object URL; nothing leaves the device). */
 export function offerDownload(file: File): void {
   const url = URL.createObjectURL(file);
