@@ -10,7 +10,7 @@ export function ReviewTotals({ totals, complete }: { totals: Totals | null; comp
     <section class="panel" aria-labelledby="review-totals-title">
       <h2 id="review-totals-title">Totals{complete ? '' : ' (counting…)'}</h2>
       {totals ? (
-        <dl class="figures review-totals" data-complete={complete ? 'yes' : 'no'}>
+        <dl class="figures review-figures review-totals" data-complete={complete ? 'yes' : 'no'}>
           <dt>Checks</dt><dd data-total="checks">{n(totals.checks)}</dd>
           <dt>Vessels · technicians · devices</dt><dd>{n(totals.vessels)} · {n(totals.technicians)} · {n(totals.devices)}</dd>
           {VERDICTS.filter((v) => totals.byVerdict[v.id] > 0).map((v) => (

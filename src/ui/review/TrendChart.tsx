@@ -22,7 +22,7 @@ export function TrendChart({ geometry, title }: { geometry: TrendGeometry; title
             </g>
           ))}
           {xTicks.map((t) => (
-            <text key={t.label + t.at} class="svg-text trend-xlabel" x={t.at} y={plot.bottom + 14}>{t.label}</text>
+            <text key={t.label + t.at} class={`svg-text trend-xlabel trend-xlabel-${t.anchor ?? 'middle'}`} x={t.at} y={plot.bottom + 14}>{t.label}</text>
           ))}
           {p.path ? <path class="trend-line" d={p.path} /> : <text class="svg-text" x={plot.left + 8} y={plot.top + 24}>no values in this period</text>}
           {p.marks.map((m) => <circle key={m.id} class={`trend-mark trend-mark-${m.signal}`} cx={m.x} cy={m.y} r={3.5} />)}

@@ -23,7 +23,7 @@ const PROBLEM_TEXT: Record<ChainProblem, string> = {
 export function chainLine(s: ChainStatus): ChainLine {
   const base = { deviceId: s.deviceId, deviceShort: s.deviceId.slice(0, 8), count: s.count };
   if (s.status === 'ok') {
-    return { ...base, ok: true, text: `intact: ${s.count} records, seq 1 to ${s.headSeq}`, at: null };
+    return { ...base, ok: true, text: `${s.count} records, seq 1 to ${s.headSeq}`, at: null };
   }
   return { ...base, ok: false, text: `broken at seq ${s.at.seq}: ${PROBLEM_TEXT[s.problem]} (${s.detail})`, at: s.at };
 }

@@ -7,11 +7,12 @@ export type Signal = StoredCaution['signal'];
 export const SIGNALS: readonly Signal[] = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'];
 
 export type VerdictId = 'consistent' | 'pressure-above-saturation' | 'pressure-below-saturation' | 'none';
-export const VERDICTS: readonly { id: VerdictId; label: string }[] = [
-  { id: 'consistent', label: 'Gauge agrees with saturation' },
-  { id: 'pressure-above-saturation', label: 'Pressure above saturation' },
-  { id: 'pressure-below-saturation', label: 'Pressure below saturation' },
-  { id: 'none', label: 'No verdict stored' },
+/** `short` is for tables on a phone. */
+export const VERDICTS: readonly { id: VerdictId; label: string; short: string }[] = [
+  { id: 'consistent', label: 'Gauge agrees with saturation', short: 'agrees' },
+  { id: 'pressure-above-saturation', label: 'Pressure above saturation', short: 'p above' },
+  { id: 'pressure-below-saturation', label: 'Pressure below saturation', short: 'p below' },
+  { id: 'none', label: 'No verdict stored', short: 'none' },
 ];
 
 /** The caution every result ends with; it says nothing about this reading, so it never counts. */
@@ -68,6 +69,12 @@ export function factsOf(record: CheckRecord): RecordFacts {
   };
 }
 
-export function verdictLabel(id: VerdictId): string {
-  return VERDICTS.find((v) => v.id === id)?.label ?? id;
+export function verdictLabel(id: VerdictId, form: 'label' | 'short' = 'label'): string {
+  return VERDICTS.find((v) => v.id === id)?.[form] ?? id;
+}
+
+/** A stored time as "2026-12-01 14:05 +01:00" (the offset the technician's device stamped). */
+export function stampText(iso: string): string {
+  const offset = iso.endsWith('Z') ? 'UTC' : iso.slice(-6);
+  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} ${offset}`;
 }

@@ -1,7 +1,7 @@
 // The printable vessel report's figures: a summary of the period and one table row per check,
 // already formatted for display.
 import { formatNumber } from '../state/format.ts';
-import { SIGNALS, verdictLabel, type Signal } from './record-facts.ts';
+import { SIGNALS, stampText, verdictLabel, type Signal } from './record-facts.ts';
 import type { TrendPoint } from './trend-data.ts';
 
 export interface ReportSummary {
@@ -29,8 +29,8 @@ export function reportSummary(points: readonly TrendPoint[]): ReportSummary {
     checks: points.length,
     bySignal: SIGNALS.map((signal) => ({ signal, count: points.filter((p) => p.worstSignal === signal).length })),
     consistent: points.filter((p) => p.verdict === 'consistent').length,
-    firstTime: points[0]?.time ?? null,
-    lastTime: points[points.length - 1]?.time ?? null,
+    firstTime: points[0] ? stampText(points[0].time) : null,
+    lastTime: points.length ? stampText(points[points.length - 1]!.time) : null,
   };
 }
 
@@ -39,8 +39,8 @@ const dash = '–';
 export function reportRow(p: TrendPoint): ReportRow {
   return {
     id: p.id,
-    time: p.time.replace('T', ' '),
-    verdict: verdictLabel(p.verdict),
+    time: stampText(p.time),
+    verdict: verdictLabel(p.verdict, 'short'),
     quality: p.quality === null ? dash : `${formatNumber(p.quality * 100, 3)} %`,
     liquidMass: p.liquidMassKg === null ? dash : `${formatNumber(p.liquidMassKg, 4)} kg`,
     deviation: p.pressureDeviationPa === null ? dash : `${formatNumber(p.pressureDeviationPa / 1000, 3)} kPa`,

@@ -1,6 +1,6 @@
 // One log row as the review list shows it, and the orders the shown rows can be put in.
 import type { CheckRecord } from '../../store/index.ts';
-import { SIGNALS, factsOf, verdictLabel, type Signal, type VerdictId } from './record-facts.ts';
+import { SIGNALS, factsOf, stampText, verdictLabel, type Signal, type VerdictId } from './record-facts.ts';
 
 export interface RowView {
   id: string;
@@ -18,11 +18,10 @@ export interface RowView {
 
 export function rowView(r: CheckRecord): RowView {
   const f = factsOf(r);
-  const offset = r.time.endsWith('Z') ? 'UTC' : r.time.slice(-6);
   return {
     id: r.id,
     timeMs: r.timeMs,
-    when: `${r.time.slice(0, 10)} ${r.time.slice(11, 16)} ${offset}`,
+    when: stampText(r.time),
     vesselTag: r.vessel.tag,
     verdict: f.verdict,
     verdictText: verdictLabel(f.verdict),

@@ -62,7 +62,7 @@ export const TREND_SERIES: readonly SeriesSpec[] = [
   { key: 'pressureDeviationPa', title: 'Pressure − saturation pressure at T', unit: 'kPa', scale: 1e-3 },
 ];
 
-export interface Tick { at: number; label: string }
+export interface Tick { at: number; label: string; /** Where the label hangs from `at`, so none is cut at the plot's ends. */ anchor?: 'start' | 'middle' | 'end' }
 export interface Mark { x: number; y: number; signal: Signal; id: string }
 
 export interface PanelGeometry {
@@ -94,7 +94,10 @@ export function niceTicks(min: number, max: number, count = 4): number[] {
   const power = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;
   const ticks: number[] = [];
-  for (let v = Math.floor(min / step) * step; v <= max + step * 1e-9; v += step) ticks.push(Number(v.toPrecision(12)));
+  let start = Math.floor(min / step) * step;
+  // min / step can underflow to −0 for a subnormal min; never start above min.
+  if (start > min) start -= step;
+  for (let v = start; v <= max + step * 1e-9; v += step) ticks.push(Number(v.toPrecision(12)));
   if (ticks[ticks.length - 1]! < max) ticks.push(Number((ticks[ticks.length - 1]! + step).toPrecision(12)));
   return ticks;
 }
@@ -113,7 +116,9 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
   const t1 = points.length ? points[points.length - 1]!.timeMs : 1;
   const span = t1 > t0 ? t1 - t0 : 1;
   const xOf = (ms: number) => round1(plot.left + ((ms - t0) / span) * (plot.right - plot.left));
-  const xTicks: Tick[] = points.length === 0 ? [] : (t1 > t0 ? [t0, t0 + span / 2, t1] : [t0]).map((ms) => ({ at: xOf(ms), label: dayLabel(ms) }));
+  const xAt = t1 > t0 ? [t0, t0 + span / 2, t1] : [t0];
+  const anchors = ['start', 'middle', 'end'] as const;
+  const xTicks: Tick[] = points.length === 0 ? [] : xAt.map((ms, i) => ({ at: xOf(ms), label: dayLabel(ms), anchor: xAt.length === 1 ? 'start' : anchors[i]! }));
   const panels = TREND_SERIES.map((spec): PanelGeometry => {
     const values = points.map((p) => (p[spec.key] === null ? null : p[spec.key]! * spec.scale));
     const present = values.filter((v): v is number => v !== null);
