@@ -64,6 +64,7 @@ export class ReviewPager {
   private readonly walk: LogWalk;
   private buffer: CheckRecord[] = [];
   private readonly scan: boolean;
+  private scanBatch = 100;
 
   constructor(private readonly filter: ReviewFilter, private readonly pageSize = 50) {
     this.walk = new LogWalk(filter);
@@ -77,8 +78,10 @@ export class ReviewPager {
       if (this.buffer.length === 0) {
         if (this.walk.done) break;
         if (signal?.aborted) return { rows: [], more: false };
-        // Index-only filters read exactly a page; record-by-record filters read wider pages.
-        const batch = await this.walk.nextBatch(this.scan ? 500 : this.pageSize - rows.length);
+        // Index-only filters read exactly a page; record-by-record filters read wider and wider
+        // pages (100, 200, 400 … 1000), so a common match fills the first page from a short read.
+        const batch = await this.walk.nextBatch(this.scan ? this.scanBatch : this.pageSize - rows.length);
+        this.scanBatch = Math.min(1000, this.scanBatch * 2);
         this.buffer = this.scan ? batch.filter((r) => matches(r, this.filter)) : batch;
         continue;
       }

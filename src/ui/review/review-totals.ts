@@ -47,8 +47,8 @@ export async function countTotals(
   const devices = new Set<string>();
   while (!walk.done) {
     if (options.signal?.aborted) return null;
-    // Modest store pages: a cancelled count (the filter changed) lets go of the store quickly.
-    for (const r of await walk.nextBatch(400)) {
+    // Small store pages: a cancelled count (the filter changed) lets go of the store quickly.
+    for (const r of await walk.nextBatch(200)) {
       if (scan && !matches(r, filter)) continue;
       totals.checks += 1;
       totals.byVerdict[verdictOf(r)] += 1;
