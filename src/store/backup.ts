@@ -10,7 +10,7 @@ import type { IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
-import { canonicalJson, ChainVerifier, computeCheckHash, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { canonicalJson, ChainVerifier, computeCheckHashes, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -74,16 +74,23 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   const vessels = await tx.objectStore('vessels').getAll();
   const total = await tx.objectStore('checks').count();
   const index = tx.objectStore('checks').index('by-device-seq');
-  const checkLines: string[] = [];
+  // One string per page (its records' lines joined), so the finished text is one join of about
+  // total / PAGE parts and each page's record objects can go as soon as it is written.
+  const checkParts: string[] = [];
   const heads: ChainHead[] = [];
-  let after: [string, number] | null = null;
+  let done = 0;
+  let next = index.getAll(undefined, PAGE);
   for (;;) {
+    const batch: CheckRecord[] = await next;
     throwIfAborted(options.signal);
-    const range: IDBKeyRange | undefined = after ? IDBKeyRange.lowerBound(after, true) : undefined;
-    const batch: CheckRecord[] = await index.getAll(range, PAGE);
     if (batch.length === 0) break;
-    for (const r of batch) {
-      checkLines.push(canonicalJson(r));
+    const last: CheckRecord = batch[batch.length - 1]!;
+    // The next page is read while this one is written out (same snapshot: same transaction).
+    next = batch.length === PAGE ? index.getAll(IDBKeyRange.lowerBound([last.deviceId, last.seq], true), PAGE) : Promise.resolve([]);
+    const lineTexts = new Array<string>(batch.length);
+    for (let i = 0; i < batch.length; i += 1) {
+      const r = batch[i]!;
+      lineTexts[i] = canonicalJson(r);
       const head = heads[heads.length - 1];
       if (head && head.deviceId === r.deviceId) {
         head.count += 1;
@@ -93,16 +100,16 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
         heads.push({ deviceId: r.deviceId, count: 1, headSeq: r.seq, headHash: r.hash });
       }
     }
-    options.onProgress?.(checkLines.length, total);
-    const last: CheckRecord = batch[batch.length - 1]!;
-    after = [last.deviceId, last.seq];
+    checkParts.push(lineTexts.join(',\n'));
+    done += batch.length;
+    options.onProgress?.(done, total);
   }
   await tx.done;
   const exportedAt = formatIsoWithOffset(new Date());
   return (
     `{"format":${JSON.stringify(BACKUP_FORMAT)},"formatVersion":${BACKUP_FORMAT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},\n` +
     `"vessels":[${lines(vessels.map((v) => canonicalJson(v)))}],\n` +
-    `"checks":[${lines(checkLines)}],\n` +
+    `"checks":[${lines(checkParts)}],\n` +
     `"chains":[${lines(heads.map((h) => canonicalJson(h)))}]}\n`
   );
 }
@@ -467,12 +474,17 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   const db = await getDb();
   await sealMigratedChecks(db);
   const total = doc.checks.length * 2 + doc.vessels.length;
-  const hashes: string[] = [];
-  for (const c of doc.checks) {
-    throwIfAborted(options.signal);
-    hashes.push(await computeCheckHash(c));
-    if (hashes.length % progressStep(total) === 0) options.onProgress?.(hashes.length, total);
-  }
+  // Hashed before any transaction opens (WebCrypto is not IndexedDB work), many digests at a time.
+  const every = progressStep(total);
+  let reported = 0;
+  const hashes = await computeCheckHashes(doc.checks, {
+    signal: options.signal,
+    onProgress: (done) => {
+      if (done - reported < every) return;
+      reported = done;
+      options.onProgress?.(done, total);
+    },
+  });
   for (let attempt = 0; ; attempt += 1) {
     throwIfAborted(options.signal);
     const plan = await planMerge(db, doc, hashes);

@@ -34,7 +34,7 @@ export const TEXT_LIMITS = {
 const MAX_INPUTS = 32;
 const MAX_CAUTIONS = 64;
 /** How often appendCheck recomputes when another tab moved the chain head under it. */
-const CHAIN_RETRIES = 5;
+const CHAIN_RETRIES = 10;
 
 /** Checks a TypedInput map; shared with the backup reader. */
 export function requireInputs(field: string, value: unknown): Record<string, TypedInput> {

@@ -7,10 +7,10 @@ import { requireUuid } from './validate.ts';
 
 type Cell = string | number | boolean | null;
 
-/** Reads a value at a dotted path inside plain JSON, or undefined. */
-function at(value: JsonValue | undefined, path: string): JsonValue | undefined {
+/** Reads a value at a path (keys) inside plain JSON, or undefined. */
+function at(value: JsonValue | undefined, path: readonly string[]): JsonValue | undefined {
   let v: JsonValue | undefined = value;
-  for (const key of path.split('.')) {
+  for (const key of path) {
     if (v === null || typeof v !== 'object' || Array.isArray(v) || !Object.hasOwn(v, key)) return undefined;
     v = v[key];
   }
@@ -20,6 +20,16 @@ function at(value: JsonValue | undefined, path: string): JsonValue | undefined {
 /** A scalar from the record's JSON, or null (empty cell) for anything else or nothing. */
 function scalar(value: JsonValue | undefined): Cell {
   return typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' ? value : null;
+}
+
+/** A cell reading a dotted path of the record's reading or result (the path split once, not per row). */
+function fromReading(path: string): (r: CheckRecord) => Cell {
+  const keys = path.split('.');
+  return (r) => scalar(at(r.reading, keys));
+}
+function fromResult(path: string): (r: CheckRecord) => Cell {
+  const keys = path.split('.');
+  return (r) => scalar(at(r.result, keys));
 }
 
 const SIGNAL_ORDER = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
@@ -32,22 +42,22 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'time (ISO 8601)', cell: (r) => r.time },
   { header: 'vessel tag', cell: (r) => r.vessel.tag },
   { header: 'technician', cell: (r) => r.technician },
-  { header: 'verdict', cell: (r) => scalar(at(r.result, 'saturation.verdict.verdict')) },
+  { header: 'verdict', cell: fromResult('saturation.verdict.verdict') },
   { header: 'highest signal word', cell: (r) => SIGNAL_ORDER.find((s) => r.cautions.some((c) => c.signal === s)) ?? null },
-  { header: 'temperature (K)', cell: (r) => scalar(at(r.reading, 'temperatureK')) },
-  { header: 'pressure as entered (Pa)', cell: (r) => scalar(at(r.reading, 'pressure.pressurePa')) },
-  { header: 'pressure reference', cell: (r) => scalar(at(r.reading, 'pressure.reference')) },
-  { header: 'absolute pressure (Pa)', cell: (r) => scalar(at(r.result, 'reading.absolutePressurePa')) },
-  { header: 'atmosphere (Pa)', cell: (r) => scalar(at(r.result, 'reading.atmospherePa')) },
-  { header: 'saturation pressure at temperature (Pa)', cell: (r) => scalar(at(r.result, 'saturation.saturationPressurePa')) },
-  { header: 'pressure deviation from saturation (Pa)', cell: (r) => scalar(at(r.result, 'saturation.pressureDeviationPa')) },
-  { header: 'pressure band plus/minus (Pa)', cell: (r) => scalar(at(r.result, 'saturation.pressureBand.plusMinus')) },
-  { header: 'net mass (kg)', cell: (r) => scalar(at(r.result, 'reading.netMassKg')) },
-  { header: 'regime', cell: (r) => scalar(at(r.result, 'inventory.regime')) },
-  { header: 'quality (kg/kg)', cell: (r) => scalar(at(r.result, 'inventory.quality')) },
-  { header: 'liquid mass (kg)', cell: (r) => scalar(at(r.result, 'inventory.liquidMassKg')) },
-  { header: 'vapor mass (kg)', cell: (r) => scalar(at(r.result, 'inventory.vaporMassKg')) },
-  { header: 'liquid level (m)', cell: (r) => scalar(at(r.result, 'inventory.liquidLevel.levelM')) },
+  { header: 'temperature (K)', cell: fromReading('temperatureK') },
+  { header: 'pressure as entered (Pa)', cell: fromReading('pressure.pressurePa') },
+  { header: 'pressure reference', cell: fromReading('pressure.reference') },
+  { header: 'absolute pressure (Pa)', cell: fromResult('reading.absolutePressurePa') },
+  { header: 'atmosphere (Pa)', cell: fromResult('reading.atmospherePa') },
+  { header: 'saturation pressure at temperature (Pa)', cell: fromResult('saturation.saturationPressurePa') },
+  { header: 'pressure deviation from saturation (Pa)', cell: fromResult('saturation.pressureDeviationPa') },
+  { header: 'pressure band plus/minus (Pa)', cell: fromResult('saturation.pressureBand.plusMinus') },
+  { header: 'net mass (kg)', cell: fromResult('reading.netMassKg') },
+  { header: 'regime', cell: fromResult('inventory.regime') },
+  { header: 'quality (kg/kg)', cell: fromResult('inventory.quality') },
+  { header: 'liquid mass (kg)', cell: fromResult('inventory.liquidMassKg') },
+  { header: 'vapor mass (kg)', cell: fromResult('inventory.vaporMassKg') },
+  { header: 'liquid level (m)', cell: fromResult('inventory.liquidLevel.levelM') },
   {
     header: 'inputs as typed',
     cell: (r) =>
@@ -78,14 +88,25 @@ export function csvCell(value: Cell): string {
   if (value === null) return '';
   if (typeof value === 'number') return Number.isFinite(value) ? (Object.is(value, -0) ? '0' : String(value)) : '';
   if (typeof value === 'boolean') return value ? 'true' : 'false';
-  const text = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\r\n]/.test(text) || text !== text.trim() ? `"${text.replace(/"/g, '""')}"` : text;
+  if (value === '') return '';
+  const text = FORMULA_START.test(value) ? `'${value}` : value;
+  return NEEDS_QUOTES.test(text) || text !== text.trim() ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+const FORMULA_START = /^[=+\-@\t\r]/;
+const NEEDS_QUOTES = /[",\r\n]/;
+
+/** One row of cells, without its line end. */
+function csvRow(r: CheckRecord): string {
+  let row = '';
+  for (let i = 0; i < CSV_COLUMNS.length; i += 1) row += (i > 0 ? ',' : '') + csvCell(CSV_COLUMNS[i]!.cell(r));
+  return row;
 }
 
 /** CSV text (header + one row per record) for records already in hand. */
 export function csvFromChecks(records: Iterable<CheckRecord>): string {
   const rows = [CSV_COLUMNS.map((c) => csvCell(c.header)).join(',')];
-  for (const r of records) rows.push(CSV_COLUMNS.map((c) => csvCell(c.cell(r))).join(','));
+  for (const r of records) rows.push(csvRow(r));
   return rows.join('\r\n') + '\r\n';
 }
 
@@ -104,24 +125,25 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
     ? IDBKeyRange.bound([options.vesselId], [options.vesselId, Infinity, []])
     : undefined;
   const total = options.vesselId ? await index.count(all) : await tx.store.count();
+  // One string per page (its rows joined), joined once at the end.
   const parts: string[] = [csvFromChecks([]).slice(0, -2)];
+  const rangeAfter = (last: CheckRecord): IDBKeyRange =>
+    options.vesselId
+      ? IDBKeyRange.bound([last.vesselId, last.timeMs, last.id], [options.vesselId, Infinity, []], true)
+      : IDBKeyRange.lowerBound([last.timeMs, last.id], true);
   let done = 0;
-  let lastKey: IDBValidKey | null = null;
+  let next = index.getAll(all, PAGE);
   for (;;) {
+    const batch: CheckRecord[] = await next;
     throwIfAborted(options.signal);
-    let range: IDBKeyRange | undefined = all;
-    if (lastKey !== null) {
-      range = options.vesselId
-        ? IDBKeyRange.bound(lastKey, [options.vesselId, Infinity, []], true)
-        : IDBKeyRange.lowerBound(lastKey, true);
-    }
-    const batch: CheckRecord[] = await index.getAll(range, PAGE);
     if (batch.length === 0) break;
-    for (const r of batch) parts.push(CSV_COLUMNS.map((c) => csvCell(c.cell(r))).join(','));
+    // The next page is read while this one is written out (same snapshot: same transaction).
+    next = batch.length === PAGE ? index.getAll(rangeAfter(batch[batch.length - 1]!), PAGE) : Promise.resolve([]);
+    const rows = new Array<string>(batch.length);
+    for (let i = 0; i < batch.length; i += 1) rows[i] = csvRow(batch[i]!);
+    parts.push(rows.join('\r\n'));
     done += batch.length;
     options.onProgress?.(done, total);
-    const last: CheckRecord = batch[batch.length - 1]!;
-    lastKey = options.vesselId ? [last.vesselId, last.timeMs, last.id] : [last.timeMs, last.id];
   }
   await tx.done;
   return parts.join('\r\n') + '\r\n';

@@ -14,69 +14,218 @@ import { StoreError } from './errors.ts';
  *   inside an array
  */
 export function canonicalJson(value: unknown): string {
-  const parts: string[] = [];
-  write(value, parts, '');
-  return parts.join('');
+  try {
+    return encode(value);
+  } catch (error) {
+    if (error !== NOT_JSON) throw error;
+    // Slow path, only to name the offending field.
+    throw new StoreError('invalid-record', describeNotJson(value, ''), firstBadPath(value, '') || undefined);
+  }
 }
 
-function write(value: unknown, out: string[], path: string): void {
-  if (value === null) {
-    out.push('null');
-    return;
-  }
+const NOT_JSON = Symbol('not JSON');
+
+// Hot path (every record hashed, exported or cloned). JSON.stringify writes the canonical form of
+// any plain-JSON value whose objects list their keys in sorted order: the same string escapes,
+// the same number text (Number#toString, −0 as 0), undefined-valued keys left out, keys in
+// Object.keys order. So the value is brought into that shape first (subtrees already in it,
+// e.g. anything JSON.parse made from canonical text, are reused as they are; others are copied
+// with their keys sorted) and handed to the engine in one call. What cannot be put in that shape
+// (class instances, keys that look like array indexes, a "__proto__" key, very deep nesting) is
+// written key by key instead, with the same result.
+function encode(value: unknown): string {
+  if (value === null) return 'null';
   switch (typeof value) {
-    case 'boolean':
-      out.push(value ? 'true' : 'false');
-      return;
-    case 'number':
-      if (!Number.isFinite(value)) {
-        throw new StoreError('invalid-record', `${path || 'value'}: ${value} is not a finite number`, path || undefined);
-      }
-      out.push(Object.is(value, -0) ? '0' : String(value));
-      return;
     case 'string':
-      out.push(JSON.stringify(value));
-      return;
+      return JSON.stringify(value);
+    case 'number':
+      if (!Number.isFinite(value)) throw NOT_JSON;
+      return value === 0 ? '0' : String(value); // -0 === 0, so −0 is written as 0
+    case 'boolean':
+      return value ? 'true' : 'false';
     case 'object': {
+      const shaped = canonicalShape(value, 0, null);
+      if (shaped !== KEY_BY_KEY && prototypesUntouched()) return JSON.stringify(shaped);
       if (Array.isArray(value)) {
-        out.push('[');
-        value.forEach((item, i) => {
-          if (i > 0) out.push(',');
-          if (item === undefined) throw new StoreError('invalid-record', `${path}[${i}]: undefined in an array`, `${path}[${i}]`);
-          write(item, out, `${path}[${i}]`);
-        });
-        out.push(']');
-        return;
+        let out = '[';
+        for (let i = 0; i < value.length; i += 1) {
+          const item: unknown = value[i];
+          if (item === undefined) throw NOT_JSON;
+          out += (i > 0 ? ',' : '') + encode(item);
+        }
+        return out + ']';
       }
-      const record = value as Record<string, unknown>;
-      const keys = Object.keys(record).filter((k) => record[k] !== undefined).sort();
-      out.push('{');
-      keys.forEach((key, i) => {
-        if (i > 0) out.push(',');
-        out.push(JSON.stringify(key), ':');
-        write(record[key], out, path ? `${path}.${key}` : key);
-      });
-      out.push('}');
-      return;
+      return encodeMembers(value as Record<string, unknown>, sortedKeys(value), null);
     }
     default:
-      throw new StoreError('invalid-record', `${path || 'value'}: a ${typeof value} cannot be stored`, path || undefined);
+      throw NOT_JSON;
   }
+}
+
+/** `{…}` of the given keys (in that order), skipping undefined values and the key `skip`. */
+function encodeMembers(record: Record<string, unknown>, keys: readonly string[], skip: string | null): string {
+  let out = '{';
+  let first = true;
+  for (const key of keys) {
+    if (key === skip) continue;
+    const item = record[key];
+    if (item === undefined) continue;
+    out += (first ? '' : ',') + JSON.stringify(key) + ':' + encode(item);
+    first = false;
+  }
+  return out + '}';
+}
+
+/** Own enumerable keys in UTF-16 code unit order; sorts only when they are not in order already. */
+function sortedKeys(value: object): string[] {
+  const keys = Object.keys(value);
+  for (let i = 1; i < keys.length; i += 1) {
+    if (!(keys[i - 1]! < keys[i]!)) return keys.sort();
+  }
+  return keys;
+}
+
+/** canonicalShape's answer when the value must be written key by key. */
+const KEY_BY_KEY = Symbol('key by key');
+/** Deeper than this the shaping gives up (the key-by-key writer recurses on its own). */
+const SHAPE_DEPTH = 64;
+
+/**
+ * `value` itself if JSON.stringify(value) is already its canonical form; otherwise a copy for
+ * which it is (keys sorted, `skip` and undefined-valued keys dropped), or KEY_BY_KEY.
+ * Throws NOT_JSON for a value the canonical form refuses (NaN, ±Infinity, bigint, function,
+ * symbol, undefined in an array).
+ */
+function canonicalShape(value: object, depth: number, skip: string | null): object | typeof KEY_BY_KEY {
+  if (depth > SHAPE_DEPTH) return KEY_BY_KEY;
+  if (Array.isArray(value)) {
+    if (Object.getPrototypeOf(value) !== Array.prototype) return KEY_BY_KEY;
+    let copy: unknown[] | null = null;
+    for (let i = 0; i < value.length; i += 1) {
+      const item: unknown = value[i];
+      let shaped: unknown = item;
+      if (typeof item === 'object') {
+        if (item !== null) {
+          const s = canonicalShape(item, depth + 1, null);
+          if (s === KEY_BY_KEY) return s;
+          shaped = s;
+        }
+      } else if (!isPlainScalar(item)) {
+        throw NOT_JSON; // undefined (or a hole), NaN, ±Infinity, function, symbol, bigint
+      }
+      if (copy === null && shaped !== item) copy = value.slice(0, i);
+      if (copy !== null) copy.push(shaped);
+    }
+    return copy ?? value;
+  }
+  const proto: unknown = Object.getPrototypeOf(value);
+  if (proto !== Object.prototype && proto !== null) return KEY_BY_KEY;
+  const record = value as Record<string, unknown>;
+  const own = Object.keys(record);
+  let inOrder = true;
+  for (let i = 1; i < own.length && inOrder; i += 1) inOrder = own[i - 1]! < own[i]!;
+  const keys = inOrder ? own : own.sort();
+  let copy: Record<string, unknown> | null = null;
+  let changed = !inOrder;
+  const shapedValues: unknown[] = [];
+  for (const key of keys) {
+    const item = record[key];
+    let shaped: unknown = item;
+    if (key === skip || item === undefined) {
+      shaped = undefined;
+      if (key === skip) changed = true;
+    } else if (typeof item === 'object') {
+      if (item !== null) {
+        const s = canonicalShape(item, depth + 1, null);
+        if (s === KEY_BY_KEY) return s;
+        shaped = s;
+        if (s !== item) changed = true;
+      }
+    } else if (!isPlainScalar(item)) {
+      throw NOT_JSON;
+    }
+    shapedValues.push(shaped);
+  }
+  if (!changed) return value;
+  // A copy lists its keys in insertion order, except that the engine puts keys that look like
+  // array indexes first in numeric order, and "__proto__" would set the prototype: not copied.
+  copy = {};
+  for (let i = 0; i < keys.length; i += 1) {
+    const key = keys[i]!;
+    const item = shapedValues[i];
+    if (item === undefined) continue;
+    const c = key.charCodeAt(0);
+    if ((c >= 48 && c <= 57) || key === '__proto__') return KEY_BY_KEY;
+    copy[key] = item;
+  }
+  return copy;
+}
+
+function isPlainScalar(item: unknown): boolean {
+  return typeof item === 'string' || typeof item === 'boolean' || (typeof item === 'number' && Number.isFinite(item));
+}
+
+/** JSON.stringify would call an inherited toJSON; the canonical form never does. */
+function prototypesUntouched(): boolean {
+  return !('toJSON' in Object.prototype) && !('toJSON' in Array.prototype);
+}
+
+/** Dotted path of the first value encode() refuses, or '' for the value itself. */
+function firstBadPath(value: unknown, path: string): string | null {
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return null;
+  if (typeof value === 'number') return Number.isFinite(value) ? null : path;
+  if (typeof value !== 'object') return path;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i += 1) {
+      if (value[i] === undefined) return `${path}[${i}]`;
+      const bad = firstBadPath(value[i], `${path}[${i}]`);
+      if (bad !== null) return bad;
+    }
+    return null;
+  }
+  for (const key of Object.keys(value).sort()) {
+    const item = (value as Record<string, unknown>)[key];
+    if (item === undefined) continue;
+    const bad = firstBadPath(item, path ? `${path}.${key}` : key);
+    if (bad !== null) return bad;
+  }
+  return null;
+}
+
+function describeNotJson(value: unknown, path: string): string {
+  const at = firstBadPath(value, path) ?? '';
+  let v: unknown = value;
+  for (const part of at.match(/[^.[\]]+/g) ?? []) v = (v as Record<string, unknown>)?.[part];
+  const what = typeof v === 'number' ? `${v} is not a finite number` : v === undefined ? 'undefined in an array' : `a ${typeof v} cannot be stored`;
+  return `${at || 'value'}: ${what}`;
 }
 
 /** The content a check's hash covers: every field except `hash` itself (prevHash included). */
 export function hashedContent(record: CheckRecord | Omit<CheckRecord, 'hash'>): string {
-  const { hash: _ignored, ...content } = record as CheckRecord;
-  return canonicalJson(content);
+  const value: unknown = record;
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return canonicalJson(value);
+  try {
+    // The same text as canonicalJson of the record with `hash` removed.
+    const shaped = canonicalShape(value, 0, 'hash');
+    if (shaped !== KEY_BY_KEY && prototypesUntouched()) return JSON.stringify(shaped);
+    return encodeMembers(value as Record<string, unknown>, sortedKeys(value), 'hash');
+  } catch (error) {
+    if (error !== NOT_JSON) throw error;
+    const { hash: _ignored, ...content } = record as CheckRecord;
+    return canonicalJson(content); // names the bad field
+  }
 }
 
 /** SHA-256 of UTF-8 text as 64 lower-case hex digits (WebCrypto). */
 export async function sha256Hex(text: string): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
+  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', UTF8.encode(text)));
   let hex = '';
-  for (const byte of new Uint8Array(digest)) hex += byte.toString(16).padStart(2, '0');
+  for (let i = 0; i < digest.length; i += 1) hex += HEX_BYTE[digest[i]!]!;
   return hex;
 }
+
+const UTF8 = new TextEncoder();
+const HEX_BYTE: readonly string[] = Array.from({ length: 256 }, (_, b) => b.toString(16).padStart(2, '0'));
 
 /** The hash a check should carry, from its content (prevHash included). */
 export function computeCheckHash(record: CheckRecord | Omit<CheckRecord, 'hash'>): Promise<string> {
@@ -119,17 +268,68 @@ export async function verifyChains(records: Iterable<CheckRecord>, options: Long
     list.push(r);
     total += 1;
   }
+  throwIfAborted(options.signal);
   const verifier = new ChainVerifier();
+  const every = progressStep(total);
   let done = 0;
+  let reported = 0;
   for (const deviceId of [...byDevice.keys()].sort()) {
-    for (const r of byDevice.get(deviceId)!) {
-      throwIfAborted(options.signal);
-      await verifier.push(r);
-      done += 1;
-      if (done % progressStep(total) === 0 || done === total) options.onProgress?.(done, total);
+    const list = byDevice.get(deviceId)!;
+    for (let start = 0; start < list.length; start += VERIFY_CHUNK) {
+      const chunk = list.slice(start, start + VERIFY_CHUNK);
+      await verifier.pushBatch(chunk, options.signal);
+      done += chunk.length;
+      if (done - reported >= every || done === total) {
+        reported = done;
+        options.onProgress?.(done, total);
+      }
     }
   }
   return verifier.results();
+}
+
+/** Records verifyChains hashes between progress reports and cancel checks. */
+const VERIFY_CHUNK = 4096;
+
+/**
+ * Digests kept in flight at once while hashing many records. WebCrypto's digest is asynchronous
+ * (the work runs off the main thread), so issuing one and waiting for it before the next leaves
+ * both threads idle most of the time; a few hundred in flight keep them busy, and the bound keeps
+ * the texts waiting to be hashed to a few hundred kilobytes.
+ */
+export const HASH_IN_FLIGHT = 256;
+
+/**
+ * Content hashes (as computeCheckHash gives them) of `records`, in the same order, with at most
+ * HASH_IN_FLIGHT digests outstanding: the canonical text of the next group is built while the
+ * previous group is being digested. `onProgress(done)` follows each finished group.
+ * @throws StoreError('cancelled') if `signal` aborts (checked before each group is issued); the
+ *   digests already issued are left to finish unobserved, and nothing is returned
+ */
+export async function computeCheckHashes(
+  records: readonly (CheckRecord | Omit<CheckRecord, 'hash'>)[],
+  options: { signal?: AbortSignal | undefined; onProgress?: ((done: number) => void) | undefined } = {},
+): Promise<string[]> {
+  const hashes = new Array<string>(records.length);
+  const group = HASH_IN_FLIGHT / 2;
+  let waiting: { start: number; digests: Promise<string[]> } | null = null;
+  for (let start = 0; ; start += group) {
+    let issued: { start: number; digests: Promise<string[]> } | null = null;
+    if (start < records.length) {
+      throwIfAborted(options.signal);
+      const digests = Promise.all(records.slice(start, start + group).map((r) => sha256Hex(hashedContent(r))));
+      digests.catch(() => {}); // observed below, or abandoned on cancel
+      issued = { start, digests };
+    }
+    if (waiting) {
+      const done = await waiting.digests;
+      for (let i = 0; i < done.length; i += 1) hashes[waiting.start + i] = done[i]!;
+      options.onProgress?.(waiting.start + done.length);
+    }
+    if (!issued) break;
+    waiting = issued;
+  }
+  return hashes;
 }
 
 /**
@@ -146,6 +346,19 @@ export class ChainVerifier {
   async push(r: CheckRecord): Promise<void> {
     // Unsealed and out-of-sequence records are judged without hashing them.
     this.pushHashed(r, r.hash === '' ? '' : await computeCheckHash(r));
+  }
+
+  /**
+   * As push for each record in turn, with the hashes computed concurrently (computeCheckHashes).
+   * Unsealed records are not hashed. On cancel nothing of the batch has been pushed.
+   * @throws StoreError('cancelled') if `signal` aborts
+   */
+  async pushBatch(records: readonly CheckRecord[], signal?: AbortSignal): Promise<void> {
+    const sealed = records.filter((r) => r.hash !== '');
+    const hashes = await computeCheckHashes(sealed, { signal });
+    throwIfAborted(signal);
+    let next = 0;
+    for (const r of records) this.pushHashed(r, r.hash === '' ? '' : hashes[next++]!);
   }
 
   /** As push, with the record's content hash already computed by the caller. */

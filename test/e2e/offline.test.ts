@@ -66,6 +66,11 @@ describe('offline first use and restart', () => {
     await page.fill('#chk-note', 'offline test');
     await page.getByRole('button', { name: 'Save check' }).click();
     await expect.poll(() => page.getByText('Saved to the log').count()).toBe(1);
+
+    // Start the next check, then close the tab and the browser: the half entry is a saved draft.
+    await page.fill('#chk-temperature', '88,8');
+    await page.waitForTimeout(800);
+    await page.close();
     await ctx.close();
 
     // Relaunch with the same profile, offline, with the server gone too.
@@ -81,6 +86,10 @@ describe('offline first use and restart', () => {
     await expect.poll(() => page.getByText('97,3 kPa (gauge)').count()).toBe(1);
     expect(await page.getByText(verdict, { exact: true }).count()).toBe(1);
     expect(await page.getByText('A. Tester').count()).toBe(1);
+
+    await page.getByRole('link', { name: 'Check' }).click();
+    await expect.poll(() => page.inputValue('#chk-temperature')).toBe('88,8');
+    expect(await page.inputValue('#chk-tech')).toBe('A. Tester');
     await ctx.close();
 
     // Nothing ever left for another origin (no fonts, analytics or CDNs).

@@ -1,10 +1,11 @@
 // Every screen, as a phone shows it: axe-core finds no violations (light and dark scheme), nothing
 // scrolls sideways at 320 px, touch targets are at least 48 px, and a 360×780 screenshot of each
 // is saved in test-results/screens/ for a person to look at.
+import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import {
-  DIST, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl,
+  DIST, SCREENS_DIR, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl,
   type StaticServer,
 } from './harness.ts';
 
@@ -79,6 +80,7 @@ describe('every screen', () => {
     expect(await page.locator('svg.picture').count()).toBe(2);
     expect(await page.locator('.standing-note').count()).toBe(1);
     await inspect('03-check');
+    await page.locator('.pictures').screenshot({ path: `${SCREENS_DIR}/03-check-pictures.png` });
     await page.fill('#chk-tech', 'Demo Technician');
     await page.getByRole('button', { name: 'Save check' }).click();
     await expect.poll(() => page.getByText('Saved to the log').count()).toBe(1);
@@ -111,9 +113,25 @@ describe('every screen', () => {
     await expect.poll(() => entry.count()).toBe(1);
     await inspect('06-log');
     await entry.click();
-    await expect.poll(() => page.getByText('151,8 degC').count()).toBe(1);
+    await expect.poll(() => page.getByText('151,8 °C').count()).toBe(1);
     expect(await page.getByText('IAPWS-IF97', { exact: false }).count()).toBeGreaterThan(0);
     await inspect('07-log-record');
+  });
+
+  it('Retiring a vessel keeps its checks', async () => {
+    await page.getByRole('link', { name: 'Vessels' }).click();
+    await page.getByRole('link', { name: /DEMO-FT-02/ }).click();
+    const history = page.getByRole('region', { name: 'Checks of this vessel' }).getByRole('link');
+    await expect.poll(() => history.count()).toBe(1);
+    await page.getByRole('button', { name: 'Retire vessel' }).click();
+    await page.getByRole('button', { name: 'Tap again to retire' }).click();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(0);
+    await page.getByLabel('Show retired vessels').check();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02 \(retired\)/ }).count()).toBe(1);
+    await page.getByRole('link', { name: 'Check' }).click();
+    expect(await page.locator('#pick-vessel option', { hasText: 'DEMO-FT-02' }).count()).toBe(0);
+    await page.getByRole('link', { name: 'Log' }).click();
+    await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(1);
   });
 
   it('Convert', async () => {
@@ -126,10 +144,40 @@ describe('every screen', () => {
     await inspect('08-convert');
   });
 
+  it('works from the keyboard alone', async () => {
+    await page.goto(`${server.url}#/vessels`);
+    // The screen heading takes focus on every screen change; the menu sits just before it.
+    await expect.poll(() => page.evaluate(() => document.activeElement?.tagName)).toBe('H1');
+    let focused = '';
+    for (let i = 0; i < 8 && focused !== 'Convert'; i++) {
+      await page.keyboard.press('Shift+Tab');
+      focused = await page.evaluate(() => document.activeElement?.textContent?.trim() ?? '');
+    }
+    expect(focused).toBe('Convert');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.tagName)).toBe('H1');
+    let id = '';
+    for (let i = 0; i < 10 && id !== 'conv-pressure'; i++) {
+      await page.keyboard.press('Tab');
+      id = await page.evaluate(() => document.activeElement?.id ?? '');
+    }
+    expect(id).toBe('conv-pressure');
+    await page.keyboard.type('1,5');
+    await expect.poll(() => page.locator('table tbody tr').count()).toBeGreaterThan(5);
+  });
+
   it('Settings', async () => {
     await page.getByRole('link', { name: 'Settings' }).click();
     await page.getByLabel('Elevation').check();
     await page.fill('#set-elev', '350');
     await inspect('09-settings');
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export full backup (JSON)' }).click(),
+    ]);
+    const backup = JSON.parse(readFileSync((await download.path())!, 'utf8')) as { vessels: { tag: string }[]; checks: unknown[] };
+    expect(backup.vessels.map((v) => v.tag)).toContain('DEMO-FT-02');
+    expect(backup.checks).toHaveLength(1);
+    await expect.poll(() => page.getByText(/Last backup: \d{4}-/).count()).toBe(1);
   });
 });

@@ -58,6 +58,40 @@ describe('appendCheck', () => {
     expect(status).toMatchObject({ status: 'ok', count: 6 });
   });
 
+  it('another tab saving between our hash and our write: we start over from its record', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    const device = await deviceId();
+    const other = await new Promise<IDBDatabase>((resolve, reject) => {
+      const request = indexedDB.open('tankside');
+      request.onsuccess = () => resolve(request.result);
+      request.onerror = () => reject(request.error);
+    });
+    const theirs = await appendCheckShape(v.id, device);
+    const realDigest = crypto.subtle.digest.bind(crypto.subtle);
+    let interfered = false;
+    const spy = vi.spyOn(crypto.subtle, 'digest').mockImplementation(async (algorithm, data) => {
+      if (!interfered) {
+        interfered = true;
+        // The other tab's save lands while this one is hashing.
+        await new Promise<void>((resolve, reject) => {
+          const tx = other.transaction('checks', 'readwrite');
+          tx.objectStore('checks').add(theirs);
+          tx.oncomplete = () => resolve();
+          tx.onerror = () => reject(tx.error);
+        });
+      }
+      return realDigest(algorithm, data);
+    });
+    try {
+      const mine = await appendCheck(sampleCheck(v.id));
+      expect(mine).toMatchObject({ seq: 2, prevHash: theirs.hash });
+    } finally {
+      spy.mockRestore();
+      other.close();
+    }
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 2 }]);
+  });
+
   it('is append-only: a correction is a new record; the original is unchanged; the DB refuses an overwrite', async () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     const original = await appendCheck(sampleCheck(v.id));
@@ -115,6 +149,16 @@ describe('appendCheck', () => {
     expect(next).toMatchObject({ seq: 2, prevHash: first.hash });
   });
 });
+
+/** A valid seq-1 record for `device`, hashed as the store would (what another tab would save). */
+async function appendCheckShape(vesselId: string, device: string): Promise<CheckRecord> {
+  const unsigned = {
+    id: crypto.randomUUID(), deviceId: device, seq: 1, time: '2026-12-01T20:00:00+00:00', timeMs: Date.parse('2026-12-01T20:00:00Z'),
+    technician: 'Other tab', note: '', vesselId, vessel: { tag: 'FT-204', spec: SPEC }, inputs: {}, reading: {}, result: {},
+    cautions: [], appVersion: '0.1.0', formulationId: 'IAPWS-IF97 (R7-97(2012))', corrects: null, reason: null, prevHash: GENESIS_HASH,
+  };
+  return { ...unsigned, hash: await computeCheckHash(unsigned) };
+}
 
 describe('persistence', () => {
   it('asks navigator.storage.persist() once, at the first saved check, and reports the answer', async () => {

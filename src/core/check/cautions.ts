@@ -101,7 +101,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
     const h = inv.hydraulic;
     out.push(caution('liquid-full-now', h.withinFormulation
       ? `The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge ` +
-        `(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating. Stop heating and check the weight.`
+        `(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`
       : `The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
   }
   if (gauge > vessel.mawpGaugePa) {
@@ -122,7 +122,9 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   }
 
   const v = result.saturation.verdict;
-  if (v.verdict === 'pressure-above-saturation') {
+  if (inv.regime === 'liquid-full') {
+    // Pressure above saturation is what a liquid-full vessel does; reading it as air would mislead.
+  } else if (v.verdict === 'pressure-above-saturation') {
     const g = v.noncondensableGas;
     out.push(caution('noncondensable-gas',
       `Pressure is ${kilopascal(g.partialPressurePa)} above saturation for ${celsius(T)}: air or another non-condensable gas is likely ` +
@@ -142,8 +144,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   }
 
   if (inv.regime === 'superheated') {
-    const band = result.saturation.pressureBand.plusMinus;
-    if (Math.abs(inv.differenceFromReadingPa) > band) {
+    if (Math.abs(inv.differenceFromReadingPa) > inv.differenceBandPa) {
       out.push(caution('superheated-pressure-mismatch',
         `By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
     }

@@ -13,7 +13,7 @@ import { idealGasComparison, type IdealGasComparison } from './ideal-gas.ts';
 import { contentsState, inventoryOf, type Inventory } from './inventory.ts';
 import { resolveReading, type Reading, type ResolvedReading } from './reading.ts';
 import { checkSaturation, type SaturationCheck } from './saturation-consistency.ts';
-import { inventoryBands, netMassToleranceKg, temperatureToleranceK, type InventoryBands } from './uncertainty.ts';
+import { inventoryBands, netMassToleranceKg, pressureTolerancesPa, temperatureToleranceK, type InventoryBands } from './uncertainty.ts';
 import { requireFiniteData } from './finite-data.ts';
 import { vesselVolume } from './vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from './vessel-spec.ts';
@@ -61,6 +61,7 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
   }
   const T = r.temperatureK;
   const sat = saturation(T);
+  const pTol = pressureTolerancesPa(vessel, r, reading.pressure.reference);
 
   const inventory: CheckResult['inventory'] =
     r.netMassKg === null
@@ -73,6 +74,9 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
           atmospherePa: r.atmospherePa,
           mawpGaugePa: vessel.mawpGaugePa,
           measuredAbsolutePressurePa: r.absolutePressurePa,
+          measuredPressureBandPa: Math.hypot(pTol.pressureGauge, pTol.atmosphere),
+          massRelativeTolerance: reading.weight.kind === 'not-weighed' ? 0 : netMassToleranceKg(vessel, reading.weight.kind) / r.netMassKg,
+          volumeRelativeTolerance: vessel.instruments.volumeTolerancePercent / 100,
         });
   const liquidPresent = inventory.regime === 'not-weighed' ? null : inventory.regime !== 'superheated';
   const saturationCheck = checkSaturation(vessel, r, reading.pressure.reference, liquidPresent);

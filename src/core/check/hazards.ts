@@ -3,7 +3,7 @@
 // field-practice.md §6.1 (flash), §6.2 (stored energy), §6.3 (vacuum collapse), §6.6 (margins).
 
 import { saturation, saturationPressure, saturationTemperature, stateTP } from '../steam/index.ts';
-import { contentsState } from './inventory.ts';
+import { contentsState, IF97_MAX_PRESSURE_PA } from './inventory.ts';
 
 /** Energy of TNT used for equivalence, J/kg (4.184 MJ/kg, the conventional figure; common practice). */
 export const TNT_ENERGY_J_PER_KG = 4.184e6;
@@ -88,6 +88,8 @@ export interface CooledState {
   /** Part of that pressure from non-condensable gas carried over from the reading, Pa. */
   noncondensablePartialPressurePa: number;
   belowAtmosphere: boolean;
+  /** Liquid-full even when cold beyond IF97's 100 MPa: the pressure fields then hold that limit, a lower bound. */
+  aboveFormulationLimit: boolean;
   vacuumRated: boolean;
   /** Below atmosphere in a vessel not rated for vacuum: it can collapse if sealed as it cools. */
   collapseRisk: boolean;
@@ -108,9 +110,11 @@ export function cooledState(args: {
 }): CooledState {
   const Tc = Math.max(273.16, args.ambientTemperatureK);
   let waterPa = saturationPressure(Tc);
+  let aboveFormulationLimit = false;
   if (args.meanSpecificVolumeM3PerKg !== null) {
     const found = contentsState(Tc, args.meanSpecificVolumeM3PerKg);
-    waterPa = found.kind === 'state' ? found.state.p : 100e6;
+    aboveFormulationLimit = found.kind !== 'state';
+    waterPa = found.kind === 'state' ? found.state.p : IF97_MAX_PRESSURE_PA;
   }
   const gasPa = args.noncondensablePartialPressurePa * (Tc / args.temperatureK);
   const absolutePressurePa = waterPa + gasPa;
@@ -122,6 +126,7 @@ export function cooledState(args: {
     gaugePressurePa,
     noncondensablePartialPressurePa: gasPa,
     belowAtmosphere,
+    aboveFormulationLimit,
     vacuumRated: args.vacuumRated,
     collapseRisk: belowAtmosphere && !args.vacuumRated,
   };

@@ -48,6 +48,11 @@ export type Inventory =
       gaugePressurePa: number;
       /** That pressure minus the measured absolute pressure, Pa. */
       differenceFromReadingPa: number;
+      /**
+       * ± on that difference, Pa: the pressure instruments' band combined (RSS) with the effect of
+       * the mass and volume limits on this pressure (p ∝ m/V for a dilute vapor, to first order).
+       */
+      differenceBandPa: number;
     };
 
 /** The regime of v at T, with compressed liquid above IF97's 100 MPa reported rather than thrown. */
@@ -78,6 +83,11 @@ export function inventoryOf(args: {
   atmospherePa: number;
   mawpGaugePa: number;
   measuredAbsolutePressurePa: number;
+  /** ± on the measured absolute pressure, Pa (instrument band); 0 if unknown. */
+  measuredPressureBandPa?: number;
+  /** ± relative limits of the net mass and of the volume (fractions); 0 if unknown. */
+  massRelativeTolerance?: number;
+  volumeRelativeTolerance?: number;
 }): Inventory {
   const { geometry, volumeM3: V, netMassKg: m, temperatureK: T, atmospherePa } = args;
   const v = V / m;
@@ -135,5 +145,10 @@ export function inventoryOf(args: {
     absolutePressurePa: s.p,
     gaugePressurePa: s.p - atmospherePa,
     differenceFromReadingPa: s.p - args.measuredAbsolutePressurePa,
+    differenceBandPa: Math.hypot(
+      args.measuredPressureBandPa ?? 0,
+      s.p * (args.massRelativeTolerance ?? 0),
+      s.p * (args.volumeRelativeTolerance ?? 0),
+    ),
   };
 }

@@ -118,14 +118,14 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
   switch (requested?.kind) {
     case 'quality': {
       const x = requireInRange('quality', requested.quality, 0, 1, '1');
-      target = { kind: 'quality', quality: x };
+      target = { kind: 'quality', quality: x + 0 }; // + 0 turns −0 into 0, so the echo survives a JSON round trip
       m = V / (vf + x * (vg - vf));
       mIdeal = V / (vf + x * (vIdeal - vf));
       break;
     }
     case 'vapor-space-fraction': {
       const phi = requireInRange('vapor-space fraction', requested.fraction, 0, 1, '1');
-      target = { kind: 'vapor-space-fraction', fraction: phi };
+      target = { kind: 'vapor-space-fraction', fraction: phi + 0 };
       m = ((1 - phi) * V) / vf + (phi * V) / vg;
       mIdeal = ((1 - phi) * V) / vf + (phi * V) / vIdeal;
       break;

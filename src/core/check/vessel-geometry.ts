@@ -114,7 +114,23 @@ export function headVolumeM3(head: HeadSpec, D: number): number {
 function circleAreaBelow(rho: number, y: number): number {
   if (rho <= 0 || y <= -rho) return 0;
   if (y >= rho) return Math.PI * rho * rho;
-  return rho * rho * Math.acos(-y / rho) + y * Math.sqrt(rho * rho - y * y);
+  return segmentArea(rho, y + rho);
+}
+
+/**
+ * Circular segment of depth h in a circle of radius R, m². Equal to R²·acos((R − h)/R) −
+ * (R − h)·√(2Rh − h²) (field-practice.md §5.2), written as ½R²(φ − sin φ) with the central angle
+ * φ = 4·asin(√(h/2R)), a series for small φ, and the complement above mid-depth: the textbook
+ * form cancels near the bottom and the top and can even go negative there.
+ */
+function segmentArea(R: number, h: number): number {
+  if (h > R) return Math.PI * R * R - segmentArea(R, 2 * R - h);
+  const phi = 4 * Math.asin(Math.sqrt(Math.max(0, h) / (2 * R)));
+  const p2 = phi * phi;
+  const phiMinusSin = phi < 0.1
+    ? phi * p2 * (1 / 6 - p2 * (1 / 120 - p2 * (1 / 5040 - p2 / 362880)))
+    : phi - Math.sin(phi);
+  return 0.5 * R * R * phiMinusSin;
 }
 
 /** Slice radius of a head at axial distance z from its apex, m. */

@@ -27,7 +27,7 @@ export interface SaturationState {
 
 /**
  * State of water in a closed rigid vessel, found from (T, v).
- * 'supercritical' is used for every T above the critical temperature 647.096 K.
+ * 'supercritical' is used for every T at or above the critical temperature 647.096 K.
  */
 export type VesselState =
   | {

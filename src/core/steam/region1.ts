@@ -3,7 +3,6 @@
 // properties of Table 3 derived from it.
 import { IF97 } from './constants.ts';
 import type { PhaseState } from './phase-state.ts';
-import { buildPowerPlan, runPowerPlan } from './power-plan.ts';
 
 /**
  * IAPWS R7-97(2012), Table 2: region 1 coefficients n_i and exponents I_i, J_i of Eq. (7),
@@ -25,6 +24,9 @@ const n = [
   0.18228094581404e-23, -0.93537087292458e-25,
 ] as const;
 
+/** The Table 2 coefficients, for tests that re-evaluate Eq. (7) term by term. */
+export const REGION1_TABLE = { I, J, n } as const;
+
 const P_STAR = 16.53e6; // Pa
 const T_STAR = 1386; // K
 const TERMS = n.length;
@@ -37,16 +39,33 @@ const W_II = Float64Array.from(I, (i) => i * (i - 1));
 const W_J = Float64Array.from(J);
 const W_JJ = Float64Array.from(J, (j) => j * (j - 1));
 const W_IJ = Float64Array.from(I, (i, k) => i * (J[k] as number));
-// Powers a^I in A_POW; b^J for J ≥ 0 and (1/b)^−J for J < 0 side by side in B_BUF.
-const A_PLAN = buildPowerPlan(I);
-const B_PLAN = buildPowerPlan(J.filter((j) => j >= 0));
-const BN_PLAN = buildPowerPlan(J.filter((j) => j < 0).map((j) => -j));
-const A_POW = new Float64Array(A_PLAN.size);
-const B_BUF = new Float64Array(BN_PLAN.size + B_PLAN.size);
-const BN_POW = B_BUF.subarray(0, BN_PLAN.size);
-const BP_POW = B_BUF.subarray(BN_PLAN.size);
+// Powers a^I in A_POW[I]; b^J in B_POW[41 + J] (J = −41 … 17), filled by region1Powers.
+const A_POW = new Float64Array(33);
+const B_POW = new Float64Array(59);
 const IDX_I = Int32Array.from(I);
-const IDX_J = Int32Array.from(J, (j) => (j < 0 ? -j : BN_PLAN.size + j));
+const IDX_J = Int32Array.from(J, (j) => 41 + j);
+
+/**
+ * Exactly the powers Table 2 uses, I ∈ {0…5, 8, 21, 23, 29…32}, J ∈ {−41 … −38, −31, −29, −11,
+ * −9 … 6, 10, 17}, as short products (a plain x, x², x³ … loop is one long chain of dependent
+ * multiplications and costs more than the rest of the equation).
+ */
+function region1Powers(a: number, b: number): void {
+  const a2 = a * a, a3 = a2 * a, a4 = a2 * a2, a5 = a4 * a, a8 = a4 * a4, a16 = a8 * a8;
+  const a21 = a16 * a5, a29 = a21 * a8;
+  A_POW[0] = 1; A_POW[1] = a; A_POW[2] = a2; A_POW[3] = a3; A_POW[4] = a4; A_POW[5] = a5;
+  A_POW[8] = a8; A_POW[21] = a21; A_POW[23] = a21 * a2; A_POW[29] = a29; A_POW[30] = a29 * a;
+  A_POW[31] = a29 * a2; A_POW[32] = a16 * a16;
+  const b2 = b * b, b3 = b2 * b, b4 = b2 * b2, b5 = b4 * b, b6 = b3 * b3;
+  B_POW[41] = 1; B_POW[42] = b; B_POW[43] = b2; B_POW[44] = b3; B_POW[45] = b4; B_POW[46] = b5;
+  B_POW[47] = b6; B_POW[51] = b6 * b4; B_POW[58] = b6 * b6 * b5;
+  const c = 1 / b;
+  const c2 = c * c, c3 = c2 * c, c4 = c2 * c2, c5 = c4 * c, c6 = c3 * c3, c7 = c4 * c3, c8 = c4 * c4;
+  const c9 = c8 * c, c11 = c8 * c3, c29 = c11 * c11 * c7, c38 = c29 * c9;
+  B_POW[40] = c; B_POW[39] = c2; B_POW[38] = c3; B_POW[37] = c4; B_POW[36] = c5; B_POW[35] = c6;
+  B_POW[34] = c7; B_POW[33] = c8; B_POW[32] = c9; B_POW[30] = c11; B_POW[12] = c29;
+  B_POW[10] = c29 * c2; B_POW[3] = c38; B_POW[2] = c38 * c; B_POW[1] = c38 * c2; B_POW[0] = c38 * c3;
+}
 
 /** Scratch output of region1Gibbs: [γ, γ_π, γ_ππ, γ_τ, γ_ττ, γ_πτ, π, τ]. */
 export const G1 = new Float64Array(8);
@@ -58,12 +77,10 @@ export function region1Gibbs(T: number, p: number): void {
   const a = 7.1 - pi;
   const b = tau - 1.222;
   const ib = 1 / b;
-  runPowerPlan(A_PLAN, a, A_POW);
-  runPowerPlan(B_PLAN, b, BP_POW);
-  runPowerPlan(BN_PLAN, ib, BN_POW);
+  region1Powers(a, b);
   let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
   for (let k = 0; k < TERMS; k++) {
-    const t = (N_[k] as number) * (A_POW[IDX_I[k] as number] as number) * (B_BUF[IDX_J[k] as number] as number);
+    const t = (N_[k] as number) * (A_POW[IDX_I[k] as number] as number) * (B_POW[IDX_J[k] as number] as number);
     g += t;
     gp += (W_I[k] as number) * t;
     gpp += (W_II[k] as number) * t;
@@ -82,13 +99,35 @@ export function region1Gibbs(T: number, p: number): void {
   G1[7] = tau;
 }
 
+/**
+ * Fills only G1[1] = γ_π and G1[2] = γ_ππ (and G1[6], G1[7]) at (T K, p Pa): all a solve for v
+ * at fixed T needs, at a third of region1Gibbs' sums. No range checks, no allocation.
+ */
+export function region1PressureDerivatives(T: number, p: number): void {
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  const a = 7.1 - pi;
+  region1Powers(a, tau - 1.222);
+  let gp = 0, gpp = 0;
+  for (let k = 0; k < TERMS; k++) {
+    const t = (N_[k] as number) * (A_POW[IDX_I[k] as number] as number) * (B_POW[IDX_J[k] as number] as number);
+    gp += (W_I[k] as number) * t;
+    gpp += (W_II[k] as number) * t;
+  }
+  const ia = 1 / a;
+  G1[1] = -gp * ia;
+  G1[2] = gpp * ia * ia;
+  G1[6] = pi;
+  G1[7] = tau;
+}
+
 /** Specific volume (m³/kg) of region 1 at (T K, p Pa), Table 3; no range checks. */
 export function region1Volume(T: number, p: number): number {
-  region1Gibbs(T, p);
+  region1PressureDerivatives(T, p);
   return (IF97.R * T * (G1[1] as number)) / P_STAR;
 }
 
-/** (∂v/∂p)_T of region 1 from the last region1Gibbs call at temperature T, m³/(kg·Pa). */
+/** (∂v/∂p)_T of region 1 from the last region1Volume call at temperature T, m³/(kg·Pa). */
 export function region1VolumeSlope(T: number): number {
   return (IF97.R * T * (G1[2] as number)) / (P_STAR * P_STAR);
 }

@@ -3,7 +3,6 @@
 // IAPWS R7-97(2012), Eqs. (15)-(17), and the properties of Table 12.
 import { IF97 } from './constants.ts';
 import type { PhaseState } from './phase-state.ts';
-import { buildPowerPlan, runPowerPlan } from './power-plan.ts';
 
 /**
  * IAPWS R7-97(2012), Table 10: ideal-gas part γ° of region 2, Eq. (16): coefficients n°_i and
@@ -38,6 +37,9 @@ const n = [
   0.73087610595061e-28, 0.55414715350778e-16, -0.94369707241210e-6,
 ] as const;
 
+/** The Table 10 and 11 coefficients, for tests that re-evaluate Eq. (15) term by term. */
+export const REGION2_TABLE = { J0, n0, I, J, n } as const;
+
 const P_STAR = 1e6; // Pa
 const T_STAR = 540; // K
 const TERMS = n.length;
@@ -55,10 +57,30 @@ const W_II = Float64Array.from(I, (i) => i * (i - 1));
 const W_J = Float64Array.from(J);
 const W_JJ = Float64Array.from(J, (j) => j * (j - 1));
 const W_IJ = Float64Array.from(I, (i, k) => i * (J[k] as number));
-const PI_PLAN = buildPowerPlan(I);
-const B_PLAN = buildPowerPlan(J);
-const PI_POW = new Float64Array(PI_PLAN.size);
-const B_POW = new Float64Array(B_PLAN.size);
+const PI_POW = new Float64Array(25);
+const B_POW = new Float64Array(59);
+
+/**
+ * Exactly the powers Table 11 uses, π^I for I ∈ {1…10, 16, 18, 20…24} and b^J for J ∈ {0…4,
+ * 6…8, 10, 11, 13, 14, 16, 20, 21, 25, 26, 29, 35, 36, 39, 40, 48, 50, 53, 57, 58}, as short
+ * products (a plain x, x², x³ … loop is one long chain of dependent multiplications).
+ */
+function region2Powers(p: number, b: number): void {
+  const p2 = p * p, p3 = p2 * p, p4 = p2 * p2, p5 = p4 * p, p8 = p4 * p4, p10 = p5 * p5, p20 = p10 * p10;
+  PI_POW[0] = 1; PI_POW[1] = p; PI_POW[2] = p2; PI_POW[3] = p3; PI_POW[4] = p4; PI_POW[5] = p5;
+  PI_POW[6] = p3 * p3; PI_POW[7] = p4 * p3; PI_POW[8] = p8; PI_POW[9] = p8 * p; PI_POW[10] = p10;
+  PI_POW[16] = p8 * p8; PI_POW[18] = p8 * p10; PI_POW[20] = p20; PI_POW[21] = p20 * p;
+  PI_POW[22] = p20 * p2; PI_POW[23] = p20 * p3; PI_POW[24] = p20 * p4;
+  const b2 = b * b, b3 = b2 * b, b4 = b2 * b2, b6 = b3 * b3, b7 = b4 * b3, b8 = b4 * b4;
+  const b10 = b8 * b2, b13 = b10 * b3, b16 = b8 * b8, b20 = b10 * b10, b29 = b16 * b13;
+  const b36 = b29 * b7, b40 = b20 * b20, b48 = b40 * b8, b50 = b48 * b2;
+  B_POW[0] = 1; B_POW[1] = b; B_POW[2] = b2; B_POW[3] = b3; B_POW[4] = b4; B_POW[6] = b6;
+  B_POW[7] = b7; B_POW[8] = b8; B_POW[10] = b10; B_POW[11] = b8 * b3; B_POW[13] = b13;
+  B_POW[14] = b7 * b7; B_POW[16] = b16; B_POW[20] = b20; B_POW[21] = b20 * b;
+  B_POW[25] = b20 * b4 * b; B_POW[26] = b13 * b13; B_POW[29] = b29; B_POW[35] = b29 * b6;
+  B_POW[36] = b36; B_POW[39] = b36 * b3; B_POW[40] = b40; B_POW[48] = b48; B_POW[50] = b50;
+  B_POW[53] = b50 * b3; B_POW[57] = b50 * b7; B_POW[58] = b29 * b29;
+}
 
 /** Scratch output of region2Residual: [γʳ, γʳ_π, γʳ_ππ, γʳ_τ, γʳ_ττ, γʳ_πτ, π, τ]. */
 export const G2 = new Float64Array(8);
@@ -71,8 +93,7 @@ export function region2Residual(T: number, p: number): void {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
   const b = tau - 0.5;
-  runPowerPlan(PI_PLAN, pi, PI_POW);
-  runPowerPlan(B_PLAN, b, B_POW);
+  region2Powers(pi, b);
   let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
   for (let k = 0; k < TERMS; k++) {
     const t = (N_[k] as number) * (PI_POW[IDX_I[k] as number] as number) * (B_POW[IDX_J[k] as number] as number);
@@ -95,9 +116,30 @@ export function region2Residual(T: number, p: number): void {
   G2[7] = tau;
 }
 
+/**
+ * Fills only G2[1] = γʳ_π and G2[2] = γʳ_ππ (and G2[6], G2[7]) at (T K, p Pa): all a solve for
+ * v at fixed T needs, at a third of region2Residual's sums. No range checks, no allocation.
+ */
+export function region2PressureDerivatives(T: number, p: number): void {
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  region2Powers(pi, tau - 0.5);
+  let gp = 0, gpp = 0;
+  for (let k = 0; k < TERMS; k++) {
+    const t = (N_[k] as number) * (PI_POW[IDX_I[k] as number] as number) * (B_POW[IDX_J[k] as number] as number);
+    gp += (W_I[k] as number) * t;
+    gpp += (W_II[k] as number) * t;
+  }
+  const ipi = 1 / pi;
+  G2[1] = gp * ipi;
+  G2[2] = gpp * ipi * ipi;
+  G2[6] = pi;
+  G2[7] = tau;
+}
+
 /** Specific volume (m³/kg) of region 2 at (T K, p Pa), Table 12; no range checks. */
 export function region2Volume(T: number, p: number): number {
-  region2Residual(T, p);
+  region2PressureDerivatives(T, p);
   return (IF97.R * T * (1 / (G2[6] as number) + (G2[1] as number))) / P_STAR;
 }
 

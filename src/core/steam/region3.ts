@@ -4,7 +4,6 @@
 // turn (T, p) into a density.
 import { IF97 } from './constants.ts';
 import type { PhaseState } from './phase-state.ts';
-import { buildPowerPlan, runPowerPlan } from './power-plan.ts';
 
 /**
  * IAPWS R7-97(2012), Table 30: region 3 coefficients n_i and exponents I_i, J_i of Eq. (28),
@@ -29,6 +28,9 @@ const n = [
   0.80964802996215e-4, -0.16557679795037e-3, -0.44923899061815e-4,
 ] as const;
 
+/** The Table 30 coefficients, for tests that re-evaluate Eq. (28) term by term. */
+export const REGION3_TABLE = { n1, I, J, n } as const;
+
 const TERMS = n.length;
 
 const N_ = Float64Array.from(n);
@@ -39,10 +41,24 @@ const W_II = Float64Array.from(I, (i) => i * (i - 1));
 const W_J = Float64Array.from(J);
 const W_JJ = Float64Array.from(J, (j) => j * (j - 1));
 const W_IJ = Float64Array.from(I, (i, k) => i * (J[k] as number));
-const D_PLAN = buildPowerPlan(I);
-const T_PLAN = buildPowerPlan(J);
-const D_POW = new Float64Array(D_PLAN.size);
-const T_POW = new Float64Array(T_PLAN.size);
+const D_POW = new Float64Array(12);
+const T_POW = new Float64Array(27);
+
+/**
+ * Exactly the powers Table 30 uses, δ^I for I = 0 … 11 and τ^J for J ∈ {0…4, 6, 7, 10, 12, 15,
+ * 16, 17, 22, 23, 26}, as short products rather than one long chain of multiplications.
+ */
+function region3Powers(d: number, t: number): void {
+  const d2 = d * d, d3 = d2 * d, d4 = d2 * d2, d5 = d4 * d, d8 = d4 * d4;
+  D_POW[0] = 1; D_POW[1] = d; D_POW[2] = d2; D_POW[3] = d3; D_POW[4] = d4; D_POW[5] = d5;
+  D_POW[6] = d3 * d3; D_POW[7] = d4 * d3; D_POW[8] = d8; D_POW[9] = d8 * d; D_POW[10] = d5 * d5;
+  D_POW[11] = d8 * d3;
+  const t2 = t * t, t3 = t2 * t, t4 = t2 * t2, t6 = t3 * t3, t12 = t6 * t6, t10 = t6 * t4;
+  const t16 = t12 * t4, t22 = t12 * t10;
+  T_POW[0] = 1; T_POW[1] = t; T_POW[2] = t2; T_POW[3] = t3; T_POW[4] = t4; T_POW[6] = t6;
+  T_POW[7] = t4 * t3; T_POW[10] = t10; T_POW[12] = t12; T_POW[15] = t12 * t3; T_POW[16] = t16;
+  T_POW[17] = t16 * t; T_POW[22] = t22; T_POW[23] = t22 * t; T_POW[26] = t22 * t4;
+}
 
 /** Scratch output of region3Helmholtz: [φ, φ_δ, φ_δδ, φ_τ, φ_ττ, φ_δτ, δ, τ]. */
 export const F3 = new Float64Array(8);
@@ -51,8 +67,7 @@ export const F3 = new Float64Array(8);
 export function region3Helmholtz(rho: number, T: number): void {
   const delta = rho / IF97.rhoc;
   const tau = IF97.Tc / T;
-  runPowerPlan(D_PLAN, delta, D_POW);
-  runPowerPlan(T_PLAN, tau, T_POW);
+  region3Powers(delta, tau);
   let f = 0, fd = 0, fdd = 0, ft = 0, ftt = 0, fdt = 0;
   for (let k = 0; k < TERMS; k++) {
     const t = (N_[k] as number) * (D_POW[IDX_I[k] as number] as number) * (T_POW[IDX_J[k] as number] as number);
@@ -78,14 +93,25 @@ export function region3Helmholtz(rho: number, T: number): void {
 /** Scratch output of region3Pressure: [p Pa, (∂p/∂ρ)_T Pa·m³/kg]. */
 export const P3 = new Float64Array(2);
 
-/** Fills P3 with Eq. (28)'s pressure and its density slope at (ρ kg/m³, T K); no range checks. */
+/**
+ * Fills P3 with Eq. (28)'s pressure and its density slope at (ρ kg/m³, T K), from φ_δ and φ_δδ
+ * only (a third of region3Helmholtz' sums: this is what every density solve iterates on).
+ * No range checks, no allocation.
+ */
 export function region3Pressure(rho: number, T: number): void {
-  region3Helmholtz(rho, T);
-  const d = F3[6] as number;
-  const dfd = d * (F3[1] as number);
+  const d = rho / IF97.rhoc;
+  region3Powers(d, IF97.Tc / T);
+  let fd = 0, fdd = 0;
+  for (let k = 0; k < TERMS; k++) {
+    const t = (N_[k] as number) * (D_POW[IDX_I[k] as number] as number) * (T_POW[IDX_J[k] as number] as number);
+    fd += (W_I[k] as number) * t;
+    fdd += (W_II[k] as number) * t;
+  }
+  // δ·φ_δ = n1 + Σ n·I·δ^I·τ^J and δ²·φ_δδ = −n1 + Σ n·I(I−1)·δ^I·τ^J
+  const dfd = n1 + fd;
   const RT = IF97.R * T;
   P3[0] = rho * RT * dfd;
-  P3[1] = RT * (2 * dfd + d * d * (F3[2] as number));
+  P3[1] = RT * (2 * dfd + fdd - n1);
 }
 
 /**

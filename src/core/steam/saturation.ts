@@ -2,7 +2,7 @@
 // 273.15 K … 623.15 K: region 1 (liquid) and region 2 (vapor) at p_s(T) from Eq. (30) — the
 // boundary ownership of IAPWS R7-97(2012), where both regions include 623.15 K.
 // 623.15 K … 647.096 K: both phases from region 3, Eq. (28), iterated to p_s(T) (see
-// region3-density.ts for the route and the last 2e-5 K below Tc).
+// region3-density.ts for the route and the last 5e-5 K below Tc).
 import { InputError } from '../errors.ts';
 import { IF97, T_13, T_MIN } from './constants.ts';
 import type { SaturationState } from './phase-state.ts';

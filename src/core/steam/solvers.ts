@@ -9,8 +9,8 @@ const SCRATCH = new Float64Array(2);
  * Safeguarded Newton iteration on a bracket [lo, hi] with f(lo)·f(hi) ≤ 0: a Newton step when
  * it stays inside the bracket and shrinks it fast enough, bisection otherwise, so it converges
  * for any continuous f (the Newton-with-bisection scheme of Numerical Recipes' `rtsafe`).
- * Stops when |f| ≤ fTol or the step is below xTol·|x|; returns the last x (always inside the
- * bracket, always finite).
+ * Stops when |f| ≤ fTol (then takes that last Newton step if it is small and inside the bracket) or
+ * the step is below xTol·|x|; returns x, always inside the bracket and finite.
  */
 export function solveBracketed(
   fn: ValueAndSlope,
@@ -34,7 +34,14 @@ export function solveBracketed(
   let f = SCRATCH[0] as number;
   let df = SCRATCH[1] as number;
   for (let k = 0; k < 200; k++) {
-    if (Math.abs(f) <= fTol) return x;
+    if (Math.abs(f) <= fTol) {
+      // Finish with the Newton step this evaluation already paid for, if it is small and stays
+      // inside the bracket (a vanishing slope would make it neither).
+      const step = f / df;
+      const polished = x - step;
+      const inside = polished > Math.min(xl, xh) && polished < Math.max(xl, xh);
+      return inside && Math.abs(step) <= 1e-6 * Math.abs(x) ? polished : x;
+    }
     if (f < 0) xl = x;
     else xh = x;
     const newtonLeaves = ((x - xh) * df - f) * ((x - xl) * df - f) > 0;

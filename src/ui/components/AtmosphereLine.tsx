@@ -3,7 +3,7 @@ import type { AtmosphereResult } from '../state/atmosphere.ts';
 import { formatNumber } from '../state/format.ts';
 import { hrefFor } from '../router.ts';
 
-export function AtmosphereLine({ atm }: { atm: AtmosphereResult }) {
+export function AtmosphereLine({ atm, link = true }: { atm: AtmosphereResult; link?: boolean }) {
   if (!atm.ok) {
     return (
       <p class="field-error">
@@ -14,8 +14,8 @@ export function AtmosphereLine({ atm }: { atm: AtmosphereResult }) {
   }
   return (
     <p class="hint">
-      Site atmosphere {formatNumber(atm.pressurePa / 1000, 5)} kPa absolute, from the {atm.source}.{' '}
-      <a href={hrefFor('settings')}>Change</a>
+      Site atmosphere {formatNumber(atm.pressurePa / 1000, 5)} kPa absolute, from the {atm.source}.
+      {link ? <>{' '}<a href={hrefFor('settings')}>Change</a></> : null}
     </p>
   );
 }

@@ -24,7 +24,7 @@ export function AtmosphereSettings() {
   return (
     <section class="panel" aria-labelledby="set-atm">
       <h2 id="set-atm">Site atmosphere</h2>
-      <p class="hint">Gauge readings are referred to this atmospheric pressure. A vessel can carry its own.</p>
+      <p class="hint">Used by Convert and as the starting value for new vessels (each vessel keeps its own). A barometer reading taken today also applies to every check until you change it.</p>
       <Choice name="set-atm-mode" legend="Take atmospheric pressure from" value={a.mode} options={MODES} onChange={setMode} />
       {a.mode === 'barometer' ? (
         <NumberField id="set-baro" label="Barometer reading (absolute)" value={a.text}
@@ -39,7 +39,7 @@ export function AtmosphereSettings() {
           hint="US Standard Atmosphere 1976; weather moves the real value by a few kPa."
           error={atm.ok ? undefined : atm.error} />
       ) : null}
-      {atm.ok ? <AtmosphereLine atm={atm} /> : null}
+      {atm.ok ? <AtmosphereLine atm={atm} link={false} /> : null}
     </section>
   );
 }

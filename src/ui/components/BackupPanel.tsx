@@ -10,16 +10,16 @@ export function BackupPanel() {
   const [persisted, setPersisted] = useState<string>('checking…');
   const [message, setMessage] = useState('');
   useEffect(() => { void repo.persistenceLabel().then(setPersisted); }, []);
-  const exportNow = async () => {
+  const exportNow = async (kind: 'backup' | 'csv') => {
     try {
-      const file = await repo.exportBackup();
+      const file = await repo.exportFile(kind);
       const url = URL.createObjectURL(file.blob);
       const a = document.createElement('a');
       a.href = url;
       a.download = file.name;
       a.click();
       setTimeout(() => URL.revokeObjectURL(url), 10_000);
-      await updateSettings({ lastBackup: formatIsoWithOffset(new Date()) });
+      if (kind === 'backup') await updateSettings({ lastBackup: formatIsoWithOffset(new Date()) });
       setMessage(`Exported ${file.name}. Keep it somewhere other than this phone.`);
     } catch (e) {
       setMessage(`Export failed: ${repo.storageMessage(e)}`);
@@ -33,7 +33,10 @@ export function BackupPanel() {
         Last backup: <strong>{s.lastBackup ? shortTime(s.lastBackup) : 'never'}</strong>. The log lives only on
         this device until you export it; clearing the browser's site data deletes it. Export at the end of each shift.
       </p>
-      <button type="button" class="primary" onClick={() => void exportNow()}>Export vessels and log (JSON)</button>
+      <div class="row">
+        <button type="button" class="primary" onClick={() => void exportNow('backup')}>Export full backup (JSON)</button>
+        <button type="button" onClick={() => void exportNow('csv')}>Export log for spreadsheets (CSV)</button>
+      </div>
       <p aria-live="polite">{message}</p>
     </section>
   );

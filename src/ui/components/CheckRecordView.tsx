@@ -3,10 +3,13 @@
 import type { CheckRecord } from '../state/repo.ts';
 import { Figures } from './Figures.tsx';
 import { ResultCard } from './ResultCard.tsx';
+import { CautionList } from './CautionList.tsx';
+import { StandingNote } from './StandingNote.tsx';
 import { hrefFor } from '../router.ts';
 import { viewOfRecord } from '../state/check-session.ts';
 import { useSettings } from '../state/app-state.ts';
 import { unitsInForce } from '../state/settings-model.ts';
+import { unitLabel } from '../state/unit-labels.ts';
 
 const INPUT_NAMES: Record<string, string> = { temperature: 'Temperature', pressure: 'Pressure', grossWeight: 'Gross weight' };
 
@@ -15,7 +18,7 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
   const view = viewOfRecord(r, prefs);
   const inputs = Object.entries(r.inputs).map(([k, v]) => ({
     label: INPUT_NAMES[k] ?? k,
-    value: `${v.text} ${v.unit}${v.reference ? ` (${v.reference})` : ''}`,
+    value: `${v.text} ${unitLabel(v.unit)}${v.reference ? ` (${v.reference})` : ''}`,
   }));
   return (
     <div>
@@ -31,7 +34,14 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
         <h3>Inputs as typed</h3>
         <Figures figures={inputs} />
       </section>
-      <ResultCard view={{ ...view, cautions: r.cautions }} heading="Result as saved" />
+      {view ? <ResultCard view={{ ...view, cautions: r.cautions }} heading="Result as saved" /> : (
+        <section class="panel" aria-labelledby="rec-old">
+          <h2 id="rec-old">Result as saved</h2>
+          <p>This record was saved by app version {r.appVersion}, whose result layout this version cannot show. Its cautions:</p>
+          <CautionList cautions={r.cautions} />
+          <StandingNote />
+        </section>
+      )}
       <section class="panel" aria-labelledby="rec-ver">
         <h2 id="rec-ver">Versions</h2>
         <Figures figures={[

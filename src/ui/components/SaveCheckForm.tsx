@@ -8,6 +8,7 @@ import type { VesselRecord } from '../state/repo.ts';
 import { storageMessage } from '../state/repo.ts';
 import { hrefFor } from '../router.ts';
 import { shortTime } from '../state/format.ts';
+import { updateSettings, useSettings } from '../state/app-state.ts';
 
 interface Props {
   draft: CheckDraft;
@@ -20,6 +21,7 @@ interface Props {
 export function SaveCheckForm({ draft, onChange, evaluation, vessel, onSaved }: Props) {
   const [status, setStatus] = useState<{ text: string; id?: string; error?: boolean }>({ text: '' });
   const [busy, setBusy] = useState(false);
+  const settings = useSettings();
   const ready = evaluation.kind === 'result' && vessel !== undefined;
   const save = async (ev: Event) => {
     ev.preventDefault();
@@ -32,6 +34,8 @@ export function SaveCheckForm({ draft, onChange, evaluation, vessel, onSaved }: 
     try {
       const record = await saveCheck(draft, vessel, evaluation);
       onSaved();
+      // The first name typed becomes the default for later checks.
+      if (!settings.technician) void updateSettings({ technician: draft.technician.trim() });
       setStatus({ text: `Saved to the log (${shortTime(record.time)}).`, id: record.id });
     } catch (e) {
       setStatus({ text: `Not saved, your entry is kept: ${storageMessage(e)}`, error: true });

@@ -1,6 +1,7 @@
 // Add or edit one vessel; retire it (it keeps its history and drops out of new checks).
 import { useState } from 'preact/hooks';
 import { VesselFields } from './VesselFields.tsx';
+import { VesselHistory } from './VesselHistory.tsx';
 import { navigate } from '../router.ts';
 import * as repo from '../state/repo.ts';
 import type { VesselRecord } from '../state/repo.ts';
@@ -53,6 +54,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
   };
 
   return (
+    <>
     <form onSubmit={(ev) => void save(ev)} noValidate>
       <h2>{vessel ? `Vessel ${vessel.tag}` : 'New vessel'}</h2>
       {vessel && isDemoVessel(vessel) ? <p><span class="demo-tag">DEMO DATA</span> An invented vessel for trying the app.</p> : null}
@@ -69,5 +71,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
         ) : null}
       </div>
     </form>
+    {vessel ? <VesselHistory vesselId={vessel.id} /> : null}
+    </>
   );
 }

@@ -18,7 +18,7 @@ export function VesselSketch({ data }: { data: SketchData }) {
   const vertical = data.orientation === 'vertical';
   const w = vertical ? 110 : 200, h = vertical ? 200 : 110;
   const x0 = vertical ? 45 : 20, y0 = 10, r = vertical ? 55 : 55;
-  const W = vertical ? 200 : 240, H = 220;
+  const W = vertical ? 200 : 240, H = vertical ? 240 : 150;
   const yAt = (f: number) => y0 + h * (1 - Math.min(1, Math.max(0, f)));
   return (
     <svg class="picture" viewBox={`0 0 ${W} ${H}`} role="img" aria-label={data.caption}>
@@ -32,7 +32,7 @@ export function VesselSketch({ data }: { data: SketchData }) {
       </g>
       <line class="svg-level" x1={x0 - 8} x2={x0 + w + 8} y1={yAt(data.level)} y2={yAt(data.level)} />
       <rect class="svg-shell" x={x0} y={y0} width={w} height={h} rx={r} ry={vertical ? 40 : r} fill-opacity="0" />
-      <text class="svg-text" x={W / 2} y={H - 4} text-anchor="middle">{Math.round(data.level * 100)} % {data.note}</text>
+      <text class="svg-text svg-caption" x={W / 2} y={H - 8} text-anchor="middle">{Math.round(data.level * 100)} % {data.note}</text>
     </svg>
   );
 }

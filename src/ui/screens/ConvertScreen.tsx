@@ -10,7 +10,8 @@ import { useSettings } from '../state/app-state.ts';
 import { siteAtmosphere } from '../state/atmosphere.ts';
 import { pressureInAllUnits, type PressureKind } from '../state/convert.ts';
 import { unitsInForce } from '../state/settings-model.ts';
-import { formatNumber } from '../state/format.ts';
+import { formatEditable } from '../state/format.ts';
+import { StandingNote } from '../components/StandingNote.tsx';
 
 const KINDS = [{ id: 'gauge', label: 'Gauge' }, { id: 'absolute', label: 'Absolute' }] as const;
 
@@ -39,7 +40,7 @@ export function ConvertScreen() {
                 <thead><tr><th scope="col">Unit</th><th scope="col">Absolute</th><th scope="col">Gauge</th></tr></thead>
                 <tbody>
                   {table.rows.map((r) => (
-                    <tr key={r.unit}><th scope="row">{r.label}</th><td>{formatNumber(r.absolute, 6)}</td><td>{formatNumber(r.gauge, 6)}</td></tr>
+                    <tr key={r.unit}><th scope="row">{r.label}</th><td>{formatEditable(r.absolute)}</td><td>{formatEditable(r.gauge)}</td></tr>
                   ))}
                 </tbody>
               </table>
@@ -48,6 +49,7 @@ export function ConvertScreen() {
         </div>
       </section>
       <SaturationConverter atmospherePa={atmPa} />
+      <StandingNote />
     </div>
   );
 }

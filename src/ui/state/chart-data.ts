@@ -1,12 +1,10 @@
 // Points for the saturation-line picture, in the display units: the IF97 saturation line around
 // the reading, and the reading's tolerance box. Computed by the core; only sampled here.
-import { pressureFromPa, saturationPressure, temperatureFromK } from '../../core/index.ts';
+import { IF97, pressureFromPa, saturationPressure, temperatureFromK } from '../../core/index.ts';
 import { PRESSURE_UNITS, TEMPERATURE_UNITS } from '../../core/index.ts';
 import type { ChartData } from '../components/SaturationChart.tsx';
 import type { UnitPrefs } from './settings-model.ts';
 
-const T_MIN_K = 273.16;
-const T_MAX_K = 647.096;
 
 /** T K and absolute p Pa with their ± limits → chart data; undefined where IF97 has no saturation line. */
 export function saturationChartData(
@@ -15,8 +13,8 @@ export function saturationChartData(
 ): ChartData | undefined {
   const { temperatureK: T, absolutePressurePa: p, temperatureTolK: dT, pressureTolPa: dp } = reading;
   const half = Math.max(8, 4 * dT);
-  const lo = Math.max(T_MIN_K, T - half);
-  const hi = Math.min(T_MAX_K, T + half);
+  const lo = Math.max(IF97.Tt, T - half);
+  const hi = Math.min(IF97.Tc, T + half);
   if (!(hi > lo)) return undefined;
   const curve: { T: number; p: number }[] = [];
   const n = 40;

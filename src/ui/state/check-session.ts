@@ -2,7 +2,7 @@
 // the record saved to the log. All computation is the core's.
 import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '../../core/index.ts';
 import type { Reading } from '../../core/index.ts';
-import type { CheckRecord, JsonObject, JsonValue, TypedInput, VesselRecord } from '../../store/index.ts';
+import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
 import * as repo from './repo.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { readingFromDraft, type ReadingField } from './check-reading.ts';
@@ -50,21 +50,31 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
     note: d.note,
     takenAt: new Date(e.reading.time),
     inputs,
-    reading: JSON.parse(JSON.stringify(e.reading)) as JsonObject,
-    result: JSON.parse(JSON.stringify(e.result)) as JsonValue,
+    reading: e.reading,
+    result: e.result,
     cautions: e.result.cautions,
     appVersion: __APP_VERSION__,
     formulationId: e.result.formulationId,
   });
 }
 
-/** The saved result as the screen shows it (from the stored result and vessel snapshot; nothing recomputed). */
-export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView {
-  return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+/**
+ * The saved result as the screen shows it, from the stored result and vessel snapshot (nothing
+ * recomputed); undefined if this version cannot read a result saved by another version.
+ */
+export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | undefined {
+  try {
+    return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+  } catch {
+    return undefined;
+  }
 }
 
 /** A one-line verdict for the log list. */
 export function verdictOfRecord(r: CheckRecord): string {
-  const result = r.result as unknown as CheckResult;
-  return verdictText(result).text;
+  try {
+    return verdictText(r.result as unknown as CheckResult).text;
+  } catch {
+    return 'Result saved by another app version';
+  }
 }

@@ -29,12 +29,26 @@ export function formatFixed(value: number, decimals: number): string {
   return coreFormat(value, { decimals, decimalSeparator: separator });
 }
 
-/** A value with its ± band, e.g. "412.3 ± 1.2". */
+/**
+ * A value with its ± band, e.g. "412.3 ± 1.2": the band to two significant digits and the value
+ * to the same last decimal place, so no digit is shown that the band makes meaningless.
+ */
 export function formatWithBand(value: number, band: number, significant = 4): string {
-  return `${formatNumber(value, significant)} ± ${formatNumber(Math.abs(band), 2)}`;
+  const b = Math.abs(band);
+  if (!Number.isFinite(b) || b === 0) return `${formatNumber(value, significant)} ± 0`;
+  const decimals = Math.min(12, Math.max(0, 1 - Math.floor(Math.log10(b))));
+  return `${formatFixed(value, decimals)} ± ${formatFixed(b, decimals)}`;
 }
 
 /** A stored ISO 8601 time shown briefly, e.g. "2026-12-01 14:05". */
 export function shortTime(iso: string): string {
   return iso.slice(0, 16).replace('T', ' ');
+}
+
+/** A number to put back into an input: up to 6 significant digits, no trailing zeros. */
+export function formatEditable(value: number): string {
+  const text = formatNumber(value, 6);
+  const point = separator === ',' ? ',' : '.';
+  if (!text.includes(point)) return text;
+  return text.replace(/0+$/, '').replace(new RegExp(`\\${point}$`), '');
 }

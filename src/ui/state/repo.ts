@@ -42,11 +42,11 @@ export function getVessel(id: string): Promise<VesselRecord | undefined> {
 }
 
 export function addVessel(tag: string, description: string, spec: object): Promise<VesselRecord> {
-  return store.addVessel({ tag, description, spec: spec as store.VesselSpecData });
+  return store.addVessel({ tag, description, spec });
 }
 
 export function updateVessel(id: string, tag: string, description: string, spec: object): Promise<VesselRecord> {
-  return store.updateVessel(id, { tag, description, spec: spec as store.VesselSpecData });
+  return store.updateVessel(id, { tag, description, spec });
 }
 
 export function retireVessel(id: string): Promise<VesselRecord> {
@@ -63,6 +63,11 @@ export function getCheck(id: string): Promise<CheckRecord | undefined> {
 
 export async function recentChecks(limit = 100): Promise<CheckRecord[]> {
   return (await store.listChecks({ limit })).checks;
+}
+
+/** One vessel's checks, newest first (a retired vessel keeps them). */
+export async function checksOfVessel(vesselId: string, limit = 20): Promise<CheckRecord[]> {
+  return (await store.checksForVessel(vesselId, { limit })).checks;
 }
 
 export function saveDraft(key: string, value: unknown): Promise<void> {
@@ -92,9 +97,11 @@ export async function persistenceLabel(): Promise<string> {
   }
 }
 
-/** The full backup as a file to download. */
-export async function exportBackup(): Promise<{ name: string; blob: Blob }> {
-  const text = await store.exportBackup();
-  const stamp = new Date().toISOString().slice(0, 10);
-  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([text], { type: 'application/json' }) };
+/** The full backup (JSON) or the log as CSV, as a file to download. */
+export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string; blob: Blob }> {
+  const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);
+  if (kind === 'csv') {
+    return { name: `tankside-log-${stamp}.csv`, blob: new Blob([await store.exportCsv()], { type: 'text/csv' }) };
+  }
+  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([await store.exportBackup()], { type: 'application/json' }) };
 }

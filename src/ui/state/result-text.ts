@@ -19,9 +19,9 @@ function units(u: UnitPrefs) {
   return {
     p: (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 5)} ${pl}`,
     pBand: (pa: number, band: number) => `${formatWithBand(pressureFromPa(pa, u.pressure), pressureFromPa(band, u.pressure), 5)} ${pl}`,
-    t: (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 5)} ${tl}`,
+    t: (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 4)} ${tl}`,
     dt: (k: number, band: number) => `${formatWithBand(temperatureDifferenceFromK(k, u.temperature), temperatureDifferenceFromK(band, u.temperature), 3)} ${tl}`,
-    m: (kg: number) => `${formatNumber(massFromKg(kg, u.mass), 5)} ${ml}`,
+    m: (kg: number) => `${formatNumber(massFromKg(kg, u.mass), 4)} ${ml}`,
     mBand: (kg: number, band: number) => `${formatWithBand(massFromKg(kg, u.mass), massFromKg(band, u.mass), 5)} ${ml}`,
     v: (m3: number) => `${formatNumber(volumeFromM3(m3, u.volume), 4)} ${vl}`,
   };

@@ -1,5 +1,5 @@
 // The app's own settings (stored through the store's settings functions as one record).
-import { formatNumber, localeDecimalSeparator, readNumber } from './format.ts';
+import { formatEditable, localeDecimalSeparator, readNumber } from './format.ts';
 import { pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/index.ts';
 import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
 
@@ -53,10 +53,10 @@ export function atmosphereDefaults(s: AppSettings, u: UnitPrefs): { elevationM?:
   if (a.mode === 'elevation') return { elevationM: a.text };
   if (a.mode === 'barometer') {
     try {
-      return { pressureText: formatNumber(pressureFromPa(pressureToPa(readNumber(a.text, 'barometer reading'), a.unit), u.pressure), 6) };
+      return { pressureText: formatEditable(pressureFromPa(pressureToPa(readNumber(a.text, 'barometer reading'), a.unit), u.pressure)) };
     } catch {
       return {};
     }
   }
-  return { pressureText: formatNumber(pressureFromPa(101_325, u.pressure), 6) };
+  return { pressureText: formatEditable(pressureFromPa(101_325, u.pressure)) };
 }

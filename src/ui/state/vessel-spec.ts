@@ -7,7 +7,7 @@ import {
 } from '../../core/index.ts';
 import type { HeadSpec, VesselGeometry } from '../../core/check/vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
-import { formatNumber, readNumber } from './format.ts';
+import { formatEditable, readNumber } from './format.ts';
 import type { UnitPrefs } from './settings-model.ts';
 import type { FormField, VesselForm } from './vessel-form.ts';
 import { messageOf } from './atmosphere.ts';
@@ -75,7 +75,7 @@ export function specFromForm(f: VesselForm): SpecResult {
 export function formFromSpec(stored: object, u: UnitPrefs): VesselForm {
   const s = stored as VesselSpec;
   const g = s.geometry;
-  const n = (x: number) => formatNumber(x, 6);
+  const n = (x: number) => formatEditable(x);
   const p = (x: number) => n(pressureFromPa(x, u.pressure));
   const ins = s.instruments;
   const sensor = ins.temperatureSensor;

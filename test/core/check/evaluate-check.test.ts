@@ -42,6 +42,10 @@ describe('evaluateCheck', () => {
     const r = evaluateCheck(testVessel(), reading({ weight: { kind: 'net', netKg: 3800 } }));
     expect(r.inventory.regime).toBe('liquid-full');
     expect(r.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'liquid-full-now' });
+    // A liquid-full vessel above saturation is hydraulic pressure, not air.
+    const high = evaluateCheck(testVessel(), reading({ pressure: { reference: 'gauge', pressurePa: 0.8e6 }, weight: { kind: 'net', netKg: 3800 } }));
+    expect(high.saturation.verdict.verdict).toBe('pressure-above-saturation');
+    expect(rules(high)).not.toContain('noncondensable-gas');
   });
   it('air in the vessel raises the non-condensable gas WARNING with Dalton\'s estimate (field-practice.md §4.2)', () => {
     const r = evaluateCheck(testVessel(), reading({ temperatureK: 115.3 + 273.15, pressure: { reference: 'absolute', pressurePa: 204.7e3 } }));
@@ -146,5 +150,55 @@ describe('every check rule is raised by its scenario', () => {
   it('a measured barometer removes the atmosphere-assumed notice', () => {
     const r = evaluateCheck(testVessel(), reading({ atmospherePa: 101325 }));
     expect(r.cautions.map((c) => c.rule)).not.toContain('atmosphere-assumed');
+  });
+});
+
+describe('evaluateCheck over arbitrary inputs (fast-check)', () => {
+  it('returns plain finite data or throws InputError, never anything else', () => {
+    const head = fc.oneof(
+      fc.constant({ kind: 'flat' as const }),
+      fc.constant({ kind: 'semi-ellipsoidal-2-1' as const }),
+      fc.constant({ kind: 'hemispherical' as const }),
+      fc.record({ kind: fc.constant('torispherical' as const), crownRadiusM: fc.double({ min: 0.1, max: 5, noNaN: true }), knuckleRadiusM: fc.double({ min: 0.01, max: 1, noNaN: true }) }),
+    );
+    const geometry = fc.oneof(
+      fc.record({ shape: fc.constant('stated-volume' as const), volumeM3: fc.double({ min: 1e-3, max: 100, noNaN: true }) }),
+      fc.record({
+        shape: fc.constantFrom('vertical-cylinder' as const, 'horizontal-cylinder' as const),
+        innerDiameterM: fc.double({ min: 0.1, max: 4, noNaN: true }),
+        straightLengthM: fc.double({ min: 0, max: 10, noNaN: true }),
+        head,
+      }),
+    );
+    fc.assert(
+      fc.property(
+        geometry,
+        fc.double({ min: 273.16, max: 647.096, noNaN: true }),
+        fc.double({ min: -2e5, max: 3e7, noNaN: true }),
+        fc.boolean(),
+        fc.oneof(fc.constant(undefined), fc.double({ min: 20e3, max: 120e3, noNaN: true })),
+        fc.oneof(
+          fc.constant({ kind: 'not-weighed' as const }),
+          fc.record({ kind: fc.constant('net' as const), netKg: fc.double({ min: -1, max: 2e5, noNaN: true }) }),
+          fc.record({ kind: fc.constant('gross' as const), grossKg: fc.double({ min: 0, max: 2e5, noNaN: true }) }),
+        ),
+        (g, T, p, gauge, atm, weight) => {
+          try {
+            const r = evaluateCheck(testVessel({ geometry: g }), {
+              time: '2026-03-14T09:30:00Z',
+              temperatureK: T,
+              pressure: { reference: gauge ? 'gauge' : 'absolute', pressurePa: p },
+              ...(atm === undefined ? {} : { atmospherePa: atm }),
+              weight,
+            });
+            expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+          } catch (e) {
+            if (!(e instanceof InputError)) throw e;
+            expect(e.field.length).toBeGreaterThan(0);
+          }
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 });

@@ -68,3 +68,11 @@ describe('margins and cooling', () => {
     expect(c.absolutePressurePa).toBeCloseTo(611.657, 0);
   });
 });
+
+describe('cooling an overfilled vessel', () => {
+  it('liquid-full even cold beyond 100 MPa is flagged, not given a made-up pressure', () => {
+    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.0009, noncondensablePartialPressurePa: 0, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false });
+    expect(c.aboveFormulationLimit).toBe(true);
+    expect(c.belowAtmosphere).toBe(false);
+  });
+});

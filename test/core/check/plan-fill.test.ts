@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { planFill, type FillRequest } from '../../../src/core/check/plan-fill.ts';
 import { InputError } from '../../../src/core/errors.ts';
 import { saturation } from '../../../src/core/steam/index.ts';
@@ -104,5 +105,33 @@ describe('every plan rule is raised by its scenario', () => {
   });
   it('plan-assumes-air-removed is always there', () => {
     expect(planFill(oneCubicMetre, request()).cautions.map((c) => c.rule)).toContain('plan-assumes-air-removed');
+  });
+});
+
+describe('planFill over arbitrary requests (fast-check)', () => {
+  it('returns plain finite data or throws InputError, never anything else', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 260, max: 660, noNaN: true }),
+        fc.double({ min: 260, max: 660, noNaN: true }),
+        fc.oneof(
+          fc.constant({ kind: 'dry-saturated' as const }),
+          fc.record({ kind: fc.constant('quality' as const), quality: fc.double({ min: -0.1, max: 1.1, noNaN: true }) }),
+          fc.record({ kind: fc.constant('vapor-space-fraction' as const), fraction: fc.double({ min: -0.1, max: 1.1, noNaN: true }) }),
+        ),
+        fc.double({ min: -5, max: 150, noNaN: true }),
+        fc.oneof(fc.constant(undefined), fc.double({ min: -1, max: 1e6, noNaN: true })),
+        (T2, T1, target, margin, power) => {
+          try {
+            const p = planFill(oneCubicMetre, { targetTemperatureK: T2, startTemperatureK: T1, target, liquidFullMarginK: margin, ...(power === undefined ? {} : { heaterPowerW: power }) });
+            expect(JSON.parse(JSON.stringify(p))).toEqual(p);
+            expect(p.waterMassKg).toBeGreaterThan(0);
+          } catch (e) {
+            if (!(e instanceof InputError)) throw e;
+          }
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 });

@@ -1,0 +1,9 @@
+// Display labels for stored unit ids (records keep the id; people read the symbol).
+import { MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
+
+const ALL: readonly { id: string; label: string }[] = [...PRESSURE_UNITS, ...TEMPERATURE_UNITS, ...MASS_UNITS, ...VOLUME_UNITS];
+
+/** The symbol for a unit id ("degC" → "°C"); an unknown id is shown as stored. */
+export function unitLabel(id: string): string {
+  return ALL.find((u) => u.id === id)?.label ?? id;
+}

@@ -1,0 +1,58 @@
+// The result card's words and figures for engine results (the physics is the engine's and is
+// tested there; this checks the mapping to the screen).
+import { describe, expect, it } from 'vitest';
+import { evaluateCheck, saturationPressure, type VesselSpec } from '../../src/core/index.ts';
+import { resultView } from '../../src/ui/state/result-text.ts';
+import { formatWithBand } from '../../src/ui/state/format.ts';
+import { UNIT_PRESETS } from '../../src/ui/state/settings-model.ts';
+
+const vessel: VesselSpec = {
+  tag: 'T-1', description: 'test vessel', designTemperatureK: 473.15, vacuumRated: false, siteAtmospherePa: 101_325,
+  ambientTemperatureK: 293.15,
+  geometry: { shape: 'vertical-cylinder', innerDiameterM: 0.6, straightLengthM: 1.2, head: { kind: 'semi-ellipsoidal-2-1' } },
+  tareKg: 420, mawpGaugePa: 1000e3, reliefSetGaugePa: 950e3,
+  instruments: {
+    pressureGauge: { spanPa: 1600e3, accuracyPercentOfSpan: 1 }, temperatureSensor: { kind: 'iec-60751', sensorClass: 'B' },
+    weightToleranceKg: 1, volumeTolerancePercent: 2, barometerTolerancePa: 0,
+  },
+};
+const time = '2026-12-01T10:00:00+00:00';
+
+describe('resultView', () => {
+  it('a reading on the saturation line: agreement, quality and level with bands, both pictures', () => {
+    const T = 423.15;
+    const r = evaluateCheck(vessel, { time, temperatureK: T, pressure: { reference: 'absolute', pressurePa: saturationPressure(T) }, weight: { kind: 'gross', grossKg: 612 } });
+    const v = resultView(r, vessel, UNIT_PRESETS.SI);
+    expect(v.verdict.text).toMatch(/agree/);
+    const labels = v.figures.map((f) => f.label);
+    expect(labels).toEqual(expect.arrayContaining(['Quality (steam mass fraction)', 'Liquid mass', 'Liquid level']));
+    for (const l of ['Quality (steam mass fraction)', 'Liquid mass', 'Liquid level']) {
+      expect(v.figures.find((f) => f.label === l)?.value).toMatch(/±/);
+    }
+    expect(v.chart?.curve.length).toBe(41);
+    expect(v.sketch?.orientation).toBe('vertical');
+    expect(v.sketch!.low).toBeLessThanOrEqual(v.sketch!.level);
+    expect(v.sketch!.high).toBeGreaterThanOrEqual(v.sketch!.level);
+    expect(v.hazards.some((h) => h.startsWith('Margin to MAWP'))).toBe(true);
+    expect(v.cautions.some((c) => c.rule === 'standing-note')).toBe(true);
+  });
+
+  it('pressure far above saturation: the gas wording and its partial pressure', () => {
+    const T = 393.15;
+    const r = evaluateCheck(vessel, { time, temperatureK: T, pressure: { reference: 'absolute', pressurePa: saturationPressure(T) + 100e3 }, weight: { kind: 'not-weighed' } });
+    const v = resultView(r, vessel, UNIT_PRESETS.US);
+    expect(v.verdict.tone).toBe('bad');
+    expect(v.verdict.text).toMatch(/air or other gas/);
+    expect(v.figures.find((f) => f.label === 'Gas partial pressure (estimate)')?.value).toMatch(/psi/);
+    expect(v.sketch).toBeUndefined();
+  });
+});
+
+describe('formatWithBand', () => {
+  it('rounds the value to the band, the band to two significant digits', () => {
+    expect(formatWithBand(1.8058, 21)).toBe('2 ± 21');
+    expect(formatWithBand(0.259, 0.0131)).toBe('0.259 ± 0.013');
+    expect(formatWithBand(790.04, 5.5)).toBe('790.0 ± 5.5');
+    expect(formatWithBand(-0.136, 1.62)).toBe('\u22120.1 ± 1.6');
+  });
+});
