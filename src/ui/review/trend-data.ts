@@ -73,10 +73,13 @@ export interface PanelGeometry {
   marks: Mark[];
   /** Checks with a value in this series. */
   count: number;
+  /** Where this panel starts down the chart. */
+  offsetY: number;
 }
 
 export interface TrendGeometry {
   width: number;
+  height: number;
   panelHeight: number;
   plot: { left: number; right: number; top: number; bottom: number };
   xTicks: Tick[];
@@ -119,7 +122,7 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
   const xAt = t1 > t0 ? [t0, t0 + span / 2, t1] : [t0];
   const anchors = ['start', 'middle', 'end'] as const;
   const xTicks: Tick[] = points.length === 0 ? [] : xAt.map((ms, i) => ({ at: xOf(ms), label: dayLabel(ms), anchor: xAt.length === 1 ? 'start' : anchors[i]! }));
-  const panels = TREND_SERIES.map((spec): PanelGeometry => {
+  const panels = TREND_SERIES.map((spec, index): PanelGeometry => {
     const values = points.map((p) => (p[spec.key] === null ? null : p[spec.key]! * spec.scale));
     const present = values.filter((v): v is number => v !== null);
     const ticks = present.length ? niceTicks(Math.min(...present), Math.max(...present)) : [0, 1];
@@ -147,7 +150,8 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
       yTicks: ticks.map((v) => ({ at: yOf(v), label: String(v) })),
       marks,
       count: present.length,
+      offsetY: index * panelHeight,
     };
   });
-  return { width, panelHeight, plot, xTicks, panels };
+  return { width, height: panelHeight * panels.length, panelHeight, plot, xTicks, panels };
 }
