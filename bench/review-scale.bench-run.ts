@@ -51,6 +51,15 @@ async function timeRows(page: Page, act: string): Promise<number> {
   }, act);
 }
 
+/** The page's own timing of its last job with this label (store work plus making the file). */
+async function jobMs(page: Page, label: string): Promise<number> {
+  return page.evaluate((name) => performance.getEntriesByName(`tankside: ${name}`).at(-1)?.duration ?? NaN, label);
+}
+
+function noteJob(what: string, ms: number): void {
+  console.log(`    ${what.padEnd(64)} ${(ms / 1000).toFixed(3).padStart(8)} s`);
+}
+
 async function timeClick(page: Page, name: string, until: () => Promise<unknown>): Promise<number> {
   const t0 = Date.now();
   await Promise.all([until(), page.getByRole('button', { name }).click()]);
@@ -87,6 +96,7 @@ it(`review at ${N} + ${N} checks`, async () => {
     note(`import ${N} checks into an empty device (seeding)`, await importFile(fileA), '(seeding, no target)');
     await page.locator('[data-import-result]').evaluate((el) => el.remove());
     note(`import and merge ${N} checks into a device holding ${N}`, await importFile(fileB), '≤ 10 s');
+    noteJob('of which reading the file and importBackup, timed in the page', await jobMs(page, 'Importing the backup'));
     const added = await page.locator('[data-import-added]').getAttribute('data-import-added');
     expect(added).toBe(String(CHECKS));
 
@@ -111,9 +121,12 @@ it(`review at ${N} + ${N} checks`, async () => {
     await page.locator('.review-totals[data-complete="yes"]').waitFor();
 
     const download = () => page.waitForEvent('download', { timeout: 300_000 });
-    note(`CSV export (${N2} checks)`, await timeClick(page, 'Download CSV', download), '≤ 3 s');
-    note(`JSON backup export (${N2} checks)`, await timeClick(page, 'Download JSON backup', download), '≤ 3 s');
+    note(`CSV export (${N2} checks; click to download)`, await timeClick(page, 'Download CSV', download), '≤ 3 s');
+    noteJob('of which exportCsv and making the file, timed in the page', await jobMs(page, 'Writing the CSV'));
+    note(`JSON backup export (${N2} checks; click to download)`, await timeClick(page, 'Download JSON backup', download), '≤ 3 s');
+    noteJob('of which exportBackup and making the file, timed in the page', await jobMs(page, 'Writing the backup'));
     note(`chain verification (2 devices, ${N2} checks)`, await timeClick(page, 'Verify chains', () => page.locator('[data-chain]').first().waitFor()), '≤ 2 s');
+    noteJob('of which verifyStoredChains, timed in the page', await jobMs(page, 'Verifying chains'));
     expect(await page.locator('[data-chain="ok"]').count()).toBe(2);
     console.log('Summary:', JSON.stringify(rows.map((r) => ({ [r.what]: Math.round(r.ms) }))));
   } finally {

@@ -36,6 +36,8 @@ export function ReviewScreen() {
   // Counts first pages shown: lets a test or benchmark see that the rows now belong to the new filter.
   const [shown, setShown] = useState(0);
   const [reportFor, setReportFor] = useState<string | null>(null);
+  // While an import writes, counting totals would only compete with it for the store.
+  const [importing, setImporting] = useState(false);
   const pager = useRef<ReviewPager | null>(null);
 
   useEffect(() => { void listVessels({ includeRetired: true }).then(setVessels, () => setVessels([])); }, [generation]);
@@ -57,7 +59,7 @@ export function ReviewScreen() {
         setShown((n) => n + 1);
         // Totals walk the whole match once the first rows are painted, so they never delay them.
         await afterPaint();
-        if (stop.signal.aborted) return;
+        if (stop.signal.aborted || importing) return;
         const done = await countTotals(filter, { signal: stop.signal, onProgress: (t) => setTotals({ value: t, complete: false }) });
         if (done) setTotals({ value: done, complete: true });
       } catch (e) {
@@ -68,7 +70,7 @@ export function ReviewScreen() {
       }
     })();
     return () => stop.abort();
-  }, [filter, generation]);
+  }, [filter, generation, importing]);
 
   const changeForm = (next: FilterForm) => {
     setForm(next);
@@ -102,7 +104,7 @@ export function ReviewScreen() {
       <div class="no-print">
         <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />
         {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
-        <ReviewTotals totals={totals.value} complete={totals.complete} />
+        <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />
         <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
       </div>
       {vessel && reportFor === vessel.id ? (
@@ -116,7 +118,7 @@ export function ReviewScreen() {
       )}
       <div class="no-print">
         <ChainPanel />
-        <TransferPanel onImported={() => setGeneration((g) => g + 1)} />
+        <TransferPanel onBusy={setImporting} onImported={() => setGeneration((g) => g + 1)} />
       </div>
     </div>
   );

@@ -5,10 +5,10 @@ import { SIGNALS, VERDICTS } from './record-facts.ts';
 
 const n = (v: number) => v.toLocaleString('en-GB');
 
-export function ReviewTotals({ totals, complete }: { totals: Totals | null; complete: boolean }) {
+export function ReviewTotals({ totals, complete, paused }: { totals: Totals | null; complete: boolean; paused: boolean }) {
   return (
     <section class="panel" aria-labelledby="review-totals-title">
-      <h2 id="review-totals-title">Totals{complete ? '' : ' (counting…)'}</h2>
+      <h2 id="review-totals-title">Totals{complete || paused ? '' : ' (counting…)'}</h2>
       {totals ? (
         <dl class="figures review-figures review-totals" data-complete={complete ? 'yes' : 'no'}>
           <dt>Checks</dt><dd data-total="checks">{n(totals.checks)}</dd>
@@ -20,7 +20,7 @@ export function ReviewTotals({ totals, complete }: { totals: Totals | null; comp
             <Fragment key={s}><dt>Worst word {s}</dt><dd>{n(totals.byWorstSignal[s])}</dd></Fragment>
           ))}
         </dl>
-      ) : <p class="muted">Counting…</p>}
+      ) : <p class="muted">{paused ? 'Counted again when the import is done.' : 'Counting…'}</p>}
     </section>
   );
 }

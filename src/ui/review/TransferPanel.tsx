@@ -5,7 +5,7 @@ import { fileSizeText, importFile, makeExport, offerDownload, type ExportKind, t
 import { useLongWork } from './use-long-work.ts';
 import { ImportReportView } from './ImportReportView.tsx';
 
-export function TransferPanel({ onImported }: { onImported(): void }) {
+export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): void; onImported(): void }) {
   const work = useLongWork();
   const [message, setMessage] = useState('');
   const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
@@ -28,7 +28,9 @@ export function TransferPanel({ onImported }: { onImported(): void }) {
   const runImport = async () => {
     if (!file) return;
     setOutcome(null);
+    onBusy(true);
     const result = await work.run('Importing the backup', (o) => importFile(file, o));
+    onBusy(false);
     if (result) {
       setOutcome(result);
       setRuns((n) => n + 1);
