@@ -5,6 +5,10 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 
 const rootDir = import.meta.dirname;
+const CONTENT_SECURITY_POLICY = [
+  "default-src 'self'", "script-src 'self'", "style-src 'self'", "img-src 'self' data:", "connect-src 'self'",
+  "manifest-src 'self'", "worker-src 'self'", "object-src 'none'", "base-uri 'self'", "form-action 'self'",
+].join('; ');
 const packageVersion = (JSON.parse(readFileSync(resolve(rootDir, 'package.json'), 'utf8')) as { version: string }).version;
 // TANKSIDE_BUILD_TAG marks a build variant (the browser tests build a second one to deliver an update).
 const appVersion = process.env.TANKSIDE_BUILD_TAG ? `${packageVersion}+${process.env.TANKSIDE_BUILD_TAG}` : packageVersion;
@@ -33,6 +37,16 @@ export default defineConfig({
         globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}'],
       },
     }),
+    {
+      // The built page allows only its own origin. Build only: the dev server injects styles
+      // inline for hot reload. A meta policy must come first in <head> and cannot carry
+      // frame-ancestors (header-only); a host that can set headers should send it as a header too.
+      name: 'tankside-csp',
+      apply: 'build',
+      transformIndexHtml() {
+        return [{ tag: 'meta', attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY }, injectTo: 'head-prepend' }];
+      },
+    },
     {
       // The manifest lives at the repository's top level; ship it beside index.html.
       name: 'tankside-manifest',

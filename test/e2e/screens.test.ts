@@ -51,6 +51,9 @@ describe('every screen', () => {
   }
 
   it('refuses inline script (the CSP allows only the app\'s own files)', async () => {
+    const policy = await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content');
+    expect(policy).toContain("default-src 'self'");
+    expect(policy).not.toMatch(/unsafe|https?:|\*/);
     await expect(page.addScriptTag({ content: 'window.inlineRan = true' })).rejects.toThrow(/Content Security Policy/);
     expect(await page.evaluate(() => 'inlineRan' in window)).toBe(false);
   });

@@ -1,11 +1,13 @@
 // An app update arriving while a check is half entered: the person is told a new version is
 // ready, chooses when to reload, and the entry (even the last keystroke) is still there after.
 import { spawnSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DIST, ROOT, launch, pickVessel, startServer, tempProfile, waitForControl } from './harness.ts';
 
 const NEXT = join(ROOT, 'test-results/dist-next');
+const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 
 describe('app update during an entry', () => {
   const profile = tempProfile();
@@ -24,7 +26,7 @@ describe('app update during an entry', () => {
     const page = ctx.pages()[0] ?? (await ctx.newPage());
     await page.goto(`${server.url}#/vessels`);
     await waitForControl(page);
-    await expect.poll(() => page.locator('.app-version').textContent()).toBe('Tankside 0.1.0');
+    await expect.poll(() => page.locator('.app-version').textContent()).toBe(`Tankside ${VERSION}`);
 
     await page.getByRole('button', { name: 'Load demo plant' }).click();
     await expect.poll(() => page.getByRole('link', { name: /DEMO-FT-02/ }).count()).toBe(1);
@@ -46,7 +48,7 @@ describe('app update during an entry', () => {
     // Type the last field and accept at once: the draft flush must catch the last keystroke.
     await page.fill('#chk-gross', '612');
     await page.getByRole('button', { name: 'Reload now' }).click();
-    await expect.poll(() => page.locator('.app-version').textContent(), { timeout: 30_000 }).toBe('Tankside 0.1.0+next');
+    await expect.poll(() => page.locator('.app-version').textContent(), { timeout: 30_000 }).toBe(`Tankside ${VERSION}+next`);
     await expect.poll(() => page.inputValue('#chk-gross')).toBe('612');
     expect(await page.inputValue('#chk-temperature')).toBe('151,8');
     expect(await page.inputValue('#chk-pressure')).toBe('400');

@@ -27,7 +27,7 @@ export function CheckScreen() {
   const evaluation = useMemo(() => evaluateDraft(d, vessel, measured, prefs), [d, vessel, settings]);
   return (
     <div>
-      <VesselPicker vessels={vessels} value={d.vesselId} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
+      <VesselPicker vessels={vessels} value={vessel ? d.vesselId : ''} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
       {settings.atmosphere.mode === 'barometer' ? <AtmosphereLine atm={atm} /> : (
         <p class="hint">Gauge readings are referred to the vessel's own site atmosphere. Enter today's barometer reading in <a href={hrefFor('settings')}>Settings</a> to use it instead.</p>
       )}

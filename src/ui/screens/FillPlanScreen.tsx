@@ -31,7 +31,7 @@ export function FillPlanScreen() {
   return (
     <div>
       <form class="fill-plan" onSubmit={(e) => e.preventDefault()} noValidate>
-        <VesselPicker id="fill-vessel" vessels={vessels} value={d.vesselId} onChange={(vesselId) => set({ vesselId })} />
+        <VesselPicker id="fill-vessel" vessels={vessels} value={vessel ? d.vesselId : ''} onChange={(vesselId) => set({ vesselId })} />
         <NumberField id="fill-target" label="Target temperature" value={d.target} onInput={(target) => set({ target })}
           unit={d.temperatureUnit} units={TEMPERATURE_UNITS} onUnit={(u) => set({ temperatureUnit: u as TemperatureUnit })} error={err.target} />
         <Choice name="fill-kind" legend="At the target, aim for" value={d.targetKind} options={TARGETS} onChange={(targetKind) => set({ targetKind })} />
