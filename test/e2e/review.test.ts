@@ -97,6 +97,13 @@ describe('review across two profiles', () => {
     await page.emulateMedia({ colorScheme: 'dark' });
     expect(await axeViolations(page)).toEqual([]);
     await screenshot(page, 'review-dark');
+    await page.emulateMedia({ colorScheme: 'light' });
+    await page.setViewportSize({ width: 320, height: 700 });
+    const wide = await page.evaluate(() => [...document.querySelectorAll('body *')]
+      .filter((el) => !el.closest('.table-wrap') && el.getBoundingClientRect().right > document.documentElement.clientWidth + 0.5)
+      .map((el) => `${el.tagName.toLowerCase()}.${el.className}`).slice(0, 5));
+    expect(wide, 'wider than 320 px (the report table scrolls inside its own region)').toEqual([]);
+    await page.setViewportSize({ width: 360, height: 780 });
     await page.emulateMedia({ colorScheme: 'light', media: 'print' });
     expect(await page.locator('.top').isVisible()).toBe(false);
     expect(await page.locator('.review-filters').isVisible()).toBe(false);

@@ -1,7 +1,7 @@
 // Review for supervisors: filter the log, page through it, totals, chain status per device, the
 // vessel report with its trend chart, export and import. Reads the store a page at a time.
 import { useEffect, useRef, useState } from 'preact/hooks';
-import { listVessels, type VesselRecord } from '../../store/index.ts';
+import type { VesselRecord } from '../../store/index.ts';
 import './review.css';
 import { ReviewFilters } from './ReviewFilters.tsx';
 import { ReviewList } from './ReviewList.tsx';
@@ -10,7 +10,7 @@ import { ChainPanel } from './ChainPanel.tsx';
 import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
-import { ReviewPager } from './review-query.ts';
+import { ReviewPager, reviewVessels } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
 import { SIGNALS, VERDICTS } from './record-facts.ts';
@@ -40,7 +40,7 @@ export function ReviewScreen() {
   const [importing, setImporting] = useState(false);
   const pager = useRef<ReviewPager | null>(null);
 
-  useEffect(() => { void listVessels({ includeRetired: true }).then(setVessels, () => setVessels([])); }, [generation]);
+  useEffect(() => { void reviewVessels().then(setVessels, () => setVessels([])); }, [generation]);
 
   useEffect(() => {
     const stop = new AbortController();

@@ -3,7 +3,7 @@
 // the whole-log time index (listChecks) from the `to` bound down and stops at `from`. Verdict,
 // signal word, technician and device are tested record by record on the way (the store has no
 // index for them). Only one store page is held at a time; nothing reads the whole log into memory.
-import { checksForVessel, listChecks, type CheckCursor, type CheckRecord } from '../../store/index.ts';
+import { checksForVessel, listChecks, listVessels, type CheckCursor, type CheckRecord, type VesselRecord } from '../../store/index.ts';
 import { matches, needsScan, type ReviewFilter } from './review-filter.ts';
 
 /** The store's largest page. */
@@ -90,4 +90,9 @@ export class ReviewPager {
     }
     return { rows, more: this.buffer.length > 0 || !this.walk.done };
   }
+}
+
+/** Every vessel, retired ones too (their checks stay reviewable), for the filter's picker. */
+export function reviewVessels(): Promise<VesselRecord[]> {
+  return listVessels({ includeRetired: true });
 }
