@@ -39,9 +39,8 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
         <dt>Checks</dt><dd>{summary.checks}{data.capped ? ` (the newest ${TREND_MAX_POINTS} shown)` : ''}</dd>
         <dt>Gauge agreed with saturation</dt><dd>{summary.consistent}</dd>
         {summary.bySignal.map((s) => <Fragment key={s.signal}><dt>Worst word {s.signal}</dt><dd>{s.count}</dd></Fragment>)}
-        <dt>First check</dt><dd>{summary.firstTime ?? '–'}</dd>
-        <dt>Last check</dt><dd>{summary.lastTime ?? '–'}</dd>
       </dl>
+      {summary.firstTime ? <p>First check {summary.firstTime}; last {summary.lastTime}.</p> : null}
       {data.points.length > 0 ? <TrendChart geometry={trendGeometry(data.points)} title={`Trend of ${vessel.tag}, ${period}`} /> : null}
       <p class="hint">Marks on the chart: checks with a caution, coloured by its most severe signal word (DANGER red, WARNING orange, CAUTION yellow, NOTICE blue).</p>
       <div class="table-wrap" tabIndex={0} role="region" aria-label={`Checks of ${vessel.tag}`}>
