@@ -323,6 +323,22 @@ interface MergePlan {
   report: ImportReport;
 }
 
+/**
+ * Requests per window while reading or writing a whole file's worth of records in one transaction.
+ * Issuing 100 000 at once would queue 100 000 request objects (and, for writes, their cloned
+ * records) before the first one runs; windows keep that bounded, and cost one round trip each.
+ */
+const REQUEST_WINDOW = 1000;
+
+/** `request` for every item, at most REQUEST_WINDOW outstanding; results in item order. */
+async function inWindows<T, R>(items: readonly T[], request: (item: T) => Promise<R>): Promise<R[]> {
+  const out: R[] = [];
+  for (let start = 0; start < items.length; start += REQUEST_WINDOW) {
+    out.push(...(await Promise.all(items.slice(start, start + REQUEST_WINDOW).map(request))));
+  }
+  return out;
+}
+
 function byInstant(a: string, b: string): number {
   return (parseIsoWithOffset(a) ?? 0) - (parseIsoWithOffset(b) ?? 0);
 }
@@ -340,10 +356,11 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
     list.push(i);
   });
   const deviceIds = [...devices.keys()].sort();
-  // All requests issued at once and awaited together: one read snapshot, no interleaved non-IDB work.
+  // One read snapshot with nothing but IndexedDB requests awaited inside it, issued REQUEST_WINDOW
+  // at a time (each window as soon as the previous one has answered).
   const [existingVessels, existingById, existingRanges] = await Promise.all([
-    Promise.all(doc.vessels.map((v) => vesselStore.get(v.id))),
-    Promise.all(doc.checks.map((c) => checkStore.get(c.id))),
+    inWindows(doc.vessels, (v) => vesselStore.get(v.id)),
+    inWindows(doc.checks, (c) => checkStore.get(c.id)),
     Promise.all(
       deviceIds.map((d) => {
         let lo = Infinity;
@@ -447,28 +464,31 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
     }
   };
   options.signal?.addEventListener('abort', onAbort);
-  let done = base;
   const every = progressStep(total);
   const work = () => {
-    // Plain requests, issued back to back and not awaited one by one: the transaction runs them
-    // in order, and the first that fails aborts it, which tx.done reports. Progress listens only
-    // on every `every`-th request.
+    // Plain requests, REQUEST_WINDOW at a time, the next window issued from the success of the
+    // last request of the one before (requests run in order), so no await per record and no
+    // non-IDB work inside the transaction. The first request that fails aborts it, which tx.done
+    // reports; so does an exception thrown while issuing a later window.
     const raw = unwrap(tx);
     const vessels = raw.objectStore('vessels');
     const checks = raw.objectStore('checks');
-    let n = 0;
-    const track = (request: IDBRequest) => {
-      n += 1;
-      if (n % every !== 0) return;
-      const at = base + n;
-      request.addEventListener('success', () => {
-        done = at;
-        options.onProgress?.(done, total);
-      });
+    const vesselCount = plan.vesselWrites.length;
+    const count = vesselCount + plan.checkAdds.length;
+    const issue = (from: number) => {
+      const to = Math.min(count, from + REQUEST_WINDOW);
+      let request: IDBRequest | null = null;
+      for (let i = from; i < to; i += 1) {
+        // add(), never put(), for checks: one that is somehow already here aborts the lot instead of being overwritten.
+        request = i < vesselCount ? vessels.put(plan.vesselWrites[i]!) : checks.add(plan.checkAdds[i - vesselCount]!);
+        if ((i + 1) % every === 0) {
+          const at = base + i + 1;
+          request.addEventListener('success', () => options.onProgress?.(at, total));
+        }
+      }
+      if (request && to < count) request.addEventListener('success', () => cancelled || issue(to));
     };
-    for (const v of plan.vesselWrites) track(vessels.put(v));
-    // add(), never put(): a check that is somehow already here aborts the lot instead of being overwritten.
-    for (const c of plan.checkAdds) track(checks.add(c));
+    issue(0);
   };
   try {
     try {

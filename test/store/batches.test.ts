@@ -158,6 +158,37 @@ describe('exports across pages', () => {
   });
 });
 
+describe('import writes in windows', () => {
+  it('a cancel at the end of the first write window (1000 requests) leaves nothing written; a full run writes all', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    await writeChecks(await makeChain(D1, 1004, [v.id]));
+    const text = await exportBackup();
+    await closeStore();
+    (globalThis as { indexedDB: IDBFactory }).indexedDB = new IDBFactory();
+    await openStore();
+    const before = await dump();
+    const total = 2 * 1004 + 1;
+    const endOfFirstWindow = 1004 + 1000; // every check hashed, then 1 vessel and 999 checks written
+    const controller = new AbortController();
+    const seen: number[] = [];
+    const attempt = importBackup(text, {
+      signal: controller.signal,
+      onProgress: (d) => {
+        seen.push(d);
+        if (d === endOfFirstWindow) controller.abort();
+      },
+    });
+    await expect(attempt).rejects.toMatchObject({ code: 'cancelled' });
+    expect(seen).toContain(endOfFirstWindow);
+    expect(await dump()).toEqual(before);
+    const progress: number[] = [];
+    const report = await importBackup(text, { onProgress: (d) => progress.push(d) });
+    expect(report.checks.added).toHaveLength(1004);
+    expect(progress.at(-1)).toBe(total);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 1004 }]);
+  });
+});
+
 describe('backup parsing without the key-checking reviver', () => {
   it('is skipped only when no key can spell a forbidden name', () => {
     expect(mayHoldForbiddenKey('{"a":"plain text"}')).toBe(false);
