@@ -8,6 +8,7 @@ import { spawnSync } from 'node:child_process';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
+import Papa from 'papaparse';
 import { DIST, SCREENS_DIR, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, type StaticServer } from './harness.ts';
 import { generatedBackup } from '../../bench/generated-log.ts';
 
@@ -86,6 +87,22 @@ describe('review across two profiles', () => {
     await page.locator('[data-chain="ok"]').waitFor();
     expect(await page.textContent('[data-chain="ok"]')).toContain('40 records');
 
+    // Keyboard only: Tab reaches every control of the screen, in reading order.
+    await page.focus('main h1');
+    const reached: string[] = [];
+    for (let i = 0; i < 40; i += 1) {
+      await page.keyboard.press('Tab');
+      reached.push(await page.evaluate(() => {
+        const el = document.activeElement as HTMLElement | null;
+        return el?.id || el?.textContent?.trim().slice(0, 24) || el?.tagName || '';
+      }));
+    }
+    const order = ['rf-vessel', 'rf-month', 'rf-from', 'rf-to', 'rf-verdict', 'rf-signal', 'rf-tech', 'rf-device', 'Clear filter', 'rl-order', 'Trend and report for GEN', 'Verify chains', 'Download CSV', 'Download JSON backup', 'rt-file'];
+    const positions = order.map((name) => reached.findIndex((r) => r.startsWith(name)));
+    expect(positions.every((p) => p >= 0), `${order.filter((_, i) => positions[i]! < 0)} not reached in ${reached}`).toBe(true);
+    expect([...positions].sort((a, b) => a - b)).toEqual(positions);
+    await page.keyboard.press('Escape');
+
     await page.getByRole('button', { name: 'Trend and report for GEN-0002' }).click();
     await page.locator('.trend-chart').waitFor();
     expect(await page.locator('.report-table tbody tr').count()).toBe(7);
@@ -116,9 +133,18 @@ describe('review across two profiles', () => {
     await page.emulateMedia({ media: 'screen' });
 
     await page.selectOption('#rf-vessel', '');
-    await download(page, 'Download JSON backup', 'a.json');
-    const csv = await download(page, 'Download CSV', 'a.csv');
-    expect(readFileSync(csv, 'utf8').trim().split(/\r?\n/)).toHaveLength(41);
+    const json = JSON.parse(readFileSync(await download(page, 'Download JSON backup', 'a.json'), 'utf8')) as { checks: { id: string; result: { inventory: { liquidMassKg: number; quality: number } } }[] };
+    // Read back with a general-purpose CSV parser (papaparse): one row per check, numbers as numbers.
+    const csv = Papa.parse<Record<string, unknown>>(readFileSync(await download(page, 'Download CSV', 'a.csv'), 'utf8'), { header: true, dynamicTyping: true, skipEmptyLines: true });
+    expect(csv.errors).toEqual([]);
+    expect(csv.data).toHaveLength(40);
+    const byId = new Map(json.checks.map((c) => [c.id, c]));
+    for (const row of csv.data) {
+      const check = byId.get(String(row['check id']));
+      expect(check).toBeDefined();
+      expect(row['liquid mass (kg)']).toBe(check!.result.inventory.liquidMassKg);
+      expect(row['quality (kg/kg)']).toBe(check!.result.inventory.quality);
+    }
   });
 
   it('profile B: one changed field is reported at exactly that record, its gap is pointed at, then records match A', async () => {
