@@ -339,6 +339,38 @@ async function inWindows<T, R>(items: readonly T[], request: (item: T) => Promis
   return out;
 }
 
+/** Keys read per getAllKeys while looking for the file's ids. */
+const KEY_PAGE = 10 * REQUEST_WINDOW;
+
+/**
+ * Which of `ids` the store holds. Instead of one get per id, the sorted ids are taken
+ * REQUEST_WINDOW at a time and the keys the store holds between the first and last id of each
+ * window are read with getAllKeys, at most KEY_PAGE per request. The windows' ranges do not
+ * overlap, so all of it reads each stored key at most once, in about ids / 1000 + stored / 10 000
+ * requests, with at most KEY_PAGE keys in hand at a time.
+ */
+export async function storedIds(
+  store: { getAllKeys(range: IDBKeyRange, count: number): Promise<string[]> },
+  ids: readonly string[],
+  pageSize = KEY_PAGE,
+): Promise<Set<string>> {
+  const sorted = [...ids].sort(); // IndexedDB orders string keys by code units too
+  const wanted = new Set(ids);
+  const found = new Set<string>();
+  for (let start = 0; start < sorted.length; start += REQUEST_WINDOW) {
+    const last = sorted[Math.min(sorted.length, start + REQUEST_WINDOW) - 1]!;
+    let range = IDBKeyRange.bound(sorted[start]!, last);
+    for (;;) {
+      const keys = await store.getAllKeys(range, pageSize);
+      for (const key of keys) if (wanted.has(key)) found.add(key);
+      const after = keys[keys.length - 1];
+      if (keys.length < pageSize || after === undefined || after === last) break;
+      range = IDBKeyRange.bound(after, last, true);
+    }
+  }
+  return found;
+}
+
 function byInstant(a: string, b: string): number {
   return (parseIsoWithOffset(a) ?? 0) - (parseIsoWithOffset(b) ?? 0);
 }
@@ -360,7 +392,12 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
   // at a time (each window as soon as the previous one has answered).
   const [existingVessels, existingById, existingRanges] = await Promise.all([
     inWindows(doc.vessels, (v) => vesselStore.get(v.id)),
-    inWindows(doc.checks, (c) => checkStore.get(c.id)),
+    (async () => {
+      const here = await storedIds(checkStore, doc.checks.map((c) => c.id));
+      const hits = doc.checks.filter((c) => here.has(c.id));
+      const records = new Map((await inWindows(hits, (c) => checkStore.get(c.id))).map((r, i) => [hits[i]!.id, r]));
+      return doc.checks.map((c) => records.get(c.id));
+    })(),
     Promise.all(
       deviceIds.map((d) => {
         let lo = Infinity;

@@ -3,12 +3,13 @@
 // appendCheck would have saved them, since saving a thousand through appendCheck is slow).
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
+import fc from 'fast-check';
 import { SPEC, useFreshDatabase } from './fixtures.ts';
 import { dump } from './backup-fixtures.ts';
 import { addVessel, exportBackup, exportCsv, importBackup, verifyStoredChains, type CheckRecord } from '../../src/store/index.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { computeCheckHash } from '../../src/store/integrity.ts';
-import { mayHoldForbiddenKey, parseBackup } from '../../src/store/backup.ts';
+import { mayHoldForbiddenKey, parseBackup, storedIds } from '../../src/store/backup.ts';
 import { VERIFY_PAGE } from '../../src/store/verify.ts';
 import { GENESIS_HASH } from '../../src/store/records.ts';
 import { IDBFactory } from 'fake-indexeddb';
@@ -186,6 +187,49 @@ describe('import writes in windows', () => {
     expect(report.checks.added).toHaveLength(1004);
     expect(progress.at(-1)).toBe(total);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 1004 }]);
+    // Again: every check is found here (by key ranges over two windows of ids) and skipped.
+    const after = await dump();
+    const again = await importBackup(text);
+    expect(again.checks.added).toEqual([]);
+    expect(again.checks.skipped).toHaveLength(1004);
+    expect(again.checks.skipped.every((s) => s.why === 'already here, identical')).toBe(true);
+    expect(await dump()).toEqual(after);
+  });
+});
+
+describe('storedIds (which of the file\'s ids the store holds, by key ranges)', () => {
+  /** A store of sorted string keys answering getAllKeys as IndexedDB does, counting requests. */
+  function keyStore(keys: string[]) {
+    const sorted = [...keys].sort();
+    const store = {
+      requests: 0,
+      async getAllKeys(range: IDBKeyRange, count: number): Promise<string[]> {
+        store.requests += 1;
+        return sorted.filter((k) => range.includes(k)).slice(0, count);
+      },
+    };
+    return store;
+  }
+
+  it('finds exactly the ids held, whatever the page size and window boundaries (property)', async () => {
+    const id = fc.integer({ min: 0, max: 3000 }).map((n) => `k${String(n).padStart(5, '0')}`);
+    await fc.assert(
+      fc.asyncProperty(fc.uniqueArray(id, { maxLength: 2500 }), fc.uniqueArray(id, { maxLength: 1500 }), fc.integer({ min: 1, max: 40 }), async (held, asked, page) => {
+        const store = keyStore(held);
+        const found = await storedIds(store, asked, page);
+        const heldSet = new Set(held);
+        expect([...found].sort()).toEqual(asked.filter((k) => heldSet.has(k)).sort());
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('reads each stored key at most once, in few requests', async () => {
+    const held = Array.from({ length: 5000 }, (_, i) => `k${String(i).padStart(5, '0')}`);
+    const store = keyStore(held);
+    const asked = held.filter((_, i) => i % 2 === 0); // 2500 ids: three windows of up to 1000
+    expect((await storedIds(store, asked, 10_000)).size).toBe(2500);
+    expect(store.requests).toBe(3);
   });
 });
 
