@@ -78,14 +78,15 @@ export function kilopascal(pressurePa: number): string {
   return `${(pressurePa / 1000).toFixed(1)} kPa`;
 }
 
-/** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association, field-practice.md §6.4). */
+/** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association educator's guide "Scalds: A Burning Issue"; its data go back to Moritz & Henriques 1947, from memory). */
 export const SCALD_TEMPERATURE_K = 333.15;
 
 /**
  * Fraction of the relief set pressure at which a reading is flagged: conventional relief valves
  * want the operating pressure about 10 % below set to avoid simmer and premature opening (API RP
  * 521 Fig. 2 shows a 10 % margin, per http://instrumentation.processengineer.info/relief-device-set-pressures.html ;
- * the ~10 % below set for conventional valves per an eng-tips thread on PSV set pressure; field-practice.md §6.6).
+ * the ~10 % below set for conventional valves per an eng-tips thread on PSV set pressure; flagging
+ * at 90 % as the usual operating-margin convention is from memory).
  */
 export const NEAR_LIMIT_FRACTION = 0.9;
 

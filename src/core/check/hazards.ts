@@ -1,6 +1,12 @@
 // Hazard figures for one state of the contents: flash on release to atmosphere, stored energy,
 // margins to MAWP and relief set pressure, and the pressure left after cooling to ambient.
-// field-practice.md §6.1 (flash), §6.2 (stored energy), §6.3 (vacuum collapse), §6.6 (margins).
+// Flash: the enthalpy balance (h₁ − h_f,atm)/h_fg,atm, as in US DOE Steam Tip Sheet #12 "Flash
+// High-Pressure Condensate to Regenerate Low-Pressure Steam". Stored energy: the usual vessel-burst
+// energy estimate (isentropic expansion; method from memory). Vacuum collapse of a closed vessel as
+// its steam condenses: https://technewsources.com/tank-trailer-vacuum-collapse/ and
+// https://www.universalengineeringconsultants.com/post/storage-tank-implosion-design-of-storage-tanks .
+// Margins: MAWP is the maximum gauge pressure at the top of the vessel, the basis of the relief
+// setting (ASME BPVC Section VIII Div. 1 definition).
 
 import { saturation, saturationPressure, saturationTemperature, stateTP } from '../steam/index.ts';
 import { contentsState, IF97_MAX_PRESSURE_PA } from './inventory.ts';
@@ -38,7 +44,7 @@ export function flashOnRelease(h1: number, v1: number, atmospherePa: number, liq
 /**
  * Work of an isentropic expansion to atmosphere of 1 kg with internal energy u₁ (J/kg), entropy
  * s₁ (J/(kg·K)) and pressure p₁ (Pa): u₁ − u₂(s₁, p_atm), ≥ 0 (0 when p₁ ≤ p_atm). The usual
- * vessel-burst energy estimate (field-practice.md §6.2, method from memory there).
+ * vessel-burst energy estimate (method from memory).
  */
 export function expansionWorkPerKgJ(u1: number, s1: number, p1: number, atmospherePa: number): number {
   if (p1 <= atmospherePa) return 0;

@@ -1,7 +1,9 @@
 // What happens to this fill if the closed vessel is heated: the mean specific volume v = V/m is
 // fixed, so the contents go liquid-full where v_f(T) = v (if v < v_c) or all vapor where
 // v_g(T) = v (if v > v_c); meanwhile p_sat(T) climbs to the relief set pressure and the MAWP.
-// field-practice.md §6.3 and §7.1.
+// Hydraulic expansion of blocked-in liquid is a relief case in API Std 521 (§4.4.12 in the 6th ed.);
+// judging a fill by its liquid-full temperature rather than a fixed percentage follows from the mass
+// and volume balance above (our own rule).
 
 import { IF97, saturation, saturationTemperature } from '../steam/index.ts';
 

@@ -1,5 +1,6 @@
 // What is inside: from net mass, internal volume and temperature, the regime of the contents by
-// IF97 (stateTV) and, when two-phase, the split into liquid and vapor (field-practice.md §9).
+// IF97 (stateTV) and, when two-phase, the split into liquid and vapor (from the mass and volume
+// balances m = m_f + m_g, V = m_f·v_f + m_g·v_g).
 // Uses the measured T, not T_sat(p): with air present the two disagree and T governs the water.
 
 import { InputError } from '../errors.ts';

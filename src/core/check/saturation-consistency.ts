@@ -1,6 +1,9 @@
 // Does the pressure agree with the temperature for saturated steam? Compares the absolute pressure
 // with p_sat(T) and the temperature with T_sat(p), inside a band propagated from the instruments.
-// App logic after field-practice.md §7.2; Dalton's law after §4.2.
+// The verdicts are our own rule on the band from uncertainty.ts: inside it, consistent; above it, air
+// or a low-reading thermometer; below it, an instrument, atmosphere or equilibrium error, or superheat
+// only when no liquid is present (that reading of the sign is from memory). The gas estimate is
+// Dalton's law of partial pressures, p = p_steam + p_gas (common practice).
 
 import { IF97, saturationPressure, saturationTemperature } from '../steam/index.ts';
 import type { ResolvedReading } from './reading.ts';

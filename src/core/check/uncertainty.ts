@@ -4,15 +4,16 @@
 // root-sum-square (RSS) and the arithmetic worst case is reported beside it. RSS is what the
 // verdicts use: the errors of a gauge, a thermometer and a barometer are independent and rarely
 // all at their limits together, and the wider worst-case band would let a few percent of air
-// pass as "consistent" (field-practice.md §3.5: 121 °C field kit, RSS ±1.42 K against worst case
-// ±2.36 K; 1 K of depression is about 3 % air). GUM expanded uncertainty with rectangular
-// limits (U = 2·√(Σa²/3), JCGM 100:2008 §4.3.7) is 1.15 × RSS, close to it.
+// pass as "consistent" (121 °C field kit of an IEC 60751 class B RTD, a 0–4 bar EN 837-1 class 1.6
+// gauge and ±3 kPa of atmosphere: RSS ±1.42 K against worst case ±2.36 K; 1 K of depression is about
+// 3 % air by Dalton's law; both computed with python3-iapws 1.5.2 (IAPWS-IF97)). GUM expanded
+// uncertainty with rectangular limits (U = 2·√(Σa²/3), JCGM 100:2008 §4.3.7) is 1.15 × RSS, close to it.
 
 import { IF97, saturation } from '../steam/index.ts';
 import type { TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
 import type { ResolvedReading } from './reading.ts';
 
-/** Weather swing of station pressure around a stored site value, Pa (field-practice.md §1.3–1.4: about −3 to +4 kPa; ±3 kPa recommended there). */
+/** Weather swing of station pressure around a stored site value, Pa (sea-level pressure usually 970–1040 hPa, about −3 to +4 kPa from standard: University of Wisconsin meteorology course page, http://meteor.wisc.edu/~hopkins/online/cod/cod05t.htm ; ±3 kPa is our choice from that range). */
 export const SITE_ATMOSPHERE_TOLERANCE_PA = 3000;
 
 /** The combination rule the verdicts use. */
@@ -37,7 +38,9 @@ export function combineBand<K extends string>(contributions: Record<K, number>):
 
 /**
  * Temperature sensor ± limit at T, K. IEC 60751 Pt100 classes, t in °C: AA ±(0.10 + 0.0017|t|),
- * A ±(0.15 + 0.002|t|), B ±(0.30 + 0.005|t|) (field-practice.md §3.2, sourced there).
+ * A ±(0.15 + 0.002|t|), B ±(0.30 + 0.005|t|) (IEC 60751 tolerance classes: A and B as in the
+ * IEC 60751:1995 class table, all three as reproduced at https://instrumentationforum.com/t/rtd-standards/6685 ;
+ * the table number in the current edition was not confirmed).
  * temperatureK in K (any finite value).
  */
 export function temperatureToleranceK(sensor: TemperatureSensorTolerance, temperatureK: number): number {
@@ -80,7 +83,7 @@ export interface InventoryBands {
 
 /**
  * First-order propagation through x = (V/m − v_f)/(v_g − v_f) and m_liq = (m·v_g − V)/(v_g − v_f)
- * (field-practice.md §9): analytic partial derivatives in m and V, a central difference of the
+ * (the mass and volume balances): analytic partial derivatives in m and V, a central difference of the
  * saturation values in T. Limits are ± (same as the instruments'). Valid for a two-phase state:
  * temperatureK 273.16–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
  */

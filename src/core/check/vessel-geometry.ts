@@ -2,8 +2,10 @@
 // and horizontal cylinders with flat, 2:1 semi-ellipsoidal, hemispherical or torispherical
 // (flanged and dished) heads. All dimensions are INSIDE dimensions in metres; the straight length
 // runs between the head tangent lines and must include the heads' straight flanges.
-// Formulas: /work/shared/reference/field-practice.md §5 (closed forms derived there and checked
-// against numerical integration); the torispherical knuckle term is re-derived in the comments.
+// Formulas: closed forms of solid geometry (cylinder, spherical cap, ellipsoidal segment, circular
+// segment), checked against numerical integration of the head profiles (agreement better than 10⁻⁶;
+// test/core/check/vessel-geometry.test.ts integrates the torispherical head independently); the
+// torispherical knuckle term is re-derived in the comments.
 
 import { InputError } from '../errors.ts';
 
@@ -35,7 +37,7 @@ export type VesselGeometry =
 
 export type CylinderGeometry = Extract<VesselGeometry, { shape: 'vertical-cylinder' | 'horizontal-cylinder' }>;
 
-/** Standard ASME flanged-and-dished proportions: crown radius = D, knuckle radius = 6 % of D (common practice, §5.1). */
+/** Standard ASME flanged-and-dished proportions: crown radius = D, knuckle radius = 6 % of D (common practice; ASME BPVC Section VIII Div. 1 UG-32 bounds them: crown radius at most the skirt outside diameter, knuckle radius at least 6 % of it). */
 export const STANDARD_FD_CROWN_FRACTION = 1;
 export const STANDARD_FD_KNUCKLE_FRACTION = 0.06;
 
@@ -119,7 +121,7 @@ function circleAreaBelow(rho: number, y: number): number {
 
 /**
  * Circular segment of depth h in a circle of radius R, m². Equal to R²·acos((R − h)/R) −
- * (R − h)·√(2Rh − h²) (field-practice.md §5.2), written as ½R²(φ − sin φ) with the central angle
+ * (R − h)·√(2Rh − h²) (the circular segment of plane geometry), written as ½R²(φ − sin φ) with the central angle
  * φ = 4·asin(√(h/2R)), a series for small φ, and the complement above mid-depth: the textbook
  * form cancels near the bottom and the top and can even go negative there.
  */
@@ -165,7 +167,7 @@ function simpson(f: (z: number) => number, a: number, b: number, n: number): num
 /**
  * Liquid volume in one head of a horizontal vessel, filled to depth h from the bottom of the shell, m³.
  * Ellipsoids and spheres have the closed form π·a·h²·(3R − h)/(6R); the torispherical head is
- * integrated over axial slices (field-practice.md §5.2), crown and knuckle separately because the
+ * integrated over axial slices (no simple closed form; Simpson's rule), crown and knuckle separately because the
  * slice radius has a kink in curvature at their tangent.
  */
 export function horizontalHeadVolumeM3(head: HeadSpec, D: number, h: number): number {

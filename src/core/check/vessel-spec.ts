@@ -45,7 +45,7 @@ export interface VesselSpec {
   instruments: InstrumentAccuracy;
 }
 
-/** Valid ranges, SI. Atmosphere: every inhabited elevation up to the 108.38 kPa record high (field-practice.md §1.3). */
+/** Valid ranges, SI. Atmosphere: every inhabited elevation up to the 108.38 kPa record high (1083.8 hPa, Agata, 31 Dec 1968: WMO Weather and Climate Extremes Archive, https://wmo.asu.edu/content/world-highest-sea-level-air-pressure-below-700m). */
 export const VESSEL_LIMITS = {
   tareKg: { min: 0, max: 1e6, unit: 'kg' },
   mawpGaugePa: { min: 0, max: 100e6, unit: 'Pa' },
@@ -83,7 +83,8 @@ export function validateVessel(spec: VesselSpec): void {
       `relief set pressure: ${relief} Pa (gauge) must be above 0 and at most the MAWP (${spec.mawpGaugePa} Pa).`);
   }
   if (relief > spec.mawpGaugePa) {
-    // ASME BPVC VIII-1 UG-134(a): a single device may not be set above MAWP (field-practice.md §6.6).
+    // ASME BPVC Section VIII Div. 1 UG-134(a): a single device may not be set above MAWP (2019 and
+    // earlier editions; from the 2021 edition these rules are in Section XIII, from memory).
     throw new InputError('relief set pressure', 'inconsistent', relief, reliefRange,
       `relief set pressure: ${relief} Pa (gauge) is above the MAWP (${spec.mawpGaugePa} Pa); it must be at most the MAWP.`);
   }

@@ -31,33 +31,72 @@ const n = [
 /** The Table 30 coefficients, for tests that re-evaluate Eq. (28) term by term. */
 export const REGION3_TABLE = { n1, I, J, n } as const;
 
+// Module-local copies of the constants the hot paths read: a bundler inlines imported
+// constants, but Vitest's module runner (which runs the benchmark and the tests) turns every
+// read of an imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const R = IF97.R; // J/(kg·K)
+const TC = IF97.Tc; // K
+const RHOC = IF97.rhoc; // kg/m³
+
 const TERMS = n.length;
+/** Highest I in Table 30; every I from 0 to 11 occurs, and the table is sorted by I. */
+const I_MAX = 11;
 
 const N_ = Float64Array.from(n);
-const IDX_I = Int32Array.from(I);
 const IDX_J = Int32Array.from(J);
-const W_I = Float64Array.from(I);
-const W_II = Float64Array.from(I, (i) => i * (i - 1));
 const W_J = Float64Array.from(J);
 const W_JJ = Float64Array.from(J, (j) => j * (j - 1));
-const W_IJ = Float64Array.from(I, (i, k) => i * (J[k] as number));
-const D_POW = new Float64Array(12);
+/** Terms GROUP_START[i] … GROUP_START[i + 1] − 1 of Table 30 have exponent I = i. */
+const GROUP_START = Int32Array.from({ length: I_MAX + 2 }, (_, i) => {
+  const k = I.findIndex((x) => x >= i);
+  return k < 0 ? TERMS : k;
+});
 const T_POW = new Float64Array(27);
 
-/**
- * Exactly the powers Table 30 uses, δ^I for I = 0 … 11 and τ^J for J ∈ {0…4, 6, 7, 10, 12, 15,
- * 16, 17, 22, 23, 26}, as short products rather than one long chain of multiplications.
- */
-function region3Powers(d: number, t: number): void {
-  const d2 = d * d, d3 = d2 * d, d4 = d2 * d2, d5 = d4 * d, d8 = d4 * d4;
-  D_POW[0] = 1; D_POW[1] = d; D_POW[2] = d2; D_POW[3] = d3; D_POW[4] = d4; D_POW[5] = d5;
-  D_POW[6] = d3 * d3; D_POW[7] = d4 * d3; D_POW[8] = d8; D_POW[9] = d8 * d; D_POW[10] = d5 * d5;
-  D_POW[11] = d8 * d3;
+// Eq. (28) as a polynomial in δ whose coefficients depend on τ alone:
+//   Σ n·δ^I·τ^J = Σ_i δ^i·A_i(τ),  A_i = Σ_{I=i} n·τ^J,
+// with B_i = Σ_{I=i} n·J·τ^J and C_i = Σ_{I=i} n·J(J−1)·τ^J for the τ derivatives. The A, B, C
+// (scaled by i and i(i−1) for the δ derivatives) are kept for the last temperature: every
+// density solve runs at one T, so each further step costs a few Horner sums in δ instead of the
+// whole 39-term table.
+const CA = new Float64Array(I_MAX + 1);
+const CIA = new Float64Array(I_MAX + 1);
+const CIIA = new Float64Array(I_MAX + 1);
+const CB = new Float64Array(I_MAX + 1);
+const CIB = new Float64Array(I_MAX + 1);
+const CC = new Float64Array(I_MAX + 1);
+let sumsT = Number.NaN;
+let sumsTau = 0;
+
+/** Fills CA … CC for temperature T (K), unless they already hold it. */
+function region3TauSums(T: number): void {
+  if (T === sumsT) return;
+  const t = TC / T;
+  // Exactly the powers Table 30 uses, τ^J for J ∈ {0…4, 6, 7, 10, 12, 15, 16, 17, 22, 23, 26},
+  // as short products rather than one long chain of multiplications.
   const t2 = t * t, t3 = t2 * t, t4 = t2 * t2, t6 = t3 * t3, t12 = t6 * t6, t10 = t6 * t4;
   const t16 = t12 * t4, t22 = t12 * t10;
   T_POW[0] = 1; T_POW[1] = t; T_POW[2] = t2; T_POW[3] = t3; T_POW[4] = t4; T_POW[6] = t6;
   T_POW[7] = t4 * t3; T_POW[10] = t10; T_POW[12] = t12; T_POW[15] = t12 * t3; T_POW[16] = t16;
   T_POW[17] = t16 * t; T_POW[22] = t22; T_POW[23] = t22 * t; T_POW[26] = t22 * t4;
+  for (let i = 0; i <= I_MAX; i++) {
+    let a = 0, b = 0, c = 0;
+    const end = GROUP_START[i + 1] as number;
+    for (let k = GROUP_START[i] as number; k < end; k++) {
+      const term = (N_[k] as number) * (T_POW[IDX_J[k] as number] as number);
+      a += term;
+      b += (W_J[k] as number) * term;
+      c += (W_JJ[k] as number) * term;
+    }
+    CA[i] = a;
+    CIA[i] = i * a;
+    CIIA[i] = i * (i - 1) * a;
+    CB[i] = b;
+    CIB[i] = i * b;
+    CC[i] = c;
+  }
+  sumsT = T;
+  sumsTau = t;
 }
 
 /** Scratch output of region3Helmholtz: [φ, φ_δ, φ_δδ, φ_τ, φ_ττ, φ_δτ, δ, τ]. */
@@ -65,18 +104,18 @@ export const F3 = new Float64Array(8);
 
 /** Fills F3 with φ and its derivatives at (ρ kg/m³, T K). No range checks, no allocation. */
 export function region3Helmholtz(rho: number, T: number): void {
-  const delta = rho / IF97.rhoc;
-  const tau = IF97.Tc / T;
-  region3Powers(delta, tau);
+  const delta = rho / RHOC;
+  region3TauSums(T);
+  const tau = sumsTau;
+  // Horner in δ; each sum is the δ^i-weighted total of one coefficient set.
   let f = 0, fd = 0, fdd = 0, ft = 0, ftt = 0, fdt = 0;
-  for (let k = 0; k < TERMS; k++) {
-    const t = (N_[k] as number) * (D_POW[IDX_I[k] as number] as number) * (T_POW[IDX_J[k] as number] as number);
-    f += t;
-    fd += (W_I[k] as number) * t;
-    fdd += (W_II[k] as number) * t;
-    ft += (W_J[k] as number) * t;
-    ftt += (W_JJ[k] as number) * t;
-    fdt += (W_IJ[k] as number) * t;
+  for (let i = I_MAX; i >= 0; i--) {
+    f = f * delta + (CA[i] as number);
+    fd = fd * delta + (CIA[i] as number);
+    fdd = fdd * delta + (CIIA[i] as number);
+    ft = ft * delta + (CB[i] as number);
+    ftt = ftt * delta + (CC[i] as number);
+    fdt = fdt * delta + (CIB[i] as number);
   }
   const id = 1 / delta;
   const it = 1 / tau;
@@ -95,21 +134,20 @@ export const P3 = new Float64Array(2);
 
 /**
  * Fills P3 with Eq. (28)'s pressure and its density slope at (ρ kg/m³, T K), from φ_δ and φ_δδ
- * only (a third of region3Helmholtz' sums: this is what every density solve iterates on).
+ * only (what every density solve iterates on; at a repeated T, two Horner sums of 12 terms).
  * No range checks, no allocation.
  */
 export function region3Pressure(rho: number, T: number): void {
-  const d = rho / IF97.rhoc;
-  region3Powers(d, IF97.Tc / T);
+  const d = rho / RHOC;
+  region3TauSums(T);
   let fd = 0, fdd = 0;
-  for (let k = 0; k < TERMS; k++) {
-    const t = (N_[k] as number) * (D_POW[IDX_I[k] as number] as number) * (T_POW[IDX_J[k] as number] as number);
-    fd += (W_I[k] as number) * t;
-    fdd += (W_II[k] as number) * t;
+  for (let i = I_MAX; i >= 0; i--) {
+    fd = fd * d + (CIA[i] as number);
+    fdd = fdd * d + (CIIA[i] as number);
   }
   // δ·φ_δ = n1 + Σ n·I·δ^I·τ^J and δ²·φ_δδ = −n1 + Σ n·I(I−1)·δ^I·τ^J
   const dfd = n1 + fd;
-  const RT = IF97.R * T;
+  const RT = R * T;
   P3[0] = rho * RT * dfd;
   P3[1] = RT * (2 * dfd + fdd - n1);
 }
@@ -124,7 +162,6 @@ export function region3State(rho: number, T: number, p?: number, v?: number): Ph
   const f = F3[0] as number, fd = F3[1] as number, fdd = F3[2] as number;
   const ft = F3[3] as number, ftt = F3[4] as number, fdt = F3[5] as number;
   const d = F3[6] as number, tau = F3[7] as number;
-  const R = IF97.R;
   const RT = R * T;
   const dfd = d * fd;
   const tau2ftt = tau * tau * ftt;

@@ -3,14 +3,25 @@
 // p ≥ p_s(T), else region 2; 623.15 K < T ≤ 863.15 K: region 3 for p > p_B23(T), else region 2;
 // above 863.15 K: region 2.
 import { InputError } from '../errors.ts';
-import { P_MAX, P_MIN, T_13, T_B23_MAX, T_MAX, T_MIN } from './constants.ts';
-import { b23Pressure } from './b23.ts';
+import * as constants from './constants.ts';
+import * as b23 from './b23.ts';
 import type { PhaseState, SteamRegion } from './phase-state.ts';
-import { region1State } from './region1.ts';
-import { region2State } from './region2.ts';
-import { region3State } from './region3.ts';
-import { region3DensityFromTP } from './region3-density.ts';
-import { saturationPressureUnchecked } from './saturation-line.ts';
+import * as region1 from './region1.ts';
+import * as region2 from './region2.ts';
+import * as region3 from './region3.ts';
+import * as region3Density from './region3-density.ts';
+import * as saturationLine from './saturation-line.ts';
+
+// The imports are read once into module constants: a bundler joins modules into one scope,
+// but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
+// imported binding into a getter call, ~10 ns each on the 2-core CI machine.
+const { P_MAX, P_MIN, T_13, T_B23_MAX, T_MAX, T_MIN } = constants;
+const { b23Pressure } = b23;
+const { region1State } = region1;
+const { region2State } = region2;
+const { region3State } = region3;
+const { region3DensityFromTP } = region3Density;
+const { saturationPressureUnchecked } = saturationLine;
 
 // p_s at whole kelvins 273 … 624 K. p_s(T) rises with T, so p_s(⌊T⌋) ≤ p_s(T) ≤ p_s(⌊T⌋ + 1)
 // decides the region without Eq. (30) except within that 1 K band (it only picks the region;

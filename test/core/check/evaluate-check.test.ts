@@ -29,7 +29,7 @@ describe('evaluateCheck', () => {
     expect(r.cautions.at(-1)).toEqual(STANDING_NOTE);
     expect(rules(r)).toEqual(expect.arrayContaining(['flash-on-release', 'vacuum-on-cooling', 'scald', 'bulk-quality-not-dryness', 'saturation-check-limits']));
   });
-  it('a vessel filled 95 % with water at 20 °C is flagged to go liquid-full far below 120 °C (field-practice.md §6.3)', () => {
+  it('a vessel filled 95 % with water at 20 °C is flagged to go liquid-full far below 120 °C (computed with python3-iapws 1.5.2 (IAPWS-IF97): 113.5 °C)', () => {
     const v = testVessel();
     const V = 3.845;
     const m = (0.95 * V) / saturation(293.15).liquid.v;
@@ -47,7 +47,7 @@ describe('evaluateCheck', () => {
     expect(high.saturation.verdict.verdict).toBe('pressure-above-saturation');
     expect(rules(high)).not.toContain('noncondensable-gas');
   });
-  it('air in the vessel raises the non-condensable gas WARNING with Dalton\'s estimate (field-practice.md §4.2)', () => {
+  it('air in the vessel raises the non-condensable gas WARNING with Dalton\'s estimate (Dalton\'s law, common practice)', () => {
     const r = evaluateCheck(testVessel(), reading({ temperatureK: 115.3 + 273.15, pressure: { reference: 'absolute', pressurePa: 204.7e3 } }));
     expect(r.saturation.verdict.verdict).toBe('pressure-above-saturation');
     expect(rules(r)).toContain('noncondensable-gas');
@@ -69,7 +69,7 @@ describe('evaluateCheck', () => {
     expect(() => evaluateCheck(testVessel(), reading({ weight: { kind: 'gross', grossKg: 100 } }))).toThrow(/gross weight/);
     expect(() => evaluateCheck(testVessel(), reading({ temperatureK: 200 }))).toThrow(/temperature/);
   });
-  it('over random cylinder vessels, quality and masses match a recomputation here from saturation values (field-practice.md §9; fast-check)', () => {
+  it('over random cylinder vessels, quality and masses match a recomputation here from saturation values (mass and volume balances; fast-check)', () => {
     fc.assert(
       fc.property(
         fc.constantFrom('vertical-cylinder' as const, 'horizontal-cylinder' as const),
@@ -82,7 +82,7 @@ describe('evaluateCheck', () => {
           const vessel = testVessel({ geometry: { shape, innerDiameterM: D, straightLengthM: Lc, head } });
           const s = saturation(T);
           const R = D / 2;
-          // Independent volume: cylinder + two heads from the closed forms of field-practice.md §5.1.
+          // Independent volume: cylinder + two heads from the closed forms of solid geometry.
           const headV = head.kind === 'flat' ? 0 : head.kind === 'hemispherical' ? (Math.PI * D ** 3) / 12
             : head.kind === 'semi-ellipsoidal-2-1' ? (Math.PI * D ** 3) / 24 : null;
           const r = evaluateCheck(vessel, reading({ temperatureK: T, pressure: { reference: 'absolute', pressurePa: s.p }, weight: { kind: 'net', netKg: 1 } }));

@@ -5,7 +5,7 @@ import { saturation } from '../../../src/core/steam/index.ts';
 const ATM = 101325;
 
 describe('flash on release to atmosphere', () => {
-  it('saturated liquid at 121 °C flashes about 4 % (common practice), 3.95 % and 62× its volume (field-practice.md §6.1, computed IF97; python3-iapws 3.946 %, 62.2×)', () => {
+  it('saturated liquid at 121 °C flashes about 4 % (common practice), 3.95 % and 62× its volume (computed with python3-iapws 1.5.2 (IAPWS-IF97): 3.946 %, 62.2×)', () => {
     const s = saturation(394.15);
     const f = flashOnRelease(s.liquid.h, s.liquid.v, ATM, 100);
     expect(f.flashFraction).toBeGreaterThan(0.035);
@@ -14,7 +14,7 @@ describe('flash on release to atmosphere', () => {
     expect(f.volumeRatio).toBeCloseTo(62.2, 0);
     expect(f.totalFlashSteamVolumeM3).toBeCloseTo(100 * f.flashSteamVolumePerKgM3, 12);
   });
-  it('134 / 150 / 200 °C flash 6.40 / 9.45 / 19.2 % (field-practice.md §6.1, computed IF97)', () => {
+  it('134 / 150 / 200 °C flash 6.40 / 9.45 / 19.2 % (computed with python3-iapws 1.5.2 (IAPWS-IF97))', () => {
     for (const [celsius, percent] of [[134, 6.40], [150, 9.45], [200, 19.2]] as const) {
       const s = saturation(celsius + 273.15);
       expect(100 * flashOnRelease(s.liquid.h, s.liquid.v, ATM, null).flashFraction).toBeCloseTo(percent, 1);
@@ -27,7 +27,7 @@ describe('flash on release to atmosphere', () => {
 });
 
 describe('stored energy indicator', () => {
-  it('isentropic expansion to 1 atm: saturated liquid 8.4 / 15.4 / 41 MJ/m³ at 121 / 134 / 170.4 °C (field-practice.md §6.2, computed IF97; python3-iapws 8.398 / 15.44 / 41.35)', () => {
+  it('isentropic expansion to 1 atm: saturated liquid 8.4 / 15.4 / 41 MJ/m³ at 121 / 134 / 170.4 °C (computed with python3-iapws 1.5.2 (IAPWS-IF97), IAPWS97(P=0.101325, s=s_f): 8.398 / 15.44 / 41.35)', () => {
     for (const [celsius, mjPerM3] of [[121, 8.398], [134, 15.44], [170.4, 41.35]] as const) {
       const f = saturation(celsius + 273.15).liquid;
       const perM3 = expansionWorkPerKgJ(f.u, f.s, f.p, ATM) / f.v / 1e6;
@@ -50,7 +50,7 @@ describe('margins and cooling', () => {
   it('margin = limit − gauge, fraction = gauge / limit', () => {
     expect(pressureMargin(0.8e6, 1e6)).toEqual({ marginPa: 0.2e6, fractionOfLimit: 0.8 });
   });
-  it('steam cooled to 20 °C falls to p_sat(20 °C) = 2.339 kPa abs and a vessel not rated for vacuum is flagged (python3-iapws _PSat_T(293.15); field-practice.md §6.3)', () => {
+  it('steam cooled to 20 °C falls to p_sat(20 °C) = 2.339 kPa abs and a vessel not rated for vacuum is flagged (python3-iapws 1.5.2 _PSat_T(293.15); vacuum collapse on cooling: https://technewsources.com/tank-trailer-vacuum-collapse/)', () => {
     const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.5, noncondensablePartialPressurePa: 0, temperatureK: 394.15, atmospherePa: ATM, vacuumRated: false });
     expect(c.absolutePressurePa / 1000).toBeCloseTo(2.339, 3);
     expect(c.collapseRisk).toBe(true);

@@ -2,19 +2,19 @@ import { describe, expect, it } from 'vitest';
 import { allVaporTemperatureK, heatUpEnvelope, liquidFullTemperatureK } from '../../../src/core/check/heat-up-envelope.ts';
 import { saturation, saturationPressure } from '../../../src/core/steam/index.ts';
 
-/** Cold fill: a fraction of V filled with saturated liquid at 20 °C, vapor mass neglected (as in field-practice.md §6.3). */
+/** Cold fill: a fraction of V filled with saturated liquid at 20 °C, vapor mass neglected (as in the python3-iapws reference figures below). */
 function coldFillSpecificVolume(fraction: number): number {
   return saturation(293.15).liquid.v / fraction;
 }
 
 describe('heat-up envelope', () => {
-  it('a vessel 95 % full of water at 20 °C goes liquid-full at about 113 °C, far below 120 °C (field-practice.md §6.3, computed IF97; python3-iapws 113.50 °C)', () => {
+  it('a vessel 95 % full of water at 20 °C goes liquid-full at about 113 °C, far below 120 °C (computed with python3-iapws 1.5.2 (IAPWS-IF97): 113.50 °C)', () => {
     const T = liquidFullTemperatureK(coldFillSpecificVolume(0.95));
     expect(T).not.toBeNull();
     expect(T! - 273.15).toBeCloseTo(113.5, 1);
     expect(T! - 273.15).toBeLessThan(120);
   });
-  it('cold fills of 80 / 85 / 90 / 98 % go liquid-full at 250.2 / 213.5 / 169.1 / 69.2 °C (python3-iapws 1.5.2 /usr/bin/python3, IAPWS97(T, x=0).v; field-practice.md §6.3)', () => {
+  it('cold fills of 80 / 85 / 90 / 98 % go liquid-full at 250.2 / 213.5 / 169.1 / 69.2 °C (python3-iapws 1.5.2 /usr/bin/python3, IAPWS97(T, x=0).v)', () => {
     const cases = [[0.8, 250.24], [0.85, 213.48], [0.9, 169.13], [0.98, 69.21]] as const;
     for (const [fraction, celsius] of cases) {
       expect(liquidFullTemperatureK(coldFillSpecificVolume(fraction))! - 273.15).toBeCloseTo(celsius, 1);

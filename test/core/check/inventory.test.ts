@@ -47,7 +47,7 @@ describe('inventory, textbook rigid tanks', () => {
     if (inv.regime === 'two-phase') expect(inv.vaporMassKg).toBeLessThan(0.001);
     else expect(inv.regime).toBe('liquid-full');
   });
-  it('3.845 m³ at 150 °C: 2000 kg → x = 0.0021, V_liq = 2.176 m³ (56.6 %); 50 kg → x = 0.194, V_liq = 0.044 m³ (field-practice.md §9, computed IF97)', () => {
+  it('3.845 m³ at 150 °C: 2000 kg → x = 0.0021, V_liq = 2.176 m³ (56.6 %); 50 kg → x = 0.194, V_liq = 0.044 m³ (computed with python3-iapws 1.5.2 (IAPWS-IF97))', () => {
     const big = twoPhase(inventory(example, 2000, 423.15));
     expect(big.quality).toBeCloseTo(0.0021, 4);
     expect(big.liquidVolumeM3).toBeCloseTo(2.176, 2);
@@ -83,7 +83,7 @@ describe('inventory regimes', () => {
     const inv = inventory(stated(1), 0.5, 423.15); // v = 2 m³/kg > v_g(150 °C) = 0.3925
     expect(inv.regime).toBe('superheated');
     if (inv.regime !== 'superheated') return;
-    // Nearly ideal at this density: p ≈ R·T/v (field-practice.md §8, Z close to 1 at low density).
+    // Nearly ideal at this density: p ≈ R·T/v (Z tends to 1 as the density falls; common practice).
     expect(inv.absolutePressurePa / ((461.526 * 423.15) / 2)).toBeCloseTo(1, 1);
     expect(inv.differenceFromReadingPa).toBeCloseTo(inv.absolutePressurePa - 2e5, 6);
   });
@@ -95,7 +95,7 @@ describe('inventory invariants (fast-check)', () => {
     V: fc.double({ min: 0.01, max: 50, noNaN: true }),
     x: fc.double({ min: 0.001, max: 0.999, noNaN: true }),
   });
-  it('quality and masses recomputed here from saturation values (field-practice.md §9): x = (v − v_f)/(v_g − v_f), m_f + m_g = m, V = m_f·v_f + m_g·v_g', () => {
+  it('quality and masses recomputed here from saturation values (mass and volume balances): x = (v − v_f)/(v_g − v_f), m_f + m_g = m, V = m_f·v_f + m_g·v_g', () => {
     fc.assert(
       fc.property(cases, ({ T, V, x }) => {
         const s = saturation(T);

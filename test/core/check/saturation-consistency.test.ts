@@ -38,7 +38,7 @@ describe('saturation consistency', () => {
     );
   });
 
-  it('121 °C field kit: RTD class B, 0–4 bar class 1.6 gauge, assumed atmosphere ±3 kPa → RSS ±1.42 K, worst case ±2.36 K (field-practice.md §3.5, computed there)', () => {
+  it('121 °C field kit: RTD class B, 0–4 bar class 1.6 gauge, assumed atmosphere ±3 kPa → RSS ±1.42 K, worst case ±2.36 K (IEC 60751 and EN 837-1 class limits, dp_sat/dT computed with python3-iapws 1.5.2 (IAPWS-IF97))', () => {
     const vessel = testVessel({
       instruments: { ...exactInstruments(), pressureGauge: { spanPa: 4e5, accuracyPercentOfSpan: 1.6 }, temperatureSensor: { kind: 'iec-60751', sensorClass: 'B' } },
     });
@@ -50,7 +50,7 @@ describe('saturation consistency', () => {
     expect(c.saturationSlopePaPerK / 1000).toBeCloseTo(6.46, 2);
   });
 
-  it('15 psig at sea level with 2/3 of the air discharged: p_air 33.8 kPa, chamber 115.3 °C (field-practice.md §4.2, computed IF97)', () => {
+  it('15 psig at sea level with 2/3 of the air discharged: p_air 33.8 kPa, chamber 115.3 °C (Dalton\'s law, computed with python3-iapws 1.5.2 (IAPWS-IF97); Perkins 1969 tabulates about 115 °C, from memory)', () => {
     const vessel = testVessel({ instruments: exactInstruments() });
     const c = check(vessel, at(115.3 + 273.15, { reference: 'absolute', pressurePa: 204.7e3 }));
     expect(c.verdict.verdict).toBe('pressure-above-saturation');
@@ -72,7 +72,7 @@ describe('saturation consistency', () => {
     );
   });
 
-  it('pressure below saturation beyond the band is flagged, with superheat possible only without liquid (field-practice.md §4.2)', () => {
+  it('pressure below saturation beyond the band is flagged, with superheat possible only without liquid (with liquid at equilibrium the vapor cannot be superheated; from memory)', () => {
     const vessel = testVessel({ instruments: exactInstruments() });
     const r = resolveReading(vessel, at(394.15, { reference: 'absolute', pressurePa: 150e3 }));
     const withLiquid = checkSaturation(vessel, r, 'absolute', true);
@@ -81,7 +81,7 @@ describe('saturation consistency', () => {
     expect(dry.verdict).toEqual({ verdict: 'pressure-below-saturation', superheatPossible: true });
   });
 
-  it('the deviation both ways: T_sat(101.325 kPa) = 99.974 °C (field-practice.md §0, computed IF97)', () => {
+  it('the deviation both ways: T_sat(101.325 kPa) = 99.974 °C (computed with python3-iapws 1.5.2 (IAPWS-IF97), _TSat_P(0.101325))', () => {
     const vessel = testVessel({ instruments: exactInstruments() });
     const c = check(vessel, at(373.15, { reference: 'absolute', pressurePa: 101325 }));
     expect(c.saturationTemperatureK - 273.15).toBeCloseTo(99.974, 3);

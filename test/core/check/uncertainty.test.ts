@@ -5,7 +5,7 @@ import { saturation } from '../../../src/core/steam/index.ts';
 import { testVessel } from './test-vessel.ts';
 
 describe('instrument tolerances', () => {
-  it('IEC 60751 at 121 °C: AA ±0.31, A ±0.39, B ±0.91 K (field-practice.md §3.2, rounded there; exact 0.3057 / 0.392 / 0.905)', () => {
+  it('IEC 60751 at 121 °C: AA ±0.31, A ±0.39, B ±0.91 K (IEC 60751 class formulas at t = 121 °C, rounded; exact 0.3057 / 0.392 / 0.905)', () => {
     const at121 = (sensorClass: 'AA' | 'A' | 'B') => temperatureToleranceK({ kind: 'iec-60751', sensorClass }, 394.15);
     expect(at121('AA')).toBeCloseTo(0.1 + 0.0017 * 121, 12);
     expect(at121('A')).toBeCloseTo(0.15 + 0.002 * 121, 12);
@@ -33,15 +33,15 @@ describe('instrument tolerances', () => {
 describe('quality and liquid-mass bands', () => {
   const V = 3.845;
   const T = 423.15;
-  it('3.845 m³ at 150 °C, 2000 kg: ±1 % of V moves x by ±0.00005 (field-practice.md §9, computed IF97)', () => {
+  it('3.845 m³ at 150 °C, 2000 kg: ±1 % of V moves x by ±0.00005 (computed with python3-iapws 1.5.2 (IAPWS-IF97))', () => {
     const b = inventoryBands({ temperatureK: T, massKg: 2000, volumeM3: V, massToleranceKg: 0, temperatureToleranceK: 0, volumeToleranceM3: 0.01 * V });
     expect(b.quality.plusMinus).toBeCloseTo(0.00005, 5);
   });
-  it('3.845 m³ at 150 °C, 50 kg: dx/dm = −0.0039 per kg (field-practice.md §9, computed IF97)', () => {
+  it('3.845 m³ at 150 °C, 50 kg: dx/dm = −0.0039 per kg (computed with python3-iapws 1.5.2 (IAPWS-IF97))', () => {
     const b = inventoryBands({ temperatureK: T, massKg: 50, volumeM3: V, massToleranceKg: 1, temperatureToleranceK: 0, volumeToleranceM3: 0 });
     expect(b.quality.plusMinus).toBeCloseTo(0.0039, 4);
   });
-  it('1 kg of mass error is about 1 L of liquid: dV_liq/dm = v_g·v_f/(v_g − v_f) (field-practice.md §9)', () => {
+  it('1 kg of mass error is about 1 L of liquid: dV_liq/dm = v_g·v_f/(v_g − v_f) (differentiating the mass and volume balances)', () => {
     const b = inventoryBands({ temperatureK: T, massKg: 2000, volumeM3: V, massToleranceKg: 1, temperatureToleranceK: 0, volumeToleranceM3: 0 });
     const s = saturation(T);
     expect(b.liquidMassKg.plusMinus * s.liquid.v).toBeCloseTo((s.vapor.v * s.liquid.v) / (s.vapor.v - s.liquid.v), 9);

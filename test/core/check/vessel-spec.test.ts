@@ -43,7 +43,7 @@ describe('validateVessel (issue 3, bad input)', () => {
       if (field !== 'tag') expect(e.message).toMatch(/range|must/);
     });
   }
-  it('the relief-above-MAWP refusal gives the MAWP as the range maximum (ASME VIII-1 UG-134(a), field-practice.md §6.6)', () => {
+  it('the relief-above-MAWP refusal gives the MAWP as the range maximum (ASME BPVC Section VIII Div. 1 UG-134(a))', () => {
     const e = refusal(testVessel({ reliefSetGaugePa: 1.1e6 }));
     expect(e.problem).toBe('inconsistent');
     expect(e.range).toEqual({ min: 0, max: 1e6, unit: 'Pa' });

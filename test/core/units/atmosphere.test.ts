@@ -28,7 +28,7 @@ describe('US Standard Atmosphere 1976, troposphere', () => {
       earthRadius: 6356766, tropopauseGeopotential: 11000,
     });
     const { g0, molarMass, gasConstant, lapseRate } = US_STANDARD_ATMOSPHERE_1976;
-    // The exponent g0·M/(R*·L) = 5.255 88 (field-practice.md §1.2, computed from the same constants).
+    // The exponent g0·M/(R*·L) = 5.255 88 (computed from the US Standard Atmosphere 1976 constants above).
     expect((g0 * molarMass) / (gasConstant * lapseRate)).toBeCloseTo(5.25588, 5);
   });
 
@@ -52,7 +52,8 @@ describe('US Standard Atmosphere 1976, troposphere', () => {
   });
 
   it('geometric and geopotential differ by the standard\'s H = r0·Z/(r0 + Z): 1.7 Pa at 1 000 m, 28 Pa at 5 000 m', () => {
-    // field-practice.md §1.2 (computed, geopotential): 1 000 m → 89.875 kPa, 2 000 m → 79.495 kPa.
+    // US Standard Atmosphere 1976 troposphere formula, computed at geopotential altitude: 1 000 m →
+    // 89.875 kPa, 2 000 m → 79.495 kPa.
     expect(atmosphereFromGeopotentialAltitude(1000) / 1000).toBeCloseTo(89.875, 3);
     expect(atmosphereFromGeopotentialAltitude(2000) / 1000).toBeCloseTo(79.495, 3);
     expect(atmosphereFromElevation(1000) - atmosphereFromGeopotentialAltitude(1000)).toBeCloseTo(1.7, 1);
@@ -101,7 +102,7 @@ describe('gauge and absolute pressure', () => {
     expect(gaugeFromAbsolute(50000, STANDARD_ATMOSPHERE_PA)).toBe(-51325);
   });
 
-  it('uses the site atmosphere: 15 psi gauge at 1 500 m is 16.8 kPa less absolute than at sea level (field-practice.md §1.4)', () => {
+  it('uses the site atmosphere: 15 psi gauge at 1 500 m is 16.8 kPa less absolute than at sea level (US Standard Atmosphere 1976, computed: about 84.56 kPa at 1 500 m)', () => {
     const gauge = pressureToPa(15, 'psi');
     const seaLevel = absoluteFromGauge(gauge, STANDARD_ATMOSPHERE_PA);
     const site = absoluteFromGauge(gauge, atmosphereFromElevation(1500));

@@ -1,5 +1,5 @@
-// The core's public entry carries the units API that the other parts of the app code against
-// (notes/CONTRACTS.md, "Units"). A missing export here would only show up when they integrate.
+// The core's public entry carries the units API that the screens code against; a missing
+// export here would otherwise only show up when the app is built.
 import { describe, expect, it } from 'vitest';
 import * as core from '../../../src/core/index.ts';
 

@@ -39,7 +39,7 @@ describe('temperature against NIST SP 811 (2008) Appendix B.8 temperature rows (
     expect(temperatureFromK(273.15, 'degR')).toBeCloseTo(491.67, 12);
   });
 
-  it('a difference of 1 K is 1 °C and 1.8 °F or °R, with no offset (field-practice.md §2, NIST B.8)', () => {
+  it('a difference of 1 K is 1 °C and 1.8 °F or °R, with no offset (NIST SP 811 (2008) Appendix B.8)', () => {
     expect(temperatureDifferenceToK(1.8, 'degF')).toBe(1);
     expect(temperatureDifferenceToK(1, 'degC')).toBe(1);
     expect(temperatureDifferenceFromK(1, 'degF')).toBe(1.8);
