@@ -2,7 +2,7 @@
 // and a hash never leaves the page, so routes work offline and in an installed app alike.
 import { useEffect, useState } from 'preact/hooks';
 
-export type ScreenId = 'vessels' | 'check' | 'fill' | 'log' | 'convert' | 'settings';
+export type ScreenId = 'vessels' | 'check' | 'fill' | 'log' | 'review' | 'convert' | 'settings';
 
 export interface Route { screen: ScreenId; param?: string }
 
@@ -11,6 +11,7 @@ export const SCREENS: readonly { id: ScreenId; label: string; title: string }[] 
   { id: 'check', label: 'Check', title: 'New check' },
   { id: 'fill', label: 'Fill', title: 'Fill plan' },
   { id: 'log', label: 'Log', title: 'Log' },
+  { id: 'review', label: 'Review', title: 'Review' },
   { id: 'convert', label: 'Convert', title: 'Convert' },
   { id: 'settings', label: 'Settings', title: 'Settings' },
 ];

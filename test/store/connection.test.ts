@@ -57,7 +57,10 @@ describe('connection', () => {
     await openStore({ onEvent: (e) => events.push(e) });
     const v = await addVessel({ tag: 'FT-1', spec: SPEC });
     forceCloseDatabase(unwrap(await getDb()) as never);
-    await new Promise((r) => setTimeout(r, 0));
+    // The close event waits until the connection's transactions have finished (fake-indexeddb
+    // re-checks with setImmediate), which one setTimeout(0) does not reliably outlast on a busy
+    // machine: wait a bounded number of turns for it, so a late event cannot land in the next test.
+    for (let turn = 0; turn < 50 && events.length === 0; turn += 1) await new Promise((r) => setTimeout(r, 1));
     expect(events).toEqual([{ type: 'terminated' }]);
     expect(await listVessels()).toEqual([v]);
   });

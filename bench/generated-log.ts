@@ -1,0 +1,139 @@
+// Generated benchmark and test data (invented, not demo data): a "tankside-backup" v1 file of
+// vessels and a hash-chained check log of one device, written with the store's own canonical JSON
+// and SHA-256 so it imports as a backup from another device would.
+import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
+import { GENESIS_HASH, type CheckRecord, type VesselRecord } from '../src/store/records.ts';
+import { tagKeyOf } from '../src/store/vessels.ts';
+
+export interface LogSpec {
+  deviceId: string;
+  /** Vessel ids are derived from this, so two logs with the same prefix share vessels. */
+  vesselPrefix: string;
+  vessels: number;
+  checks: number;
+  /** The first check's instant, ms; checks follow every `stepMs`. */
+  startMs: number;
+  stepMs: number;
+  technicians: readonly string[];
+  seed: number;
+}
+
+/** A small deterministic generator (mulberry32), so every run writes the same file. */
+function random(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+function hex(n: number, width: number): string {
+  return n.toString(16).padStart(width, '0').slice(-width);
+}
+
+/** A UUID-shaped id (version 4 layout) from a prefix number and an index. */
+export function fakeUuid(prefix: number, index: number): string {
+  return `${hex(prefix, 8)}-${hex(index >>> 16, 4)}-4${hex(index & 0xfff, 3)}-8${hex(index >>> 12, 3)}-${hex(index, 12)}`;
+}
+
+/** "2026-11-03T07:15:00+01:00" for ms (a fixed +01:00 offset, like a plant in Central Europe). */
+function iso(ms: number): string {
+  return new Date(ms + 3_600_000).toISOString().slice(0, 19) + '+01:00';
+}
+
+export function generatedVessels(prefix: number, count: number, createdMs: number): VesselRecord[] {
+  return Array.from({ length: count }, (_, i) => {
+    const tag = `GEN-${String(i + 1).padStart(4, '0')}`;
+    return {
+      id: fakeUuid(prefix, i),
+      tag,
+      tagKey: tagKeyOf(tag),
+      description: 'Generated vessel for benchmarks and tests (invented).',
+      spec: { internalVolumeM3: 1 + (i % 7) * 0.5, tareKg: 400 + (i % 5) * 50, mawpPa: 1.0e6, reliefSetPa: 0.95e6 },
+      retired: false,
+      retiredAt: null,
+      createdAt: iso(createdMs),
+      updatedAt: iso(createdMs),
+    };
+  });
+}
+
+const SIGNAL_SETS = [
+  [],
+  [],
+  [],
+  [{ signal: 'CAUTION', message: 'Generated caution: reading near the edge of the band.', rule: 'generated-caution' }],
+  [{ signal: 'WARNING', message: 'Generated warning: pressure above saturation beyond the band.', rule: 'generated-warning' }],
+  [{ signal: 'DANGER', message: 'Generated danger: fill too high to heat safely.', rule: 'generated-danger' }],
+] as const;
+
+/** The log's checks, seq 1..n, each hashed onto the previous one. */
+export async function generatedChecks(spec: LogSpec, vessels: readonly VesselRecord[]): Promise<CheckRecord[]> {
+  const rnd = random(spec.seed);
+  const out: CheckRecord[] = [];
+  let prevHash = GENESIS_HASH;
+  for (let i = 0; i < spec.checks; i += 1) {
+    const vessel = vessels[i % vessels.length]!;
+    const timeMs = Math.floor((spec.startMs + i * spec.stepMs) / 1000) * 1000;
+    const deviationPa = Math.round((rnd() - 0.45) * 40_000);
+    const verdict = Math.abs(deviationPa) < 8000 ? 'consistent' : deviationPa > 0 ? 'pressure-above-saturation' : 'pressure-below-saturation';
+    const quality = Math.round(rnd() * 5000) / 100_000;
+    const liquidMassKg = Math.round(300 + rnd() * 900);
+    const cautions = [
+      ...SIGNAL_SETS[Math.floor(rnd() * SIGNAL_SETS.length)]!,
+      { signal: 'NOTICE', message: 'Does not replace the inspection regime or local codes.', rule: 'standing-note' },
+    ];
+    const unsigned: Omit<CheckRecord, 'hash'> = {
+      id: fakeUuid(spec.seed, i),
+      deviceId: spec.deviceId,
+      seq: i + 1,
+      time: iso(timeMs),
+      timeMs,
+      technician: spec.technicians[i % spec.technicians.length]!,
+      note: '',
+      vesselId: vessel.id,
+      vessel: { tag: vessel.tag, spec: vessel.spec },
+      inputs: {
+        temperature: { text: (140 + rnd() * 20).toFixed(1).replace('.', ','), unit: 'degC' },
+        pressure: { text: (3 + rnd()).toFixed(2), unit: 'bar', reference: 'gauge' },
+      },
+      reading: { temperatureK: 420, pressurePa: 450_000 },
+      result: {
+        saturation: { pressureDeviationPa: deviationPa, verdict: { verdict } },
+        inventory: { regime: 'two-phase', quality, liquidMassKg },
+      },
+      cautions: cautions as CheckRecord['cautions'],
+      appVersion: 'generated',
+      formulationId: 'IAPWS-IF97 (R7-97(2012))',
+      corrects: null,
+      reason: null,
+      prevHash,
+    };
+    const hash = await computeCheckHash(unsigned);
+    out.push({ ...unsigned, hash });
+    prevHash = hash;
+  }
+  return out;
+}
+
+/** The backup file text: the same layout exportBackup writes (one canonical record per line). */
+export function backupText(vessels: readonly VesselRecord[], checks: readonly CheckRecord[], exportedAt: string): string {
+  const last = checks[checks.length - 1];
+  const chains = last ? [{ deviceId: last.deviceId, count: checks.length, headSeq: last.seq, headHash: last.hash }] : [];
+  const lines = (items: unknown[]) => (items.length === 0 ? '' : `\n${items.map((x) => canonicalJson(x)).join(',\n')}\n`);
+  return (
+    `{"format":"tankside-backup","formatVersion":1,"exportedAt":${JSON.stringify(exportedAt)},\n` +
+    `"vessels":[${lines([...vessels].sort((a, b) => (a.id < b.id ? -1 : 1)))}],\n` +
+    `"checks":[${lines([...checks])}],\n` +
+    `"chains":[${lines(chains)}]}\n`
+  );
+}
+
+/** A whole generated backup file. */
+export async function generatedBackup(spec: LogSpec): Promise<string> {
+  const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
+  return backupText(vessels, await generatedChecks(spec, vessels), iso(spec.startMs + spec.checks * spec.stepMs));
+}

@@ -1,0 +1,155 @@
+// Scale benchmark of the review screen in headless Chromium against the built app: a generated
+// log of 100,000 checks over 200 vessels (imported through the screen), then the figures a
+// supervisor feels. Prints each figure beside its target; asserts nothing about time.
+// Run: npm run bench (builds first; ~2–4 minutes on a small machine).
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DIST, ROOT, launch, startServer, tempProfile } from '../test/e2e/harness.ts';
+import { generatedBackup } from './generated-log.ts';
+
+// BENCH_CHECKS lets a quick run use a smaller log while changing the benchmark itself.
+const CHECKS = Number(process.env['BENCH_CHECKS'] ?? 100_000);
+const VESSELS = 200;
+const YEAR_MS = 365 * 24 * 3_600_000;
+const START = Date.parse('2026-01-01T00:00:00Z');
+
+const N = CHECKS.toLocaleString('en-GB');
+const N2 = (2 * CHECKS).toLocaleString('en-GB');
+const rows: { what: string; ms: number; target: string }[] = [];
+function note(what: string, ms: number, target: string): void {
+  rows.push({ what, ms, target });
+  console.log(`  ${what.padEnd(66)} ${(ms / 1000).toFixed(3).padStart(8)} s   target ${target}`);
+}
+
+/** For a row timed by timeRows: how much of it was reading the store. */
+function noteRead(): void {
+  console.log(`    ${'of which reading the first page from the store'.padEnd(64)} ${(lastRead / 1000).toFixed(3).padStart(8)} s`);
+}
+
+/** When the last timed first page had been read from the store, ms after the action. */
+let lastRead = NaN;
+
+/** Runs `act` in the page and waits until the review shows a new first page; ms by the page's clock. */
+async function timeRows(page: Page, act: string): Promise<number> {
+  return page.evaluate(async (action) => {
+    const root = () => document.querySelector('.review-screen');
+    const before = Number(root()?.getAttribute('data-shown') ?? '-1');
+    const t0 = performance.now();
+    // The action is one of a few fixed statements written below, not user input.
+    const [kind, selector, value] = action.split('|') as [string, string, string];
+    if (kind === 'hash') location.hash = value;
+    else {
+      const el = document.querySelector(selector) as HTMLInputElement | HTMLSelectElement;
+      el.value = value;
+      el.dispatchEvent(new Event('change', { bubbles: true }));
+    }
+    await new Promise<void>((done) => {
+      const tick = () => {
+        const r = root();
+        if (r && Number(r.getAttribute('data-shown')) > before && r.querySelector('.review-row')) done();
+        else requestAnimationFrame(tick);
+      };
+      tick();
+    });
+    const read = performance.getEntriesByName('tankside: first page read').at(-1)?.startTime ?? NaN;
+    return [performance.now() - t0, read - t0] as const;
+  }, act).then(([ms, readMs]) => {
+    lastRead = readMs;
+    return ms;
+  });
+}
+
+/** The page's own timing of its last job with this label (store work plus making the file). */
+async function jobMs(page: Page, label: string): Promise<number> {
+  return page.evaluate((name) => performance.getEntriesByName(`tankside: ${name}`).at(-1)?.duration ?? NaN, label);
+}
+
+function noteJob(what: string, ms: number): void {
+  console.log(`    ${what.padEnd(64)} ${(ms / 1000).toFixed(3).padStart(8)} s`);
+}
+
+async function timeClick(page: Page, name: string, until: () => Promise<unknown>): Promise<number> {
+  const t0 = Date.now();
+  await Promise.all([until(), page.getByRole('button', { name }).click()]);
+  return Date.now() - t0;
+}
+
+it(`review at ${N} + ${N} checks`, async () => {
+  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
+  expect(build.status).toBe(0);
+  const dir = mkdtempSync(join(tmpdir(), 'tankside-bench-'));
+  const profile = tempProfile();
+  const server = await startServer(DIST);
+  const ctx = await launch(profile.dir);
+  try {
+    let t = Date.now();
+    const common = { vessels: VESSELS, checks: CHECKS, vesselPrefix: '5eed0200', stepMs: YEAR_MS / CHECKS, technicians: ['Gen Adeyemi', 'Gen Berg', 'Gen Castro', 'Gen Dubois', 'Gen Endo'] };
+    const fileA = join(dir, 'device-a.json');
+    const fileB = join(dir, 'device-b.json');
+    writeFileSync(fileA, await generatedBackup({ ...common, deviceId: 'a0000000-0000-4000-8000-00000000000a', startMs: START, seed: 1 }));
+    writeFileSync(fileB, await generatedBackup({ ...common, deviceId: 'b0000000-0000-4000-8000-00000000000b', startMs: START + 60_000, seed: 2 }));
+    console.log(`\nGenerated 2 × ${CHECKS} checks over ${VESSELS} vessels in ${((Date.now() - t) / 1000).toFixed(1)} s` +
+      ` (files ${(statSync(fileA).size / 1e6).toFixed(1)} MB each, generated data)`);
+    console.log('Figures (headless Chromium, built app; this machine):');
+
+    const page = ctx.pages()[0] ?? (await ctx.newPage());
+    page.setDefaultTimeout(300_000);
+    await page.goto(`${server.url}#/review`);
+    await page.locator('[data-review-state="ready"]').waitFor();
+
+    const importFile = async (file: string) => {
+      await page.setInputFiles('#rt-file', file);
+      return timeClick(page, 'Import and merge', () => page.locator('[data-import-result="done"]').waitFor());
+    };
+    note(`import ${N} checks into an empty device (seeding)`, await importFile(fileA), '(seeding, no target)');
+    await page.locator('[data-import-result]').evaluate((el) => el.remove());
+    note(`import and merge ${N} checks into a device holding ${N}`, await importFile(fileB), '≤ 10 s');
+    noteJob('of which reading the file and importBackup, timed in the page', await jobMs(page, 'Importing the backup'));
+    const added = await page.locator('[data-import-added]').getAttribute('data-import-added');
+    expect(added).toBe(String(CHECKS));
+
+    await page.goto(`${server.url}#/settings`);
+    await page.reload();
+    await page.locator('main h1').waitFor();
+    note(`first rows of the review screen (${N2} checks; from another screen)`, await timeRows(page, 'hash||#/review'), '≤ 300 ms');
+    noteRead();
+    await page.reload();
+    const cold = await page.evaluate(async () => {
+      await new Promise<void>((done) => {
+        const tick = () => (document.querySelector('.review-row') ? done() : requestAnimationFrame(tick));
+        tick();
+      });
+      return performance.now();
+    });
+    note('first rows after a reload (page load, store open, first page)', cold, '(≤ 300 ms for the screen)');
+    const vesselId = await page.locator('#rf-vessel option').nth(17).getAttribute('value');
+    note('filter by vessel (1 of 200)', await timeRows(page, `change|#rf-vessel|${vesselId}`), '≤ 200 ms');
+    noteRead();
+    note('… and by month (2026-06)', await timeRows(page, 'change|#rf-month|2026-06'), '≤ 200 ms');
+    noteRead();
+    note('filter by month only, all vessels (vessel cleared)', await timeRows(page, 'change|#rf-vessel|'), '≤ 200 ms');
+    noteRead();
+    note('filter by signal word DANGER on top (record-by-record scan)', await timeRows(page, 'change|#rf-signal|DANGER'), '≤ 200 ms');
+    noteRead();
+    await page.locator('.review-totals[data-complete="yes"]').waitFor();
+
+    const download = () => page.waitForEvent('download', { timeout: 300_000 });
+    note(`CSV export (${N2} checks; click to download)`, await timeClick(page, 'Download CSV', download), '≤ 3 s');
+    noteJob('of which exportCsv and making the file, timed in the page', await jobMs(page, 'Writing the CSV'));
+    note(`JSON backup export (${N2} checks; click to download)`, await timeClick(page, 'Download JSON backup', download), '≤ 3 s');
+    noteJob('of which exportBackup and making the file, timed in the page', await jobMs(page, 'Writing the backup'));
+    note(`chain verification (2 devices, ${N2} checks)`, await timeClick(page, 'Verify chains', () => page.locator('[data-chain]').first().waitFor()), '≤ 2 s');
+    noteJob('of which verifyStoredChains, timed in the page', await jobMs(page, 'Verifying chains'));
+    expect(await page.locator('[data-chain="ok"]').count()).toBe(2);
+    console.log('Summary:', JSON.stringify(rows.map((r) => ({ [r.what]: Math.round(r.ms) }))));
+  } finally {
+    await ctx.close();
+    await server.close();
+    profile.remove();
+    rmSync(dir, { recursive: true, force: true });
+  }
+});

@@ -1,0 +1,41 @@
+// Chain status of every device whose records are here; a broken chain points at its first bad record.
+import { useState } from 'preact/hooks';
+import { hrefFor } from '../router.ts';
+import { checkChains, type ChainLine } from './chain-view.ts';
+import { useLongWork } from './use-long-work.ts';
+import { WorkProgress } from './WorkProgress.tsx';
+
+export function ChainPanel() {
+  const work = useLongWork();
+  const [lines, setLines] = useState<ChainLine[] | null>(null);
+  const [message, setMessage] = useState('');
+  const verify = async () => {
+    setMessage('');
+    try {
+      const result = await work.run('Verifying chains', (o) => checkChains(o));
+      if (result) setLines(result);
+    } catch (e) {
+      setMessage(e instanceof Error ? e.message : String(e));
+    }
+  };
+  return (
+    <section class="panel" aria-labelledby="review-chain-title">
+      <h2 id="review-chain-title">Record integrity</h2>
+      <p class="muted">Each device chains its records by SHA-256; a changed, reordered or missing record breaks its chain.</p>
+      <button type="button" class="primary" onClick={() => void verify()} disabled={work.running !== null}>Verify chains</button>
+      <WorkProgress work={work} id="chain-progress" />
+      {message ? <p class="field-error" role="alert">{message}</p> : null}
+      {lines ? (
+        <ul class="review-chains" aria-label="Chain status per device">
+          {lines.length === 0 ? <li>No records on this device yet.</li> : null}
+          {lines.map((l) => (
+            <li key={l.deviceId} class={l.ok ? 'chain-ok' : 'chain-broken'} data-chain={l.ok ? 'ok' : 'broken'}>
+              <strong>{l.ok ? 'Intact' : 'BROKEN'}</strong> device {l.deviceShort}: {l.text}
+              {l.at ? <> <a href={hrefFor('log', l.at.id)}>Open record seq {l.at.seq}</a></> : null}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,38 @@
+// What an import did: added, skipped and rejected, each with its reason.
+import type { ImportOutcome, ReportLine } from './transfer.ts';
+
+function Lines({ title, lines, kind }: { title: string; lines: readonly ReportLine[]; kind: string }) {
+  if (lines.length === 0) return null;
+  const shown = lines.slice(0, 200);
+  return (
+    <details open={lines.length <= 20} class="import-lines">
+      <summary>{title}: {lines.length.toLocaleString('en-GB')}</summary>
+      <ul data-import={kind}>
+        {shown.map((l) => <li key={l.id}><code>{l.id}</code>: {l.why}</li>)}
+        {lines.length > shown.length ? <li>… and {lines.length - shown.length} more.</li> : null}
+      </ul>
+    </details>
+  );
+}
+
+export function ImportReportView({ outcome }: { outcome: ImportOutcome }) {
+  if (outcome.kind === 'cancelled') return <p role="status" data-import-result="cancelled">Import cancelled; nothing was changed.</p>;
+  if (outcome.kind === 'refused') return <p class="field-error" role="alert" data-import-result="refused">{outcome.message}</p>;
+  const v = outcome.view;
+  return (
+    <div class="import-report" role="status" data-import-result="done">
+      <p>
+        <strong data-import-added={v.added}>Added {v.added.toLocaleString('en-GB')} checks</strong>, {v.vesselsAdded} new
+        vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>,
+        rejected <span data-import-rejected={v.rejected.length}>{v.rejected.length}</span>.
+      </p>
+      <Lines title="Rejected" lines={v.rejected} kind="rejected" />
+      <Lines title="Skipped" lines={v.skipped} kind="skipped" />
+      {v.warnings.length + v.brokenChains.length > 0 ? (
+        <ul class="import-warnings">
+          {[...v.brokenChains.map((b) => `Chain in the file: ${b}`), ...v.warnings].map((w) => <li key={w}>{w}</li>)}
+        </ul>
+      ) : null}
+    </div>
+  );
+}

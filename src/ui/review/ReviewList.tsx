@@ -1,0 +1,51 @@
+// The matching checks, a page at a time ("Show more" reads the next page from the store).
+import { hrefFor } from '../router.ts';
+import { ROW_ORDERS, sortRows, type RowOrder, type RowView } from './row-view.ts';
+
+interface Props {
+  rows: readonly RowView[];
+  order: RowOrder;
+  loading: boolean;
+  more: boolean;
+  onOrder(order: RowOrder): void;
+  onMore(): void;
+}
+
+export function ReviewList({ rows, order, loading, more, onOrder, onMore }: Props) {
+  const shown = sortRows(rows, order);
+  return (
+    <section class="panel" aria-labelledby="review-list-title">
+      <div class="review-list-head">
+        <h2 id="review-list-title">Checks</h2>
+        <div class="field">
+          <label for="rl-order">Order of the rows shown</label>
+          <select id="rl-order" value={order} onChange={(e) => onOrder((e.currentTarget as HTMLSelectElement).value as RowOrder)}>
+            {ROW_ORDERS.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
+          </select>
+        </div>
+      </div>
+      <p class="muted" aria-live="polite" data-review-state={loading ? 'loading' : 'ready'}>
+        {loading ? 'Reading the log…' : rows.length === 0 ? 'No checks match this filter.' : `Showing ${rows.length.toLocaleString('en-GB')}${more ? ' (more below)' : ''}.`}
+      </p>
+      <ul class="review-rows">
+        {shown.map((r) => (
+          <li key={r.id}>
+            <a class="review-row" href={hrefFor('log', r.id)}>
+              <span class="review-row-top">
+                <strong>{r.vesselTag}</strong>
+                <span>{r.when}</span>
+              </span>
+              <span class="review-row-mid">
+                {r.worstSignal ? <span class={`signal signal-${r.worstSignal}`}>{r.worstSignal}</span> : null}
+                <span class={`review-verdict review-verdict-${r.verdict}`}>{r.verdictText}</span>
+                {r.correction ? <span class="demo-tag">correction</span> : null}
+              </span>
+              <span class="review-row-low muted">{r.technician} · device {r.deviceShort}</span>
+            </a>
+          </li>
+        ))}
+      </ul>
+      {more ? <button type="button" onClick={onMore} disabled={loading}>Show more</button> : null}
+    </section>
+  );
+}

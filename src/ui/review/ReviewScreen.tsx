@@ -1,0 +1,128 @@
+// Review for supervisors: filter the log, page through it, totals, chain status per device, the
+// vessel report with its trend chart, export and import. Reads the store a page at a time.
+import { useEffect, useRef, useState } from 'preact/hooks';
+import type { VesselRecord } from '../../store/index.ts';
+import './review.css';
+import { ReviewFilters } from './ReviewFilters.tsx';
+import { ReviewList } from './ReviewList.tsx';
+import { ReviewTotals } from './ReviewTotals.tsx';
+import { ChainPanel } from './ChainPanel.tsx';
+import { TransferPanel } from './TransferPanel.tsx';
+import { VesselReport } from './VesselReport.tsx';
+import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
+import { ReviewPager, reviewVessels } from './review-query.ts';
+import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
+import { rowView, type RowOrder, type RowView } from './row-view.ts';
+import { SIGNALS, VERDICTS } from './record-facts.ts';
+
+const VERDICT_IDS = VERDICTS.map((v) => v.id);
+
+function afterPaint(): Promise<void> {
+  return new Promise((done) => requestAnimationFrame(() => setTimeout(done, 0)));
+}
+
+export function ReviewScreen() {
+  const [vessels, setVessels] = useState<VesselRecord[]>([]);
+  const [form, setForm] = useState<FilterForm>(EMPTY_FORM);
+  const [filter, setFilter] = useState<ReviewFilter>(NO_FILTER);
+  const [formError, setFormError] = useState<{ field: keyof FilterForm; message: string } | null>(null);
+  const [rows, setRows] = useState<RowView[]>([]);
+  const [more, setMore] = useState(false);
+  const [loading, setLoading] = useState(true);
+  const [order, setOrder] = useState<RowOrder>('newest');
+  const [totals, setTotals] = useState<{ value: Totals | null; complete: boolean }>({ value: null, complete: false });
+  const [readError, setReadError] = useState('');
+  const [generation, setGeneration] = useState(0);
+  // Counts first pages shown: lets a test or benchmark see that the rows now belong to the new filter.
+  const [shown, setShown] = useState(0);
+  const [reportFor, setReportFor] = useState<string | null>(null);
+  // While an import writes, counting totals would only compete with it for the store.
+  const [importing, setImporting] = useState(false);
+  const pager = useRef<ReviewPager | null>(null);
+
+  useEffect(() => {
+    const stop = new AbortController();
+    const p = new ReviewPager(filter);
+    pager.current = p;
+    setLoading(true);
+    setReadError('');
+    setTotals({ value: null, complete: false });
+    void (async () => {
+      try {
+        const first = await p.nextPage(stop.signal);
+        if (stop.signal.aborted) return;
+        // Read from the store, not yet drawn: the benchmark tells store time from render time by it.
+        performance.mark('tankside: first page read');
+        setRows(first.rows.map(rowView));
+        setMore(first.more);
+        setLoading(false);
+        setShown((n) => n + 1);
+        // Totals walk the whole match once the first rows are painted, so they never delay them.
+        await afterPaint();
+        if (stop.signal.aborted || importing) return;
+        const done = await countTotals(filter, { signal: stop.signal, onProgress: (t) => setTotals({ value: t, complete: false }) });
+        if (done) setTotals({ value: done, complete: true });
+      } catch (e) {
+        if (!stop.signal.aborted) {
+          setReadError(e instanceof Error ? e.message : String(e));
+          setLoading(false);
+        }
+      }
+    })();
+    return () => stop.abort();
+  }, [filter, generation, importing]);
+
+  // Issued after the first page's read, so the picker's vessels never hold up the first rows.
+  useEffect(() => { void reviewVessels().then(setVessels, () => setVessels([])); }, [generation]);
+
+  const changeForm = (next: FilterForm) => {
+    setForm(next);
+    const reading = readFilterForm(next, VERDICT_IDS, SIGNALS);
+    if (reading.ok) {
+      setFormError(null);
+      setFilter(reading.filter);
+    } else {
+      setFormError({ field: reading.field, message: reading.message });
+    }
+  };
+  const showMore = async () => {
+    const p = pager.current;
+    if (!p) return;
+    setLoading(true);
+    try {
+      const page = await p.nextPage();
+      if (pager.current !== p) return;
+      setRows((r) => [...r, ...page.rows.map(rowView)]);
+      setMore(page.more);
+    } catch (e) {
+      setReadError(e instanceof Error ? e.message : String(e));
+    } finally {
+      setLoading(false);
+    }
+  };
+  const vessel = filter.vesselId ? vessels.find((v) => v.id === filter.vesselId) : undefined;
+
+  return (
+    <div class="review-screen" data-shown={shown}>
+      <div class="no-print">
+        <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />
+        {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
+        <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />
+        <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+      </div>
+      {vessel && reportFor === vessel.id ? (
+        <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} />
+      ) : vessel ? (
+        <p class="panel no-print">
+          <button type="button" class="primary" onClick={() => setReportFor(vessel.id)}>Trend and report for {vessel.tag}</button>
+        </p>
+      ) : (
+        <p class="panel muted no-print">Pick a vessel in the filter for its trend chart and printable report.</p>
+      )}
+      <div class="no-print">
+        <ChainPanel />
+        <TransferPanel onBusy={setImporting} onImported={() => setGeneration((g) => g + 1)} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,60 @@
+// Export (CSV, JSON backup) and import of a backup from another device, with the import's report.
+import { useState } from 'preact/hooks';
+import { WorkProgress } from './WorkProgress.tsx';
+import { fileSizeText, importFile, makeExport, offerDownload, type ExportKind, type ImportOutcome } from './transfer.ts';
+import { useLongWork } from './use-long-work.ts';
+import { ImportReportView } from './ImportReportView.tsx';
+
+export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): void; onImported(): void }) {
+  const work = useLongWork();
+  const [message, setMessage] = useState('');
+  const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
+  const [file, setFile] = useState<File | null>(null);
+  const [runs, setRuns] = useState(0);
+  const busy = work.running !== null;
+
+  const exportAs = async (kind: ExportKind) => {
+    setMessage('');
+    try {
+      const made = await work.run(kind === 'csv' ? 'Writing the CSV' : 'Writing the backup', (o) => makeExport(kind, o));
+      if (made) {
+        offerDownload(made);
+        setMessage(`Ready: ${made.name} (${fileSizeText(made.size)}).`);
+      }
+    } catch (e) {
+      setMessage(`Export stopped: ${e instanceof Error ? e.message : String(e)}`);
+    }
+  };
+  const runImport = async () => {
+    if (!file) return;
+    setOutcome(null);
+    onBusy(true);
+    const result = await work.run('Importing the backup', (o) => importFile(file, o));
+    onBusy(false);
+    if (result) {
+      setOutcome(result);
+      setRuns((n) => n + 1);
+      if (result.kind === 'done') onImported();
+    }
+  };
+
+  return (
+    <section class="panel no-print" aria-labelledby="review-transfer-title">
+      <h2 id="review-transfer-title">Export and import</h2>
+      <div class="row">
+        <button type="button" onClick={() => void exportAs('csv')} disabled={busy}>Download CSV</button>
+        <button type="button" onClick={() => void exportAs('json')} disabled={busy}>Download JSON backup</button>
+      </div>
+      <p aria-live="polite" data-export-message>{message}</p>
+      <div class="field">
+        <label for="rt-file">Backup file from another device</label>
+        <input id="rt-file" class="file-input" type="file" accept=".json,application/json" disabled={busy}
+          onChange={(e) => setFile((e.currentTarget as HTMLInputElement).files?.[0] ?? null)} />
+        <p class="hint">The whole file is checked before anything is written; a damaged file changes nothing.</p>
+      </div>
+      <button type="button" class="primary" onClick={() => void runImport()} disabled={busy || !file}>Import and merge</button>
+      <WorkProgress work={work} id="transfer-progress" />
+      {outcome ? <div data-import-run={runs}><ImportReportView outcome={outcome} /></div> : null}
+    </section>
+  );
+}

@@ -1,0 +1,69 @@
+// The report for one vessel and a period: summary, trend chart and every check, laid out so the
+// browser's print (save as PDF) gives a clean document; review.css holds its print stylesheet.
+import { Fragment } from 'preact';
+import { useEffect, useState } from 'preact/hooks';
+import type { VesselRecord } from '../../store/index.ts';
+import { TrendChart } from './TrendChart.tsx';
+import { trendGeometry, trendPoints, TREND_MAX_POINTS, type TrendPoint } from './trend-data.ts';
+import { periodText, reportRow, reportSummary } from './report-data.ts';
+
+interface Props {
+  vessel: VesselRecord;
+  fromMs: number | null;
+  toMs: number | null;
+  from: string;
+  to: string;
+}
+
+export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
+  const [data, setData] = useState<{ points: TrendPoint[]; capped: boolean } | null>(null);
+  const [error, setError] = useState('');
+  useEffect(() => {
+    let live = true;
+    setData(null);
+    trendPoints(vessel.id, fromMs, toMs).then((d) => live && setData(d), (e: unknown) => live && setError(String(e)));
+    return () => { live = false; };
+  }, [vessel.id, fromMs, toMs]);
+  const period = periodText(from, to);
+  if (error) return <p class="field-error" role="alert">The report could not be read: {error}</p>;
+  if (!data) return <p class="panel" role="status">Reading the checks of {vessel.tag}…</p>;
+  const summary = reportSummary(data.points);
+  return (
+    <section class="panel print-report" aria-labelledby="report-title">
+      <div class="report-head">
+        <h2 id="report-title">Vessel report: {vessel.tag}</h2>
+        <button type="button" class="primary no-print" onClick={() => window.print()}>Print or save as PDF</button>
+      </div>
+      <p>{vessel.description || 'No description.'} Period: <strong>{period}</strong>.</p>
+      <dl class="figures review-figures">
+        <dt>Checks</dt><dd>{summary.checks}{data.capped ? ` (the newest ${TREND_MAX_POINTS} shown)` : ''}</dd>
+        <dt>Gauge agreed with saturation</dt><dd>{summary.consistent}</dd>
+        {summary.bySignal.map((s) => <Fragment key={s.signal}><dt>Worst word {s.signal}</dt><dd>{s.count}</dd></Fragment>)}
+      </dl>
+      {summary.firstTime ? <p>First check {summary.firstTime}; last {summary.lastTime}.</p> : null}
+      {data.points.length > 0 ? <TrendChart geometry={trendGeometry(data.points)} title={`Trend of ${vessel.tag}, ${period}`} /> : null}
+      <p class="hint">Marks on the chart: checks with a caution, coloured by its most severe signal word (DANGER red, WARNING orange, CAUTION yellow, NOTICE blue).</p>
+      <div class="table-wrap" tabIndex={0} role="region" aria-label={`Checks of ${vessel.tag}`}>
+        <table class="report-table">
+          <caption class="visually-hidden">Checks of {vessel.tag}, oldest first</caption>
+          <thead>
+            <tr><th scope="col">Time</th><th scope="col">Verdict</th><th scope="col">Quality</th><th scope="col">Liquid</th><th scope="col">p − p_sat</th><th scope="col">Word</th><th scope="col">By</th></tr>
+          </thead>
+          <tbody>
+            {data.points.map(reportRow).map((r) => (
+              <tr key={r.id}>
+                <td>{r.time}</td><td>{r.verdict}</td><td>{r.quality}</td><td>{r.liquidMass}</td><td>{r.deviation}</td>
+                <td>{r.signal ? <span class={`signal signal-${r.signal}`}>{r.signal}</span> : '–'}</td><td>{r.technician}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p class="standing-note">
+        Figures computed with IAPWS-IF97 from the readings as logged. This report does not replace the vessel's
+        inspection regime, local codes, lockout/tagout procedures or licensed practice; each check's cautions stay
+        with its record.
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,58 @@
+// The printable vessel report's figures: a summary of the period and one table row per check,
+// already formatted for display.
+import { formatNumber } from '../state/format.ts';
+import { SIGNALS, stampText, verdictLabel, type Signal } from './record-facts.ts';
+import type { TrendPoint } from './trend-data.ts';
+
+export interface ReportSummary {
+  checks: number;
+  /** Checks whose worst signal word is this one. */
+  bySignal: { signal: Signal; count: number }[];
+  consistent: number;
+  firstTime: string | null;
+  lastTime: string | null;
+}
+
+export interface ReportRow {
+  id: string;
+  time: string;
+  verdict: string;
+  quality: string;
+  liquidMass: string;
+  deviation: string;
+  signal: Signal | null;
+  technician: string;
+}
+
+export function reportSummary(points: readonly TrendPoint[]): ReportSummary {
+  return {
+    checks: points.length,
+    bySignal: SIGNALS.map((signal) => ({ signal, count: points.filter((p) => p.worstSignal === signal).length })),
+    consistent: points.filter((p) => p.verdict === 'consistent').length,
+    firstTime: points[0] ? stampText(points[0].time) : null,
+    lastTime: points.length ? stampText(points[points.length - 1]!.time) : null,
+  };
+}
+
+const dash = '–';
+
+export function reportRow(p: TrendPoint): ReportRow {
+  return {
+    id: p.id,
+    time: stampText(p.time),
+    verdict: verdictLabel(p.verdict, 'short'),
+    quality: p.quality === null ? dash : `${formatNumber(p.quality * 100, 3)} %`,
+    liquidMass: p.liquidMassKg === null ? dash : `${formatNumber(p.liquidMassKg, 4)} kg`,
+    deviation: p.pressureDeviationPa === null ? dash : `${formatNumber(p.pressureDeviationPa / 1000, 3)} kPa`,
+    signal: p.worstSignal,
+    technician: p.technician,
+  };
+}
+
+/** "2026-12-01 to 2026-12-31", or the open ends in words. */
+export function periodText(from: string, to: string): string {
+  if (from === '' && to === '') return 'all saved checks';
+  if (from === '') return `up to ${to}`;
+  if (to === '') return `from ${from}`;
+  return `${from} to ${to}`;
+}

@@ -1,0 +1,122 @@
+// The supervisor's filter over the check log, and how its form fields read into it. Dates are the
+// reviewing device's local calendar days (a supervisor asks "what happened on the 3rd, here").
+import type { CheckRecord } from '../../store/index.ts';
+import { hasSignal, verdictOf, type Signal, type VerdictId } from './record-facts.ts';
+
+export interface ReviewFilter {
+  vesselId: string | null;
+  /** Inclusive bounds, ms since 1970-01-01T00:00:00Z; null = open. */
+  fromMs: number | null;
+  toMs: number | null;
+  verdict: VerdictId | null;
+  signal: Signal | null;
+  /** Part of the technician's name, any case; '' = any. */
+  technician: string;
+  /** The start of a device id, any case; '' = any. */
+  device: string;
+}
+
+export const NO_FILTER: ReviewFilter = {
+  vesselId: null, fromMs: null, toMs: null, verdict: null, signal: null, technician: '', device: '',
+};
+
+/** True when the filter needs more than the store's vessel and time indexes can answer. */
+export function needsScan(f: ReviewFilter): boolean {
+  return f.verdict !== null || f.signal !== null || f.technician.trim() !== '' || f.device.trim() !== '';
+}
+
+/** Whether one record passes every part of the filter. */
+export function matches(r: CheckRecord, f: ReviewFilter): boolean {
+  if (f.vesselId !== null && r.vesselId !== f.vesselId) return false;
+  if (f.fromMs !== null && r.timeMs < f.fromMs) return false;
+  if (f.toMs !== null && r.timeMs > f.toMs) return false;
+  if (f.verdict !== null && verdictOf(r) !== f.verdict) return false;
+  if (f.signal !== null && !hasSignal(r, f.signal)) return false;
+  const tech = f.technician.trim().toLowerCase();
+  if (tech !== '' && !r.technician.toLowerCase().includes(tech)) return false;
+  const device = f.device.trim().toLowerCase();
+  if (device !== '' && !r.deviceId.toLowerCase().startsWith(device)) return false;
+  return true;
+}
+
+const DAY = /^(\d{4})-(\d{2})-(\d{2})$/;
+const MONTH = /^(\d{4})-(\d{2})$/;
+
+/** Local midnight at the start of a "YYYY-MM-DD" day, or null for '' / a malformed day. */
+export function dayStartMs(text: string): number | null {
+  const m = DAY.exec(text);
+  if (!m) return null;
+  const d = new Date(Number(m[1]), Number(m[2]) - 1, Number(m[3]));
+  return d.getDate() === Number(m[3]) ? d.getTime() : null;
+}
+
+/** The last millisecond of a "YYYY-MM-DD" local day, or null. */
+export function dayEndMs(text: string): number | null {
+  const start = dayStartMs(text);
+  if (start === null) return null;
+  const d = new Date(start);
+  return new Date(d.getFullYear(), d.getMonth(), d.getDate() + 1).getTime() - 1;
+}
+
+/** First and last day ("YYYY-MM-DD") of a "YYYY-MM" month, or null. */
+export function monthDays(text: string): { from: string; to: string } | null {
+  const m = MONTH.exec(text);
+  if (!m) return null;
+  const month = Number(m[2]);
+  if (month < 1 || month > 12) return null;
+  const last = new Date(Number(m[1]), month, 0).getDate();
+  return { from: `${m[1]}-${m[2]}-01`, to: `${m[1]}-${m[2]}-${String(last).padStart(2, '0')}` };
+}
+
+/** The form as typed: every value a string, as the inputs hold them. */
+export interface FilterForm {
+  vesselId: string;
+  from: string;
+  to: string;
+  verdict: string;
+  signal: string;
+  technician: string;
+  device: string;
+}
+
+export const EMPTY_FORM: FilterForm = { vesselId: '', from: '', to: '', verdict: '', signal: '', technician: '', device: '' };
+
+export type FilterReading = { ok: true; filter: ReviewFilter } | { ok: false; field: keyof FilterForm; message: string };
+
+/** Reads the form into a filter, or names the field that cannot be read. */
+export function readFilterForm(form: FilterForm, verdicts: readonly string[], signals: readonly string[]): FilterReading {
+  const fromMs = form.from === '' ? null : dayStartMs(form.from);
+  if (form.from !== '' && fromMs === null) return { ok: false, field: 'from', message: 'From: expected a date, e.g. 2026-12-01.' };
+  const toMs = form.to === '' ? null : dayEndMs(form.to);
+  if (form.to !== '' && toMs === null) return { ok: false, field: 'to', message: 'To: expected a date, e.g. 2026-12-31.' };
+  if (fromMs !== null && toMs !== null && fromMs > toMs) {
+    return { ok: false, field: 'to', message: `To: ${form.to} is before From ${form.from}; pick a later day.` };
+  }
+  if (form.verdict !== '' && !verdicts.includes(form.verdict)) return { ok: false, field: 'verdict', message: 'Verdict: pick one from the list.' };
+  if (form.signal !== '' && !signals.includes(form.signal)) return { ok: false, field: 'signal', message: 'Signal word: pick one from the list.' };
+  return {
+    ok: true,
+    filter: {
+      vesselId: form.vesselId === '' ? null : form.vesselId,
+      fromMs,
+      toMs,
+      verdict: form.verdict === '' ? null : (form.verdict as VerdictId),
+      signal: form.signal === '' ? null : (form.signal as Signal),
+      technician: form.technician,
+      device: form.device,
+    },
+  };
+}
+
+/** The "YYYY-MM" month the form's from/to cover exactly, or '' when they are not one whole month. */
+export function monthOfForm(form: FilterForm): string {
+  const month = form.from.slice(0, 7);
+  const days = monthDays(month);
+  return days && days.from === form.from && days.to === form.to ? month : '';
+}
+
+/** The form with from/to set to a whole "YYYY-MM" month ('' clears both). */
+export function withMonth(form: FilterForm, month: string): FilterForm {
+  const days = monthDays(month);
+  return { ...form, from: days?.from ?? '', to: days?.to ?? '' };
+}

@@ -1,0 +1,74 @@
+// Export and import for the review screen: file names, downloads, reading a chosen file, and the
+// import report in words. The store does the work (exportBackup, exportCsv, importBackup).
+import { exportBackup, exportCsv, importBackup, StoreError, type ImportReport, type LongWorkOptions } from '../../store/index.ts';
+
+export type ExportKind = 'csv' | 'json';
+
+/** A file name with the local date and time, e.g. tankside-log-2026-12-01T2205.csv. */
+export function exportFileName(kind: ExportKind, now: Date): string {
+  const p = (n: number) => String(n).padStart(2, '0');
+  const stamp = `${now.getFullYear()}-${p(now.getMonth() + 1)}-${p(now.getDate())}T${p(now.getHours())}${p(now.getMinutes())}`;
+  return kind === 'csv' ? `tankside-log-${stamp}.csv` : `tankside-backup-${stamp}.json`;
+}
+
+/** Runs an export and returns the file to hand to the browser. */
+export async function makeExport(kind: ExportKind, options: LongWorkOptions & { vesselId?: string }): Promise<File> {
+  const text = kind === 'csv' ? await exportCsv(options) : await exportBackup(options);
+  const type = kind === 'csv' ? 'text/csv;charset=utf-8' : 'application/json';
+  return new File([text], exportFileName(kind, new Date()), { type });
+}
+
+/** A file size for people, e.g. "1,234 KB". */
+export function fileSizeText(bytes: number): string {
+  return `${Math.ceil(bytes / 1024).toLocaleString('en-GB')} KB`;
+}
+
+/** Offers a file as a download (an object URL; nothing leaves the device). */
+export function offerDownload(file: File): void {
+  const url = URL.createObjectURL(file);
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = file.name;
+  a.click();
+  setTimeout(() => URL.revokeObjectURL(url), 60_000);
+}
+
+export interface ReportLine { id: string; why: string }
+
+export interface ImportView {
+  added: number;
+  vesselsAdded: number;
+  vesselsUpdated: number;
+  skipped: ReportLine[];
+  rejected: ReportLine[];
+  warnings: string[];
+  brokenChains: string[];
+}
+
+export function importView(r: ImportReport): ImportView {
+  return {
+    added: r.checks.added.length,
+    vesselsAdded: r.vessels.added.length,
+    vesselsUpdated: r.vessels.updated.length,
+    skipped: [...r.vessels.skipped.map((s) => ({ id: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped],
+    rejected: r.checks.rejected,
+    warnings: r.warnings,
+    brokenChains: r.fileChains.filter((c) => c.status === 'broken').map((c) => `device ${c.deviceId.slice(0, 8)}: ${c.status === 'broken' ? c.detail : ''}`),
+  };
+}
+
+export type ImportOutcome =
+  | { kind: 'done'; view: ImportView }
+  | { kind: 'refused'; message: string }
+  | { kind: 'cancelled' };
+
+/** Reads a chosen backup file and merges it; a refused or cancelled import changed nothing. */
+export async function importFile(file: File, options: LongWorkOptions): Promise<ImportOutcome> {
+  try {
+    const text = await file.text();
+    return { kind: 'done', view: importView(await importBackup(text, options)) };
+  } catch (e) {
+    if (e instanceof StoreError && e.code === 'cancelled') return { kind: 'cancelled' };
+    return { kind: 'refused', message: e instanceof Error ? e.message : String(e) };
+  }
+}
