@@ -22,8 +22,11 @@ export default defineConfig({
     outDir: resolve(rootDir, 'dist'),
     emptyOutDir: true,
     target: 'es2022',
-    // One chunk: lazy chunks can vanish from the precache under a running page after an update.
-    rollupOptions: { output: { codeSplitting: false } },
+    // The field screens are one chunk; only the supervisors' Review screen loads on demand. Every
+    // chunk is precached, and an update is applied only by a reload the user asks for, so a page
+    // never asks for a chunk its worker no longer holds. The manifest lets the size check tell
+    // what the page loads at start from what it loads later.
+    manifest: true,
   },
   plugins: [
     preact(),

@@ -9,7 +9,7 @@ import { FillPlanScreen } from './screens/FillPlanScreen.tsx';
 import { LogScreen } from './screens/LogScreen.tsx';
 import { ConvertScreen } from './screens/ConvertScreen.tsx';
 import { SettingsScreen } from './screens/SettingsScreen.tsx';
-import { ReviewScreen } from './review/ReviewScreen.tsx';
+import { ReviewRoute } from './components/ReviewRoute.tsx';
 
 export function App() {
   const route = useRoute();
@@ -50,7 +50,7 @@ function Screen({ route }: { route: Route }) {
     case 'check': return <CheckScreen />;
     case 'fill': return <FillPlanScreen />;
     case 'log': return <LogScreen param={route.param} />;
-    case 'review': return <ReviewScreen />;
+    case 'review': return <ReviewRoute />;
     case 'convert': return <ConvertScreen />;
     case 'settings': return <SettingsScreen />;
   }

@@ -90,6 +90,11 @@ describe('offline first use and restart', () => {
     await page.getByRole('link', { name: 'Check' }).click();
     await expect.poll(() => page.inputValue('#chk-temperature')).toBe('88,8');
     expect(await page.inputValue('#chk-tech')).toBe('A. Tester');
+
+    // The Review screen is a chunk of its own, loaded on demand: the worker must hold it too.
+    await page.getByRole('link', { name: 'Review' }).click();
+    await expect.poll(() => page.locator('#rf-vessel').count()).toBe(1);
+    expect(await page.getByText(/could not be loaded/).count()).toBe(0);
     await ctx.close();
 
     // Nothing ever left for another origin (no fonts, analytics or CDNs).
