@@ -30,7 +30,7 @@ export function CheckScreen() {
   return (
     <div>
       <VesselPicker vessels={vessels} value={vessel ? d.vesselId : ''} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
-      {vessel && isDemoVessel(vessel) ? <p class="demo-notice" role="note"><span class="demo-tag">DEMO DATA</span> {DEMO_RESULT_NOTICE.replace(/^DEMO DATA: /, '')}</p> : null}
+      {vessel && isDemoVessel(vessel) ? <p class="demo-notice" role="note"><span class="demo-tag">DEMO DATA</span> {DEMO_RESULT_NOTICE}</p> : null}
       {settings.atmosphere.mode === 'barometer' ? <AtmosphereLine atm={atm} /> : (
         <p class="hint">Gauge readings are referred to the vessel's own site atmosphere. Enter today's barometer reading in <a href={hrefFor('settings')}>Settings</a> to use it instead.</p>
       )}

@@ -17,5 +17,5 @@ export function plainDescription(description: string): string {
   return description.startsWith(DEMO_DESCRIPTION_PREFIX) ? description.slice(DEMO_DESCRIPTION_PREFIX.length).trimStart() : description;
 }
 
-/** The words shown on every demo result. */
-export const DEMO_RESULT_NOTICE = 'DEMO DATA: an invented vessel for trying the app. These figures describe no real vessel.';
+/** The words shown beside the DEMO DATA label on every demo result. */
+export const DEMO_RESULT_NOTICE = 'An invented vessel for trying the app. These figures describe no real vessel.';
