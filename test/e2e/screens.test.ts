@@ -66,6 +66,9 @@ describe('every screen', () => {
   it('Vessel editor', async () => {
     await page.getByRole('link', { name: /DEMO-FT-02/ }).click();
     await expect.poll(() => page.inputValue('#v-tag')).toBe('DEMO-FT-02');
+    // SI preference: dimensions in metres, stored in metres.
+    expect(await page.inputValue('#v-diameterM-unit')).toBe('m');
+    expect(await page.inputValue('#v-diameterM')).toBe('0.6');
     await inspect('02-vessel-editor');
   });
 
@@ -82,6 +85,10 @@ describe('every screen', () => {
     expect(await page.locator('[aria-live="polite"]').count()).toBeGreaterThan(0);
     expect(await page.locator('svg.picture').count()).toBe(2);
     expect(await page.locator('.standing-note').count()).toBe(1);
+    // A demo vessel's check says so above the result and in it.
+    expect(await page.locator('.demo-notice').count()).toBe(2);
+    expect(await page.locator('#result-h .demo-tag').textContent()).toBe('DEMO DATA');
+    expect(await page.getByText(/Liquid level/).count()).toBe(1);
     await inspect('03-check');
     await page.locator('.pictures').screenshot({ path: `${SCREENS_DIR}/03-check-pictures.png` });
     await page.fill('#chk-tech', 'Demo Technician');
@@ -114,10 +121,13 @@ describe('every screen', () => {
     await page.getByRole('link', { name: 'Log' }).click();
     const entry = page.getByRole('link', { name: /DEMO-FT-02/ });
     await expect.poll(() => entry.count()).toBe(1);
+    expect(await entry.getByText('DEMO DATA').count()).toBe(1);
     await inspect('06-log');
     await entry.click();
     await expect.poll(() => page.getByText('151,8 °C').count()).toBe(1);
     expect(await page.getByText('IAPWS-IF97', { exact: false }).count()).toBeGreaterThan(0);
+    expect(await page.locator('#rec-h .demo-tag').count()).toBe(1);
+    expect(await page.locator('#result-h .demo-tag').count()).toBe(1);
     await inspect('07-log-record');
   });
 
@@ -172,6 +182,7 @@ describe('every screen', () => {
   it('Settings', async () => {
     await page.getByRole('link', { name: 'Settings' }).click();
     await page.getByLabel('Elevation').check();
+    expect(await page.inputValue('#set-elev-unit')).toBe('m');
     await page.fill('#set-elev', '350');
     await inspect('09-settings');
     const [download] = await Promise.all([
@@ -182,5 +193,22 @@ describe('every screen', () => {
     expect(backup.vessels.map((v) => v.tag)).toContain('DEMO-FT-02');
     expect(backup.checks).toHaveLength(1);
     await expect.poll(() => page.getByText(/Last backup: \d{4}-/).count()).toBe(1);
+  });
+
+  it('US customary: the vessel editor shows feet, new vessels start with the site elevation in feet', async () => {
+    await page.getByRole('link', { name: 'Settings' }).click();
+    await page.getByLabel('US customary').check();
+    await page.getByRole('link', { name: 'Vessels' }).click();
+    await page.getByRole('link', { name: /DEMO-ST-01/ }).click();
+    await expect.poll(() => page.inputValue('#v-tag')).toBe('DEMO-ST-01');
+    expect(await page.inputValue('#v-diameterM-unit')).toBe('ft');
+    // 0.9 m / 0.3048 m per ft (NIST SP 811 (2008) B.8) = 2.952 76 ft
+    expect(Number(await page.inputValue('#v-diameterM'))).toBeCloseTo(2.95276, 4);
+    await inspect('10-vessel-editor-us');
+    await page.getByRole('link', { name: 'Vessels' }).click();
+    await page.getByRole('button', { name: 'Add vessel' }).click();
+    // Settings hold 350 m; a new vessel starts with it in feet: 350 / 0.3048 = 1148.29 ft.
+    await expect.poll(async () => Number(await page.inputValue('#v-elevationM'))).toBeCloseTo(1148.29, 1);
+    expect(await page.getByText('Elevation above sea level (ft)').count()).toBe(1);
   });
 });

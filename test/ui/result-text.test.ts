@@ -48,6 +48,49 @@ describe('resultView', () => {
   });
 });
 
+describe('resultView: the liquid level and its band come from the engine', () => {
+  const T = 423.15;
+  const reading = { time, temperatureK: T, pressure: { reference: 'absolute' as const, pressurePa: saturationPressure(T) }, weight: { kind: 'gross' as const, grossKg: 612 } };
+
+  it('shows the engine\'s level and ± band in the preferred length unit (m for SI, ft for US customary: 0.3048 m exactly, NIST SP 811 (2008) B.8)', () => {
+    const r = evaluateCheck(vessel, reading);
+    const band = r.inventoryBands!.liquidLevelM!;
+    if (r.inventory.regime !== 'two-phase' || !r.inventory.liquidLevel) throw new Error('two-phase expected');
+    const level = r.inventory.liquidLevel.levelM;
+    const si = resultView(r, vessel, UNIT_PRESETS.SI).figures.find((f) => f.label === 'Liquid level')!.value;
+    expect(si.startsWith(`${formatWithBand(level, band.plusMinus, 4)} m `)).toBe(true);
+    const us = resultView(r, vessel, UNIT_PRESETS.US).figures.find((f) => f.label === 'Liquid level')!.value;
+    expect(us.startsWith(`${formatWithBand(level / 0.3048, band.plusMinus / 0.3048, 4)} ft `)).toBe(true);
+    const mm = resultView(r, vessel, { ...UNIT_PRESETS.SI, length: 'mm' }).figures.find((f) => f.label === 'Liquid level')!.value;
+    expect(mm.startsWith(`${formatWithBand(level * 1000, band.plusMinus * 1000, 4)} mm `)).toBe(true);
+  });
+
+  it('the sketch band is the level ± the engine band, as fractions of the inside height', () => {
+    const r = evaluateCheck(vessel, reading);
+    if (r.inventory.regime !== 'two-phase' || !r.inventory.liquidLevel) throw new Error('two-phase expected');
+    const pm = r.inventoryBands!.liquidLevelM!.plusMinus;
+    const span = r.inventory.liquidLevel.levelM / r.inventory.liquidLevel.levelFraction;
+    const v = resultView(r, vessel, UNIT_PRESETS.SI);
+    expect(v.sketch!.low).toBeCloseTo((r.inventory.liquidLevel.levelM - pm) / span, 12);
+    expect(v.sketch!.high).toBeCloseTo((r.inventory.liquidLevel.levelM + pm) / span, 12);
+  });
+
+  it('a record saved before the engine gave a level band shows the level without a band', () => {
+    const r = evaluateCheck(vessel, reading);
+    const old = { ...r, inventoryBands: { quality: r.inventoryBands!.quality, liquidMassKg: r.inventoryBands!.liquidMassKg } } as unknown as typeof r;
+    const value = resultView(old, vessel, UNIT_PRESETS.SI).figures.find((f) => f.label === 'Liquid level')!.value;
+    expect(value).not.toMatch(/±/);
+    expect(value).toMatch(/ m \(/);
+  });
+
+  it('a demo vessel (tag DEMO- or description "DEMO DATA:") marks the view as demo; a real one does not', () => {
+    const r = evaluateCheck(vessel, reading);
+    expect(resultView(r, vessel, UNIT_PRESETS.SI).demo).toBe(false);
+    expect(resultView(r, { ...vessel, tag: 'DEMO-FT-02' }, UNIT_PRESETS.SI).demo).toBe(true);
+    expect(resultView(r, { ...vessel, description: 'DEMO DATA: invented flash tank' }, UNIT_PRESETS.SI).demo).toBe(true);
+  });
+});
+
 describe('formatWithBand', () => {
   it('rounds the value to the band, the band to two significant digits', () => {
     expect(formatWithBand(1.8058, 21)).toBe('2 ± 21');

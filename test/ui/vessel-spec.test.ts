@@ -48,4 +48,40 @@ describe('vessel form', () => {
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.errors.relief).toMatch(/relief set pressure/);
   });
+
+  it('takes the diameter, straight length and elevation in the chosen length unit and stores metres (ft = 0.3048 m, in = 0.0254 m exactly: NIST SP 811 (2008) B.8)', () => {
+    const r = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6,5' });
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 4 * 0.3048, straightLengthM: 6.5 * 0.3048, head: { kind: 'semi-ellipsoidal-2-1' } });
+    const mm = specFromForm({ ...filled, lengthUnit: 'mm', diameterM: '1200', straightLengthM: '2000' });
+    if (!mm.ok) throw new Error(JSON.stringify(mm.errors));
+    expect(mm.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } });
+    const elevFt = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6', atmosphereMode: 'elevation', elevationM: '1000' });
+    const elevM = specFromForm({ ...filled, atmosphereMode: 'elevation', elevationM: '304,8' });
+    if (!elevFt.ok || !elevM.ok) throw new Error('elevation');
+    expect(elevFt.spec.siteAtmospherePa).toBeCloseTo(elevM.spec.siteAtmospherePa, 9);
+    // US Standard Atmosphere 1976, geometric 300 m → 97 773 Pa (table value, from memory): 304.8 m is a little lower.
+    expect(elevM.spec.siteAtmospherePa).toBeLessThan(97_773);
+    expect(elevM.spec.siteAtmospherePa).toBeGreaterThan(97_600);
+  });
+
+  it('shows stored metres in the preferred length unit (US customary: ft) and reads them back', () => {
+    const r = specFromForm(filled);
+    if (!r.ok) throw new Error('spec');
+    const us = formFromSpec(r.spec, UNIT_PRESETS.US);
+    expect(us.lengthUnit).toBe('ft');
+    expect(Number(us.diameterM)).toBeCloseTo(1.2 / 0.3048, 4);
+    const back = specFromForm(us);
+    if (!back.ok) throw new Error(JSON.stringify(back.errors));
+    if (back.spec.geometry.shape === 'stated-volume') throw new Error('cylinder expected');
+    expect(back.spec.geometry.innerDiameterM).toBeCloseTo(1.2, 5);
+    expect(back.spec.geometry.straightLengthM).toBeCloseTo(2, 5);
+  });
+
+  it('a draft saved before the length unit existed was typed in metres', () => {
+    const { lengthUnit: _dropped, ...old } = filled;
+    const r = specFromForm(old as VesselForm);
+    if (!r.ok) throw new Error(JSON.stringify(r.errors));
+    expect(r.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } });
+  });
 });

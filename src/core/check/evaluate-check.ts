@@ -34,7 +34,7 @@ export interface CheckResult {
   internalVolumeM3: number;
   saturation: SaturationCheck;
   inventory: Inventory | { regime: 'not-weighed' };
-  /** ± bands on quality and liquid mass, two-phase only. */
+  /** ± bands on quality, liquid mass and liquid level, two-phase only. */
   inventoryBands: InventoryBands | null;
   /** Heat-up envelope of this fill; null when not weighed. */
   envelope: HeatUpEnvelope | null;
@@ -84,6 +84,7 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
   const bands =
     inventory.regime === 'two-phase' && reading.weight.kind !== 'not-weighed'
       ? inventoryBands({
+          geometry: vessel.geometry,
           temperatureK: T,
           massKg: inventory.netMassKg,
           volumeM3: V,

@@ -11,6 +11,7 @@
 
 import { IF97, saturation } from '../steam/index.ts';
 import type { TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
+import { liquidLevelFromVolume, vesselVolume, type VesselGeometry } from './vessel-geometry.ts';
 import type { ResolvedReading } from './reading.ts';
 
 /** Weather swing of station pressure around a stored site value, Pa (sea-level pressure usually 970–1040 hPa, about −3 to +4 kPa from standard: University of Wisconsin meteorology course page, http://meteor.wisc.edu/~hopkins/online/cod/cod05t.htm ; ±3 kPa is our choice from that range). */
@@ -75,10 +76,12 @@ export function netMassToleranceKg(vessel: VesselSpec, weightKind: 'gross' | 'ne
   return weightKind === 'gross' ? Math.SQRT2 * a : a;
 }
 
-/** Quality and liquid mass with ± bands propagated from the net mass, temperature and volume limits. */
+/** Quality, liquid mass and liquid level with ± bands propagated from the net mass, temperature and volume limits. */
 export interface InventoryBands {
   quality: Band<'weight' | 'temperature' | 'volume'>;
   liquidMassKg: Band<'weight' | 'temperature' | 'volume'>;
+  /** Liquid level, m; null for a stated volume (no geometry, no level). */
+  liquidLevelM: Band<'weight' | 'temperature' | 'volume'> | null;
 }
 
 /**
@@ -88,6 +91,7 @@ export interface InventoryBands {
  * temperatureK 273.16–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
  */
 export function inventoryBands(args: {
+  geometry?: VesselGeometry;
   temperatureK: number;
   massKg: number;
   volumeM3: number;
@@ -125,5 +129,42 @@ export function inventoryBands(args: {
     temperature: Math.abs(dmLiqdT) * args.temperatureToleranceK,
     volume: (1 / vfg) * args.volumeToleranceM3,
   });
-  return { quality, liquidMassKg };
+  const liquidLevelM = args.geometry === undefined || args.geometry.shape === 'stated-volume' ? null : levelBand(args.geometry, args);
+  return { quality, liquidMassKg, liquidLevelM };
+}
+
+/**
+ * Liquid level band, m, through the vessel geometry. The liquid volume is V_liq = v_f·(m·v_g − V)/(v_g − v_f)
+ * (the mass and volume balances at the saturation values of T); for each input in turn the level
+ * h(V_liq) is evaluated with that input at −limit and +limit (the others nominal), and its
+ * contribution is half the difference (a central difference over the limit). Not the derivative
+ * dh/dV_liq: that is infinite at the bottom and top of a horizontal shell and at a head's apex,
+ * while the level itself stays finite. V_liq is held to 0 … V of the drawn geometry (a level cannot
+ * leave the vessel). The volume limit enters through the mass balance (how much of the contents is
+ * liquid); the shape is taken as drawn. T is kept to 273.16 K … Tc − 1e-6 K and m above 0; a
+ * difference shortened by those limits is scaled back to the full limit.
+ */
+function levelBand(
+  geometry: Exclude<VesselGeometry, { shape: 'stated-volume' }>,
+  args: { temperatureK: number; massKg: number; volumeM3: number; massToleranceKg: number; temperatureToleranceK: number; volumeToleranceM3: number },
+): Band<'weight' | 'temperature' | 'volume'> {
+  const drawn = vesselVolume(geometry);
+  const level = (T: number, m: number, V: number) => {
+    const s = saturation(T);
+    const vf = s.liquid.v;
+    const vg = s.vapor.v;
+    const liquidM3 = (vf * (m * vg - V)) / (vg - vf);
+    return liquidLevelFromVolume(geometry, Math.min(Math.max(liquidM3, 0), drawn));
+  };
+  const { temperatureK: T, massKg: m, volumeM3: V } = args;
+  const across = (limit: number, lo: number, hi: number, at: (x: number) => number) =>
+    limit === 0 || hi <= lo ? 0 : (Math.abs(at(hi) - at(lo)) * limit) / (hi - lo);
+  const dT = args.temperatureToleranceK;
+  const dm = args.massToleranceKg;
+  const dV = args.volumeToleranceM3;
+  return combineBand({
+    weight: across(dm, Math.max(m - dm, m * 1e-9), m + dm, (x) => level(T, x, V)),
+    temperature: across(dT, Math.max(IF97.Tt, T - dT), Math.min(IF97.Tc - 1e-6, T + dT), (x) => level(x, m, V)),
+    volume: across(dV, Math.max(V - dV, V * 1e-9), V + dV, (x) => level(T, m, x)),
+  });
 }

@@ -28,6 +28,8 @@ export {
 } from './atmosphere.ts';
 export { KILOGRAMS_PER_MASS_UNIT, MASS_UNITS, isMassUnit, massToKg, massFromKg } from './mass.ts';
 export type { MassUnit } from './mass.ts';
+export { METRES_PER_LENGTH_UNIT, LENGTH_UNITS, isLengthUnit, lengthToM, lengthFromM } from './length.ts';
+export type { LengthUnit } from './length.ts';
 export { CUBIC_METRES_PER_VOLUME_UNIT, VOLUME_UNITS, isVolumeUnit, volumeToM3, volumeFromM3 } from './volume.ts';
 export type { VolumeUnit } from './volume.ts';
 export {

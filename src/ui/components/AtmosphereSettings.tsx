@@ -1,11 +1,11 @@
 // Site atmosphere: 1 standard atmosphere, a barometer reading, or the site elevation.
-import { PRESSURE_UNITS, type PressureUnit } from '../../core/index.ts';
+import { LENGTH_UNITS, PRESSURE_UNITS, type LengthUnit, type PressureUnit } from '../../core/index.ts';
 import { Choice } from './Choice.tsx';
 import { NumberField } from './NumberField.tsx';
 import { AtmosphereLine } from './AtmosphereLine.tsx';
 import { updateSettings, useSettings } from '../state/app-state.ts';
 import { siteAtmosphere } from '../state/atmosphere.ts';
-import type { SiteAtmosphere } from '../state/settings-model.ts';
+import { unitsInForce, type SiteAtmosphere } from '../state/settings-model.ts';
 
 const MODES = [
   { id: 'standard', label: '1 atm' },
@@ -14,11 +14,13 @@ const MODES = [
 ] as const;
 
 export function AtmosphereSettings() {
-  const a = useSettings().atmosphere;
+  const settings = useSettings();
+  const a = settings.atmosphere;
+  const lengthUnit = unitsInForce(settings).length;
   const atm = siteAtmosphere(a);
   const setMode = (mode: SiteAtmosphere['mode']) => {
     const next: SiteAtmosphere =
-      mode === 'standard' ? { mode } : mode === 'barometer' ? { mode, text: '', unit: 'kPa' } : { mode, text: '' };
+      mode === 'standard' ? { mode } : mode === 'barometer' ? { mode, text: '', unit: 'kPa' } : { mode, text: '', unit: lengthUnit };
     void updateSettings({ atmosphere: next });
   };
   return (
@@ -34,8 +36,10 @@ export function AtmosphereSettings() {
           error={atm.ok ? undefined : atm.error} />
       ) : null}
       {a.mode === 'elevation' ? (
-        <NumberField id="set-elev" label="Site elevation above sea level (m)" value={a.text}
+        <NumberField id="set-elev" label="Site elevation above sea level" value={a.text}
           onInput={(text) => void updateSettings({ atmosphere: { ...a, text } })}
+          unit={a.unit ?? 'm'} units={LENGTH_UNITS}
+          onUnit={(unit) => void updateSettings({ atmosphere: { ...a, unit: unit as LengthUnit } })}
           hint="US Standard Atmosphere 1976; weather moves the real value by a few kPa."
           error={atm.ok ? undefined : atm.error} />
       ) : null}

@@ -10,12 +10,14 @@ import { viewOfRecord } from '../state/check-session.ts';
 import { useSettings } from '../state/app-state.ts';
 import { unitsInForce } from '../state/settings-model.ts';
 import { unitLabel } from '../state/unit-labels.ts';
+import { DEMO_RESULT_NOTICE, isDemo } from '../state/demo-label.ts';
 
 const INPUT_NAMES: Record<string, string> = { temperature: 'Temperature', pressure: 'Pressure', grossWeight: 'Gross weight' };
 
 export function CheckRecordView({ record: r }: { record: CheckRecord }) {
   const prefs = unitsInForce(useSettings());
   const view = viewOfRecord(r, prefs);
+  const demo = isDemo(r.vessel) || isDemo(r.vessel.spec as { tag?: unknown; description?: unknown });
   const inputs = Object.entries(r.inputs).map(([k, v]) => ({
     label: INPUT_NAMES[k] ?? k,
     value: `${v.text} ${unitLabel(v.unit)}${v.reference ? ` (${v.reference})` : ''}`,
@@ -24,7 +26,8 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
     <div>
       <p><a href={hrefFor('log')}>Back to the log</a></p>
       <section class="panel" aria-labelledby="rec-h">
-        <h2 id="rec-h">Check of {r.vessel.tag}</h2>
+        <h2 id="rec-h">Check of {r.vessel.tag}{demo ? <> <span class="demo-tag">DEMO DATA</span></> : null}</h2>
+        {demo ? <p class="demo-notice" role="note">{DEMO_RESULT_NOTICE}</p> : null}
         <Figures figures={[
           { label: 'Taken', value: r.time },
           { label: 'Technician', value: r.technician },
@@ -34,7 +37,7 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
         <h3>Inputs as typed</h3>
         <Figures figures={inputs} />
       </section>
-      {view ? <ResultCard view={{ ...view, cautions: r.cautions }} heading="Result as saved" /> : (
+      {view ? <ResultCard view={{ ...view, demo: view.demo || demo, cautions: r.cautions }} heading="Result as saved" /> : (
         <section class="panel" aria-labelledby="rec-old">
           <h2 id="rec-old">Result as saved</h2>
           <p>This record was saved by app version {r.appVersion}, whose result layout this version cannot show. Its cautions:</p>

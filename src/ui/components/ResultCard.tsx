@@ -1,6 +1,7 @@
 // A computed result: verdict, figures with their ± bands, hazards, cautions, the standing note
 // and the two pictures. The live region announces the verdict as the readings change.
 import type { ResultView } from '../state/result-view.ts';
+import { DEMO_RESULT_NOTICE } from '../state/demo-label.ts';
 import { CautionList } from './CautionList.tsx';
 import { Figures } from './Figures.tsx';
 import { SaturationChart } from './SaturationChart.tsx';
@@ -10,7 +11,8 @@ import { VesselSketch } from './VesselSketch.tsx';
 export function ResultCard({ view, heading = 'Result' }: { view: ResultView; heading?: string }) {
   return (
     <section class="panel" aria-labelledby="result-h">
-      <h2 id="result-h">{heading}</h2>
+      <h2 id="result-h">{heading}{view.demo ? <> <span class="demo-tag">DEMO DATA</span></> : null}</h2>
+      {view.demo ? <p class="demo-notice" role="note">{DEMO_RESULT_NOTICE}</p> : null}
       <p class={`verdict verdict-${view.verdict.tone}`}>{view.verdict.text}</p>
       <Figures figures={view.figures} />
       {view.hazards.length ? (

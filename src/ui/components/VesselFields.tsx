@@ -1,12 +1,12 @@
 // The vessel editor's inputs, in four groups: identity and shape, weight, pressure, temperature
 // and atmosphere. Units picked once per group apply to every field of that quantity.
-import { MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
-import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
 import { TextField } from './TextField.tsx';
 import { NumberField } from './NumberField.tsx';
 import { Choice } from './Choice.tsx';
 import { SelectField } from './SelectField.tsx';
-import { HEADS, SENSORS, SHAPES, type FormField, type VesselForm } from '../state/vessel-form.ts';
+import { HEADS, SENSORS, SHAPES, formLengthUnit, type FormField, type VesselForm } from '../state/vessel-form.ts';
 
 interface Props {
   form: VesselForm;
@@ -19,6 +19,8 @@ const ATM = [{ id: 'elevation', label: 'Elevation' }, { id: 'pressure', label: '
 
 export function VesselFields({ form: f, set, errors: e }: Props) {
   const pu = PRESSURE_UNITS.find((u) => u.id === f.pressureUnit)?.label ?? f.pressureUnit;
+  const lu = formLengthUnit(f);
+  const ll = LENGTH_UNITS.find((u) => u.id === lu)?.label ?? lu;
   const tu = TEMPERATURE_UNITS.find((u) => u.id === f.temperatureUnit)?.label ?? f.temperatureUnit;
   const num = (field: FormField, label: string, hint?: string) => (
     <NumberField id={`v-${field}`} label={label} value={f[field]} onInput={(text) => set({ [field]: text })} error={e[field]} hint={hint} />
@@ -35,8 +37,9 @@ export function VesselFields({ form: f, set, errors: e }: Props) {
             unit={f.volumeUnit} units={VOLUME_UNITS} onUnit={(u) => set({ volumeUnit: u as VolumeUnit })} error={e.volume} />
         ) : (
           <>
-            {num('diameterM', 'Inner diameter (m)')}
-            {num('straightLengthM', 'Straight length between tangent lines (m)')}
+            <NumberField id="v-diameterM" label="Inner diameter" value={f.diameterM} onInput={(diameterM) => set({ diameterM })}
+              unit={lu} units={LENGTH_UNITS} onUnit={(u) => set({ lengthUnit: u as LengthUnit })} error={e.diameterM} />
+            {num('straightLengthM', `Straight length between tangent lines (${ll})`)}
             <SelectField id="v-head" label="Heads (both ends)" value={f.head} options={HEADS} onChange={(head) => set({ head })} />
           </>
         )}
@@ -70,7 +73,7 @@ export function VesselFields({ form: f, set, errors: e }: Props) {
         <Choice name="v-atm" legend="Give the site's atmospheric pressure as" value={f.atmosphereMode} options={ATM}
           onChange={(atmosphereMode) => set({ atmosphereMode })} />
         {f.atmosphereMode === 'elevation'
-          ? num('elevationM', 'Elevation above sea level (m)', 'US Standard Atmosphere 1976.')
+          ? num('elevationM', `Elevation above sea level (${ll})`, 'US Standard Atmosphere 1976.')
           : <>{num('atmosphere', `Atmospheric pressure (absolute, ${pu})`)}{num('barometerTol', `Barometer tolerance ± (${pu})`)}</>}
       </fieldset>
     </>

@@ -14,6 +14,8 @@ import { evaluateDraft } from '../state/check-session.ts';
 import { siteAtmosphere } from '../state/atmosphere.ts';
 import { unitsInForce } from '../state/settings-model.ts';
 import { hrefFor } from '../router.ts';
+import { isDemoVessel } from '../state/demo-plant.ts';
+import { DEMO_RESULT_NOTICE } from '../state/demo-label.ts';
 
 export function CheckScreen() {
   const settings = useSettings();
@@ -28,6 +30,7 @@ export function CheckScreen() {
   return (
     <div>
       <VesselPicker vessels={vessels} value={vessel ? d.vesselId : ''} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
+      {vessel && isDemoVessel(vessel) ? <p class="demo-notice" role="note"><span class="demo-tag">DEMO DATA</span> {DEMO_RESULT_NOTICE}</p> : null}
       {settings.atmosphere.mode === 'barometer' ? <AtmosphereLine atm={atm} /> : (
         <p class="hint">Gauge readings are referred to the vessel's own site atmosphere. Enter today's barometer reading in <a href={hrefFor('settings')}>Settings</a> to use it instead.</p>
       )}

@@ -6,6 +6,7 @@ import { hrefFor } from '../router.ts';
 import { shortTime } from '../state/format.ts';
 import { CheckRecordView } from '../components/CheckRecordView.tsx';
 import { verdictOfRecord } from '../state/check-session.ts';
+import { isDemo } from '../state/demo-label.ts';
 
 export function LogScreen({ param }: { param?: string | undefined }) {
   return param ? <OneRecord id={param} /> : <LogList />;
@@ -26,6 +27,7 @@ function LogList() {
         <li key={c.id}>
           <a class="button list-button" href={hrefFor('log', c.id)}>
             <strong>{c.vessel.tag} · {shortTime(c.time)}</strong>
+            {isDemo(c.vessel) || isDemo(c.vessel.spec as { tag?: unknown; description?: unknown }) ? <><span class="demo-tag">DEMO DATA</span> </> : null}
             {verdictOfRecord(c)} · {c.technician}
           </a>
         </li>

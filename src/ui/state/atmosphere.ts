@@ -5,6 +5,8 @@ import {
   ATMOSPHERE_RANGE_PA,
   STANDARD_ATMOSPHERE_PA,
   atmosphereFromElevation,
+  lengthToM,
+  LENGTH_UNITS,
   pressureToPa,
 } from '../../core/index.ts';
 import type { SiteAtmosphere } from './settings-model.ts';
@@ -26,8 +28,10 @@ export function siteAtmosphere(a: SiteAtmosphere): AtmosphereResult {
         return { ok: true, pressurePa: pa, source: `barometer reading ${a.text} ${a.unit}` };
       }
       case 'elevation': {
-        const m = readNumber(a.text, 'elevation');
-        return { ok: true, pressurePa: atmosphereFromElevation(m), source: `elevation ${a.text} m` };
+        const unit = a.unit ?? 'm';
+        const m = lengthToM(readNumber(a.text, 'elevation'), unit, 'elevation');
+        const label = LENGTH_UNITS.find((u) => u.id === unit)?.label ?? unit;
+        return { ok: true, pressurePa: atmosphereFromElevation(m), source: `elevation ${a.text} ${label}` };
       }
     }
   } catch (e) {

@@ -4,7 +4,9 @@ import * as repo from './repo.ts';
 import type { VesselRecord } from './repo.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
 
-export const DEMO_TAG_PREFIX = 'DEMO-';
+import { isDemo } from './demo-label.ts';
+
+export { DEMO_TAG_PREFIX } from './demo-label.ts';
 
 const COMMON = {
   designTemperatureK: 473.15,
@@ -61,7 +63,7 @@ const DEMO_PLANT: readonly VesselSpec[] = [
 ];
 
 export function isDemoVessel(v: VesselRecord): boolean {
-  return v.tag.startsWith(DEMO_TAG_PREFIX);
+  return isDemo(v) || isDemo(v.spec as { tag?: unknown; description?: unknown });
 }
 
 /** Adds the demo vessels that are not in the inventory yet; returns how many were added. */

@@ -1,4 +1,5 @@
 // Fill planning: the form as typed → FillRequest → planFill → what the screen shows.
+import { isDemo } from './demo-label.ts';
 import {
   InputError, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
   temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget, type VesselSpec,
@@ -60,14 +61,14 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   if (Object.keys(errors).length) return { kind: 'input-error', errors };
   try {
     const plan = planFill(vessel.spec as unknown as VesselSpec, request);
-    return { kind: 'plan', plan, view: planView(plan, u) };
+    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec as { tag?: unknown; description?: unknown }) || isDemo(vessel)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     return field ? { kind: 'input-error', errors: { [field]: messageOf(e) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
 }
 
-function planView(p: FillPlan, u: UnitPrefs): ResultView {
+function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
   const lab = (list: readonly { id: string; label: string }[], id: string) => list.find((x) => x.id === id)?.label ?? id;
   const m = (kg: number) => `${formatNumber(massFromKg(kg, u.mass as MassUnit), 5)} ${lab(MASS_UNITS, u.mass)}`;
   const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 5)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
@@ -88,6 +89,7 @@ function planView(p: FillPlan, u: UnitPrefs): ResultView {
       (p.heat.heatUpTimeS !== null ? `, about ${formatNumber(p.heat.heatUpTimeS / 60, 3)} min` : '') });
   }
   return {
+    demo,
     verdict: p.cautions.some((c) => c.signal === 'DANGER')
       ? { tone: 'bad', text: 'DANGER. Do not charge this plan as it stands: see the cautions below.' }
       : { tone: 'ok', text: `Charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}.` },

@@ -1,12 +1,13 @@
 // A CheckResult (SI) in words and preferred units for the result card. Values come from the
 // engine; this module converts units for display and picks the words.
 import {
-  MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, liquidLevelFromVolume, massFromKg, pressureFromPa,
-  temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM, vesselVolume,
+  LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
+  temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM,
   type CheckResult, type VesselSpec,
 } from '../../core/index.ts';
 import { saturationChartData } from './chart-data.ts';
 import { formatNumber, formatWithBand } from './format.ts';
+import { isDemo } from './demo-label.ts';
 import type { Figure, ResultView } from './result-view.ts';
 import type { SketchData } from '../components/VesselSketch.tsx';
 import type { UnitPrefs } from './settings-model.ts';
@@ -15,7 +16,7 @@ const label = (list: readonly { id: string; label: string }[], id: string) => li
 
 function units(u: UnitPrefs) {
   const pl = label(PRESSURE_UNITS, u.pressure), tl = label(TEMPERATURE_UNITS, u.temperature);
-  const ml = label(MASS_UNITS, u.mass), vl = label(VOLUME_UNITS, u.volume);
+  const ml = label(MASS_UNITS, u.mass), vl = label(VOLUME_UNITS, u.volume), ll = label(LENGTH_UNITS, u.length);
   return {
     p: (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 5)} ${pl}`,
     pBand: (pa: number, band: number) => `${formatWithBand(pressureFromPa(pa, u.pressure), pressureFromPa(band, u.pressure), 5)} ${pl}`,
@@ -23,6 +24,8 @@ function units(u: UnitPrefs) {
     dt: (k: number, band: number) => `${formatWithBand(temperatureDifferenceFromK(k, u.temperature), temperatureDifferenceFromK(band, u.temperature), 3)} ${tl}`,
     m: (kg: number) => `${formatNumber(massFromKg(kg, u.mass), 4)} ${ml}`,
     mBand: (kg: number, band: number) => `${formatWithBand(massFromKg(kg, u.mass), massFromKg(band, u.mass), 5)} ${ml}`,
+    l: (m: number) => `${formatNumber(lengthFromM(m, u.length), 4)} ${ll}`,
+    lBand: (m: number, band: number) => `${formatWithBand(lengthFromM(m, u.length), lengthFromM(band, u.length), 4)} ${ll}`,
     v: (m3: number) => `${formatNumber(volumeFromM3(m3, u.volume), 4)} ${vl}`,
   };
 }
@@ -71,10 +74,14 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): Resu
         { label: 'Steam mass', value: f.m(inv.vaporMassKg) },
         { label: 'Liquid volume', value: f.v(inv.liquidVolumeM3) },
       );
-      const band = levelBand(spec, inv.liquidVolumeM3, b ? b.liquidMassKg.plusMinus * inv.liquidSpecificVolumeM3PerKg : 0);
-      if (inv.liquidLevel && band) {
-        figures.push({ label: 'Liquid level', value: `${formatWithBand(inv.liquidLevel.levelM * 1000, band.plusMinusM * 1000, 4)} mm (${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of inside height)` });
-        sketch = { orientation, level: inv.liquidLevel.levelFraction, low: band.low, high: band.high, caption: `Vessel sketch: liquid at ${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of the inside height`, note: 'of inside height' };
+      const levelB = b?.liquidLevelM ?? null;
+      if (inv.liquidLevel && spec.geometry.shape !== 'stated-volume') {
+        const span = vesselLevelSpanM(spec.geometry);
+        const pm = levelB ? levelB.plusMinus : 0;
+        const low = Math.max(0, inv.liquidLevel.levelM - pm) / span, high = Math.min(span, inv.liquidLevel.levelM + pm) / span;
+        // A record saved before the engine gave a level band has none: the level is shown without ±.
+        figures.push({ label: 'Liquid level', value: `${levelB ? f.lBand(inv.liquidLevel.levelM, pm) : f.l(inv.liquidLevel.levelM)} (${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of inside height)` });
+        sketch = { orientation, level: inv.liquidLevel.levelFraction, low, high, caption: `Vessel sketch: liquid at ${formatNumber(inv.liquidLevel.levelFraction * 100, 3)} % of the inside height`, note: 'of inside height' };
       } else {
         const share = 1 - inv.vaporSpaceFraction;
         figures.push({ label: 'Liquid share of the volume', value: `${formatNumber(share * 100, 3)} % (no level: volume only)` });
@@ -98,6 +105,7 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): Resu
   const tolK = temperatureToleranceK(spec.instruments.temperatureSensor, r.reading.temperatureK);
   const c = s.pressureBand.contributions;
   return {
+    demo: isDemo(spec),
     verdict: verdictText(r),
     figures,
     hazards: hazardLines(r, f),
@@ -129,15 +137,4 @@ function hazardLines(r: CheckResult, f: ReturnType<typeof units>): string[] {
     out.push(e.first.alreadyReached ? `On heating this fill already ${what}.` : `On heating, this fill first ${what} at ${f.t(e.first.temperatureK)}.`);
   }
   return out;
-}
-
-/** Level band from a liquid-volume band through the vessel geometry (core functions). */
-function levelBand(spec: VesselSpec, liquidM3: number, plusMinusM3: number): { low: number; high: number; plusMinusM: number } | undefined {
-  const g = spec.geometry;
-  if (g.shape === 'stated-volume') return undefined;
-  const span = vesselLevelSpanM(g);
-  const V = vesselVolume(g);
-  const lo = liquidLevelFromVolume(g, Math.max(0, liquidM3 - plusMinusM3));
-  const hi = liquidLevelFromVolume(g, Math.min(V, liquidM3 + plusMinusM3));
-  return { low: lo / span, high: hi / span, plusMinusM: (hi - lo) / 2 };
 }

@@ -6,6 +6,8 @@ import type { SketchData } from '../components/VesselSketch.tsx';
 export interface Figure { label: string; value: string }
 
 export interface ResultView {
+  /** The vessel is demo data: the card says DEMO DATA above everything else. */
+  demo: boolean;
   verdict: { tone: 'ok' | 'bad'; text: string };
   figures: readonly Figure[];
   hazards: readonly string[];

@@ -1,7 +1,7 @@
 // The app's own settings (stored through the store's settings functions as one record).
 import { formatEditable, localeDecimalSeparator, readNumber } from './format.ts';
-import { pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/index.ts';
-import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import { isLengthUnit, lengthFromM, lengthToM, pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/index.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
 
 export type UnitSystem = 'SI' | 'US' | 'custom';
 
@@ -10,13 +10,15 @@ export interface UnitPrefs {
   temperature: TemperatureUnit;
   mass: MassUnit;
   volume: VolumeUnit;
+  /** Vessel dimensions, liquid level and site elevation. Absent in settings saved before it existed (then m). */
+  length: LengthUnit;
 }
 
 /** Where the site's atmospheric pressure comes from: a barometer reading, the elevation, or 1 atm. */
 export type SiteAtmosphere =
   | { mode: 'standard' }
   | { mode: 'barometer'; text: string; unit: PressureUnit }
-  | { mode: 'elevation'; text: string };
+  | { mode: 'elevation'; text: string; unit?: LengthUnit }; // unit absent in older records: metres
 
 export interface AppSettings {
   technician: string;
@@ -30,8 +32,8 @@ export interface AppSettings {
 }
 
 export const UNIT_PRESETS: Readonly<Record<'SI' | 'US', UnitPrefs>> = {
-  SI: { pressure: 'kPa', temperature: 'degC', mass: 'kg', volume: 'L' },
-  US: { pressure: 'psi', temperature: 'degF', mass: 'lb', volume: 'gal(US)' },
+  SI: { pressure: 'kPa', temperature: 'degC', mass: 'kg', volume: 'L', length: 'm' },
+  US: { pressure: 'psi', temperature: 'degF', mass: 'lb', volume: 'gal(US)', length: 'ft' },
 };
 
 export const DEFAULT_SETTINGS: AppSettings = {
@@ -44,13 +46,22 @@ export const DEFAULT_SETTINGS: AppSettings = {
 
 /** The unit set in force for a settings record. */
 export function unitsInForce(s: AppSettings): UnitPrefs {
-  return s.unitSystem === 'custom' ? s.units : UNIT_PRESETS[s.unitSystem];
+  if (s.unitSystem !== 'custom') return UNIT_PRESETS[s.unitSystem];
+  // Per-quantity choices saved before length existed carry no length unit: metres, as those versions used.
+  return { ...s.units, length: isLengthUnit(s.units.length) ? s.units.length : 'm' };
 }
 
 /** Settings' site atmosphere as the vessel editor's starting values. */
 export function atmosphereDefaults(s: AppSettings, u: UnitPrefs): { elevationM?: string; pressureText?: string } {
   const a = s.atmosphere;
-  if (a.mode === 'elevation') return { elevationM: a.text };
+  if (a.mode === 'elevation') {
+    // The editor shows the elevation in the preferred length unit.
+    try {
+      return { elevationM: formatEditable(lengthFromM(lengthToM(readNumber(a.text, 'site elevation'), a.unit ?? 'm'), u.length)) };
+    } catch {
+      return { elevationM: '' };
+    }
+  }
   if (a.mode === 'barometer') {
     try {
       return { pressureText: formatEditable(pressureFromPa(pressureToPa(readNumber(a.text, 'barometer reading'), a.unit), u.pressure)) };

@@ -1,7 +1,7 @@
 // Display labels for stored unit ids (records keep the id; people read the symbol).
-import { MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
 
-const ALL: readonly { id: string; label: string }[] = [...PRESSURE_UNITS, ...TEMPERATURE_UNITS, ...MASS_UNITS, ...VOLUME_UNITS];
+const ALL: readonly { id: string; label: string }[] = [...PRESSURE_UNITS, ...TEMPERATURE_UNITS, ...MASS_UNITS, ...VOLUME_UNITS, ...LENGTH_UNITS];
 
 /** The symbol for a unit id ("degC" → "°C"); an unknown id is shown as stored. */
 export function unitLabel(id: string): string {

@@ -1,5 +1,6 @@
 // The vessel editor's fields exactly as typed, with the units chosen beside them.
-import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import { isLengthUnit } from '../../core/index.ts';
 import type { HeadKind, SensorChoice, Shape } from './vessel-spec.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
@@ -7,8 +8,12 @@ export interface VesselForm {
   tag: string;
   description: string;
   shape: Shape;
+  // The field names keep their old "M" so drafts saved by earlier versions still fill them; the text
+  // is in `lengthUnit` (metres when a draft predates it, see formLengthUnit).
   diameterM: string;
   straightLengthM: string;
+  /** Unit of the diameter, straight length and elevation. */
+  lengthUnit: LengthUnit;
   head: HeadKind;
   volume: string;
   volumeUnit: VolumeUnit;
@@ -39,7 +44,7 @@ export type FormField = keyof VesselForm;
 export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: string; pressureText?: string }): VesselForm {
   const us = u.temperature === 'degF' || u.temperature === 'degR';
   return {
-    tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', head: 'semi-ellipsoidal-2-1',
+    tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', lengthUnit: u.length, head: 'semi-ellipsoidal-2-1',
     volume: '', volumeUnit: u.volume, volumeTolPercent: '2',
     tare: '', massUnit: u.mass, weightTol: '',
     pressureUnit: u.pressure, mawp: '', relief: '', vacuumRated: 'no', gaugeSpan: '', gaugeAccuracyPercent: '1',
@@ -49,6 +54,11 @@ export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: str
     elevationM: siteAtmosphere.elevationM ?? '', atmosphere: siteAtmosphere.pressureText ?? '',
     barometerTol: '',
   };
+}
+
+/** The form's length unit; a draft saved before the field existed was typed in metres. */
+export function formLengthUnit(f: VesselForm): LengthUnit {
+  return isLengthUnit(f.lengthUnit) ? f.lengthUnit : 'm';
 }
 
 export const SHAPES: readonly { id: Shape; label: string }[] = [

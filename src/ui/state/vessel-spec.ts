@@ -3,13 +3,13 @@
 // refused field gets its own message.
 import {
   InputError, massFromKg, massToKg, pressureFromPa, pressureToPa, temperatureDifferenceFromK,
-  temperatureDifferenceToK, temperatureFromK, temperatureToK, volumeFromM3, volumeToM3, atmosphereFromElevation,
+  temperatureDifferenceToK, temperatureFromK, temperatureToK, volumeFromM3, volumeToM3, atmosphereFromElevation, lengthFromM, lengthToM,
 } from '../../core/index.ts';
 import type { HeadSpec, VesselGeometry } from '../../core/check/vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
 import { formatEditable, readNumber } from './format.ts';
 import type { UnitPrefs } from './settings-model.ts';
-import type { FormField, VesselForm } from './vessel-form.ts';
+import { formLengthUnit, type FormField, type VesselForm } from './vessel-form.ts';
 import { messageOf } from './atmosphere.ts';
 
 export type { VesselSpec } from '../../core/check/vessel-spec.ts';
@@ -34,9 +34,11 @@ export function specFromForm(f: VesselForm): SpecResult {
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
     try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
   };
+  const lengthUnit = formLengthUnit(f);
+  const len = (n: number) => lengthToM(n, lengthUnit);
   const geometry: VesselGeometry = f.shape === 'stated-volume'
     ? { shape: 'stated-volume', volumeM3: read('volume', 'internal volume', (v) => volumeToM3(v, f.volumeUnit)) }
-    : { shape: f.shape, innerDiameterM: read('diameterM', 'inner diameter'), straightLengthM: read('straightLengthM', 'straight length'), head: { kind: f.head } };
+    : { shape: f.shape, innerDiameterM: read('diameterM', 'inner diameter', len), straightLengthM: read('straightLengthM', 'straight length', len), head: { kind: f.head } };
   const pa = (n: number) => pressureToPa(n, f.pressureUnit);
   const spec: VesselSpec = {
     tag: f.tag.trim(),
@@ -48,7 +50,7 @@ export function specFromForm(f: VesselForm): SpecResult {
     reliefSetGaugePa: read('relief', 'relief set pressure', pa),
     vacuumRated: f.vacuumRated === 'yes',
     siteAtmospherePa: f.atmosphereMode === 'elevation'
-      ? read('elevationM', 'elevation', atmosphereFromElevation)
+      ? read('elevationM', 'elevation', (n) => atmosphereFromElevation(len(n)))
       : read('atmosphere', 'site atmospheric pressure', pa),
     ambientTemperatureK: read('ambientTemperature', 'ambient temperature', (n) => temperatureToK(n, f.temperatureUnit)),
     instruments: {
@@ -82,8 +84,9 @@ export function formFromSpec(stored: object, u: UnitPrefs): VesselForm {
   return {
     tag: s.tag, description: s.description,
     shape: g.shape,
-    diameterM: g.shape === 'stated-volume' ? '' : n(g.innerDiameterM),
-    straightLengthM: g.shape === 'stated-volume' ? '' : n(g.straightLengthM),
+    diameterM: g.shape === 'stated-volume' ? '' : n(lengthFromM(g.innerDiameterM, u.length)),
+    straightLengthM: g.shape === 'stated-volume' ? '' : n(lengthFromM(g.straightLengthM, u.length)),
+    lengthUnit: u.length,
     head: g.shape === 'stated-volume' ? 'semi-ellipsoidal-2-1' : g.head.kind,
     volume: g.shape === 'stated-volume' ? n(volumeFromM3(g.volumeM3, u.volume)) : '',
     volumeUnit: u.volume, volumeTolPercent: n(ins.volumeTolerancePercent),
