@@ -33,6 +33,13 @@ function fromResult(path: string): (r: CheckRecord) => Cell {
 }
 
 const SIGNAL_ORDER = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
+/** Every result carries the standing note (a NOTICE); counting it would make every row at least NOTICE. */
+const STANDING_NOTE_RULE = 'standing-note';
+
+function highestSignal(r: CheckRecord): Cell {
+  const raised = r.cautions.filter((c) => c.rule !== STANDING_NOTE_RULE);
+  return SIGNAL_ORDER.find((s) => raised.some((c) => c.signal === s)) ?? null;
+}
 
 /**
  * The columns, in order. Result paths follow the check engine's CheckResult (src/core/README.md);
@@ -43,7 +50,7 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'vessel tag', cell: (r) => r.vessel.tag },
   { header: 'technician', cell: (r) => r.technician },
   { header: 'verdict', cell: fromResult('saturation.verdict.verdict') },
-  { header: 'highest signal word', cell: (r) => SIGNAL_ORDER.find((s) => r.cautions.some((c) => c.signal === s)) ?? null },
+  { header: 'highest signal word (standing note left out)', cell: highestSignal },
   { header: 'temperature (K)', cell: fromReading('temperatureK') },
   { header: 'pressure as entered (Pa)', cell: fromReading('pressure.pressurePa') },
   { header: 'pressure reference', cell: fromReading('pressure.reference') },

@@ -53,7 +53,7 @@ describe('CSV export', () => {
       expect(row['quality (kg/kg)']).toBe(1.25e-7 * (i + 1));
       expect(row['liquid level (m)']).toBe(0.8125);
       expect(row['verdict']).toBe('consistent');
-      expect(row['highest signal word']).toBe('CAUTION');
+      expect(row['highest signal word (standing note left out)']).toBe('CAUTION');
       expect(row['seq']).toBe(i + 1);
       // Fields come out in key order: the store keeps records in canonical form.
       expect(row['inputs as typed']).toBe('grossWeight=2450 kg; pressure=4,0 bar gauge; temperature=151,8 degC');
@@ -106,5 +106,20 @@ describe('CSV export', () => {
     controller.abort();
     await expect(exportCsv({ signal: controller.signal })).rejects.toMatchObject({ code: 'cancelled' });
     expect(csvFromChecks([])).toBe(CSV_COLUMNS.map((c) => csvCell(c.header)).join(',') + '\r\n');
+  });
+});
+
+describe('CSV highest signal word', () => {
+  const col = CSV_COLUMNS.find((c) => c.header.startsWith('highest signal word'))!;
+  const withCautions = (cautions: CheckRecord['cautions']) => ({ cautions }) as unknown as CheckRecord;
+  it('leaves out the standing note every result carries, so a row with nothing else raised is empty', () => {
+    expect(col.cell(withCautions([{ signal: 'NOTICE', message: 'Advisory figures only.', rule: 'standing-note' }]))).toBeNull();
+  });
+  it('gives the most severe word among the raised cautions (ISO 3864 / ANSI Z535 order)', () => {
+    expect(col.cell(withCautions([
+      { signal: 'NOTICE', message: 'a', rule: 'atmosphere-assumed' },
+      { signal: 'WARNING', message: 'b', rule: 'flash-on-release' },
+      { signal: 'NOTICE', message: 'c', rule: 'standing-note' },
+    ]))).toBe('WARNING');
   });
 });
