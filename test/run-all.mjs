@@ -2,7 +2,7 @@
 // The one gate: system prerequisites, type checks, unit + reference tests, build, bundle size,
 // browser tests. CI runs exactly this (npm test). Each step prints what it runs.
 import { spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 
 const CHROMIUM = '/usr/bin/chromium';
 const DEBIAN_PYTHON = '/usr/bin/python3';
@@ -43,8 +43,25 @@ if (missing.length > 0) {
 run('type check', 'npx', ['tsc', '-p', 'tsconfig.json', '--noEmit']);
 run('type check (core, no DOM, no packages)', 'npx', ['tsc', '-p', 'src/core/tsconfig.json', '--noEmit']);
 run('type check (service worker)', 'npx', ['tsc', '-p', 'sw/tsconfig.json', '--noEmit']);
-run('unit and reference tests', 'npx', ['vitest', 'run']);
+mkdirSync('test-results', { recursive: true });
+const counts = { passed: 0, failed: 0 };
+/** Runs a vitest suite with the default reporter on screen and a JSON summary for the closing count. */
+function runVitest(label, extraArgs, summaryFile) {
+  run(label, 'npx', ['vitest', 'run', ...extraArgs, '--reporter=default', '--reporter=json', `--outputFile.json=${summaryFile}`]);
+  const summary = JSON.parse(readFileSync(summaryFile, 'utf8'));
+  counts.passed += summary.numPassedTests;
+  counts.failed += summary.numFailedTests;
+}
+
+runVitest('unit and reference tests', [], 'test-results/unit-summary.json');
 run('build', 'npx', ['vite', 'build', '--logLevel', 'warn']);
 if (existsSync('test/size/bundle-size.mjs')) run('bundle size', 'node', ['test/size/bundle-size.mjs']);
-if (existsSync('test/e2e/vitest.config.ts')) run('browser tests', 'npx', ['vitest', 'run', '--config', 'test/e2e/vitest.config.ts']);
+if (existsSync('test/e2e/vitest.config.ts')) {
+  runVitest('browser tests', ['--config', 'test/e2e/vitest.config.ts'], 'test-results/e2e-summary.json');
+}
+if (counts.passed === 0) {
+  console.error('No test ran: the suites were found empty, which is a failure.');
+  process.exit(1);
+}
 console.log('\nAll gates passed.');
+console.log(`${counts.passed} passed, ${counts.failed} failed`);
