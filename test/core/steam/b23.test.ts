@@ -17,7 +17,7 @@ describe('B23', () => {
     );
   });
 
-  it('ends: meets the saturation line at 623.15 K and reaches 100 MPa at 863.15 K (computed, if97-references.md §1.9)', () => {
+  it('ends: meets the saturation line at 623.15 K and reaches 100 MPa at 863.15 K (B23 endpoints computed with python3-iapws 1.5.2, _P23_T)', () => {
     expect(Math.abs(b23Pressure(623.15) - saturationPressure(623.15)) / 16.53e6).toBeLessThan(1e-8);
     expect(Math.abs(b23Pressure(863.15) - 100e6) / 100e6).toBeLessThan(1e-6);
   });

@@ -1,4 +1,4 @@
-// The steam engine's public surface (CONTRACTS.md, "Steam"): names, constants, and the rule that
+// The steam engine's public surface as the rest of the app uses it: names, constants, and the rule that
 // every out-of-range input becomes an InputError naming the quantity — never NaN.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

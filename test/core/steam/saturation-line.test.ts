@@ -37,7 +37,7 @@ describe('saturation line', () => {
     );
   });
 
-  it('ends of the line: p_s(273.15 K) = 611.212677 Pa and p_s(Tc) = 22.064 MPa (values computed from Eq. (30), if97-references.md §3.1)', () => {
+  it('ends of the line: p_s(273.15 K) = 611.212677 Pa and p_s(Tc) = 22.064 MPa (IAPWS R7-97(2012) Eq. (30), computed with python3-iapws 1.5.2 _PSat_T)', () => {
     expect(saturationPressure(273.15)).toBeCloseTo(611.212677, 5);
     expect(Math.abs(saturationPressure(647.096) - 22.064e6) / 22.064e6).toBeLessThan(1e-8);
     expect(saturationTemperature(22.064e6)).toBeLessThanOrEqual(647.096);
