@@ -3,7 +3,7 @@
 // supervisor feels. Prints each figure beside its target; asserts nothing about time.
 // Run: npm run bench (builds first; ~2–4 minutes on a small machine).
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { expect, it } from 'vitest';
@@ -70,21 +70,82 @@ async function jobMs(page: Page, label: string): Promise<number> {
 
 function noteJob(what: string, ms: number): void {
   console.log(`    ${what.padEnd(64)} ${(ms / 1000).toFixed(3).padStart(8)} s`);
+  console.log(`    ${'CPU used by all browser processes during the click'.padEnd(64)} ${lastCpuS.toFixed(3).padStart(8)} s`);
 }
 
+/** CPU seconds of the browser's processes during the last timed click. */
+let lastCpuS = NaN;
+
+/** The profile folder of the running browser, so its processes can be found. */
+let profileDir = '';
+
+/**
+ * CPU seconds used so far by every process of the browser (the browser process, where Chromium's
+ * IndexedDB backend runs, its utility processes, the renderers): /proc, Linux only. On a shared
+ * machine wall time depends on what else runs; this counts only the browser's own work.
+ */
+function browserCpuS(): number {
+  const procs = readdirSync('/proc').filter((d) => /^\d+$/.test(d));
+  const parent = new Map<number, number>();
+  const ticks = new Map<number, number>();
+  let root = -1;
+  for (const pid of procs) {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+      const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      parent.set(Number(pid), Number(f[1]));
+      ticks.set(Number(pid), Number(f[11]) + Number(f[12]));
+      if (root < 0 && readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes(`--user-data-dir=${profileDir}`) &&
+        !readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes('--type=')) root = Number(pid);
+    } catch {
+      // The process ended while being read.
+    }
+  }
+  let total = 0;
+  for (const [pid, t] of ticks) {
+    for (let p: number | undefined = pid; p !== undefined && p > 1; p = parent.get(p)) {
+      if (p === root) {
+        total += t;
+        break;
+      }
+    }
+  }
+  return total / 100; // USER_HZ is 100 on Linux
+}
+
+// BENCH_PROFILE=<folder> records a CPU profile of the page around each timed click (and builds
+// without minifying, so the profile names functions); the figures of such a run are not comparable.
+const PROFILE_DIR = process.env['BENCH_PROFILE'];
+
 async function timeClick(page: Page, name: string, until: () => Promise<unknown>): Promise<number> {
+  const cdp = PROFILE_DIR ? await page.context().newCDPSession(page) : null;
+  if (cdp) {
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+    await cdp.send('Profiler.start');
+  }
   const t0 = Date.now();
+  const cpu0 = browserCpuS();
   await Promise.all([until(), page.getByRole('button', { name }).click()]);
-  return Date.now() - t0;
+  const ms = Date.now() - t0;
+  lastCpuS = browserCpuS() - cpu0;
+  if (cdp && PROFILE_DIR) {
+    const { profile } = await cdp.send('Profiler.stop');
+    mkdirSync(PROFILE_DIR, { recursive: true });
+    writeFileSync(join(PROFILE_DIR, `${name.replace(/\W+/g, '-')}-${Date.now()}.cpuprofile`), JSON.stringify(profile));
+    await cdp.detach();
+  }
+  return ms;
 }
 
 it(`review at ${N} + ${N} checks`, async () => {
-  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
+  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn', ...(PROFILE_DIR ? ['--minify', 'false'] : [])], { cwd: ROOT, stdio: 'inherit' });
   expect(build.status).toBe(0);
   const dir = mkdtempSync(join(tmpdir(), 'tankside-bench-'));
   const profile = tempProfile();
   const server = await startServer(DIST);
   const ctx = await launch(profile.dir);
+  profileDir = profile.dir;
   try {
     let t = Date.now();
     const common = { vessels: VESSELS, checks: CHECKS, vesselPrefix: '5eed0200', stepMs: YEAR_MS / CHECKS, technicians: ['Gen Adeyemi', 'Gen Berg', 'Gen Castro', 'Gen Dubois', 'Gen Endo'] };

@@ -11,6 +11,7 @@ import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
 import { canonicalJson, ChainVerifier, computeCheckHashes, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { isIndexKey, sortKeyed, storePages, type KeyedText } from './pages.ts';
 import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -56,7 +57,6 @@ export interface ImportReport {
 }
 
 const STRICT = { durability: 'strict' } as const;
-const PAGE = 1000;
 
 // ---------------------------------------------------------------- export
 
@@ -73,37 +73,33 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   const tx = db.transaction(['vessels', 'checks']);
   const vessels = await tx.objectStore('vessels').getAll();
   const total = await tx.objectStore('checks').count();
-  const index = tx.objectStore('checks').index('by-device-seq');
-  // One string per page (its records' lines joined), so the finished text is one join of about
-  // total / PAGE parts and each page's record objects can go as soon as it is written.
-  const checkParts: string[] = [];
-  const heads: ChainHead[] = [];
+  // Read in primary key order (cheaper than walking by-device-seq), each record written out as
+  // it arrives and only its text kept, then put in device-then-seq order: the order, and the
+  // records, walking by-device-seq would give (pages.ts).
+  const keyed: (KeyedText & { hash: string })[] = [];
   let done = 0;
-  let next = index.getAll(undefined, PAGE);
-  for (;;) {
-    const batch: CheckRecord[] = await next;
+  for await (const batch of storePages<CheckRecord>(tx.objectStore('checks'), (r) => r.id)) {
     throwIfAborted(options.signal);
-    if (batch.length === 0) break;
-    const last: CheckRecord = batch[batch.length - 1]!;
-    // The next page is read while this one is written out (same snapshot: same transaction).
-    next = batch.length === PAGE ? index.getAll(IDBKeyRange.lowerBound([last.deviceId, last.seq], true), PAGE) : Promise.resolve([]);
-    const lineTexts = new Array<string>(batch.length);
-    for (let i = 0; i < batch.length; i += 1) {
-      const r = batch[i]!;
-      lineTexts[i] = canonicalJson(r);
-      const head = heads[heads.length - 1];
-      if (head && head.deviceId === r.deviceId) {
-        head.count += 1;
-        head.headSeq = r.seq;
-        head.headHash = r.hash;
-      } else {
-        heads.push({ deviceId: r.deviceId, count: 1, headSeq: r.seq, headHash: r.hash });
-      }
+    for (const r of batch) {
+      if (!isIndexKey(r.deviceId, r.seq)) continue;
+      keyed.push({ a: r.deviceId, b: r.seq, text: canonicalJson(r), hash: r.hash });
     }
-    checkParts.push(lineTexts.join(',\n'));
     done += batch.length;
     options.onProgress?.(done, total);
   }
+  sortKeyed(keyed);
+  const heads: ChainHead[] = [];
+  for (const k of keyed) {
+    const head = heads[heads.length - 1];
+    if (head && head.deviceId === k.a) {
+      head.count += 1;
+      head.headSeq = k.b as number;
+      head.headHash = k.hash;
+    } else {
+      heads.push({ deviceId: k.a as string, count: 1, headSeq: k.b as number, headHash: k.hash });
+    }
+  }
+  const checkParts = keyed.map((k) => k.text);
   await tx.done;
   const exportedAt = formatIsoWithOffset(new Date());
   return (

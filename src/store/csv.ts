@@ -2,6 +2,7 @@
 // cells neutralised against spreadsheet formula injection. RFC 4180 quoting, CRLF line ends.
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
+import { isIndexKey, sortKeyed, storePages, type KeyedText } from './pages.ts';
 import type { CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
 import { requireUuid } from './validate.ts';
 
@@ -134,11 +135,23 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
   const total = options.vesselId ? await index.count(all) : await tx.store.count();
   // One string per page (its rows joined), joined once at the end.
   const parts: string[] = [csvFromChecks([]).slice(0, -2)];
-  const rangeAfter = (last: CheckRecord): IDBKeyRange =>
-    options.vesselId
-      ? IDBKeyRange.bound([last.vesselId, last.timeMs, last.id], [options.vesselId, Infinity, []], true)
-      : IDBKeyRange.lowerBound([last.timeMs, last.id], true);
   let done = 0;
+  if (!options.vesselId) {
+    // The whole log: read in primary key order (cheaper than walking by-time), each row written
+    // as it arrives and only its text kept, then put in by-time order (pages.ts).
+    const keyed: KeyedText[] = [];
+    for await (const batch of storePages<CheckRecord>(tx.store, (r) => r.id)) {
+      throwIfAborted(options.signal);
+      for (const r of batch) if (isIndexKey(r.timeMs, r.id)) keyed.push({ a: r.timeMs, b: r.id, text: csvRow(r) });
+      done += batch.length;
+      options.onProgress?.(done, total);
+    }
+    for (const k of sortKeyed(keyed)) parts.push(k.text);
+    await tx.done;
+    return parts.join('\r\n') + '\r\n';
+  }
+  const rangeAfter = (last: CheckRecord): IDBKeyRange =>
+    IDBKeyRange.bound([last.vesselId, last.timeMs, last.id], [options.vesselId, Infinity, []], true);
   let next = index.getAll(all, PAGE);
   for (;;) {
     const batch: CheckRecord[] = await next;

@@ -11,6 +11,7 @@ import { getDb } from '../../src/store/connection.ts';
 import { computeCheckHash } from '../../src/store/integrity.ts';
 import { mayHoldForbiddenKey, parseBackup, storedIds } from '../../src/store/backup.ts';
 import { VERIFY_PAGE } from '../../src/store/verify.ts';
+import { STORE_PAGE } from '../../src/store/pages.ts';
 import { GENESIS_HASH } from '../../src/store/records.ts';
 import { IDBFactory } from 'fake-indexeddb';
 import { closeStore, openStore } from '../../src/store/index.ts';
@@ -22,14 +23,19 @@ const D2 = 'bbbbbbbb-0000-4000-8000-000000000002';
 const T0 = Date.parse('2026-11-02T06:00:00Z');
 
 /** `n` chained checks of `deviceId` spread over `vesselIds`, hashed as the store hashes them. */
-async function makeChain(deviceId: string, n: number, vesselIds: string[], tag = 'FT-204'): Promise<CheckRecord[]> {
+async function makeChain(
+  deviceId: string,
+  n: number,
+  vesselIds: string[],
+  tag = 'FT-204',
+  idOf: (seq: number) => string = (seq) => `${deviceId.slice(0, 8)}-1111-4000-8000-${String(seq).padStart(12, '0')}`,
+): Promise<CheckRecord[]> {
   const out: CheckRecord[] = [];
   let prevHash = GENESIS_HASH;
-  const device = deviceId.slice(0, 8);
   for (let seq = 1; seq <= n; seq += 1) {
     const timeMs = T0 + seq * 60_000 + (deviceId === D2 ? 30_000 : 0);
     const unsigned = {
-      id: `${device}-1111-4000-8000-${String(seq).padStart(12, '0')}`,
+      id: idOf(seq),
       deviceId,
       seq,
       time: new Date(timeMs).toISOString().replace('.000Z', 'Z'),
@@ -120,15 +126,18 @@ describe('exports across pages', () => {
   it('CSV: every row once, oldest first, for the whole log and for one vessel', async () => {
     const a = await addVessel({ tag: 'FT-204', spec: SPEC });
     const b = await addVessel({ tag: 'CR-3', spec: SPEC });
-    // 2 × (1000 + 5) checks, one in three on vessel b: both walks cross a page boundary.
-    const d1 = await makeChain(D1, 1005, [a.id, a.id, b.id]);
-    const d2 = await makeChain(D2, 1005, [a.id, a.id, b.id]);
+    // 2 × (STORE_PAGE / 2 + 3) checks, one in three on vessel b: the whole-log read (primary key
+    // order, then sorted by time: the two devices interleave) and the vessel walk (by-vessel-time,
+    // pages of 1000) both cross a page boundary.
+    const half = STORE_PAGE / 2 + 3;
+    const d1 = await makeChain(D1, half, [a.id, a.id, b.id]);
+    const d2 = await makeChain(D2, half, [a.id, a.id, b.id]);
     await writeChecks([...d1, ...d2]);
     const all = [...d1, ...d2].sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : 1));
     const seen: number[] = [];
     const rows = Papa.parse<Record<string, string>>(await exportCsv({ onProgress: (d) => seen.push(d) }), { header: true, skipEmptyLines: true }).data;
     expect(rows.map((r) => r['check id'])).toEqual(all.map((r) => r.id));
-    expect(seen).toEqual([1000, 2000, 2010]);
+    expect(seen).toEqual([STORE_PAGE, 2 * half]);
     expect(rows.find((r) => r['note']!.startsWith("'="))).toBeDefined();
     const onA = Papa.parse<Record<string, string>>(await exportCsv({ vesselId: a.id }), { header: true, skipEmptyLines: true }).data;
     expect(onA.map((r) => r['check id'])).toEqual(all.filter((r) => r.vesselId === a.id).map((r) => r.id));
@@ -156,6 +165,27 @@ describe('exports across pages', () => {
     expect(report.checks.added).toHaveLength(1004);
     expect(await dump()).toEqual(before);
     expect((await exportBackup()).replace(/"exportedAt":"[^"]*"/, '')).toBe(text.replace(/"exportedAt":"[^"]*"/, ''));
+  });
+});
+
+describe('JSON export in device and seq order whatever the ids', () => {
+  it('ids sorting against seq, across a page of the primary key read: still device then seq order, heads right', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    // Ids run backwards against seq, and device D2's ids sort before D1's.
+    const n = STORE_PAGE + 2;
+    const idOf = (prefix: string) => (seq: number) => `${prefix}-1111-4000-8000-${String(n + 10 - seq).padStart(12, '0')}`;
+    const d1 = await makeChain(D1, n, [v.id], 'FT-204', idOf('cccccccc'));
+    const d2 = await makeChain(D2, 4, [v.id], 'FT-204', idOf('00000000'));
+    await writeChecks([...d1, ...d2]);
+    const seen: number[] = [];
+    const doc = parseBackup(await exportBackup({ onProgress: (d) => seen.push(d) }));
+    expect(doc.checks.map((c) => c.id)).toEqual([...d1, ...d2].map((c) => c.id));
+    expect(doc.checks).toEqual([...d1, ...d2]);
+    expect(doc.chains).toEqual([
+      { deviceId: D1, count: n, headSeq: n, headHash: d1.at(-1)!.hash },
+      { deviceId: D2, count: 4, headSeq: 4, headHash: d2.at(-1)!.hash },
+    ]);
+    expect(seen).toEqual([STORE_PAGE, n + 4]);
   });
 });
 
