@@ -12,6 +12,8 @@ export type InputProblem =
 /** A refused input or an argument outside a formulation's validity range. */
 export class InputError extends Error {
   override readonly name = 'InputError';
+  /** True when the thrower wrote its own message (an edge that restates the range keeps it as it is). */
+  readonly hasCustomMessage: boolean;
   constructor(
     /** The field or quantity, in words a person recognises (e.g. "temperature", "tare weight"). */
     readonly field: string,
@@ -23,6 +25,7 @@ export class InputError extends Error {
     message?: string,
   ) {
     super(message ?? describeInputError(field, problem, value, range));
+    this.hasCustomMessage = message !== undefined;
   }
 }
 

@@ -1,5 +1,6 @@
 // One check from entry to log: the draft → Reading → evaluateCheck → what the screen shows, and
 // the record saved to the log. All computation is the core's.
+import { errorText, type FieldUnit } from './error-text.ts';
 import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '../../core/index.ts';
 import type { Reading } from '../../core/index.ts';
 import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
@@ -17,8 +18,17 @@ export type Evaluation =
   | { kind: 'result'; view: ResultView; reading: Reading; result: CheckResult };
 
 const ENGINE_FIELDS: Record<string, ReadingField> = {
-  temperature: 'temperature', pressure: 'pressure', 'gross weight': 'gross', 'net weight': 'gross',
+  temperature: 'temperature', pressure: 'pressure', 'pressure (gauge)': 'pressure', 'pressure (absolute)': 'pressure',
+  'gross weight': 'gross', 'net weight': 'gross',
 };
+
+function typedUnit(d: CheckDraft, field: ReadingField): FieldUnit {
+  switch (field) {
+    case 'temperature': return { kind: 'temperature', unit: d.temperature.unit };
+    case 'pressure': return { kind: 'pressure', unit: d.pressure.unit };
+    case 'gross': return { kind: 'mass', unit: d.gross.unit };
+  }
+}
 
 /** Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any. */
 export function evaluateDraft(
@@ -32,7 +42,8 @@ export function evaluateDraft(
     const result = evaluateCheck(spec, r.reading);
     return { kind: 'result', view: resultView(result, spec, prefs), reading: r.reading, result };
   } catch (e) {
-    if (e instanceof InputError && ENGINE_FIELDS[e.field]) return { kind: 'input-error', errors: { [ENGINE_FIELDS[e.field]!]: e.message } };
+    const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
+    if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field)) } };
     return { kind: 'input-error', errors: {}, general: `No result: ${messageOf(e)}` };
   }
 }

@@ -1,4 +1,5 @@
 // Fill planning: the form as typed → FillRequest → planFill → what the screen shows.
+import { errorText, type FieldUnit } from './error-text.ts';
 import { isDemo } from './demo-label.ts';
 import {
   InputError, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
@@ -64,7 +65,8 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
     return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec as { tag?: unknown; description?: unknown }) || isDemo(vessel)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
-    return field ? { kind: 'input-error', errors: { [field]: messageOf(e) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
+    const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
+    return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
 }
 

@@ -1,6 +1,7 @@
 // The vessel editor's text fields ↔ the check engine's VesselSpec (SI). Parsing and unit
 // conversion go through the core, and the engine's own validateVessel has the last word; every
 // refused field gets its own message.
+import { errorText, type FieldUnit } from './error-text.ts';
 import {
   InputError, massFromKg, massToKg, pressureFromPa, pressureToPa, temperatureDifferenceFromK,
   temperatureDifferenceToK, temperatureFromK, temperatureToK, volumeFromM3, volumeToM3, atmosphereFromElevation, lengthFromM, lengthToM,
@@ -27,6 +28,17 @@ const ENGINE_FIELDS: Record<string, FormField> = {
   'weight tolerance': 'weightTol', 'volume tolerance': 'volumeTolPercent', 'barometer tolerance': 'barometerTol',
   'inner diameter': 'diameterM', 'straight length': 'straightLengthM', volume: 'volume', 'internal volume': 'volume',
 };
+
+/** The unit a vessel-form field is typed in, for restating the engine's SI range. */
+function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
+  switch (field) {
+    case 'tare': case 'weightTol': return { kind: 'mass', unit: f.massUnit };
+    case 'mawp': case 'relief': case 'atmosphere': case 'gaugeSpan': case 'barometerTol': return { kind: 'pressure', unit: f.pressureUnit };
+    case 'designTemperature': case 'ambientTemperature': return { kind: 'temperature', unit: f.temperatureUnit };
+    case 'diameterM': case 'straightLengthM': return { kind: 'length', unit: formLengthUnit(f) };
+    default: return undefined;
+  }
+}
 
 /** Builds the SI VesselSpec from the form, or names every field that cannot be read. */
 export function specFromForm(f: VesselForm): SpecResult {
@@ -68,7 +80,7 @@ export function specFromForm(f: VesselForm): SpecResult {
     validateVessel(spec);
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] ?? 'tag' : 'tag';
-    return { ok: false, errors: { [field]: messageOf(e) } };
+    return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field)) } };
   }
   return { ok: true, spec };
 }
