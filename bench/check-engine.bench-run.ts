@@ -1,26 +1,15 @@
 // Prints how long evaluateCheck and planFill take on this machine; asserts nothing about time.
 import { it } from 'vitest';
 import { evaluateCheck, planFill, type Reading, type VesselSpec } from '../src/core/index.ts';
+import { testVessel } from '../test/core/check/test-vessel.ts';
 
-const vessel: VesselSpec = {
+// The check-engine tests' invented vessel, upright with torispherical heads for this run.
+const vessel: VesselSpec = testVessel({
   tag: 'BENCH-1',
   description: 'benchmark vessel (invented)',
   geometry: { shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2.5, head: { kind: 'torispherical' } },
   tareKg: 1200,
-  mawpGaugePa: 1e6,
-  designTemperatureK: 473.15,
-  reliefSetGaugePa: 0.9e6,
-  vacuumRated: false,
-  siteAtmospherePa: 101325,
-  ambientTemperatureK: 293.15,
-  instruments: {
-    pressureGauge: { spanPa: 1.6e6, accuracyPercentOfSpan: 1 },
-    temperatureSensor: { kind: 'iec-60751', sensorClass: 'A' },
-    weightToleranceKg: 2,
-    volumeTolerancePercent: 1,
-    barometerTolerancePa: 100,
-  },
-};
+});
 
 function time(label: string, n: number, run: (i: number) => void): void {
   for (let i = 0; i < 20; i++) run(i);

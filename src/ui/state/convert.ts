@@ -1,5 +1,6 @@
 // Convert screen logic: one pressure in every unit (gauge and absolute at the site atmosphere),
 // and temperature ↔ saturation pressure. All arithmetic goes through the core.
+import { errorText } from './error-text.ts';
 import { readNumber } from './format.ts';
 import {
   PRESSURE_UNITS,
@@ -52,15 +53,9 @@ export function saturationFromTemperature(
   if (text.trim() === '') return { ok: 'empty' };
   try {
     const T = temperatureToK(readNumber(text, 'temperature'), tUnit);
-    const p = saturationPressure(T);
-    return {
-      ok: true,
-      temperature: temperatureFromK(T, tUnit),
-      absolute: pressureFromPa(p, pUnit),
-      gauge: pressureFromPa(gaugeFromAbsolute(p, atmospherePa), pUnit),
-    };
+    return saturationAnswer(T, saturationPressure(T), tUnit, pUnit, atmospherePa);
   } catch (e) {
-    return { ok: false, error: messageOf(e) };
+    return { ok: false, error: errorText(e, { kind: 'temperature', unit: tUnit }) };
   }
 }
 
@@ -72,14 +67,18 @@ export function saturationFromPressure(
   try {
     const entered = pressureToPa(readNumber(text, 'pressure'), pUnit);
     const p = kind === 'absolute' ? entered : absoluteFromGauge(entered, atmospherePa);
-    const T = saturationTemperature(p);
-    return {
-      ok: true,
-      temperature: temperatureFromK(T, tUnit),
-      absolute: pressureFromPa(p, pUnit),
-      gauge: pressureFromPa(gaugeFromAbsolute(p, atmospherePa), pUnit),
-    };
+    return saturationAnswer(saturationTemperature(p), p, tUnit, pUnit, atmospherePa);
   } catch (e) {
-    return { ok: false, error: messageOf(e) };
+    return { ok: false, error: errorText(e, { kind: 'pressure', unit: pUnit }) };
   }
+}
+
+/** One saturation state (T K, p Pa absolute) shown in the person's units, gauge and absolute. */
+function saturationAnswer(T: number, p: number, tUnit: TemperatureUnit, pUnit: PressureUnit, atmospherePa: number): SaturationAnswer {
+  return {
+    ok: true,
+    temperature: temperatureFromK(T, tUnit),
+    absolute: pressureFromPa(p, pUnit),
+    gauge: pressureFromPa(gaugeFromAbsolute(p, atmospherePa), pUnit),
+  };
 }
