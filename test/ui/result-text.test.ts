@@ -1,7 +1,7 @@
 // The result card's words and figures for engine results (the physics is the engine's and is
 // tested there; this checks the mapping to the screen).
 import { describe, expect, it } from 'vitest';
-import { evaluateCheck, saturationPressure, type VesselSpec } from '../../src/core/index.ts';
+import { evaluateCheck, saturationPressure, saturationTemperature, type VesselSpec } from '../../src/core/index.ts';
 import { resultView } from '../../src/ui/state/result-text.ts';
 import { formatWithBand } from '../../src/ui/state/format.ts';
 import { UNIT_PRESETS } from '../../src/ui/state/settings-model.ts';
@@ -97,5 +97,33 @@ describe('formatWithBand', () => {
     expect(formatWithBand(0.259, 0.0131)).toBe('0.259 ± 0.013');
     expect(formatWithBand(790.04, 5.5)).toBe('790.0 ± 5.5');
     expect(formatWithBand(-0.136, 1.62)).toBe('\u22120.1 ± 1.6');
+  });
+});
+
+describe('the headline leads with what needs action now', () => {
+  const at = (over: Partial<Parameters<typeof evaluateCheck>[1]>) =>
+    resultView(evaluateCheck(vessel, { time, temperatureK: 450, pressure: { reference: 'gauge', pressurePa: 500e3 }, weight: { kind: 'not-weighed' }, ...over }), vessel, UNIT_PRESETS.SI).verdict;
+
+  it('a gauge exactly at the MAWP reads DANGER, never a green agreement (test vessel MAWP 1000 kPa gauge)', () => {
+    // The thermometer at T_sat of the reading, so the saturation check alone would say "agree".
+    const v = at({ temperatureK: saturationTemperature(1000e3 + 101_325), pressure: { reference: 'gauge', pressurePa: 1000e3 } });
+    expect(v.text).toMatch(/agree/);
+    expect(v.text).toMatch(/^DANGER\. /);
+    expect(v.tone).toBe('bad');
+  });
+
+  it('a flash-on-release or cool-down hazard alone does not turn an ordinary reading red', () => {
+    const T = 423.15;
+    const v = at({ temperatureK: T, pressure: { reference: 'absolute', pressurePa: saturationPressure(T) } });
+    expect(v.tone).toBe('ok');
+    expect(v.text).toMatch(/^Gauge and thermometer agree/);
+  });
+
+  it('liquid-full by weight while the gauge reads saturation: the headline says the readings contradict, not that they agree', () => {
+    const T = 423.15;
+    // 0.6 m × 1.2 m with 2:1 heads is about 0.396 m³; 600 kg of water at 150 °C cannot fit as two-phase.
+    const v = at({ temperatureK: T, pressure: { reference: 'absolute', pressurePa: saturationPressure(T) }, weight: { kind: 'net', netKg: 600 } });
+    expect(v.text).toMatch(/^DANGER\. By weight the vessel is liquid-full, yet the gauge reads saturation/);
+    expect(v.tone).toBe('bad');
   });
 });

@@ -19,8 +19,11 @@ export interface Caution {
 export const CAUTION_RULES = {
   'liquid-full-now': 'DANGER',
   'pressure-above-mawp': 'DANGER',
+  'pressure-at-mawp': 'DANGER',
   'pressure-above-relief-set': 'WARNING',
+  'pressure-at-relief-set': 'WARNING',
   'pressure-near-relief-set': 'CAUTION',
+  'vacuum-now': 'WARNING',
   'liquid-full-on-heating': 'WARNING',
   'above-design-temperature': 'WARNING',
   'noncondensable-gas': 'WARNING',
@@ -43,6 +46,16 @@ export const CAUTION_RULES = {
 } as const satisfies Record<string, SignalWord>;
 
 export type CautionRule = keyof typeof CAUTION_RULES;
+
+/**
+ * Rules that describe the vessel as it is now and call for action now, as opposed to what would
+ * happen if something were done (a release flashes, a sealed vessel cooling pulls a vacuum). A
+ * result headline leads with these, so a standing "if" hazard does not turn every result red.
+ */
+export const ACT_NOW_RULES: readonly CautionRule[] = [
+  'liquid-full-now', 'pressure-above-mawp', 'pressure-at-mawp', 'pressure-above-relief-set', 'pressure-at-relief-set',
+  'vacuum-now', 'liquid-full-on-heating', 'above-design-temperature', 'noncondensable-gas',
+];
 
 /** A caution for a catalogued rule. */
 export function caution(rule: CautionRule, message: string): Caution {
@@ -73,9 +86,9 @@ export function celsius(temperatureK: number): string {
   return `${(temperatureK - 273.15).toFixed(1)} °C`;
 }
 
-/** kPa with one decimal, for messages. p in Pa. */
+/** kPa with one decimal, for messages, with a true minus sign like the figures. p in Pa. */
 export function kilopascal(pressurePa: number): string {
-  return `${(pressurePa / 1000).toFixed(1)} kPa`;
+  return `${(pressurePa / 1000).toFixed(1).replace(/^-/, '\u2212')} kPa`;
 }
 
 /** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association educator's guide "Scalds: A Burning Issue"; its data go back to Moritz & Henriques 1947, from memory). */
@@ -105,12 +118,23 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
         `(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`
       : `The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
   }
+  // A reading within the gauge's own accuracy of a limit may already be at it: the gauge band
+  // (class % of span) decides "at", so a reading exactly at MAWP is never shown as below it.
+  const gaugeBandPa = (vessel.instruments.pressureGauge.spanPa * vessel.instruments.pressureGauge.accuracyPercentOfSpan) / 100;
+  const within = `within the gauge's accuracy (±${kilopascal(gaugeBandPa)})`;
   if (gauge > vessel.mawpGaugePa) {
     out.push(caution('pressure-above-mawp', `Gauge pressure ${kilopascal(gauge)} is above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
+  } else if (gauge >= vessel.mawpGaugePa - gaugeBandPa) {
+    out.push(caution('pressure-at-mawp', `Gauge pressure ${kilopascal(gauge)} is at the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge) ${within}. Reduce the heat input now.`));
   } else if (gauge > vessel.reliefSetGaugePa) {
     out.push(caution('pressure-above-relief-set', `Gauge pressure ${kilopascal(gauge)} is above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) but the relief device has not relieved it.`));
+  } else if (gauge >= vessel.reliefSetGaugePa - gaugeBandPa) {
+    out.push(caution('pressure-at-relief-set', `Gauge pressure ${kilopascal(gauge)} is at the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) ${within}: the relief device may be lifting or simmering.`));
   } else if (gauge >= NEAR_LIMIT_FRACTION * vessel.reliefSetGaugePa) {
-    out.push(caution('pressure-near-relief-set', `Gauge pressure ${kilopascal(gauge)} is within 10 % of the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge).`));
+    out.push(caution('pressure-near-relief-set', `Gauge pressure ${kilopascal(gauge)} is ${(100 * gauge / vessel.reliefSetGaugePa).toFixed(0)} % of the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge); readings from ${(100 * NEAR_LIMIT_FRACTION).toFixed(0)} % up are flagged.`));
+  }
+  if (!vessel.vacuumRated && gauge < -gaugeBandPa) {
+    out.push(caution('vacuum-now', `Gauge pressure ${kilopascal(gauge)}: the vessel is below atmosphere now and is not rated for vacuum. Open the vacuum breaker or vent, or stop cooling, before it buckles.`));
   }
   const env = result.envelope;
   if (env && env.first.event === 'liquid-full' && inv.regime !== 'liquid-full') {

@@ -18,7 +18,7 @@ export {
   vesselVolume,
 } from './vessel-geometry.ts';
 export type { CylinderGeometry, HeadSpec, VesselGeometry } from './vessel-geometry.ts';
-export { CAUTION_RULES, STANDING_NOTE } from './cautions.ts';
+export { ACT_NOW_RULES, CAUTION_RULES, STANDING_NOTE } from './cautions.ts';
 export type { Caution, CautionRule, SignalWord } from './cautions.ts';
 export type { SaturationCheck, SaturationVerdict } from './saturation-consistency.ts';
 export type { Inventory } from './inventory.ts';

@@ -1,7 +1,7 @@
 // A CheckResult (SI) in words and preferred units for the result card. Values come from the
 // engine; this module converts units for display and picks the words.
 import {
-  LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
+  ACT_NOW_RULES, LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
   temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM,
   type CheckResult, type VesselSpec,
 } from '../../core/index.ts';
@@ -30,15 +30,25 @@ function units(u: UnitPrefs) {
   };
 }
 
-/** The headline: does the gauge agree with the thermometer, and is anything at DANGER. */
+/**
+ * The headline: whether the gauge agrees with the thermometer, led by the signal word of the most
+ * severe caution about the vessel as it is now (ACT_NOW_RULES). "If" hazards such as a flash on
+ * release stay in the list below, so they do not turn every result red.
+ */
 export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string } {
-  const danger = r.cautions.some((c) => c.signal === 'DANGER');
+  const now = r.cautions.filter((c) => (ACT_NOW_RULES as readonly string[]).includes(c.rule));
+  const lead = now.some((c) => c.signal === 'DANGER') ? 'DANGER' : now.some((c) => c.signal === 'WARNING') ? 'WARNING' : null;
   const v = r.saturation.verdict;
   const words =
-    v.verdict === 'consistent' ? 'Gauge and thermometer agree for saturated steam (within the instrument band).'
+    r.inventory.regime === 'liquid-full'
+      ? v.verdict === 'consistent'
+        ? 'By weight the vessel is liquid-full, yet the gauge reads saturation: the weight, tare or volume is wrong, or the vessel really is full of liquid. Treat it as liquid-full until checked.'
+        : 'By weight the vessel is liquid-full: pressure follows the hydraulic expansion of the liquid, not saturation.'
+    : v.verdict === 'consistent' ? 'Gauge and thermometer agree for saturated steam (within the instrument band).'
     : v.verdict === 'pressure-above-saturation' ? 'Pressure is above saturation for this temperature: air or other gas is likely present, or an instrument is off.'
     : `Pressure is below saturation for this temperature: an instrument or the atmosphere is off, or the vessel is not at equilibrium${v.superheatPossible ? ', or the steam is superheated' : ''}.`;
-  return { tone: danger || v.verdict !== 'consistent' ? 'bad' : 'ok', text: danger ? `DANGER. ${words}` : words };
+  const bad = lead !== null || v.verdict !== 'consistent' || r.inventory.regime === 'liquid-full';
+  return { tone: bad ? 'bad' : 'ok', text: lead ? `${lead}. ${words}` : words };
 }
 
 /** Everything the result card shows. */
@@ -124,7 +134,9 @@ function hazardLines(r: CheckResult, f: ReturnType<typeof units>): string[] {
     `Margin to MAWP: ${f.p(h.mawpMargin.marginPa)} (at ${formatNumber(h.mawpMargin.fractionOfLimit * 100, 3)} % of MAWP).`,
     `Margin to the relief set pressure: ${f.p(h.reliefSetMargin.marginPa)} (at ${formatNumber(h.reliefSetMargin.fractionOfLimit * 100, 3)} %).`,
   ];
-  if (h.flash) {
+  if (h.flash && h.flash.flashFraction <= 0) {
+    out.push('If liquid escapes, none of it flashes: it is below the boiling point at atmospheric pressure (it still scalds).');
+  } else if (h.flash) {
     out.push(`If liquid escapes, ${formatNumber(h.flash.flashFraction * 100, 3)} % of it flashes to steam (${formatNumber(h.flash.volumeRatio, 3)} times its volume)` +
       (h.flash.totalFlashSteamVolumeM3 !== null ? `; all of it would make ${f.v(h.flash.totalFlashSteamVolumeM3)} of steam.` : '.'));
   }

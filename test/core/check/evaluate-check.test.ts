@@ -202,3 +202,30 @@ describe('evaluateCheck over arbitrary inputs (fast-check)', () => {
     );
   });
 });
+
+describe('limits judged with the gauge band (test vessel: MAWP 1000 kPa, relief set 900 kPa, gauge 1 % of a 1600 kPa span = ±16 kPa; common practice)', () => {
+  const at = (gaugePa: number, temperatureK = 456) =>
+    evaluateCheck(testVessel(), reading({ temperatureK, pressure: { reference: 'gauge', pressurePa: gaugePa }, weight: { kind: 'net', netKg: 200 } }));
+  it('a reading exactly at MAWP, or within the gauge band below it, is a DANGER', () => {
+    for (const p of [1.0e6, 0.99e6, 0.985e6]) {
+      const r = at(p);
+      expect(r.cautions.find((c) => c.rule === 'pressure-at-mawp')?.signal).toBe('DANGER');
+    }
+    expect(rules(at(0.98e6))).not.toContain('pressure-at-mawp');
+  });
+  it('a reading exactly at the relief set pressure, or within the gauge band below it, is a WARNING', () => {
+    for (const p of [0.9e6, 0.89e6]) {
+      expect(at(p).cautions.find((c) => c.rule === 'pressure-at-relief-set')?.signal).toBe('WARNING');
+    }
+    const near = at(0.85e6);
+    expect(rules(near)).toContain('pressure-near-relief-set');
+    expect(near.cautions.find((c) => c.rule === 'pressure-near-relief-set')?.message).toMatch(/94 % of the relief set pressure/);
+  });
+  it('a vacuum now on a vessel not rated for it is a WARNING; a rated vessel or a reading within the gauge band is not flagged', () => {
+    const cool = (gaugePa: number, vacuumRated: boolean) =>
+      evaluateCheck(testVessel({ vacuumRated }), reading({ temperatureK: 363.15, pressure: { reference: 'gauge', pressurePa: gaugePa }, weight: { kind: 'net', netKg: 200 } }));
+    expect(cool(-31e3, false).cautions.find((c) => c.rule === 'vacuum-now')?.signal).toBe('WARNING');
+    expect(rules(cool(-31e3, true))).not.toContain('vacuum-now');
+    expect(rules(cool(-10e3, false))).not.toContain('vacuum-now');
+  });
+});
