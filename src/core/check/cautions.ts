@@ -10,9 +10,57 @@ export type SignalWord = 'DANGER' | 'WARNING' | 'CAUTION' | 'NOTICE';
 
 export interface Caution {
   signal: SignalWord;
+  /** The wording with quantities in °C, K (differences), kPa and kg: what the log stores. */
   message: string;
   /** Rule id from CAUTION_RULES. */
   rule: string;
+  /** The same wording as text and SI quantities, so a screen can show the person's own units. */
+  parts?: readonly CautionPart[];
+}
+
+/** A quantity inside a caution's wording, in SI. `decimals` is for the stored °C/K/kPa/kg text. */
+export type CautionQuantity =
+  | { kind: 'temperature'; K: number; decimals?: number }
+  | { kind: 'temperature-difference'; K: number; decimals?: number }
+  | { kind: 'pressure'; Pa: number; decimals?: number }
+  | { kind: 'mass'; kg: number; decimals?: number };
+export type CautionPart = string | CautionQuantity;
+
+/** A caution's wording both ways: stored text and parts. */
+export interface CautionWording {
+  message: string;
+  parts: CautionPart[];
+}
+
+/** The stored text of one quantity: °C, K, kPa or kg, with a true minus sign like the figures. */
+export function quantityText(q: CautionQuantity): string {
+  const fixed = (x: number, d: number) => x.toFixed(d).replace(/^-/, '\u2212');
+  switch (q.kind) {
+    case 'temperature': return `${fixed(q.K - 273.15, q.decimals ?? 1)} °C`;
+    case 'temperature-difference': return `${fixed(q.K, q.decimals ?? 1)} K`;
+    case 'pressure': return `${fixed(q.Pa / 1000, q.decimals ?? 1)} kPa`;
+    case 'mass': return `${fixed(q.kg, q.decimals ?? 1)} kg`;
+  }
+}
+
+/** Tagged template for caution wording: interpolate celsius(), kilopascal(), kelvinDifference(), kilograms() or plain text. */
+export function say(strings: TemplateStringsArray, ...values: (CautionPart | number)[]): CautionWording {
+  const parts: CautionPart[] = [];
+  strings.forEach((text, i) => {
+    appendPart(parts, text);
+    if (i < values.length) {
+      const v = values[i]!;
+      appendPart(parts, typeof v === 'number' ? String(v) : v);
+    }
+  });
+  return { message: parts.map((p) => (typeof p === 'string' ? p : quantityText(p))).join(''), parts };
+}
+
+/** Adds a part, merging neighbouring text so the parts stay short. */
+function appendPart(parts: CautionPart[], p: CautionPart): void {
+  const last = parts[parts.length - 1];
+  if (typeof p === 'string' && typeof last === 'string') parts[parts.length - 1] = last + p;
+  else if (p !== '') parts.push(p);
 }
 
 /** Every rule and its signal word. The thresholds live beside the code that raises each rule. */
@@ -57,9 +105,11 @@ export const ACT_NOW_RULES: readonly CautionRule[] = [
   'vacuum-now', 'liquid-full-on-heating', 'above-design-temperature', 'noncondensable-gas',
 ];
 
-/** A caution for a catalogued rule. */
-export function caution(rule: CautionRule, message: string): Caution {
-  return { signal: CAUTION_RULES[rule], message, rule };
+/** A caution for a catalogued rule; wording from `say` also carries its parts. */
+export function caution(rule: CautionRule, wording: string | CautionWording): Caution {
+  return typeof wording === 'string'
+    ? { signal: CAUTION_RULES[rule], message: wording, rule }
+    : { signal: CAUTION_RULES[rule], message: wording.message, rule, parts: wording.parts };
 }
 
 /** The note every result carries (issue 3, item 7; wording ours). */
@@ -81,14 +131,24 @@ export function withStandingNote(list: Caution[]): Caution[] {
   return [...sorted, STANDING_NOTE];
 }
 
-/** °C with one decimal, for messages. T in K. */
-export function celsius(temperatureK: number): string {
-  return `${(temperatureK - 273.15).toFixed(1)} °C`;
+/** A temperature inside a caution's wording. T in K. */
+export function celsius(temperatureK: number): CautionQuantity {
+  return { kind: 'temperature', K: temperatureK };
 }
 
-/** kPa with one decimal, for messages, with a true minus sign like the figures. p in Pa. */
-export function kilopascal(pressurePa: number): string {
-  return `${(pressurePa / 1000).toFixed(1).replace(/^-/, '\u2212')} kPa`;
+/** A pressure (gauge or absolute, as the wording says) inside a caution's wording. p in Pa. */
+export function kilopascal(pressurePa: number): CautionQuantity {
+  return { kind: 'pressure', Pa: pressurePa };
+}
+
+/** A temperature difference inside a caution's wording. ΔT in K. */
+export function kelvinDifference(differenceK: number, decimals = 1): CautionQuantity {
+  return { kind: 'temperature-difference', K: differenceK, decimals };
+}
+
+/** A mass inside a caution's wording. m in kg. */
+export function kilograms(massKg: number, decimals = 1): CautionQuantity {
+  return { kind: 'mass', kg: massKg, decimals };
 }
 
 /** Scald threshold, K: 60 °C water gives a full-thickness burn in about 5 s (American Burn Association educator's guide "Scalds: A Burning Issue"; its data go back to Moritz & Henriques 1947, from memory). */
@@ -103,6 +163,13 @@ export const SCALD_TEMPERATURE_K = 333.15;
  */
 export const NEAR_LIMIT_FRACTION = 0.9;
 
+/** Several pieces of wording as one. */
+function joined(...pieces: CautionWording[]): CautionWording {
+  const parts: CautionPart[] = [];
+  for (const w of pieces) for (const p of w.parts) appendPart(parts, p);
+  return { message: pieces.map((w) => w.message).join(''), parts };
+}
+
 /** The cautions for one evaluated check (the standing note last). */
 export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, 'cautions'>): Caution[] {
   const out: Caution[] = [];
@@ -114,36 +181,45 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   if (inv.regime === 'liquid-full') {
     const h = inv.hydraulic;
     out.push(caution('liquid-full-now', h.withinFormulation
-      ? `The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge ` +
-        `(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`
-      : `The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
+      ? joined(
+        say`The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge `,
+        say`(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`)
+      : say`The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
   }
   // A reading within the gauge's own accuracy of a limit may already be at it: the gauge band
   // (class % of span) decides "at", so a reading exactly at MAWP is never shown as below it.
   const gaugeBandPa = (vessel.instruments.pressureGauge.spanPa * vessel.instruments.pressureGauge.accuracyPercentOfSpan) / 100;
-  const within = `within the gauge's accuracy (±${kilopascal(gaugeBandPa)})`;
+  const within = say`within the gauge's accuracy (±${kilopascal(gaugeBandPa)})`;
   if (gauge > vessel.mawpGaugePa) {
-    out.push(caution('pressure-above-mawp', `Gauge pressure ${kilopascal(gauge)} is above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
+    out.push(caution('pressure-above-mawp', say`Gauge pressure ${kilopascal(gauge)} is above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
   } else if (gauge >= vessel.mawpGaugePa - gaugeBandPa) {
-    out.push(caution('pressure-at-mawp', `Gauge pressure ${kilopascal(gauge)} is at the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge) ${within}. Reduce the heat input now.`));
+    out.push(caution('pressure-at-mawp', joined(
+      say`Gauge pressure ${kilopascal(gauge)} is at the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge) `, within, say`. Reduce the heat input now.`)));
   } else if (gauge > vessel.reliefSetGaugePa) {
-    out.push(caution('pressure-above-relief-set', `Gauge pressure ${kilopascal(gauge)} is above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) but the relief device has not relieved it.`));
+    out.push(caution('pressure-above-relief-set',
+      say`Gauge pressure ${kilopascal(gauge)} is above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) but the relief device has not relieved it.`));
   } else if (gauge >= vessel.reliefSetGaugePa - gaugeBandPa) {
-    out.push(caution('pressure-at-relief-set', `Gauge pressure ${kilopascal(gauge)} is at the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) ${within}: the relief device may be lifting or simmering.`));
+    out.push(caution('pressure-at-relief-set', joined(
+      say`Gauge pressure ${kilopascal(gauge)} is at the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge) `, within,
+      say`: the relief device may be lifting or simmering.`)));
   } else if (gauge >= NEAR_LIMIT_FRACTION * vessel.reliefSetGaugePa) {
-    out.push(caution('pressure-near-relief-set', `Gauge pressure ${kilopascal(gauge)} is ${(100 * gauge / vessel.reliefSetGaugePa).toFixed(0)} % of the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge); readings from ${(100 * NEAR_LIMIT_FRACTION).toFixed(0)} % up are flagged.`));
+    out.push(caution('pressure-near-relief-set', joined(
+      say`Gauge pressure ${kilopascal(gauge)} is ${(100 * gauge / vessel.reliefSetGaugePa).toFixed(0)} % of the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge); `,
+      say`readings from ${(100 * NEAR_LIMIT_FRACTION).toFixed(0)} % up are flagged.`)));
   }
   if (!vessel.vacuumRated && gauge < -gaugeBandPa) {
-    out.push(caution('vacuum-now', `Gauge pressure ${kilopascal(gauge)}: the vessel is below atmosphere now and is not rated for vacuum. Open the vacuum breaker or vent, or stop cooling, before it buckles.`));
+    out.push(caution('vacuum-now',
+      say`Gauge pressure ${kilopascal(gauge)}: the vessel is below atmosphere now and is not rated for vacuum. Open the vacuum breaker or vent, or stop cooling, before it buckles.`));
   }
   const env = result.envelope;
   if (env && env.first.event === 'liquid-full' && inv.regime !== 'liquid-full') {
-    out.push(caution('liquid-full-on-heating',
-      `This fill goes liquid-full at ${celsius(env.first.temperatureK)}, before the steam reaches the relief set pressure` +
-      `${env.reliefSetTemperatureK === null ? '' : ` (${celsius(env.reliefSetTemperatureK)})`}. Heating past it gives hydraulic overpressure.`));
+    out.push(caution('liquid-full-on-heating', joined(
+      say`This fill goes liquid-full at ${celsius(env.first.temperatureK)}, before the steam reaches the relief set pressure`,
+      env.reliefSetTemperatureK === null ? say`` : say` (${celsius(env.reliefSetTemperatureK)})`,
+      say`. Heating past it gives hydraulic overpressure.`)));
   }
   if (T > vessel.designTemperatureK) {
-    out.push(caution('above-design-temperature', `Temperature ${celsius(T)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
+    out.push(caution('above-design-temperature', say`Temperature ${celsius(T)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
   }
 
   const v = result.saturation.verdict;
@@ -151,18 +227,18 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
     // Pressure above saturation is what a liquid-full vessel does; reading it as air would mislead.
   } else if (v.verdict === 'pressure-above-saturation') {
     const g = v.noncondensableGas;
-    out.push(caution('noncondensable-gas',
-      `Pressure is ${kilopascal(g.partialPressurePa)} above saturation for ${celsius(T)}: air or another non-condensable gas is likely ` +
-      `(about ${(100 * g.moleFraction).toFixed(1)} % by mole), or the thermometer reads low. The steam is ${g.temperatureShortfallK.toFixed(1)} K ` +
-      `colder than the gauge implies; for sterilisation, the load may not reach temperature.`));
+    out.push(caution('noncondensable-gas', joined(
+      say`Pressure is ${kilopascal(g.partialPressurePa)} above saturation for ${celsius(T)}: air or another non-condensable gas is likely `,
+      say`(about ${(100 * g.moleFraction).toFixed(1)} % by mole), or the thermometer reads low. The steam is ${kelvinDifference(g.temperatureShortfallK)} `,
+      say`colder than the gauge implies; for sterilisation, the load may not reach temperature.`)));
   } else if (v.verdict === 'pressure-below-saturation') {
-    out.push(caution('pressure-below-saturation',
-      `Pressure is ${kilopascal(-result.saturation.pressureDeviationPa)} below saturation for ${celsius(T)}: suspect a gauge or thermometer fault, ` +
-      `a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapor' : ''}.`));
+    out.push(caution('pressure-below-saturation', joined(
+      say`Pressure is ${kilopascal(-result.saturation.pressureDeviationPa)} below saturation for ${celsius(T)}: suspect a gauge or thermometer fault, `,
+      say`a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapor' : ''}.`)));
   } else {
-    out.push(caution('saturation-check-limits',
-      `Pressure and temperature agree with saturated steam within ±${result.saturation.temperatureBandK.plusMinus.toFixed(2)} K (root-sum-square of the instrument limits). ` +
-      'Agreement cannot show air below a few percent and does not replace an air-removal or non-condensable gas test.'));
+    out.push(caution('saturation-check-limits', joined(
+      say`Pressure and temperature agree with saturated steam within ±${kelvinDifference(result.saturation.temperatureBandK.plusMinus, 2)} (root-sum-square of the instrument limits). `,
+      say`Agreement cannot show air below a few percent and does not replace an air-removal or non-condensable gas test.`)));
   }
   if (r.atmosphereSource === 'site' && result.saturation.pressureBand.contributions.atmosphere > 0) {
     out.push(caution('atmosphere-assumed', 'Gauge pressure was converted with the stored site atmosphere; weather moves it by a few kPa. A barometer reading narrows the band.'));
@@ -171,7 +247,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   if (inv.regime === 'superheated') {
     if (Math.abs(inv.differenceFromReadingPa) > inv.differenceBandPa) {
       out.push(caution('superheated-pressure-mismatch',
-        `By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
+        say`By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
     }
   }
   if (inv.regime === 'two-phase') {
@@ -189,12 +265,12 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   }
   const cooled = result.hazards.cooled;
   if (cooled.collapseRisk) {
-    out.push(caution('vacuum-on-cooling',
-      `Cooled to ${celsius(cooled.temperatureK)} the vessel falls to ${kilopascal(cooled.gaugePressurePa)} gauge and it is not rated for vacuum: ` +
-      'keep the vacuum breaker or vent working before it cools sealed.'));
+    out.push(caution('vacuum-on-cooling', joined(
+      say`Cooled to ${celsius(cooled.temperatureK)} the vessel falls to ${kilopascal(cooled.gaugePressurePa)} gauge and it is not rated for vacuum: `,
+      say`keep the vacuum breaker or vent working before it cools sealed.`)));
   }
   if (T >= SCALD_TEMPERATURE_K) {
-    out.push(caution('scald', `Contents at ${celsius(T)}: contact scalds within seconds. Wear face, eye and hand protection.`));
+    out.push(caution('scald', say`Contents at ${celsius(T)}: contact scalds within seconds. Wear face, eye and hand protection.`));
   }
   return withStandingNote(out);
 }
@@ -203,21 +279,23 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
 export function cautionsForPlan(vessel: VesselSpec, plan: Omit<FillPlan, 'cautions'>): Caution[] {
   const out: Caution[] = [];
   if (plan.startState.regime === 'liquid-full') {
-    out.push(caution('plan-does-not-fit', `The charge does not fit: at the start temperature ${celsius(plan.startTemperatureK)} it would already fill the vessel with liquid.`));
+    out.push(caution('plan-does-not-fit', say`The charge does not fit: at the start temperature ${celsius(plan.startTemperatureK)} it would already fill the vessel with liquid.`));
   }
   if (plan.waterMassKg > plan.largestSafeCharge.waterMassKg) {
-    out.push(caution('plan-exceeds-safe-charge',
-      `The charge (${plan.waterMassKg.toFixed(1)} kg) is more than the largest safe charge (${plan.largestSafeCharge.waterMassKg.toFixed(1)} kg): ` +
-      `it goes liquid-full at ${plan.envelope.liquidFullTemperatureK === null ? 'no temperature' : celsius(plan.envelope.liquidFullTemperatureK)}, ` +
-      `inside the margin below the relief set pressure's saturation temperature.`));
+    out.push(caution('plan-exceeds-safe-charge', joined(
+      say`The charge (${kilograms(plan.waterMassKg)}) is more than the largest safe charge (${kilograms(plan.largestSafeCharge.waterMassKg)}): `,
+      plan.envelope.liquidFullTemperatureK === null ? say`it goes liquid-full at no temperature, ` : say`it goes liquid-full at ${celsius(plan.envelope.liquidFullTemperatureK)}, `,
+      say`inside the margin below the relief set pressure's saturation temperature.`)));
   }
   if (plan.targetGaugePressurePa > vessel.mawpGaugePa) {
-    out.push(caution('plan-target-above-mawp', `At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
+    out.push(caution('plan-target-above-mawp',
+      say`At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the MAWP (${kilopascal(vessel.mawpGaugePa)} gauge).`));
   } else if (plan.targetGaugePressurePa > vessel.reliefSetGaugePa) {
-    out.push(caution('plan-target-above-relief-set', `At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge).`));
+    out.push(caution('plan-target-above-relief-set',
+      say`At ${celsius(plan.targetTemperatureK)} saturated steam is at ${kilopascal(plan.targetGaugePressurePa)} gauge, above the relief set pressure (${kilopascal(vessel.reliefSetGaugePa)} gauge).`));
   }
   if (plan.targetTemperatureK > vessel.designTemperatureK) {
-    out.push(caution('plan-above-design-temperature', `The target ${celsius(plan.targetTemperatureK)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
+    out.push(caution('plan-above-design-temperature', say`The target ${celsius(plan.targetTemperatureK)} is above the design temperature (${celsius(vessel.designTemperatureK)}).`));
   }
   out.push(caution('plan-assumes-air-removed', 'The plan assumes the air is removed before sealing; air left in raises the pressure above saturation and lowers the steam temperature.'));
   return withStandingNote(out);

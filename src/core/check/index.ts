@@ -18,8 +18,8 @@ export {
   vesselVolume,
 } from './vessel-geometry.ts';
 export type { CylinderGeometry, HeadSpec, VesselGeometry } from './vessel-geometry.ts';
-export { ACT_NOW_RULES, CAUTION_RULES, STANDING_NOTE } from './cautions.ts';
-export type { Caution, CautionRule, SignalWord } from './cautions.ts';
+export { ACT_NOW_RULES, CAUTION_RULES, STANDING_NOTE, quantityText } from './cautions.ts';
+export type { Caution, CautionPart, CautionQuantity, CautionRule, SignalWord } from './cautions.ts';
 export type { SaturationCheck, SaturationVerdict } from './saturation-consistency.ts';
 export type { Inventory } from './inventory.ts';
 export type { Band, InventoryBands } from './uncertainty.ts';

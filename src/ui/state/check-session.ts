@@ -63,7 +63,8 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
     inputs,
     reading: e.reading,
     result: e.result,
-    cautions: e.result.cautions,
+    // The log keeps each caution's stored wording (°C, K, kPa, kg); its parts stay in the result.
+    cautions: e.result.cautions.map(({ signal, message, rule }) => ({ signal, message, rule })),
     appVersion: __APP_VERSION__,
     formulationId: e.result.formulationId,
   });

@@ -1,5 +1,6 @@
 // Fill planning: the form as typed → FillRequest → planFill → what the screen shows.
 import { errorText, type FieldUnit } from './error-text.ts';
+import { inPreferredUnits } from './caution-text.ts';
 import { isDemo } from './demo-label.ts';
 import {
   InputError, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
@@ -97,6 +98,6 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
       : { tone: 'ok', text: `Charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}.` },
     figures,
     hazards: [],
-    cautions: p.cautions,
+    cautions: p.cautions.map((c) => inPreferredUnits(c, u)),
   };
 }

@@ -6,6 +6,7 @@ import {
   type CheckResult, type VesselSpec,
 } from '../../core/index.ts';
 import { saturationChartData } from './chart-data.ts';
+import { inPreferredUnits } from './caution-text.ts';
 import { formatNumber, formatWithBand } from './format.ts';
 import { isDemo } from './demo-label.ts';
 import type { Figure, ResultView } from './result-view.ts';
@@ -119,7 +120,7 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): Resu
     verdict: verdictText(r),
     figures,
     hazards: hazardLines(r, f),
-    cautions: r.cautions,
+    cautions: r.cautions.map((c) => inPreferredUnits(c, u)),
     chart: saturationChartData({
       temperatureK: r.reading.temperatureK, absolutePressurePa: s.absolutePressurePa,
       temperatureTolK: tolK, pressureTolPa: Math.hypot(c.pressureGauge, c.atmosphere),
