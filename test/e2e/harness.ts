@@ -116,6 +116,12 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 
 /** Picks the option whose text starts with `tag` in a vessel <select>. */
 export async function pickVessel(page: Page, selector: string, tag: string): Promise<void> {
+  // The picker fills in once the vessel list has been read from the store: wait for the option.
+  await page.waitForFunction(
+    ([sel, t]) => [...((document.querySelector(sel) as HTMLSelectElement | null)?.options ?? [])].some((o) => o.text.startsWith(t)),
+    [selector, tag] as const,
+    { timeout: 10_000 },
+  ).catch(() => undefined);
   const value = await page.$eval(selector, (el, t) => {
     const opt = [...(el as HTMLSelectElement).options].find((o) => o.text.startsWith(t));
     return opt?.value ?? '';
