@@ -5,43 +5,16 @@
 // nothing about time. Run: npx vitest run --config bench/vitest.config.ts bench/idb-read.bench-run.ts
 // (BENCH_CHECKS sets the log's size, 20,000 unless told).
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { expect, it } from 'vitest';
 import { DIST, ROOT, launch, startServer, tempProfile } from '../test/e2e/harness.ts';
 import { generatedBackup } from './generated-log.ts';
+import { browserCpuS } from './browser-cpu.ts';
 
 const CHECKS = Number(process.env['BENCH_CHECKS'] ?? 20_000);
 
-/** CPU seconds so far of the browser whose profile is `profileDir` and all its child processes (Linux /proc). */
-function browserCpuS(profileDir: string): number {
-  const parent = new Map<number, number>();
-  const ticks = new Map<number, number>();
-  let root = -1;
-  for (const pid of readdirSync('/proc').filter((d) => /^\d+$/.test(d))) {
-    try {
-      const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
-      const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-      parent.set(Number(pid), Number(f[1]));
-      ticks.set(Number(pid), Number(f[11]) + Number(f[12]));
-      const cmd = readFileSync(`/proc/${pid}/cmdline`, 'utf8');
-      if (root < 0 && cmd.includes(`--user-data-dir=${profileDir}`) && !cmd.includes('--type=')) root = Number(pid);
-    } catch {
-      // The process ended while being read.
-    }
-  }
-  let total = 0;
-  for (const [pid, t] of ticks) {
-    for (let p: number | undefined = pid; p !== undefined && p > 1; p = parent.get(p)) {
-      if (p === root) {
-        total += t;
-        break;
-      }
-    }
-  }
-  return total / 100; // USER_HZ
-}
 
 // Each runs in the page as the body of an async function; `H` holds the helpers defined below.
 const WAYS: Record<string, string> = {

@@ -3,13 +3,14 @@
 // supervisor feels. Prints each figure beside its target; asserts nothing about time.
 // Run: npm run bench (builds first; ~2–4 minutes on a small machine).
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DIST, ROOT, launch, startServer, tempProfile } from '../test/e2e/harness.ts';
 import { generatedBackup } from './generated-log.ts';
+import { browserCpuS } from './browser-cpu.ts';
 
 // BENCH_CHECKS lets a quick run use a smaller log while changing the benchmark itself.
 const CHECKS = Number(process.env['BENCH_CHECKS'] ?? 100_000);
@@ -79,39 +80,8 @@ let lastCpuS = NaN;
 /** The profile folder of the running browser, so its processes can be found. */
 let profileDir = '';
 
-/**
- * CPU seconds used so far by every process of the browser (the browser process, where Chromium's
- * IndexedDB backend runs, its utility processes, the renderers): /proc, Linux only. On a shared
- * machine wall time depends on what else runs; this counts only the browser's own work.
- */
-function browserCpuS(): number {
-  const procs = readdirSync('/proc').filter((d) => /^\d+$/.test(d));
-  const parent = new Map<number, number>();
-  const ticks = new Map<number, number>();
-  let root = -1;
-  for (const pid of procs) {
-    try {
-      const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
-      const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-      parent.set(Number(pid), Number(f[1]));
-      ticks.set(Number(pid), Number(f[11]) + Number(f[12]));
-      if (root < 0 && readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes(`--user-data-dir=${profileDir}`) &&
-        !readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes('--type=')) root = Number(pid);
-    } catch {
-      // The process ended while being read.
-    }
-  }
-  let total = 0;
-  for (const [pid, t] of ticks) {
-    for (let p: number | undefined = pid; p !== undefined && p > 1; p = parent.get(p)) {
-      if (p === root) {
-        total += t;
-        break;
-      }
-    }
-  }
-  return total / 100; // USER_HZ is 100 on Linux
-}
+/** CPU seconds used so far by every process of the running browser. */
+const browserCpuSNow = (): number => browserCpuS(profileDir);
 
 // BENCH_PROFILE=<folder> records a CPU profile of the page around each timed click (and builds
 // without minifying, so the profile names functions); the figures of such a run are not comparable.
@@ -125,10 +95,10 @@ async function timeClick(page: Page, name: string, until: () => Promise<unknown>
     await cdp.send('Profiler.start');
   }
   const t0 = Date.now();
-  const cpu0 = browserCpuS();
+  const cpu0 = browserCpuSNow();
   await Promise.all([until(), page.getByRole('button', { name }).click()]);
   const ms = Date.now() - t0;
-  lastCpuS = browserCpuS() - cpu0;
+  lastCpuS = browserCpuSNow() - cpu0;
   if (cdp && PROFILE_DIR) {
     const { profile } = await cdp.send('Profiler.stop');
     mkdirSync(PROFILE_DIR, { recursive: true });
