@@ -7,17 +7,8 @@
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
 import { describe, expect, it } from 'vitest';
-import {
-  checksForVessel,
-  closeStore,
-  exportBackup,
-  exportCsv,
-  importBackup,
-  listChecks,
-  openStore,
-  verifyChains,
-  verifyStoredChains,
-} from '../src/store/index.ts';
+import { checksForVessel, closeStore, listChecks, openStore, verifyChains } from '../src/store/index.ts';
+import { exportBackup, exportCsv, importBackup, verifyStoredChains } from '../src/store/transfer.ts';
 import { getDb } from '../src/store/connection.ts';
 import { canonicalJson } from '../src/store/integrity.ts';
 import { resetPersistenceMemo } from '../src/store/settings.ts';

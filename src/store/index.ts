@@ -47,13 +47,9 @@ export {
 } from './settings.ts';
 export type { PersistenceState } from './settings.ts';
 
-// Integrity, backup, CSV
+// Integrity (the long jobs — backup, CSV, verifying the stored log — are in ./transfer.ts, loaded on demand)
 export { verifyChains, canonicalJson, computeCheckHash } from './integrity.ts';
 export type { ChainProblem, ChainStatus } from './integrity.ts';
-export { verifyStoredChains } from './verify.ts';
-export { exportBackup, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
-export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
-export { exportCsv, csvFromChecks } from './csv.ts';
 
 // Time
 export { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';

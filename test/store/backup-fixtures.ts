@@ -2,16 +2,8 @@
 // switch the store between them and to dump a database for before/after comparisons.
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
-import {
-  addVessel,
-  appendCheck,
-  closeStore,
-  exportBackup,
-  openStore,
-  retireVessel,
-  type CheckRecord,
-  type VesselRecord,
-} from '../../src/store/index.ts';
+import { addVessel, appendCheck, closeStore, openStore, retireVessel, type CheckRecord, type VesselRecord } from '../../src/store/index.ts';
+import { exportBackup } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { resetPersistenceMemo } from '../../src/store/settings.ts';
 import { SPEC, sampleCheck } from './fixtures.ts';

@@ -4,7 +4,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { IDBFactory } from 'fake-indexeddb';
-import { StoreError, closeStore, computeCheckHash, importBackup, type CheckRecord } from '../../src/store/index.ts';
+import { StoreError, closeStore, computeCheckHash, type CheckRecord } from '../../src/store/index.ts';
+import { importBackup } from '../../src/store/transfer.ts';
 import { dump, makeDeviceWithBackup, useDevice } from './backup-fixtures.ts';
 
 let source = '';

@@ -1,15 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { IDBFactory } from 'fake-indexeddb';
-import {
-  closeStore,
-  computeCheckHash,
-  exportBackup,
-  importBackup,
-  listVessels,
-  updateVessel,
-  verifyStoredChains,
-  type CheckRecord,
-} from '../../src/store/index.ts';
+import { closeStore, computeCheckHash, listVessels, updateVessel, type CheckRecord } from '../../src/store/index.ts';
+import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { BACKUP_LIMITS, parseBackup } from '../../src/store/backup.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
 import { failWritesOverQuota } from './fixtures.ts';

@@ -1,19 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { SPEC, failWritesOverQuota, sampleCheck, useFreshDatabase } from './fixtures.ts';
-import {
-  GENESIS_HASH,
-  addVessel,
-  appendCheck,
-  checksForVessel,
-  computeCheckHash,
-  correctionsOf,
-  deviceId,
-  getCheck,
-  listChecks,
-  persistenceState,
-  verifyStoredChains,
-  type CheckRecord,
-} from '../../src/store/index.ts';
+import { GENESIS_HASH, addVessel, appendCheck, checksForVessel, computeCheckHash, correctionsOf, deviceId, getCheck, listChecks, persistenceState, type CheckRecord } from '../../src/store/index.ts';
+import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 
 useFreshDatabase();

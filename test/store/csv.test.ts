@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import fc from 'fast-check';
 import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
-import { addVessel, appendCheck, exportCsv, type CheckRecord } from '../../src/store/index.ts';
+import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
+import { exportCsv } from '../../src/store/transfer.ts';
 import { csvCell, csvFromChecks, CSV_COLUMNS } from '../../src/store/csv.ts';
 
 useFreshDatabase();

@@ -4,20 +4,8 @@
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import {
-  appendCheck,
-  checksForVessel,
-  closeStore,
-  getSetting,
-  getVessel,
-  listChecks,
-  loadDraft,
-  openStore,
-  saveDraft,
-  verifyStoredChains,
-  GENESIS_HASH,
-  type StoreEvent,
-} from '../../src/store/index.ts';
+import { appendCheck, checksForVessel, closeStore, getSetting, getVessel, listChecks, loadDraft, openStore, saveDraft, GENESIS_HASH, type StoreEvent } from '../../src/store/index.ts';
+import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
 import { computeCheckHash } from '../../src/store/integrity.ts';

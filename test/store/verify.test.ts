@@ -2,7 +2,8 @@
 // (e.g. with the browser's developer tools).
 import { describe, expect, it } from 'vitest';
 import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
-import { addVessel, appendCheck, exportBackup, verifyStoredChains, type CheckRecord } from '../../src/store/index.ts';
+import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
+import { exportBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 
 useFreshDatabase();

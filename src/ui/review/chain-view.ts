@@ -1,5 +1,6 @@
 // Chain status per device, in words a supervisor can act on, pointing at the first bad record.
-import { verifyStoredChains, type ChainProblem, type ChainStatus, type LongWorkOptions } from '../../store/index.ts';
+import type { ChainProblem, ChainStatus, LongWorkOptions } from '../../store/index.ts';
+import { verifyStoredChains } from '../../store/transfer.ts';
 
 export interface ChainLine {
   deviceId: string;

@@ -1,6 +1,7 @@
 // Export and import for the review screen: file names, downloads, reading a chosen file, and the
 // import report in words. The store does the work (exportBackup, exportCsv, importBackup).
-import { exportBackup, exportCsv, importBackup, StoreError, type ImportReport, type LongWorkOptions } from '../../store/index.ts';
+import { StoreError, type LongWorkOptions } from '../../store/index.ts';
+import { exportBackup, exportCsv, importBackup, type ImportReport } from '../../store/transfer.ts';
 
 export type ExportKind = 'csv' | 'json';
 

@@ -2,7 +2,7 @@
 // importer takes all of it, and its chain verifies; one changed field is rejected by itself.
 import { describe, expect, it } from 'vitest';
 import { useFreshDatabase } from '../../store/fixtures.ts';
-import { importBackup, verifyStoredChains } from '../../../src/store/index.ts';
+import { importBackup, verifyStoredChains } from '../../../src/store/transfer.ts';
 import { generatedBackup } from '../../../bench/generated-log.ts';
 
 useFreshDatabase();
