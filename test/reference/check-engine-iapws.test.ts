@@ -7,6 +7,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { evaluateCheck, planFill, saturation, type VesselSpec } from '../../src/core/index.ts';
+import { testVessel } from '../core/check/test-vessel.ts';
 
 const SCRIPT = fileURLToPath(new URL('./check-engine-iapws.py', import.meta.url));
 
@@ -21,25 +22,12 @@ interface Answer {
 }
 
 function vessel(volumeM3: number): VesselSpec {
-  return {
-    tag: 'REF-1',
-    description: 'reference comparison vessel',
-    geometry: { shape: 'stated-volume', volumeM3 },
-    tareKg: 0,
-    mawpGaugePa: 20e6,
-    designTemperatureK: 700,
-    reliefSetGaugePa: 18e6,
-    vacuumRated: true,
-    siteAtmospherePa: 101325,
-    ambientTemperatureK: 293.15,
-    instruments: {
-      pressureGauge: { spanPa: 25e6, accuracyPercentOfSpan: 1 },
-      temperatureSensor: { kind: 'iec-60751', sensorClass: 'A' },
-      weightToleranceKg: 0.1,
-      volumeTolerancePercent: 1,
-      barometerTolerancePa: 100,
-    },
-  };
+  // The check-engine tests' invented vessel, rated high enough that no limit caution interferes.
+  return testVessel({
+    tag: 'REF-1', description: 'reference comparison vessel', geometry: { shape: 'stated-volume', volumeM3 }, tareKg: 0,
+    mawpGaugePa: 20e6, designTemperatureK: 700, reliefSetGaugePa: 18e6, vacuumRated: true,
+    instruments: { ...testVessel().instruments, pressureGauge: { spanPa: 25e6, accuracyPercentOfSpan: 1 }, weightToleranceKg: 0.1 },
+  });
 }
 
 // A fixed spread of cases (seeded, so a failure reproduces).
