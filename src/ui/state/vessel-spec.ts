@@ -35,7 +35,7 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
     case 'tare': case 'weightTol': return { kind: 'mass', unit: f.massUnit };
     case 'mawp': case 'relief': case 'atmosphere': case 'gaugeSpan': case 'barometerTol': return { kind: 'pressure', unit: f.pressureUnit };
     case 'designTemperature': case 'ambientTemperature': return { kind: 'temperature', unit: f.temperatureUnit };
-    case 'diameterM': case 'straightLengthM': return { kind: 'length', unit: formLengthUnit(f) };
+    case 'diameterM': case 'straightLengthM': case 'elevationM': return { kind: 'length', unit: formLengthUnit(f) };
     default: return undefined;
   }
 }
@@ -44,7 +44,7 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
 export function specFromForm(f: VesselForm): SpecResult {
   const errors: Partial<Record<FormField, string>> = {};
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
-    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = messageOf(e); return NaN; }
+    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field)); return NaN; }
   };
   const lengthUnit = formLengthUnit(f);
   const len = (n: number) => lengthToM(n, lengthUnit);
