@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { G2, REGION2_TABLE, region2PressureDerivatives, region2Residual } from '../../../src/core/steam/region2.ts';
-import { expectClose, plainSums } from './plain-sums.ts';
+import { expectClose, plainMagnitudes, plainSums } from './plain-sums.ts';
 
 describe('region 2 basic equation, term by term', () => {
   it('region 2, Eq. (17): γʳ and five derivatives', () => {
@@ -11,9 +11,10 @@ describe('region 2 basic equation, term by term', () => {
       fc.property(fc.double({ min: 273.15, max: 1073.15, noNaN: true }), fc.double({ min: 1, max: 100e6, noNaN: true }), (T, p) => {
         const sums = plainSums(REGION2_TABLE.I, REGION2_TABLE.J, REGION2_TABLE.n, p / 1e6, 540 / T - 0.5);
         region2Residual(T, p);
-        expectClose(G2, sums, `T=${T} p=${p}`);
+        expectClose(G2, sums, `T=${T} p=${p}`, plainMagnitudes(REGION2_TABLE.I, REGION2_TABLE.J, REGION2_TABLE.n, p / 1e6, 540 / T - 0.5));
       }),
-      { numRuns: 300 },
+      // 782.87 K, 99.99 MPa: the terms cancel to 0.0515 and a fixed 1e-13 floor once failed there.
+      { numRuns: 300, examples: [[782.8697539758671, 99993668.86224736]] },
     );
   });
   it('region2PressureDerivatives gives the same γʳ_π, γʳ_ππ as the full evaluation', () => {
