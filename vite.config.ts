@@ -70,6 +70,7 @@ export default defineConfig({
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],
     exclude: ['test/e2e/**', 'node_modules/**'],
     environment: 'node',
+    setupFiles: ['test/fast-check-seed.ts'],
     testTimeout: 60_000,
   },
 });
