@@ -2,7 +2,8 @@
 // Records are built the way appendCheck builds them (same fields, cloned to plain JSON, hashed
 // into one chain per device) and written with raw puts, because saving 100 000 checks one by one
 // through appendCheck would measure the seeding, not the work under test.
-import { computeCheckHash } from '../src/store/integrity.ts';
+import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
+import { addToLog, LOG_STORES } from '../src/store/log-layout.ts';
 import { getDb } from '../src/store/connection.ts';
 import { GENESIS_HASH, type CheckRecord, type JsonObject, type StoredCaution, type TypedInput, type VesselRecord } from '../src/store/records.ts';
 import { formatIsoWithOffset } from '../src/store/time.ts';
@@ -85,7 +86,7 @@ export async function benchChecks(device: number, count: number, vessels: Vessel
   return out;
 }
 
-/** Writes records straight into the open store, a few thousand per transaction. */
+/** Writes records straight into the open store's log, a few thousand per transaction. */
 export async function writeRaw(vessels: VesselRecord[], checks: CheckRecord[]): Promise<void> {
   const db = await getDb();
   {
@@ -94,8 +95,8 @@ export async function writeRaw(vessels: VesselRecord[], checks: CheckRecord[]): 
     await tx.done;
   }
   for (let start = 0; start < checks.length; start += 5000) {
-    const tx = db.transaction('checks', 'readwrite');
-    for (const c of checks.slice(start, start + 5000)) void tx.store.add(c);
-    await tx.done;
+    const tx = db.transaction(LOG_STORES, 'readwrite');
+    const entries = checks.slice(start, start + 5000).map((record) => ({ record, text: canonicalJson(record) }));
+    await Promise.all([addToLog(tx, entries), tx.done]);
   }
 }

@@ -6,12 +6,23 @@
 // here and identical is skipped; a check whose content does not match its hash, whose link to the
 // previous record fails, or that collides with a different record here is rejected with its
 // reason; everything else is added, all in one transaction.
-import { unwrap, type IDBPDatabase } from 'idb';
+import type { IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
-import { canonicalJson, ChainVerifier, computeCheckHashes, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
-import { isIndexKey, sortKeyed, storePages, type KeyedText } from './pages.ts';
+import { canonicalJson, ChainVerifier, contentOfText, digestMany, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import {
+  addToLog,
+  blockPages,
+  countChecks,
+  deviceBlocks,
+  locateIds,
+  LOG_STORES,
+  readRecords,
+  settle,
+  type LogBlock,
+  type NewLogEntry,
+} from './log-layout.ts';
 import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -70,36 +81,37 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   const db = await getDb();
   await sealMigratedChecks(db);
   throwIfAborted(options.signal);
-  const tx = db.transaction(['vessels', 'checks']);
+  const tx = db.transaction(['vessels', ...LOG_STORES] as const);
   const vessels = await tx.objectStore('vessels').getAll();
-  const total = await tx.objectStore('checks').count();
-  // Read in primary key order (cheaper than walking by-device-seq), each record written out as
-  // it arrives and only its text kept, then put in device-then-seq order: the order, and the
-  // records, walking by-device-seq would give (pages.ts).
-  const keyed: (KeyedText & { hash: string })[] = [];
+  const total = await countChecks(tx);
+  // Blocks come in device-then-seq order, and hold each record's canonical JSON already: the
+  // file's check lines are the stored texts, in the order read. Only each device's last record
+  // is parsed, for its chain head.
+  const checkParts: string[] = [];
+  const heads: ChainHead[] = [];
+  let device: { id: string; count: number; last: string } | null = null;
+  const closeDevice = () => {
+    if (!device) return;
+    const last = JSON.parse(device.last) as CheckRecord;
+    heads.push({ deviceId: device.id, count: device.count, headSeq: last.seq, headHash: last.hash });
+  };
   let done = 0;
-  for await (const batch of storePages<CheckRecord>(tx.objectStore('checks'), (r) => r.id)) {
+  for await (const page of blockPages(tx)) {
     throwIfAborted(options.signal);
-    for (const r of batch) {
-      if (!isIndexKey(r.deviceId, r.seq)) continue;
-      keyed.push({ a: r.deviceId, b: r.seq, text: canonicalJson(r), hash: r.hash });
+    for (const block of page) {
+      if (block.texts.length === 0) continue;
+      if (!device || device.id !== block.deviceId) {
+        closeDevice();
+        device = { id: block.deviceId, count: 0, last: '' };
+      }
+      for (const text of block.texts) checkParts.push(text);
+      device.count += block.texts.length;
+      device.last = block.texts[block.texts.length - 1]!;
+      done += block.texts.length;
     }
-    done += batch.length;
     options.onProgress?.(done, total);
   }
-  sortKeyed(keyed);
-  const heads: ChainHead[] = [];
-  for (const k of keyed) {
-    const head = heads[heads.length - 1];
-    if (head && head.deviceId === k.a) {
-      head.count += 1;
-      head.headSeq = k.b as number;
-      head.headHash = k.hash;
-    } else {
-      heads.push({ deviceId: k.a as string, count: 1, headSeq: k.b as number, headHash: k.hash });
-    }
-  }
-  const checkParts = keyed.map((k) => k.text);
+  closeDevice();
   await tx.done;
   const exportedAt = formatIsoWithOffset(new Date());
   return (
@@ -315,68 +327,35 @@ function requireUnique(field: string, ids: string[]): void {
 
 interface MergePlan {
   vesselWrites: VesselRecord[];
-  checkAdds: CheckRecord[];
+  checkAdds: NewLogEntry[];
   report: ImportReport;
-}
-
-/**
- * Requests per window while reading or writing a whole file's worth of records in one transaction.
- * Issuing 100 000 at once would queue 100 000 request objects (and, for writes, their cloned
- * records) before the first one runs; windows keep that bounded, and cost one round trip each.
- */
-const REQUEST_WINDOW = 1000;
-
-/** `request` for every item, at most REQUEST_WINDOW outstanding; results in item order. */
-async function inWindows<T, R>(items: readonly T[], request: (item: T) => Promise<R>): Promise<R[]> {
-  const out: R[] = [];
-  for (let start = 0; start < items.length; start += REQUEST_WINDOW) {
-    out.push(...(await Promise.all(items.slice(start, start + REQUEST_WINDOW).map(request))));
-  }
-  return out;
-}
-
-/** Keys read per getAllKeys while looking for the file's ids. */
-const KEY_PAGE = 10 * REQUEST_WINDOW;
-
-/**
- * Which of `ids` the store holds. Instead of one get per id, the sorted ids are taken
- * REQUEST_WINDOW at a time and the keys the store holds between the first and last id of each
- * window are read with getAllKeys, at most KEY_PAGE per request. The windows' ranges do not
- * overlap, so all of it reads each stored key at most once, in about ids / 1000 + stored / 10 000
- * requests, with at most KEY_PAGE keys in hand at a time.
- */
-export async function storedIds(
-  store: { getAllKeys(range: IDBKeyRange, count: number): Promise<string[]> },
-  ids: readonly string[],
-  pageSize = KEY_PAGE,
-): Promise<Set<string>> {
-  const sorted = [...ids].sort(); // IndexedDB orders string keys by code units too
-  const wanted = new Set(ids);
-  const found = new Set<string>();
-  for (let start = 0; start < sorted.length; start += REQUEST_WINDOW) {
-    const last = sorted[Math.min(sorted.length, start + REQUEST_WINDOW) - 1]!;
-    let range = IDBKeyRange.bound(sorted[start]!, last);
-    for (;;) {
-      const keys = await store.getAllKeys(range, pageSize);
-      for (const key of keys) if (wanted.has(key)) found.add(key);
-      const after = keys[keys.length - 1];
-      if (keys.length < pageSize || after === undefined || after === last) break;
-      range = IDBKeyRange.bound(after, last, true);
-    }
-  }
-  return found;
 }
 
 function byInstant(a: string, b: string): number {
   return (parseIsoWithOffset(a) ?? 0) - (parseIsoWithOffset(b) ?? 0);
 }
 
+/** Stored records of one device by seq, each parsed only when asked for. */
+class StoredSeqs {
+  private readonly texts = new Map<number, string>();
+  private readonly parsed = new Map<number, CheckRecord>();
+  constructor(blocks: readonly LogBlock[]) {
+    for (const b of blocks) b.seqs.forEach((seq, i) => this.texts.set(seq, b.texts[i]!));
+  }
+  get(seq: number): CheckRecord | undefined {
+    let r = this.parsed.get(seq);
+    if (r) return r;
+    const text = this.texts.get(seq);
+    if (text === undefined) return undefined;
+    this.parsed.set(seq, (r = JSON.parse(text) as CheckRecord));
+    return r;
+  }
+}
+
 /** Reads what the store holds for the file's records (one read-only transaction), then decides. */
-async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hashes: string[]): Promise<MergePlan> {
-  const tx = db.transaction(['vessels', 'checks']);
+async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, texts: string[], hashes: string[]): Promise<MergePlan> {
+  const tx = db.transaction(['vessels', ...LOG_STORES] as const);
   const vesselStore = tx.objectStore('vessels');
-  const checkStore = tx.objectStore('checks');
-  const bySeq = checkStore.index('by-device-seq');
   const devices = new Map<string, number[]>(); // deviceId -> indexes into doc.checks
   doc.checks.forEach((c, i) => {
     let list = devices.get(c.deviceId);
@@ -384,26 +363,28 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
     list.push(i);
   });
   const deviceIds = [...devices.keys()].sort();
-  // One read snapshot with nothing but IndexedDB requests awaited inside it, issued REQUEST_WINDOW
-  // at a time (each window as soon as the previous one has answered).
+  // One read snapshot with nothing but IndexedDB requests awaited inside it.
   const [existingVessels, existingById, existingRanges] = await Promise.all([
-    inWindows(doc.vessels, (v) => vesselStore.get(v.id)),
+    Promise.all(doc.vessels.map((v) => vesselStore.get(v.id))),
     (async () => {
-      const here = await storedIds(checkStore, doc.checks.map((c) => c.id));
-      const hits = doc.checks.filter((c) => here.has(c.id));
-      const records = new Map((await inWindows(hits, (c) => checkStore.get(c.id))).map((r, i) => [hits[i]!.id, r]));
+      const places = await locateIds(tx, doc.checks.map((c) => c.id));
+      const hits = doc.checks.filter((c) => places.get(c.id)?.at !== undefined);
+      const found = await readRecords(tx, hits.map((c) => {
+        const at = places.get(c.id)!.at!;
+        return { deviceId: at[0], seq: at[1] };
+      }));
+      const records = new Map(hits.map((c, i) => [c.id, found[i]] as const));
       return doc.checks.map((c) => records.get(c.id));
     })(),
     Promise.all(
-      deviceIds.map((d) => {
+      deviceIds.map(async (d) => {
         let lo = Infinity;
         let hi = 0;
         for (const i of devices.get(d)!) {
           lo = Math.min(lo, doc.checks[i]!.seq);
           hi = Math.max(hi, doc.checks[i]!.seq);
         }
-        lo = Math.max(1, lo - 1);
-        return bySeq.getAll(IDBKeyRange.bound([d, lo], [d, hi]));
+        return new StoredSeqs(await deviceBlocks(tx, d, Math.max(1, lo - 1), hi));
       }),
     ),
     tx.done,
@@ -431,11 +412,11 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
     }
   });
 
-  const checkAdds: CheckRecord[] = [];
+  const checkAdds: NewLogEntry[] = [];
   const verifier = new ChainVerifier();
   deviceIds.forEach((d, deviceIndex) => {
     const order = devices.get(d)!.slice().sort((a, b) => doc.checks[a]!.seq - doc.checks[b]!.seq || a - b);
-    const hereBySeq = new Map(existingRanges[deviceIndex]!.map((r) => [r.seq, r]));
+    const here = existingRanges[deviceIndex]!;
     const fileBySeq = new Map<number, CheckRecord>();
     for (const i of order) {
       const r = doc.checks[i]!;
@@ -448,7 +429,7 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
       const reject = (why: string) => report.checks.rejected.push({ id: r.id, why });
       const same = existingById[i];
       if (same) {
-        if (canonicalJson(same) === canonicalJson(r)) report.checks.skipped.push({ id: r.id, why: 'already here, identical' });
+        if (canonicalJson(same) === texts[i]) report.checks.skipped.push({ id: r.id, why: 'already here, identical' });
         else reject('a different check with this id is already here');
         continue;
       }
@@ -456,19 +437,19 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
         reject(`seq ${r.seq}: content does not match its hash (changed after it was saved)`);
         continue;
       }
-      const occupant = hereBySeq.get(r.seq);
+      const occupant = here.get(r.seq);
       if (occupant || taken.has(r.seq)) {
         reject(`seq ${r.seq} of device ${d} is already taken by check ${occupant ? occupant.id : 'earlier in this file'}`);
         continue;
       }
-      const prev = r.seq === 1 ? GENESIS_HASH : (hereBySeq.get(r.seq - 1) ?? fileBySeq.get(r.seq - 1))?.hash;
+      const prev = r.seq === 1 ? GENESIS_HASH : (here.get(r.seq - 1) ?? fileBySeq.get(r.seq - 1))?.hash;
       if (prev !== undefined && prev !== r.prevHash) {
         reject(`seq ${r.seq}: prevHash is not the hash of seq ${r.seq - 1} (a record was changed or swapped)`);
         continue;
       }
       if (prev === undefined) report.warnings.push(`Device ${d}: seq ${r.seq - 1} is missing, so seq ${r.seq} could not be linked.`);
       taken.add(r.seq);
-      checkAdds.push(r);
+      checkAdds.push({ record: r, text: texts[i]! });
       report.checks.added.push(r.id);
     }
   });
@@ -485,8 +466,9 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, hash
   return { vesselWrites, checkAdds, report };
 }
 
+/** Writes the plan in one strict transaction: all of it, or (on any failure or a cancel) none. */
 async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options: LongWorkOptions, base: number, total: number): Promise<void> {
-  const tx = db.transaction(['vessels', 'checks'], 'readwrite', STRICT);
+  const tx = db.transaction(['vessels', ...LOG_STORES] as const, 'readwrite', STRICT);
   let cancelled = false;
   const onAbort = () => {
     try {
@@ -497,42 +479,20 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
     }
   };
   options.signal?.addEventListener('abort', onAbort);
-  const every = progressStep(total);
-  const work = () => {
-    // Plain requests, REQUEST_WINDOW at a time, the next window issued from the success of the
-    // last request of the one before (requests run in order), so no await per record and no
-    // non-IDB work inside the transaction. The first request that fails aborts it, which tx.done
-    // reports; so does an exception thrown while issuing a later window.
-    const raw = unwrap(tx);
-    const vessels = raw.objectStore('vessels');
-    const checks = raw.objectStore('checks');
-    const vesselCount = plan.vesselWrites.length;
-    const count = vesselCount + plan.checkAdds.length;
-    const issue = (from: number) => {
-      const to = Math.min(count, from + REQUEST_WINDOW);
-      let request: IDBRequest | null = null;
-      for (let i = from; i < to; i += 1) {
-        // add(), never put(), for checks: one that is somehow already here aborts the lot instead of being overwritten.
-        request = i < vesselCount ? vessels.put(plan.vesselWrites[i]!) : checks.add(plan.checkAdds[i - vesselCount]!);
-        if ((i + 1) % every === 0) {
-          const at = base + i + 1;
-          request.addEventListener('success', () => options.onProgress?.(at, total));
-        }
-      }
-      if (request && to < count) request.addEventListener('success', () => cancelled || issue(to));
+  const work = async () => {
+    const vessels = tx.objectStore('vessels');
+    let done = base;
+    const step = (n: number) => {
+      done += n;
+      if (!cancelled) options.onProgress?.(done, total);
     };
-    issue(0);
+    await Promise.all([
+      ...plan.vesselWrites.map((v) => vessels.put(v).then(() => step(1))),
+      addToLog(tx, plan.checkAdds, step),
+    ]);
   };
   try {
-    try {
-      work();
-    } catch (error) {
-      // A request refused on the spot (none is expected of validated records): undo the ones issued.
-      tx.abort();
-      tx.done.catch(() => {});
-      throw error;
-    }
-    await tx.done;
+    await settle(tx, work());
   } catch (error) {
     if (cancelled || options.signal?.aborted) throw new StoreError('cancelled', 'Import cancelled; nothing was changed.');
     if ((error as { name?: unknown }).name === 'ConstraintError') throw error;
@@ -555,10 +515,13 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   const db = await getDb();
   await sealMigratedChecks(db);
   const total = doc.checks.length * 2 + doc.vessels.length;
-  // Hashed before any transaction opens (WebCrypto is not IndexedDB work), many digests at a time.
+  // Each record's canonical text is what the store keeps; its content (the text without the
+  // hash) is what the hash covers. Hashed before any transaction opens (WebCrypto is not
+  // IndexedDB work), many digests at a time.
+  const texts = doc.checks.map((c) => canonicalJson(c));
   const every = progressStep(total);
   let reported = 0;
-  const hashes = await computeCheckHashes(doc.checks, {
+  const hashes = await digestMany(texts.length, (i) => contentOfText(texts[i]!), {
     signal: options.signal,
     onProgress: (done) => {
       if (done - reported < every) return;
@@ -568,7 +531,7 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   });
   for (let attempt = 0; ; attempt += 1) {
     throwIfAborted(options.signal);
-    const plan = await planMerge(db, doc, hashes);
+    const plan = await planMerge(db, doc, texts, hashes);
     throwIfAborted(options.signal);
     try {
       // Done so far: every check hashed, plus every record the plan does not write.

@@ -3,7 +3,20 @@
 import type { IDBPDatabase } from 'idb';
 import { getDb, setAfterOpen } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
-import { computeCheckHash } from './integrity.ts';
+import { canonicalJson, computeCheckHash } from './integrity.ts';
+import {
+  addToLog,
+  blockPages,
+  chainHead,
+  countChecks,
+  locateIds,
+  LogConflict,
+  LOG_STORES,
+  pageRows,
+  readRecords,
+  settle,
+  type LogBlock,
+} from './log-layout.ts';
 import {
   GENESIS_HASH,
   type CheckCursor,
@@ -76,15 +89,6 @@ export function requireCautions(field: string, value: unknown): StoredCaution[] 
   return value as StoredCaution[];
 }
 
-/** The last record of a device's chain, read through `index` (inside whatever transaction holds it). */
-async function chainHead(
-  index: { openCursor(range: IDBKeyRange, direction: IDBCursorDirection): Promise<{ value: CheckRecord } | null> },
-  device: string,
-): Promise<{ seq: number; hash: string }> {
-  const cursor = await index.openCursor(IDBKeyRange.bound([device, -Infinity], [device, Infinity]), 'prev');
-  return cursor ? { seq: cursor.value.seq, hash: cursor.value.hash } : { seq: 0, hash: GENESIS_HASH };
-}
-
 /**
  * Saves a check to the log and returns the saved record. The record counts as saved only when this
  * resolves (its transaction committed with strict durability). The hash is computed before the
@@ -120,7 +124,7 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
   const vessel = await db.get('vessels', input.vesselId);
   if (!vessel) throw new StoreError('not-found', `No vessel with id ${input.vesselId}.`, 'vesselId');
   if (vessel.retired && corrects === null) throw invalid('vesselId', `vessel ${vessel.tag} is retired; it takes no new checks`);
-  if (corrects !== null && !(await db.get('checks', corrects))) {
+  if (corrects !== null && !(await hasCheck(db, corrects))) {
     throw new StoreError('not-found', `No check with id ${corrects} to correct.`, 'corrects');
   }
   const device = await deviceId();
@@ -146,27 +150,29 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
   };
 
   for (let attempt = 0; attempt < CHAIN_RETRIES; attempt += 1) {
-    const head = await chainHead(db.transaction('checks').store.index('by-device-seq'), device);
+    const head = (await chainHead(db.transaction(LOG_STORES), device)) ?? { seq: 0, hash: GENESIS_HASH };
     const unsigned = { ...base, seq: head.seq + 1, prevHash: head.hash };
     const record: CheckRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
+    const text = canonicalJson(record);
 
-    const tx = db.transaction('checks', 'readwrite', STRICT);
+    const tx = db.transaction(LOG_STORES, 'readwrite', STRICT);
     const done = tx.done;
     done.catch(() => {}); // observed below; keeps an abort from surfacing as unhandled
     let moved = false;
     try {
-      const now = await chainHead(tx.store.index('by-device-seq'), device);
+      // Read-write transactions over the same stores run one at a time, so a head unchanged here
+      // stays unchanged until this one commits.
+      const now = (await chainHead(tx, device)) ?? { seq: 0, hash: GENESIS_HASH };
       if (now.seq !== head.seq || now.hash !== head.hash) {
         moved = true;
         tx.abort();
+        await done;
       } else {
-        await tx.store.add(record);
+        await settle(tx, addToLog(tx, [{ record, text }]));
       }
-      await done;
     } catch (error) {
-      if (moved) continue;
-      // Another tab took this seq between our read and write: the unique index refused ours.
-      if ((error as { name?: unknown }).name === 'ConstraintError') continue;
+      // Moved, or (another tab between our reads) the seq or id was taken: start again from the new head.
+      if (moved || error instanceof LogConflict) continue;
       throw storeErrorFromWrite(error, 'Saving the check');
     }
     void askPersistenceOnce();
@@ -177,13 +183,30 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
 
 /** One check, or undefined. */
 export async function getCheck(id: string): Promise<CheckRecord | undefined> {
-  return (await getDb()).get('checks', id);
+  if (typeof id !== 'string') return undefined;
+  const tx = (await getDb()).transaction(LOG_STORES);
+  const at = (await locateIds(tx, [id])).get(id)?.at;
+  if (!at) return undefined;
+  const [record] = await readRecords(tx, [{ deviceId: at[0], seq: at[1] }]);
+  return record;
+}
+
+/** Whether a check with this id is stored. */
+async function hasCheck(db: IDBPDatabase<TanksideDB>, id: string): Promise<boolean> {
+  return (await locateIds(db.transaction(LOG_STORES), [id])).get(id)?.at !== undefined;
 }
 
 /** The corrections saved for a check, oldest first (a correction may itself be corrected). */
 export async function correctionsOf(checkId: string): Promise<CheckRecord[]> {
   requireUuid('check id', checkId);
-  const found = await (await getDb()).getAllFromIndex('checks', 'by-corrects', checkId);
+  const tx = (await getDb()).transaction(LOG_STORES);
+  const by = (await locateIds(tx, [checkId])).get(checkId)?.by ?? [];
+  const places = await locateIds(tx, by);
+  const refs = by.flatMap((id) => {
+    const at = places.get(id)?.at;
+    return at ? [{ deviceId: at[0], seq: at[1] }] : [];
+  });
+  const found = (await readRecords(tx, refs)).filter((r): r is CheckRecord => r !== undefined);
   return found.sort((a, b) => a.timeMs - b.timeMs || (a.id < b.id ? -1 : 1));
 }
 
@@ -193,100 +216,122 @@ function requireLimit(limit: number | undefined): number {
   return n;
 }
 
-async function page(
-  db: IDBPDatabase<TanksideDB>,
-  indexName: 'by-time' | 'by-vessel-time',
-  range: IDBKeyRange | null,
-  limit: number,
-): Promise<CheckPage> {
-  const checks: CheckRecord[] = [];
-  if (!range && indexName === 'by-vessel-time') return { checks, next: null };
-  let cursor = await db.transaction('checks').store.index(indexName).openCursor(range, 'prev');
-  while (cursor && checks.length < limit) {
-    checks.push(cursor.value);
-    cursor = await cursor.continue();
+function requireCursor(field: string, cursor: CheckCursor): CheckCursor {
+  if (typeof cursor !== 'object' || cursor === null || !Number.isFinite(cursor.timeMs) || typeof cursor.id !== 'string') {
+    throw invalid(field, 'expected the `next` cursor of a previous page');
   }
-  const last = checks[checks.length - 1];
-  return { checks, next: cursor && last ? { timeMs: last.timeMs, id: last.id } : null };
+  return cursor;
 }
 
-function requireCursor(before: CheckCursor): CheckCursor {
-  if (typeof before !== 'object' || before === null || !Number.isFinite(before.timeMs) || typeof before.id !== 'string') {
-    throw invalid('before', 'expected the `next` cursor of a previous page');
-  }
-  return before;
+/** Options of a listing; see listChecks. */
+export interface ListOptions {
+  limit?: number;
+  /** Newest first (the default) or oldest first. */
+  order?: 'newest' | 'oldest';
+  /** The previous page's `next`. */
+  before?: CheckCursor;
 }
 
-/**
- * A page of the whole log, newest first (by the instant taken; ties by id). Walks the by-time
- * index with a cursor: only `limit` records (1–1000, default 50) are read.
- */
-export async function listChecks(options: { limit?: number; before?: CheckCursor } = {}): Promise<CheckPage> {
+async function listPage(vesselId: string | null, fromMs: number, toMs: number, options: ListOptions): Promise<CheckPage> {
   const limit = requireLimit(options.limit);
-  const range = options.before
-    ? IDBKeyRange.upperBound([requireCursor(options.before).timeMs, options.before.id], true)
-    : null;
-  return page(await getDb(), 'by-time', range, limit);
+  const order = options.order ?? 'newest';
+  if (order !== 'newest' && order !== 'oldest') throw invalid('order', 'expected "newest" or "oldest"');
+  const cursor = options.before === undefined ? undefined : requireCursor('before', options.before);
+  const tx = (await getDb()).transaction(LOG_STORES);
+  const { rows, more } = await pageRows(tx, {
+    vesselId, fromMs, toMs, limit, order,
+    ...(order === 'newest' ? { before: cursor } : { after: cursor }),
+  });
+  const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
+  const checks = records.filter((r): r is CheckRecord => r !== undefined);
+  const last = rows[rows.length - 1];
+  return { checks, next: more && last ? { timeMs: last[0], id: last[1] } : null };
 }
 
 /**
- * A page of one vessel's checks, newest first, taken from `from` to `to` inclusive (either open).
- * Pass the previous page's `next` as `before` for the next page.
+ * A page of the whole log, newest first unless `order` is 'oldest' (by the instant taken; ties by
+ * id). Only the month buckets the page reaches and the blocks of its `limit` (1–1000, default 50)
+ * checks are read. Pass the previous page's `next` as `before` for the next page.
+ */
+export async function listChecks(options: ListOptions = {}): Promise<CheckPage> {
+  return listPage(null, -Infinity, Infinity, options);
+}
+
+/**
+ * A page of one vessel's checks, newest first unless `order` is 'oldest', taken from `from` to
+ * `to` inclusive (either open). Pass the previous page's `next` as `before` for the next page.
  */
 export async function checksForVessel(
   vesselId: string,
-  options: { from?: Date; to?: Date; limit?: number; before?: CheckCursor } = {},
+  options: ListOptions & { from?: Date; to?: Date } = {},
 ): Promise<CheckPage> {
   requireUuid('vesselId', vesselId);
-  const limit = requireLimit(options.limit);
   const fromMs = options.from ? options.from.getTime() : -Infinity;
   const toMs = options.to ? options.to.getTime() : Infinity;
   if (Number.isNaN(fromMs)) throw invalid('from', 'expected a valid Date');
   if (Number.isNaN(toMs)) throw invalid('to', 'expected a valid Date');
-  // Key order: a shorter array before a longer one with the same start; any array after any string.
-  let upper: unknown[] = [vesselId, toMs, []];
-  let upperOpen = false;
-  if (options.before) {
-    const b = requireCursor(options.before);
-    if (b.timeMs <= toMs) {
-      upper = [vesselId, b.timeMs, b.id];
-      upperOpen = true;
-    }
-  }
-  const lower = [vesselId, fromMs];
-  if (indexedDB.cmp(lower, upper) > 0) return { checks: [], next: null };
-  return page(await getDb(), 'by-vessel-time', IDBKeyRange.bound(lower, upper, false, upperOpen), limit);
+  return listPage(vesselId, fromMs, toMs, options);
+}
+
+/**
+ * A page of every vessel's checks taken from `from` to `to` inclusive (either open), newest first
+ * unless `order` is 'oldest'.
+ */
+export async function checksBetween(options: ListOptions & { from?: Date; to?: Date } = {}): Promise<CheckPage> {
+  const fromMs = options.from ? options.from.getTime() : -Infinity;
+  const toMs = options.to ? options.to.getTime() : Infinity;
+  if (Number.isNaN(fromMs)) throw invalid('from', 'expected a valid Date');
+  if (Number.isNaN(toMs)) throw invalid('to', 'expected a valid Date');
+  return listPage(null, fromMs, toMs, options);
+}
+
+/** How many checks are stored (one vessel's when given). Reads the month buckets, not the checks. */
+export async function countStoredChecks(vesselId?: string): Promise<number> {
+  if (vesselId !== undefined) requireUuid('vesselId', vesselId);
+  return countChecks((await getDb()).transaction(LOG_STORES), vesselId);
 }
 
 /**
  * Hashes checks migrated from a schema before v3 (they joined the chain with empty hashes, since
- * WebCrypto cannot run inside the upgrade transaction). Reads them, hashes outside any transaction,
- * then writes all hashes in one strict transaction that first re-checks nothing changed meanwhile.
- * Idempotent; a no-op once done.
+ * WebCrypto cannot run inside the upgrade transaction). Reads their blocks, hashes outside any
+ * transaction, then rewrites those blocks in one strict transaction that first re-checks that
+ * nothing changed meanwhile. Idempotent; a no-op once done.
  */
 export async function sealMigratedChecks(db: IDBPDatabase<TanksideDB>): Promise<void> {
   if ((await db.get('settings', SETTING_SEAL_PENDING)) !== true) return;
-  const pending = (await db.getAllFromIndex('checks', 'by-device-seq')).filter((r) => r.hash === '');
-  pending.sort((a, b) => (a.deviceId < b.deviceId ? -1 : a.deviceId > b.deviceId ? 1 : a.seq - b.seq));
-  const sealed: CheckRecord[] = [];
-  let prev: { deviceId: string; hash: string } | null = null;
-  for (const r of pending) {
-    // Migrated checks are the first records of their device's chain, seq 1, 2, 3 ...
-    const prevHash: string = prev && prev.deviceId === r.deviceId ? prev.hash : GENESIS_HASH;
-    const unsigned = { ...r, prevHash };
-    const { hash: _h, ...content } = unsigned;
-    const hash = await computeCheckHash(content);
-    sealed.push({ ...unsigned, hash });
-    prev = { deviceId: r.deviceId, hash };
+  const read = db.transaction(LOG_STORES);
+  const pending: LogBlock[] = [];
+  for await (const page of blockPages(read)) {
+    for (const block of page) if (block.texts.some((t) => t.includes(UNSEALED))) pending.push(block);
   }
-  const tx = db.transaction(['checks', 'settings'], 'readwrite', STRICT);
+  const rewritten: { before: LogBlock; after: LogBlock }[] = [];
+  let prev: { deviceId: string; hash: string } | null = null;
+  for (const block of pending) {
+    const texts: string[] = [];
+    for (const text of block.texts) {
+      const r = JSON.parse(text) as CheckRecord;
+      if (r.hash !== '') {
+        texts.push(text);
+        prev = { deviceId: r.deviceId, hash: r.hash };
+        continue;
+      }
+      // Migrated checks are the first records of their device's chain, seq 1, 2, 3 ...
+      const prevHash: string = prev && prev.deviceId === r.deviceId ? prev.hash : GENESIS_HASH;
+      const { hash: _h, ...content } = { ...r, prevHash };
+      const hash = await computeCheckHash(content);
+      texts.push(canonicalJson({ ...content, hash }));
+      prev = { deviceId: r.deviceId, hash };
+    }
+    rewritten.push({ before: block, after: { ...block, texts } });
+  }
+  const tx = db.transaction([...LOG_STORES, 'settings'] as const, 'readwrite', STRICT);
   const writeAll = async () => {
     if ((await tx.objectStore('settings').get(SETTING_SEAL_PENDING)) !== true) return;
-    for (const r of sealed) {
-      const current = await tx.objectStore('checks').get(r.id);
-      if (!current || current.hash !== '') continue;
+    for (const { before, after } of rewritten) {
+      const current = await tx.objectStore('logBlocks').get([before.deviceId, before.firstSeq]);
+      if (!current || current.texts.length !== before.texts.length || current.texts.some((t, i) => t !== before.texts[i])) continue;
       // The one place a saved check is rewritten: filling in the hash a migration could not.
-      await tx.objectStore('checks').put(r);
+      await tx.objectStore('logBlocks').put(after);
     }
     await tx.objectStore('settings').delete(SETTING_SEAL_PENDING);
   };
@@ -297,6 +342,9 @@ export async function sealMigratedChecks(db: IDBPDatabase<TanksideDB>): Promise<
     throw storeErrorFromWrite(error, 'Sealing migrated checks');
   }
 }
+
+/** How an unsealed record's text shows its empty hash (canonical JSON, keys sorted). */
+const UNSEALED = ',"hash":"",';
 
 setAfterOpen(async (db) => {
   try {

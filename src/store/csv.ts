@@ -2,8 +2,8 @@
 // cells neutralised against spreadsheet formula injection. RFC 4180 quoting, CRLF line ends.
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
-import { isIndexKey, sortKeyed, storePages, type KeyedText } from './pages.ts';
-import type { CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
+import { blockPages, countChecks, LOG_STORES, pageRows, readRecords } from './log-layout.ts';
+import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
 import { requireUuid } from './validate.ts';
 
 type Cell = string | number | boolean | null;
@@ -121,49 +121,52 @@ export function csvFromChecks(records: Iterable<CheckRecord>): string {
 const PAGE = 1000;
 
 /**
- * The log (all of it, or one vessel's) as CSV text, oldest first, read in pages from one snapshot.
+ * The log (all of it, or one vessel's) as CSV text, oldest first, read from one snapshot.
  * @throws StoreError('invalid-record') for a bad vesselId; ('cancelled') if options.signal aborts
  */
 export async function exportCsv(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string> {
   if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
   const db = await getDb();
-  const tx = db.transaction('checks');
-  const index = options.vesselId ? tx.store.index('by-vessel-time') : tx.store.index('by-time');
-  const all: IDBKeyRange | undefined = options.vesselId
-    ? IDBKeyRange.bound([options.vesselId], [options.vesselId, Infinity, []])
-    : undefined;
-  const total = options.vesselId ? await index.count(all) : await tx.store.count();
+  const tx = db.transaction(LOG_STORES);
+  const total = await countChecks(tx, options.vesselId);
   // One string per page (its rows joined), joined once at the end.
   const parts: string[] = [csvFromChecks([]).slice(0, -2)];
   let done = 0;
-  if (!options.vesselId) {
-    // The whole log: read in primary key order (cheaper than walking by-time), each row written
-    // as it arrives and only its text kept, then put in by-time order (pages.ts).
-    const keyed: KeyedText[] = [];
-    for await (const batch of storePages<CheckRecord>(tx.store, (r) => r.id)) {
+  if (options.vesselId === undefined) {
+    // The whole log: its blocks read in their own order (device, then seq), each row written as
+    // it arrives and only its text kept, then put in time order.
+    const keyed: { timeMs: number; id: string; text: string }[] = [];
+    for await (const page of blockPages(tx)) {
       throwIfAborted(options.signal);
-      for (const r of batch) if (isIndexKey(r.timeMs, r.id)) keyed.push({ a: r.timeMs, b: r.id, text: csvRow(r) });
-      done += batch.length;
+      for (const block of page) {
+        for (const text of block.texts) {
+          const r = JSON.parse(text) as CheckRecord;
+          keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
+        }
+        done += block.texts.length;
+      }
       options.onProgress?.(done, total);
     }
-    for (const k of sortKeyed(keyed)) parts.push(k.text);
+    // By (timeMs, id), the order every listing uses.
+    keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+    for (const k of keyed) parts.push(k.text);
     await tx.done;
     return parts.join('\r\n') + '\r\n';
   }
-  const rangeAfter = (last: CheckRecord): IDBKeyRange =>
-    IDBKeyRange.bound([last.vesselId, last.timeMs, last.id], [options.vesselId, Infinity, []], true);
-  let next = index.getAll(all, PAGE);
+  // One vessel: its month buckets oldest first, a page of rows at a time, each page's blocks read once.
+  let after: CheckCursor | undefined;
   for (;;) {
-    const batch: CheckRecord[] = await next;
+    const { rows, more } = await pageRows(tx, { vesselId: options.vesselId, fromMs: -Infinity, toMs: Infinity, after, order: 'oldest', limit: PAGE });
     throwIfAborted(options.signal);
-    if (batch.length === 0) break;
-    // The next page is read while this one is written out (same snapshot: same transaction).
-    next = batch.length === PAGE ? index.getAll(rangeAfter(batch[batch.length - 1]!), PAGE) : Promise.resolve([]);
-    const rows = new Array<string>(batch.length);
-    for (let i = 0; i < batch.length; i += 1) rows[i] = csvRow(batch[i]!);
-    parts.push(rows.join('\r\n'));
-    done += batch.length;
+    const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
+    const lines: string[] = [];
+    for (const r of records) if (r) lines.push(csvRow(r));
+    if (lines.length > 0) parts.push(lines.join('\r\n'));
+    done += rows.length;
     options.onProgress?.(done, total);
+    const last = rows[rows.length - 1];
+    if (!more || !last) break;
+    after = { timeMs: last[0], id: last[1] };
   }
   await tx.done;
   return parts.join('\r\n') + '\r\n';

@@ -32,7 +32,8 @@ export type {
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
 
 // Checks (append-only)
-export { appendCheck, getCheck, listChecks, checksForVessel, correctionsOf } from './checks.ts';
+export { appendCheck, getCheck, listChecks, checksForVessel, checksBetween, countStoredChecks, correctionsOf } from './checks.ts';
+export type { ListOptions } from './checks.ts';
 
 // Settings, drafts, device, persistence
 export {

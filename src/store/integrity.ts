@@ -306,18 +306,29 @@ export const HASH_IN_FLIGHT = 256;
  * @throws StoreError('cancelled') if `signal` aborts (checked before each group is issued); the
  *   digests already issued are left to finish unobserved, and nothing is returned
  */
-export async function computeCheckHashes(
+export function computeCheckHashes(
   records: readonly (CheckRecord | Omit<CheckRecord, 'hash'>)[],
   options: { signal?: AbortSignal | undefined; onProgress?: ((done: number) => void) | undefined } = {},
 ): Promise<string[]> {
-  const hashes = new Array<string>(records.length);
+  return digestMany(records.length, (i) => hashedContent(records[i]!), options);
+}
+
+/** SHA-256 hex of `count` texts, `textAt(i)` built just before it is digested; as computeCheckHashes. */
+export async function digestMany(
+  count: number,
+  textAt: (i: number) => string,
+  options: { signal?: AbortSignal | undefined; onProgress?: ((done: number) => void) | undefined } = {},
+): Promise<string[]> {
+  const hashes = new Array<string>(count);
   const group = HASH_IN_FLIGHT / 2;
   let waiting: { start: number; digests: Promise<string[]> } | null = null;
   for (let start = 0; ; start += group) {
     let issued: { start: number; digests: Promise<string[]> } | null = null;
-    if (start < records.length) {
+    if (start < count) {
       throwIfAborted(options.signal);
-      const digests = Promise.all(records.slice(start, start + group).map((r) => sha256Hex(hashedContent(r))));
+      const texts: Promise<string>[] = [];
+      for (let i = start; i < Math.min(count, start + group); i += 1) texts.push(sha256Hex(textAt(i)));
+      const digests = Promise.all(texts);
       digests.catch(() => {}); // observed below, or abandoned on cancel
       issued = { start, digests };
     }
@@ -330,6 +341,23 @@ export async function computeCheckHashes(
     waiting = issued;
   }
   return hashes;
+}
+
+const HASH_MEMBER = ',"hash":"';
+
+/**
+ * The hashed content of a check from its canonical JSON text: the text without its top-level
+ * `"hash":"…"` member, which is hashedContent(record) without building it again. Exact for any
+ * record the store accepts: in canonical JSON keys are sorted, and the members before "hash"
+ * (appVersion, cautions, corrects, deviceId, formulationId) hold strings, null and cautions of
+ * {message, rule, signal}, none of which can show that sequence (a quote inside a string is
+ * always escaped). A text that is not canonical gives a content that no longer matches its hash.
+ */
+export function contentOfText(text: string): string {
+  const at = text.indexOf(HASH_MEMBER);
+  if (at < 0) return text;
+  const end = text.indexOf('"', at + HASH_MEMBER.length);
+  return end < 0 ? text : text.slice(0, at) + text.slice(end + 1);
 }
 
 /**
@@ -359,6 +387,17 @@ export class ChainVerifier {
     throwIfAborted(signal);
     let next = 0;
     for (const r of records) this.pushHashed(r, r.hash === '' ? '' : hashes[next++]!);
+  }
+
+  /**
+   * Counts a record found where its own fields say it is not (another device's run, or a seq
+   * other than the one it is filed under): its device's chain is broken there, as 'reordered'.
+   */
+  pushMisplaced(r: CheckRecord, detail: string): void {
+    let s = this.state.get(r.deviceId);
+    if (!s) this.state.set(r.deviceId, (s = { count: 0, expectedSeq: 1, prevHash: GENESIS_HASH }));
+    s.count += 1;
+    if (!s.broken) s.broken = { deviceId: r.deviceId, status: 'broken', count: 0, at: { id: r.id, seq: r.seq }, problem: 'reordered', detail };
   }
 
   /** As push, with the record's content hash already computed by the caller. */

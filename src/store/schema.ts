@@ -3,6 +3,8 @@
 // half-way. Work that needs WebCrypto (hashing records migrated into the chain) is flagged here and
 // finished after open by sealMigratedChecks() in db.ts.
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
+import { canonicalJson } from './integrity.ts';
+import { addToLog, type IdBucket, type LogBlock, type MonthBucket, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
 
 export const DB_NAME = 'tankside';
@@ -15,8 +17,11 @@ export const DB_NAME = 'tankside';
  * - v3: record integrity. Checks gain deviceId, seq, prevHash, hash, corrects, reason, the
  *   unique by-device-seq index and by-corrects. Existing checks join this device's chain in time order with empty
  *   hashes and a seal-pending flag; hashing happens after open.
+ * - v4: the log in few, large values (log-layout.ts says why and how): logBlocks, logMonths
+ *   (index by-month) and logIds replace the one-record-per-check `checks` store, whose records
+ *   move over unchanged (as their canonical JSON text) before it is deleted.
  */
-export const DB_VERSION = 3;
+export const DB_VERSION = 4;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -36,16 +41,9 @@ export interface TanksideDB extends DBSchema {
     value: VesselRecord;
     indexes: { 'by-tag': string };
   };
-  checks: {
-    key: string;
-    value: CheckRecord;
-    indexes: {
-      'by-vessel-time': [string, number, string];
-      'by-time': [number, string];
-      'by-device-seq': [string, number];
-      'by-corrects': string;
-    };
-  };
+  logBlocks: { key: [string, number]; value: LogBlock };
+  logMonths: { key: [string, number]; value: MonthBucket; indexes: { 'by-month': number } };
+  logIds: { key: string; value: IdBucket };
   settings: { key: string; value: JsonValue };
   drafts: { key: string; value: DraftRecord };
 }
@@ -65,8 +63,9 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
     run(db, _tx, next) {
       const vessels = db.createObjectStore('vessels', { keyPath: 'id' });
       vessels.createIndex('by-tag', 'tagKey');
-      // v1's index on the raw `time` string; rebuilt in v2, hence the cast past today's types.
-      const checks = db.createObjectStore('checks', { keyPath: 'id' }) as unknown as IDBObjectStore;
+      // The checks store of v1–v3 (today's types no longer name it; v4 moves it), indexed on the raw
+      // `time` string, rebuilt in v2.
+      const checks = (unwrap(db) as IDBDatabase).createObjectStore('checks', { keyPath: 'id' });
       checks.createIndex('by-vessel-time', ['vesselId', 'time']);
       db.createObjectStore('settings');
       next();
@@ -76,7 +75,7 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
     version: 2,
     run(db, tx, next) {
       db.createObjectStore('drafts');
-      const checks = tx.objectStore('checks');
+      const checks = legacyChecks(tx);
       checks.deleteIndex('by-vessel-time');
       checks.createIndex('by-vessel-time', ['vesselId', 'timeMs', 'id']);
       checks.createIndex('by-time', ['timeMs', 'id']);
@@ -115,15 +114,72 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
         }, () => {
           if (seq > 0) raw.objectStore('settings').put(true, SETTING_SEAL_PENDING);
           // Unique, so two saves racing for the same seq cannot both land.
-          tx.objectStore('checks').createIndex('by-device-seq', ['deviceId', 'seq'], { unique: true });
+          legacyChecks(tx).createIndex('by-device-seq', ['deviceId', 'seq'], { unique: true });
           // Sparse: null is not a key, so only corrections are in it.
-          tx.objectStore('checks').createIndex('by-corrects', 'corrects');
+          legacyChecks(tx).createIndex('by-corrects', 'corrects');
           next();
         });
       };
     },
   },
+  {
+    version: 4,
+    run(db, tx, next) {
+      db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+      db.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
+      db.createObjectStore('logIds');
+      const raw = unwrap(tx) as IDBTransaction;
+      const bySeq = raw.objectStore('checks').index('by-device-seq');
+      // Pages of the old log in device-then-seq order, each added as the next is read: only
+      // IndexedDB requests are awaited, so the upgrade transaction stays active throughout.
+      const move = async (): Promise<void> => {
+        let range: IDBKeyRange | undefined;
+        for (;;) {
+          const page = await request<CheckRecord[]>(bySeq.getAll(range, MIGRATE_PAGE));
+          if (page.length === 0) break;
+          const entries: NewLogEntry[] = page.map((record) => ({ record, text: textOf(record) }));
+          await addToLog(tx as never, entries);
+          if (page.length < MIGRATE_PAGE) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.deviceId, last.seq], true);
+        }
+        (unwrap(db) as IDBDatabase).deleteObjectStore('checks');
+      };
+      move().then(next, () => {
+        // A half-moved log must not commit: abort, and the old version's data stays as it was.
+        try {
+          raw.abort();
+        } catch {
+          // Already finished.
+        }
+      });
+    },
+  },
 ];
+
+/** Old checks moved per step of the v4 rung. */
+const MIGRATE_PAGE = 1000;
+
+/** The v1–v3 `checks` store, which today's types no longer name. */
+function legacyChecks(tx: UpgradeTx): IDBObjectStore {
+  return (unwrap(tx) as IDBTransaction).objectStore('checks');
+}
+
+/** A record's stored text: its canonical JSON, or (for a value canonical JSON refuses) plain JSON, which verification then reports. */
+function textOf(record: CheckRecord): string {
+  try {
+    return canonicalJson(record);
+  } catch {
+    return JSON.stringify(record);
+  }
+}
+
+function request<T>(r: IDBRequest): Promise<T> {
+  return new Promise((resolve, reject) => {
+    r.onsuccess = () => resolve(r.result as T);
+    r.onerror = () => reject(r.error);
+  });
+}
 
 /** Runs every rung above oldVersion, in order, on the upgrade transaction. */
 export function upgradeSchema(db: IDBPDatabase<TanksideDB>, oldVersion: number, tx: UpgradeTx): void {
@@ -138,7 +194,7 @@ export function upgradeSchema(db: IDBPDatabase<TanksideDB>, oldVersion: number, 
 /** Rewrites every record of a store through the upgrade transaction, then calls `done`. */
 function walk(
   tx: UpgradeTx,
-  storeName: 'checks' | 'vessels',
+  storeName: 'checks',
   indexName: string | undefined,
   change: (record: Record<string, unknown>) => void,
   done: () => void,

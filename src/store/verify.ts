@@ -1,40 +1,59 @@
-// Chain verification over the stored log, a page at a time (a large log never sits in memory).
+// Chain verification over the stored log, a page of blocks at a time (a large log never sits in memory).
 import { getDb } from './connection.ts';
-import { ChainVerifier, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { ChainVerifier, contentOfText, digestMany, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { blocksAfter, countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
 import type { CheckRecord, LongWorkOptions } from './records.ts';
 
-/** Records read per page: at most two pages (the one being hashed, the next being read) are held. */
-export const VERIFY_PAGE = 1000;
-
 /**
- * Verifies every device's chain in the store, walking the by-device-seq index in pages.
- * Each page is read in its own read-only transaction (a transaction cannot stay open across
- * WebCrypto's digests), the next one while the current one is being hashed; the hashes of a page
- * are computed concurrently (ChainVerifier.pushBatch). Reports per device: ok, or the first broken
- * record and why. Writes nothing, so a cancel leaves nothing behind.
+ * Verifies every device's chain in the store, reading its blocks in device-then-seq order. Each
+ * page of blocks is read in its own read-only transaction (a transaction cannot stay open across
+ * WebCrypto's digests), the next one while the current one is being hashed; a page's hashes are
+ * computed concurrently, each over the stored text without its hash (contentOfText), which is
+ * the record's hashed content. Reports per device: ok, or the first broken record and why.
+ * Writes nothing, so a cancel leaves nothing behind.
  * @throws StoreError('cancelled') if options.signal aborts
  */
 export async function verifyStoredChains(options: LongWorkOptions = {}): Promise<ChainStatus[]> {
   throwIfAborted(options.signal);
   const db = await getDb();
-  const total = await db.count('checks');
+  const total = await countChecks(db.transaction(LOG_STORES));
   const verifier = new ChainVerifier();
-  const readPage = (after: CheckRecord | null): Promise<CheckRecord[]> => {
-    const range = after === null ? undefined : IDBKeyRange.lowerBound([after.deviceId, after.seq], true);
-    const page = db.getAllFromIndex('checks', 'by-device-seq', range, VERIFY_PAGE);
+  const readPage = (after: LogBlock | null): Promise<LogBlock[]> => {
+    const page = blocksAfter(db, after);
     page.catch(() => {}); // observed below, or abandoned on cancel
     return page;
   };
   let done = 0;
   let next = readPage(null);
   for (;;) {
-    const batch = await next;
+    const blocks = await next;
     throwIfAborted(options.signal);
-    if (batch.length === 0) break;
-    // A full page may have a successor: start reading it now. A short page is the last one.
-    next = batch.length === VERIFY_PAGE ? readPage(batch[batch.length - 1]!) : Promise.resolve([]);
-    await verifier.pushBatch(batch, options.signal);
-    done += batch.length;
+    if (blocks.length === 0) break;
+    next = readPage(blocks[blocks.length - 1]!);
+    const texts: string[] = [];
+    const records: CheckRecord[] = [];
+    const misplaced: (string | null)[] = [];
+    for (const block of blocks) {
+      block.texts.forEach((text, i) => {
+        const r = JSON.parse(text) as CheckRecord;
+        texts.push(text);
+        records.push(r);
+        const seq = block.seqs[i];
+        misplaced.push(
+          r.deviceId !== block.deviceId || r.seq !== seq
+            ? `seq ${r.seq}: stored as seq ${String(seq)} of device ${block.deviceId}`
+            : null,
+        );
+      });
+    }
+    const hashes = await digestMany(texts.length, (i) => (records[i]!.hash === '' ? '' : contentOfText(texts[i]!)), { signal: options.signal });
+    throwIfAborted(options.signal);
+    records.forEach((r, i) => {
+      const wrong = misplaced[i];
+      if (wrong) verifier.pushMisplaced(r, wrong);
+      else verifier.pushHashed(r, r.hash === '' ? '' : hashes[i]!);
+    });
+    done += records.length;
     options.onProgress?.(done, total);
   }
   return verifier.results();

@@ -7,6 +7,7 @@ import { exportBackup } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { resetPersistenceMemo } from '../../src/store/settings.ts';
 import { SPEC, sampleCheck } from './fixtures.ts';
+import { storedChecks } from './log-access.ts';
 
 /** Points the store at `factory` (closing the previous connection). */
 export async function useDevice(factory: IDBFactory): Promise<void> {
@@ -16,10 +17,11 @@ export async function useDevice(factory: IDBFactory): Promise<void> {
   await openStore();
 }
 
-/** Everything in the store, in key order. */
+/** Everything in the store: vessels and checks, each by id. */
 export async function dump(): Promise<{ vessels: VesselRecord[]; checks: CheckRecord[] }> {
   const db = await getDb();
-  return { vessels: await db.getAll('vessels'), checks: await db.getAll('checks') };
+  const checks = (await storedChecks()).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  return { vessels: await db.getAll('vessels'), checks };
 }
 
 /** Fills the current device with `n` checks over two vessels (one retired) and one correction. */

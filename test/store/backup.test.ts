@@ -5,6 +5,7 @@ import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/
 import { BACKUP_LIMITS, parseBackup } from '../../src/store/backup.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
 import { failWritesOverQuota } from './fixtures.ts';
+import type { LogBlock } from '../../src/store/log-layout.ts';
 
 afterEach(async () => {
   await closeStore();
@@ -204,7 +205,8 @@ describe('all or nothing', () => {
     await seedDevice(1, 'HM');
     const before = await dump();
     const victim = doc.checks[4].id as string;
-    const restore = failWritesOverQuota((value) => (value as CheckRecord).id === victim);
+    // The write that carries the victim (its block) runs out of room.
+    const restore = failWritesOverQuota((value) => Array.isArray((value as LogBlock).texts) && (value as LogBlock).texts.some((t) => t.includes(victim)));
     try {
       await expect(importBackup(backup)).rejects.toMatchObject({ code: 'quota-exceeded' });
     } finally {

@@ -1,18 +1,18 @@
-// The store's long jobs read and hash in pages and groups; these tests put records on both sides
-// of each boundary (invented test records, written straight into the database the way
+// The store's long jobs read and hash in pages of blocks and groups; these tests put records on
+// both sides of each boundary (invented test records, written straight into the log the way
 // appendCheck would have saved them, since saving a thousand through appendCheck is slow).
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import fc from 'fast-check';
 import { SPEC, useFreshDatabase } from './fixtures.ts';
 import { dump } from './backup-fixtures.ts';
 import { addVessel, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, exportCsv, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { computeCheckHash } from '../../src/store/integrity.ts';
-import { mayHoldForbiddenKey, parseBackup, storedIds } from '../../src/store/backup.ts';
-import { VERIFY_PAGE } from '../../src/store/verify.ts';
-import { STORE_PAGE } from '../../src/store/pages.ts';
+import { canonicalJson } from '../../src/store/integrity.ts';
+import { mayHoldForbiddenKey, parseBackup } from '../../src/store/backup.ts';
+import { addToLog, BLOCK_PAGE, BLOCK_TARGET, LOG_STORES } from '../../src/store/log-layout.ts';
+import { editStored } from './log-access.ts';
 import { GENESIS_HASH } from '../../src/store/records.ts';
 import { IDBFactory } from 'fake-indexeddb';
 import { closeStore, openStore } from '../../src/store/index.ts';
@@ -62,9 +62,12 @@ async function makeChain(
   return out;
 }
 
+/** Records one page of full blocks holds: what verification and the whole-log reads take at a time. */
+const VERIFY_PAGE = BLOCK_PAGE * BLOCK_TARGET;
+
 async function writeChecks(records: CheckRecord[]): Promise<void> {
-  const tx = (await getDb()).transaction('checks', 'readwrite');
-  await Promise.all([...records.map((r) => tx.store.add(r)), tx.done]);
+  const tx = (await getDb()).transaction(LOG_STORES, 'readwrite');
+  await Promise.all([addToLog(tx, records.map((record) => ({ record, text: canonicalJson(record) }))), tx.done]);
 }
 
 describe('verifyStoredChains across pages', () => {
@@ -78,16 +81,16 @@ describe('verifyStoredChains across pages', () => {
     ]);
     expect(seen).toEqual([[VERIFY_PAGE, VERIFY_PAGE + 2], [VERIFY_PAGE + 2, VERIFY_PAGE + 2]]);
 
-    const db = await getDb();
     const last = chain[VERIFY_PAGE - 1]!; // the last record of the first page
     const first = chain[VERIFY_PAGE]!; // the first record of the second page
-    await db.put('checks', { ...first, technician: 'someone else' });
+    await editStored(first.id, (r) => ({ ...r, technician: 'someone else' }));
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'content-changed', at: { seq: VERIFY_PAGE + 1 } }]);
-    await db.put('checks', first);
-    const edited = { ...last, note: 'edited' };
-    await db.put('checks', { ...edited, hash: await computeCheckHash(edited) });
+    await editStored(first.id, () => first);
+    const { hash: _h, ...edited } = { ...last, note: 'edited' };
+    const rehashed = { ...edited, hash: await computeCheckHash(edited) };
+    await editStored(last.id, () => rehashed);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'link-broken', at: { seq: VERIFY_PAGE + 1 } }]);
-    await db.delete('checks', last.id);
+    await editStored(last.id, () => null);
     expect(await verifyStoredChains()).toMatchObject([
       { status: 'broken', problem: 'missing-seq', at: { seq: VERIFY_PAGE + 1 }, count: VERIFY_PAGE + 1 },
     ]);
@@ -127,10 +130,10 @@ describe('exports across pages', () => {
   it('CSV: every row once, oldest first, for the whole log and for one vessel', async () => {
     const a = await addVessel({ tag: 'FT-204', spec: SPEC });
     const b = await addVessel({ tag: 'CR-3', spec: SPEC });
-    // 2 × (STORE_PAGE / 2 + 3) checks, one in three on vessel b: the whole-log read (primary key
-    // order, then sorted by time: the two devices interleave) and the vessel walk (by-vessel-time,
-    // pages of 1000) both cross a page boundary.
-    const half = STORE_PAGE / 2 + 3;
+    // 2 × (VERIFY_PAGE / 2 + 3) checks, one in three on vessel b: the whole-log read (blocks in
+    // device order, then sorted by time: the two devices interleave) and the vessel walk (month
+    // buckets, pages of 1000) both cross a page boundary.
+    const half = VERIFY_PAGE / 2 + 3;
     const d1 = await makeChain(D1, half, [a.id, a.id, b.id]);
     const d2 = await makeChain(D2, half, [a.id, a.id, b.id]);
     await writeChecks([...d1, ...d2]);
@@ -138,7 +141,8 @@ describe('exports across pages', () => {
     const seen: number[] = [];
     const rows = Papa.parse<Record<string, string>>(await exportCsv({ onProgress: (d) => seen.push(d) }), { header: true, skipEmptyLines: true }).data;
     expect(rows.map((r) => r['check id'])).toEqual(all.map((r) => r.id));
-    expect(seen).toEqual([STORE_PAGE, 2 * half]);
+    expect(seen).toHaveLength(2);
+    expect(seen.at(-1)).toBe(2 * half);
     expect(rows.find((r) => r['note']!.startsWith("'="))).toBeDefined();
     const onA = Papa.parse<Record<string, string>>(await exportCsv({ vesselId: a.id }), { header: true, skipEmptyLines: true }).data;
     expect(onA.map((r) => r['check id'])).toEqual(all.filter((r) => r.vesselId === a.id).map((r) => r.id));
@@ -170,10 +174,10 @@ describe('exports across pages', () => {
 });
 
 describe('JSON export in device and seq order whatever the ids', () => {
-  it('ids sorting against seq, across a page of the primary key read: still device then seq order, heads right', async () => {
+  it('ids sorting against seq, across a page of blocks: still device then seq order, heads right', async () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     // Ids run backwards against seq, and device D2's ids sort before D1's.
-    const n = STORE_PAGE + 2;
+    const n = VERIFY_PAGE + 2;
     const idOf = (prefix: string) => (seq: number) => `${prefix}-1111-4000-8000-${String(n + 10 - seq).padStart(12, '0')}`;
     const d1 = await makeChain(D1, n, [v.id], 'FT-204', idOf('cccccccc'));
     const d2 = await makeChain(D2, 4, [v.id], 'FT-204', idOf('00000000'));
@@ -186,12 +190,12 @@ describe('JSON export in device and seq order whatever the ids', () => {
       { deviceId: D1, count: n, headSeq: n, headHash: d1.at(-1)!.hash },
       { deviceId: D2, count: 4, headSeq: 4, headHash: d2.at(-1)!.hash },
     ]);
-    expect(seen).toEqual([STORE_PAGE, n + 4]);
+    expect(seen).toEqual([VERIFY_PAGE, n + 4]);
   });
 });
 
-describe('import writes in windows', () => {
-  it('a cancel at the end of the first write window (1000 requests) leaves nothing written; a full run writes all', async () => {
+describe('import writes block by block in one transaction', () => {
+  it('a cancel after the first block is written leaves nothing written; a full run writes all', async () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     await writeChecks(await makeChain(D1, 1004, [v.id]));
     const text = await exportBackup();
@@ -200,67 +204,32 @@ describe('import writes in windows', () => {
     await openStore();
     const before = await dump();
     const total = 2 * 1004 + 1;
-    const endOfFirstWindow = 1004 + 1000; // every check hashed, then 1 vessel and 999 checks written
+    const hashedAndVessel = 1004 + 1; // every check hashed, then the vessel written
     const controller = new AbortController();
     const seen: number[] = [];
     const attempt = importBackup(text, {
       signal: controller.signal,
       onProgress: (d) => {
         seen.push(d);
-        if (d === endOfFirstWindow) controller.abort();
+        if (d > hashedAndVessel) controller.abort();
       },
     });
     await expect(attempt).rejects.toMatchObject({ code: 'cancelled' });
-    expect(seen).toContain(endOfFirstWindow);
+    expect(seen).toContain(hashedAndVessel + BLOCK_TARGET);
     expect(await dump()).toEqual(before);
     const progress: number[] = [];
     const report = await importBackup(text, { onProgress: (d) => progress.push(d) });
     expect(report.checks.added).toHaveLength(1004);
     expect(progress.at(-1)).toBe(total);
+    expect(progress).toEqual([...progress].sort((x, y) => x - y));
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 1004 }]);
-    // Again: every check is found here (by key ranges over two windows of ids) and skipped.
+    // Again: every check is found here and skipped.
     const after = await dump();
     const again = await importBackup(text);
     expect(again.checks.added).toEqual([]);
     expect(again.checks.skipped).toHaveLength(1004);
     expect(again.checks.skipped.every((s) => s.why === 'already here, identical')).toBe(true);
     expect(await dump()).toEqual(after);
-  });
-});
-
-describe('storedIds (which of the file\'s ids the store holds, by key ranges)', () => {
-  /** A store of sorted string keys answering getAllKeys as IndexedDB does, counting requests. */
-  function keyStore(keys: string[]) {
-    const sorted = [...keys].sort();
-    const store = {
-      requests: 0,
-      async getAllKeys(range: IDBKeyRange, count: number): Promise<string[]> {
-        store.requests += 1;
-        return sorted.filter((k) => range.includes(k)).slice(0, count);
-      },
-    };
-    return store;
-  }
-
-  it('finds exactly the ids held, whatever the page size and window boundaries (property)', async () => {
-    const id = fc.integer({ min: 0, max: 3000 }).map((n) => `k${String(n).padStart(5, '0')}`);
-    await fc.assert(
-      fc.asyncProperty(fc.uniqueArray(id, { maxLength: 2500 }), fc.uniqueArray(id, { maxLength: 1500 }), fc.integer({ min: 1, max: 40 }), async (held, asked, page) => {
-        const store = keyStore(held);
-        const found = await storedIds(store, asked, page);
-        const heldSet = new Set(held);
-        expect([...found].sort()).toEqual(asked.filter((k) => heldSet.has(k)).sort());
-      }),
-      { numRuns: 60 },
-    );
-  });
-
-  it('reads each stored key at most once, in few requests', async () => {
-    const held = Array.from({ length: 5000 }, (_, i) => `k${String(i).padStart(5, '0')}`);
-    const store = keyStore(held);
-    const asked = held.filter((_, i) => i % 2 === 0); // 2500 ids: three windows of up to 1000
-    expect((await storedIds(store, asked, 10_000)).size).toBe(2500);
-    expect(store.requests).toBe(3);
   });
 });
 

@@ -3,6 +3,9 @@ import { SPEC, failWritesOverQuota, sampleCheck, useFreshDatabase } from './fixt
 import { GENESIS_HASH, addVessel, appendCheck, checksForVessel, computeCheckHash, correctionsOf, deviceId, getCheck, listChecks, persistenceState, type CheckRecord } from '../../src/store/index.ts';
 import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
+import type { LogBlock } from '../../src/store/log-layout.ts';
+import { addRaw } from './log-access.ts';
+import { wrap } from 'idb';
 
 useFreshDatabase();
 
@@ -61,12 +64,7 @@ describe('appendCheck', () => {
       if (!interfered) {
         interfered = true;
         // The other tab's save lands while this one is hashing.
-        await new Promise<void>((resolve, reject) => {
-          const tx = other.transaction('checks', 'readwrite');
-          tx.objectStore('checks').add(theirs);
-          tx.oncomplete = () => resolve();
-          tx.onerror = () => reject(tx.error);
-        });
+        await addRaw(wrap(other) as never, theirs);
       }
       return realDigest(algorithm, data);
     });
@@ -90,9 +88,9 @@ describe('appendCheck', () => {
     const second = await appendCheck(sampleCheck(v.id, { corrects: original.id, reason: 'and the note was wrong' }));
     expect(await correctionsOf(original.id)).toEqual([fix, second].sort((a, b) => (a.id < b.id ? -1 : 1)));
     expect(await correctionsOf(fix.id)).toEqual([]);
-    // The write path uses add(): the same id cannot land twice.
+    // The log's write path refuses an id it holds: the same id cannot land twice.
     const db = await getDb();
-    await expect((async () => db.add('checks', { ...original, note: 'edited' }))()).rejects.toMatchObject({ name: 'ConstraintError' });
+    await expect(addRaw(db, { ...original, seq: 99, note: 'edited' })).rejects.toMatchObject({ name: 'ConstraintError' });
     expect(await getCheck(original.id)).toEqual(original);
   });
 
@@ -123,7 +121,8 @@ describe('appendCheck', () => {
   it('maps a quota abort to StoreError quota-exceeded with nothing saved, and the chain continues after', async () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     const first = await appendCheck(sampleCheck(v.id));
-    const restore = failWritesOverQuota((value) => (value as CheckRecord).note === 'too big');
+    // The write carrying the new check (its block) runs out of room.
+    const restore = failWritesOverQuota((value) => Array.isArray((value as LogBlock).texts) && (value as LogBlock).texts.some((t) => t.includes('"note":"too big"')));
     try {
       await expect(appendCheck(sampleCheck(v.id, { note: 'too big' }))).rejects.toMatchObject({
         name: 'StoreError',

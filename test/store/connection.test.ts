@@ -46,8 +46,8 @@ describe('connection', () => {
   it('blocking: a newer version opening elsewhere closes this connection and tells the app to reload', async () => {
     await openStore({ onEvent: (e) => events.push(e) });
     await addVessel({ tag: 'FT-1', spec: SPEC });
-    const newer = await rawOpen(4); // resolves only because the store closed its connection
-    expect(newer.version).toBe(4);
+    const newer = await rawOpen(5); // resolves only because the store closed its connection
+    expect(newer.version).toBe(5);
     expect(events).toEqual([{ type: 'closed-for-upgrade' }]);
     await expect(listVessels()).rejects.toMatchObject({ name: 'StoreError', code: 'closed-for-upgrade' });
     newer.close();

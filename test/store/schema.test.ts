@@ -4,11 +4,12 @@
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { appendCheck, checksForVessel, closeStore, getSetting, getVessel, listChecks, loadDraft, openStore, saveDraft, GENESIS_HASH, type StoreEvent } from '../../src/store/index.ts';
+import { appendCheck, checksForVessel, closeStore, correctionsOf, getCheck, getSetting, getVessel, listChecks, loadDraft, openStore, saveDraft, GENESIS_HASH, type StoreEvent } from '../../src/store/index.ts';
 import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
-import { computeCheckHash } from '../../src/store/integrity.ts';
+import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
+import { storedChecks } from './log-access.ts';
 import { failWritesOverQuota, sampleCheck } from './fixtures.ts';
 
 const VESSEL_ID = '6f0c8a52-3c1d-4e8a-9b2f-0d7e5a1c4b93';
@@ -38,7 +39,10 @@ const NEWEST_FIRST = ['00000000-0000-4000-8000-000000000002', '00000000-0000-400
 function rawOpen(version: number, upgrade: (db: IDBDatabase) => void): Promise<IDBDatabase> {
   return new Promise((resolve, reject) => {
     const request = indexedDB.open(DB_NAME, version);
-    request.onupgradeneeded = () => upgrade(request.result);
+    request.onupgradeneeded = () => {
+      upgradeTxOf = () => request.transaction!;
+      upgrade(request.result);
+    };
     request.onsuccess = () => resolve(request.result);
     request.onerror = () => reject(request.error);
   });
@@ -80,14 +84,24 @@ function describeSchema(db: IDBDatabase) {
   );
 }
 
+/** Schema v3 exactly as it shipped (a fresh v3 install). */
+function createV3(db: IDBDatabase): void {
+  createV2(db);
+  const checks = upgradeTxOf(db).objectStore('checks');
+  checks.createIndex('by-device-seq', ['deviceId', 'seq'], { unique: true });
+  checks.createIndex('by-corrects', 'corrects');
+}
+
+/** The upgrade transaction a raw open is running (fake-indexeddb and browsers both expose it on the request). */
+let upgradeTxOf: (db: IDBDatabase) => IDBTransaction = () => {
+  throw new Error('only inside rawOpen');
+};
+
 const CURRENT_SCHEMA = {
-  checks: [
-    'by-corrects:"corrects"',
-    'by-device-seq:["deviceId","seq"]:unique',
-    'by-time:["timeMs","id"]',
-    'by-vessel-time:["vesselId","timeMs","id"]',
-  ],
   drafts: [],
+  logBlocks: [],
+  logIds: [],
+  logMonths: ['by-month:"monthMs"'],
   settings: [],
   vessels: ['by-tag:"tagKey"'],
 };
@@ -135,11 +149,11 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(3);
+    expect(DB_VERSION).toBe(4);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
-  it('v1 → v3: keeps vessels, checks and settings; adds timeMs, drafts, indexes and the hash chain', async () => {
+  it('v1 → v4: keeps vessels, checks and settings; adds timeMs, drafts, the hash chain and the block layout', async () => {
     const old = await rawOpen(1, createV1);
     await rawWrite(old, [
       ['vessels', vesselV1()],
@@ -150,7 +164,7 @@ describe('upgrade ladder', () => {
 
     await openStore({ onEvent: (e) => events.push(e) });
     const db = await getDb();
-    expect(db.version).toBe(3);
+    expect(db.version).toBe(4);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
     expect(await getVessel(VESSEL_ID)).toEqual(vesselV1());
     expect(await getSetting('technicianName')).toBe('R. Okafor');
@@ -161,7 +175,7 @@ describe('upgrade ladder', () => {
     expect(events).toEqual([]);
   });
 
-  it('v2 → v3: keeps drafts and checks; chains the checks in time order', async () => {
+  it('v2 → v4: keeps drafts and checks; chains the checks in time order', async () => {
     const old = await rawOpen(2, createV2);
     const v2Checks = V1_CHECKS.map((c) => ({ ...c, timeMs: Date.parse(c.time) }));
     await rawWrite(old, [
@@ -192,7 +206,11 @@ describe('upgrade ladder', () => {
     const old = await rawOpen(1, createV1);
     await rawWrite(old, [['vessels', vesselV1()], ...V1_CHECKS.map((c): [string, unknown] => ['checks', c])]);
     old.close();
-    const restore = failWritesOverQuota((value) => typeof (value as { hash?: unknown }).hash === 'string');
+    // The sealing write: a block whose texts all carry a hash (the v4 rung's own writes still have empty ones).
+    const restore = failWritesOverQuota((value) => {
+      const texts = (value as { texts?: unknown }).texts;
+      return Array.isArray(texts) && texts.length > 0 && texts.every((t) => typeof t === 'string' && !t.includes(',"hash":"",'));
+    });
     try {
       await openStore();
     } finally {
@@ -200,7 +218,7 @@ describe('upgrade ladder', () => {
     }
     const db = await getDb();
     expect(await db.get('settings', SETTING_SEAL_PENDING)).toBe(true);
-    const pending = await db.getAll('checks');
+    const pending = await storedChecks();
     expect(pending.map((c) => c.hash)).toEqual(['', '', '']);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'unsealed', at: { seq: 1 } }]);
     const next = await appendCheck(sampleCheck(VESSEL_ID));
@@ -209,14 +227,71 @@ describe('upgrade ladder', () => {
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 4, headSeq: 4, headHash: next.hash }]);
   });
 
-  it('a v3 database reopens untouched', async () => {
+  it('v3 → v4: every check moves to the block layout unchanged, byte for byte; lists, lookups and chains as before', async () => {
+    const old = await rawOpen(3, createV3);
+    const D1 = 'd1000000-0000-4000-8000-000000000001';
+    const D2 = 'd2000000-0000-4000-8000-000000000002';
+    // 1,050 checks of one device (past one migration step of 1,000 and many blocks), 2 of another, one a correction.
+    const t0 = Date.parse('2026-10-30T23:00:00Z'); // the log crosses a month
+    const v3Checks: Record<string, unknown>[] = [];
+    const chainOf = async (device: string, n: number, offsetMs: number) => {
+      let prevHash = GENESIS_HASH;
+      for (let seq = 1; seq <= n; seq += 1) {
+        const timeMs = t0 + offsetMs + seq * 60_000;
+        const { vesselId: _v, takenAt: _t, corrects: _c, reason: _r, ...rest } = sampleCheck(VESSEL_ID);
+        const corrects = device === D2 && seq === 2 ? v3Checks[0]!['id'] as string : null;
+        const unsigned = {
+          ...rest, id: `${device.slice(0, 8)}-0000-4000-8000-${String(seq).padStart(12, '0')}`, deviceId: device, seq,
+          time: new Date(timeMs).toISOString().replace('.000Z', 'Z'), timeMs, vesselId: VESSEL_ID, vessel: { tag: 'CR-3', spec: SPEC },
+          note: `v3 ${seq}`, corrects, reason: corrects ? 'wrong gauge' : null, prevHash,
+        };
+        const hash = await computeCheckHash(unsigned as never);
+        v3Checks.push({ ...unsigned, hash });
+        prevHash = hash;
+      }
+    };
+    await chainOf(D1, 1050, 0);
+    await chainOf(D2, 2, 30_000);
+    await rawWrite(old, [
+      ['vessels', vesselV1()],
+      ['settings', D1, SETTING_DEVICE_ID],
+      ...v3Checks.map((c): [string, unknown] => ['checks', c]),
+    ]);
+    old.close();
+
+    await openStore({ onEvent: (e) => events.push(e) });
+    const db = await getDb();
+    expect(db.version).toBe(4);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    // Each record as v3 held it, and its stored text is its canonical JSON.
+    const stored = await storedChecks();
+    expect(stored).toHaveLength(1052);
+    const byId = new Map(stored.map((c) => [c.id, c]));
+    for (const c of v3Checks) expect(byId.get(c['id'] as string)).toEqual(c);
+    const blocks = await db.getAll('logBlocks');
+    for (const b of blocks) for (const t of b.texts) expect(t).toBe(canonicalJson(JSON.parse(t)));
+    expect(await getCheck(v3Checks[500]!['id'] as string)).toEqual(v3Checks[500]);
+    expect((await correctionsOf(v3Checks[0]!['id'] as string)).map((c) => c.id)).toEqual([v3Checks[1051]!['id']]);
+    const newestFirst = [...v3Checks].sort((a, b) => (b['timeMs'] as number) - (a['timeMs'] as number) || ((b['id'] as string) < (a['id'] as string) ? -1 : 1));
+    expect((await listChecks({ limit: 5 })).checks).toEqual(newestFirst.slice(0, 5));
+    expect((await checksForVessel(VESSEL_ID, { limit: 3, order: 'oldest' })).checks).toEqual(newestFirst.slice(-3).reverse());
+    expect(await verifyStoredChains()).toMatchObject([
+      { deviceId: D1, status: 'ok', count: 1050, headSeq: 1050 },
+      { deviceId: D2, status: 'ok', count: 2, headSeq: 2 },
+    ]);
+    const next = await appendCheck(sampleCheck(VESSEL_ID));
+    expect(next).toMatchObject({ deviceId: D1, seq: 1051, prevHash: v3Checks[1049]!['hash'] });
+    expect(events).toEqual([]);
+  });
+
+  it('a v4 database reopens untouched', async () => {
     await openStore();
     await closeStore();
-    const old = await rawOpen(3, () => {
+    const old = await rawOpen(4, () => {
       throw new Error('no upgrade expected');
     });
     old.close();
     await openStore();
-    expect((await getDb()).version).toBe(3);
+    expect((await getDb()).version).toBe(4);
   });
 });

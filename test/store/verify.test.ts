@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
 import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, verifyStoredChains } from '../../src/store/transfer.ts';
-import { getDb } from '../../src/store/connection.ts';
+import { editStored } from './log-access.ts';
 
 useFreshDatabase();
 
@@ -18,8 +18,7 @@ async function seed(n: number): Promise<CheckRecord[]> {
 describe('verifyStoredChains', () => {
   it('points at a record edited in the database', async () => {
     const saved = await seed(5);
-    const db = await getDb();
-    await db.put('checks', { ...saved[2]!, technician: 'someone else' });
+    await editStored(saved[2]!.id, (r) => ({ ...r, technician: 'someone else' }));
     expect(await verifyStoredChains()).toMatchObject([
       { status: 'broken', problem: 'content-changed', at: { id: saved[2]!.id, seq: 3 }, count: 5 },
     ]);
@@ -27,23 +26,15 @@ describe('verifyStoredChains', () => {
 
   it('points at the gap a deleted record leaves', async () => {
     const saved = await seed(5);
-    await (await getDb()).delete('checks', saved[1]!.id);
+    await editStored(saved[1]!.id, () => null);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'missing-seq', at: { seq: 3 }, count: 4 }]);
   });
 
   it('points at records swapped between places (seq rewritten, hashes kept)', async () => {
     const saved = await seed(4);
-    const db = await getDb();
-    const tx = db.transaction('checks', 'readwrite');
-    // Through a spare seq: the unique by-device-seq index refuses two records on one seq.
-    await Promise.all([
-      (async () => {
-        await tx.store.put({ ...saved[1]!, seq: 99 });
-        await tx.store.put({ ...saved[2]!, seq: 2 });
-        await tx.store.put({ ...saved[1]!, seq: 3 });
-      })(),
-      tx.done,
-    ]);
+    const device = saved[0]!.deviceId;
+    await editStored({ deviceId: device, seq: 2 }, () => ({ ...saved[2]!, seq: 2 }));
+    await editStored({ deviceId: device, seq: 3 }, () => ({ ...saved[1]!, seq: 3 }));
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'content-changed', at: { seq: 2 } }]);
   });
 

@@ -1,0 +1,465 @@
+// How the check log sits in IndexedDB (schema v4), and the only code that reads or writes it.
+//
+// Why not one IndexedDB record per check: in Chromium every stored value and every index entry
+// costs about the same whatever its size, and a log of 100,000 checks made one value plus four
+// index entries per check: about 180 µs of browser CPU to write each check and 33–43 µs to read
+// one back, so an import of 100,000 took over 20 s and an export over 8 s. The same checks held
+// 100 to a value cost about 9 µs each to write and 6 µs to read (bench/idb-layout.bench-run.ts
+// prints all of these). So the log is kept in three stores of few, larger values:
+//
+// - logBlocks, key [deviceId, firstSeq]: each device's chain, in runs of about BLOCK_TARGET
+//   checks. A block holds the seqs it has (ascending) and, for each, the record's canonical JSON
+//   text (integrity.ts): the exact text that is hashed, exported and parsed back. Rule: a check
+//   with seq s of device d lives in the block of d with the greatest firstSeq ≤ s. Blocks never
+//   move or split, so the rule holds as long as a new block is only started below every block of
+//   its device, or above every seq the device's last block holds.
+// - logMonths, key [vesselId, monthMs], index by-month: for each vessel and UTC calendar month,
+//   [timeMs, id, deviceId, seq] of its checks ascending by (timeMs, id): what listing, paging and
+//   date filters walk, newest first, without opening a block until a page's rows are known.
+// - logIds, key: the last two hex digits of a check id: where each id is stored, and the ids of
+//   the checks that correct it. A v4 UUID is random there, so 256 values share the log evenly.
+//
+// A write touches a handful of values, whatever number of checks it adds; it runs only IndexedDB
+// requests inside its transaction, as every transaction here must.
+import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
+import type { CheckRecord, CheckCursor } from './records.ts';
+import type { TanksideDB } from './schema.ts';
+
+/** Checks per block when a block is started; inserts below a device's head may pass it. */
+export const BLOCK_TARGET = 100;
+
+/** A run of one device's chain. */
+export interface LogBlock {
+  deviceId: string;
+  firstSeq: number;
+  /** Ascending; seqs[i] is the seq of texts[i]. */
+  seqs: number[];
+  /** canonicalJson of each full record (hash included). */
+  texts: string[];
+}
+
+/** [timeMs, id, deviceId, seq] of one check. */
+export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number];
+
+/** One vessel's checks in one UTC calendar month. */
+export interface MonthBucket {
+  vesselId: string;
+  /** Date.UTC of the month's first day. */
+  monthMs: number;
+  /** Ascending by (timeMs, id). */
+  rows: MonthRow[];
+}
+
+/** Where a check id is stored (`at`), and the ids of checks that correct it (`by`), either may be absent. */
+export interface IdEntry {
+  at?: [deviceId: string, seq: number];
+  by?: string[];
+}
+
+/** Entries of the ids that end in one pair of hex digits. */
+export type IdBucket = Record<string, IdEntry>;
+
+export const LOG_STORES = ['logBlocks', 'logMonths', 'logIds'] as const;
+type LogStores = (typeof LOG_STORES)[number];
+/** Any transaction whose scope includes the three log stores. */
+type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
+
+/** Where a check is in logBlocks. */
+export interface CheckRef {
+  deviceId: string;
+  seq: number;
+}
+
+/** A record to add, with its canonical text. */
+export interface NewLogEntry {
+  record: CheckRecord;
+  text: string;
+}
+
+/** The month bucket of an instant. */
+export function monthOf(timeMs: number): number {
+  const d = new Date(Number.isFinite(timeMs) ? timeMs : 0);
+  return Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), 1);
+}
+
+/** The logIds key of a check id. */
+export function idBucketOf(id: string): string {
+  return id.slice(-2).toLowerCase();
+}
+
+/** Compares rows by (timeMs, id), as IndexedDB orders [number, string] keys. */
+export function compareRows(a: MonthRow, b: MonthRow): number {
+  return a[0] - b[0] || (a[1] < b[1] ? -1 : a[1] > b[1] ? 1 : 0);
+}
+
+/** Index of `seq` in ascending `seqs`, or −1. */
+export function seqIndex(seqs: readonly number[], seq: number): number {
+  let lo = 0;
+  let hi = seqs.length - 1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    const v = seqs[mid]!;
+    if (v === seq) return mid;
+    if (v < seq) lo = mid + 1;
+    else hi = mid - 1;
+  }
+  return -1;
+}
+
+/** Every block key range of one device. */
+function deviceRange(deviceId: string): IDBKeyRange {
+  return IDBKeyRange.bound([deviceId, -Infinity], [deviceId, Infinity]);
+}
+
+/** The firstSeq of the block that holds (or would hold) `seq`, from a device's ascending firstSeqs; undefined below them all. */
+export function blockFor(firstSeqs: readonly number[], seq: number): number | undefined {
+  let lo = 0;
+  let hi = firstSeqs.length - 1;
+  let found: number | undefined;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (firstSeqs[mid]! <= seq) {
+      found = firstSeqs[mid];
+      lo = mid + 1;
+    } else hi = mid - 1;
+  }
+  return found;
+}
+
+async function firstSeqsOf(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<number[]> {
+  const keys = await tx.objectStore('logBlocks').getAllKeys(deviceRange(deviceId));
+  return keys.map((k) => k[1]);
+}
+
+/**
+ * The stored records at `refs`, in the same order (undefined where none is stored). Reads each
+ * block once however many of its checks are asked for, and parses only the texts asked for.
+ */
+export async function readRecords(tx: LogTx<IDBTransactionMode>, refs: readonly CheckRef[]): Promise<(CheckRecord | undefined)[]> {
+  const devices = [...new Set(refs.map((r) => r.deviceId))];
+  const firstSeqs = new Map(await Promise.all(devices.map(async (d) => [d, await firstSeqsOf(tx, d)] as const)));
+  const wanted = new Map<string, [string, number]>();
+  const blockKeyOf = refs.map((r) => {
+    const first = blockFor(firstSeqs.get(r.deviceId)!, r.seq);
+    if (first === undefined) return null;
+    const key = `${first}\u0000${r.deviceId}`;
+    wanted.set(key, [r.deviceId, first]);
+    return key;
+  });
+  const blocks = new Map<string, LogBlock | undefined>();
+  await Promise.all([...wanted].map(async ([key, k]) => blocks.set(key, await tx.objectStore('logBlocks').get(k))));
+  return refs.map((r, i) => {
+    const key = blockKeyOf[i];
+    const block = key === null || key === undefined ? undefined : blocks.get(key);
+    if (!block) return undefined;
+    const at = seqIndex(block.seqs, r.seq);
+    return at < 0 ? undefined : (JSON.parse(block.texts[at]!) as CheckRecord);
+  });
+}
+
+/** Where ids are stored, from logIds (absent ids are left out). */
+export async function locateIds(tx: LogTx<IDBTransactionMode>, ids: readonly string[]): Promise<Map<string, IdEntry>> {
+  const buckets = [...new Set(ids.map(idBucketOf))];
+  const found = await Promise.all(buckets.map((b) => tx.objectStore('logIds').get(b)));
+  const byBucket = new Map(buckets.map((b, i) => [b, found[i]]));
+  const out = new Map<string, IdEntry>();
+  for (const id of ids) {
+    const entry = byBucket.get(idBucketOf(id))?.[id];
+    if (entry) out.set(id, entry);
+  }
+  return out;
+}
+
+/** Every stored id with its place, reading all of logIds (for an import's duplicate check). */
+export async function allIdEntries(tx: LogTx<IDBTransactionMode>): Promise<Map<string, IdEntry>> {
+  const out = new Map<string, IdEntry>();
+  for (const bucket of await tx.objectStore('logIds').getAll()) {
+    for (const id in bucket) out.set(id, bucket[id]!);
+  }
+  return out;
+}
+
+/** The last stored check of a device: its seq and hash (seq 0 when it has none). */
+export async function chainHead(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<{ seq: number; hash: string } | null> {
+  const cursor = await tx.objectStore('logBlocks').openCursor(deviceRange(deviceId), 'prev');
+  const block = cursor?.value;
+  if (!block || block.texts.length === 0) return null;
+  const last = JSON.parse(block.texts[block.texts.length - 1]!) as CheckRecord;
+  return { seq: last.seq, hash: last.hash };
+}
+
+/** The blocks of one device whose firstSeq lies in [fromSeq, toSeq], ascending. */
+export async function deviceBlocks(tx: LogTx<IDBTransactionMode>, deviceId: string, fromSeq: number, toSeq: number): Promise<LogBlock[]> {
+  const firstSeqs = await firstSeqsOf(tx, deviceId);
+  const start = blockFor(firstSeqs, fromSeq) ?? -Infinity;
+  return tx.objectStore('logBlocks').getAll(IDBKeyRange.bound([deviceId, start], [deviceId, toSeq]));
+}
+
+/** A refusal inside a write: the transaction is aborted and nothing is written. Named as IndexedDB names its own. */
+export class LogConflict extends Error {
+  override readonly name = 'ConstraintError';
+}
+
+/**
+ * Adds records to the log inside `tx` (readwrite over the three log stores). Refuses, with
+ * LogConflict, an id already stored or a seq already taken on its device: the caller aborts.
+ * Issues only IndexedDB requests.
+ */
+export async function addToLog(
+  tx: LogTx<'readwrite'>,
+  entries: readonly NewLogEntry[],
+  /** Called with the number of records each block write carried, as it succeeds. */
+  onStored?: (records: number) => void,
+): Promise<void> {
+  if (entries.length === 0) return;
+  const blocksStore = tx.objectStore('logBlocks');
+  const monthsStore = tx.objectStore('logMonths');
+  const idsStore = tx.objectStore('logIds');
+
+  // Everything that will change, read at once.
+  const byDevice = new Map<string, NewLogEntry[]>();
+  for (const e of entries) {
+    let list = byDevice.get(e.record.deviceId);
+    if (!list) byDevice.set(e.record.deviceId, (list = []));
+    list.push(e);
+  }
+  const months = new Map<string, { vesselId: string; monthMs: number; rows: MonthRow[] }>();
+  for (const { record: r } of entries) {
+    const monthMs = monthOf(r.timeMs);
+    const key = `${monthMs}\u0000${r.vesselId}`;
+    let m = months.get(key);
+    if (!m) months.set(key, (m = { vesselId: r.vesselId, monthMs, rows: [] }));
+    m.rows.push([r.timeMs, r.id, r.deviceId, r.seq]);
+  }
+  const idKeys = new Set<string>();
+  for (const { record: r } of entries) {
+    idKeys.add(idBucketOf(r.id));
+    if (r.corrects !== null) idKeys.add(idBucketOf(r.corrects));
+  }
+  const [deviceState, monthBuckets, idBuckets] = await Promise.all([
+    Promise.all(
+      [...byDevice.keys()].map(async (deviceId) => {
+        const firstSeqs = await firstSeqsOf(tx, deviceId);
+        const list = byDevice.get(deviceId)!.slice().sort((a, b) => a.record.seq - b.record.seq);
+        const targets = new Set<number>();
+        for (const e of list) {
+          const t = blockFor(firstSeqs, e.record.seq);
+          if (t !== undefined) targets.add(t);
+        }
+        const blocks = await Promise.all([...targets].map((t) => blocksStore.get([deviceId, t])));
+        return { deviceId, firstSeqs, list, blocks: new Map(blocks.filter((b) => b !== undefined).map((b) => [b.firstSeq, b])) };
+      }),
+    ),
+    Promise.all([...months.values()].map((m) => monthsStore.get([m.vesselId, m.monthMs]))),
+    Promise.all([...idKeys].map(async (k) => [k, (await idsStore.get(k)) ?? {}] as const)),
+  ]);
+
+  // ids: refuse one already stored; note where each new one goes and who corrects whom.
+  const ids = new Map<string, IdBucket>(idBuckets);
+  const entryOf = (id: string): IdEntry => {
+    const bucket = ids.get(idBucketOf(id))!;
+    // Own properties only: a bucket is a plain object read back from the store.
+    return Object.hasOwn(bucket, id) ? bucket[id]! : (bucket[id] = {});
+  };
+  for (const { record: r } of entries) {
+    const entry = entryOf(r.id);
+    if (entry.at) throw new LogConflict(`check ${r.id} is already stored`);
+    entry.at = [r.deviceId, r.seq];
+  }
+  for (const { record: r } of entries) {
+    if (r.corrects === null) continue;
+    const entry = entryOf(r.corrects);
+    (entry.by ??= []).push(r.id);
+  }
+
+  // blocks: each record into the block the rule gives it, or a new one.
+  const changed = new Map<string, LogBlock>();
+  const added = new Map<LogBlock, number>();
+  const note = (block: LogBlock, key: string) => {
+    changed.set(key, block);
+    added.set(block, (added.get(block) ?? 0) + 1);
+  };
+  for (const { deviceId, firstSeqs, list, blocks } of deviceState) {
+    const starts = firstSeqs.slice();
+    const below: NewLogEntry[] = [];
+    for (const e of list) {
+      const seq = e.record.seq;
+      let first = blockFor(starts, seq);
+      if (first === undefined) {
+        below.push(e);
+        continue;
+      }
+      let block = blocks.get(first)!;
+      const isLast = first === starts[starts.length - 1];
+      const top = block.seqs[block.seqs.length - 1] ?? -Infinity;
+      if (isLast && seq > top && block.seqs.length >= BLOCK_TARGET) {
+        // A new head block: nothing stored on this device is at or above seq.
+        block = { deviceId, firstSeq: seq, seqs: [], texts: [] };
+        blocks.set(seq, block);
+        starts.push(seq);
+        first = seq;
+      }
+      insertInto(block, seq, e.text);
+      note(block, `${first}\u0000${deviceId}`);
+    }
+    // Below every block of the device: new blocks of BLOCK_TARGET, each starting at its lowest seq.
+    for (let i = 0; i < below.length; i += BLOCK_TARGET) {
+      const run = below.slice(i, i + BLOCK_TARGET);
+      const block: LogBlock = { deviceId, firstSeq: run[0]!.record.seq, seqs: [], texts: [] };
+      for (const e of run) {
+        insertInto(block, e.record.seq, e.text);
+        note(block, `${block.firstSeq}\u0000${deviceId}`);
+      }
+    }
+  }
+
+  const puts: Promise<unknown>[] = [];
+  for (const block of changed.values()) {
+    const n = added.get(block)!;
+    puts.push(blocksStore.put(block).then(() => onStored?.(n)));
+  }
+  [...months.values()].forEach((m, i) => {
+    const stored = monthBuckets[i];
+    const rows = stored ? stored.rows.concat(m.rows) : m.rows;
+    rows.sort(compareRows);
+    puts.push(monthsStore.put({ vesselId: m.vesselId, monthMs: m.monthMs, rows }));
+  });
+  for (const [key, bucket] of ids) puts.push(idsStore.put(bucket, key));
+  await Promise.all(puts);
+}
+
+/**
+ * Waits for `work` (requests inside `tx`) and then for the commit. If the work fails, the
+ * transaction is aborted and the more telling reason is thrown: a LogConflict as it is, otherwise
+ * the transaction's own error when the browser aborted it (a quota abort fails the pending
+ * requests first, with a plain AbortError).
+ */
+export async function settle(tx: { abort(): void; done: Promise<void> }, work: Promise<unknown>): Promise<void> {
+  try {
+    await work;
+  } catch (error) {
+    try {
+      tx.abort();
+    } catch {
+      // Already aborted by the browser.
+    }
+    const reason: unknown = await tx.done.then(() => null, (e: unknown) => e);
+    if (error instanceof LogConflict || reason === null || (reason as { name?: unknown }).name === 'AbortError') throw error;
+    throw reason;
+  }
+  await tx.done;
+}
+
+function insertInto(block: LogBlock, seq: number, text: string): void {
+  const seqs = block.seqs;
+  if (seqs.length === 0 || seq > seqs[seqs.length - 1]!) {
+    seqs.push(seq);
+    block.texts.push(text);
+    return;
+  }
+  if (seqIndex(seqs, seq) >= 0) throw new LogConflict(`seq ${seq} of device ${block.deviceId} is already taken`);
+  let at = seqs.length;
+  while (at > 0 && seqs[at - 1]! > seq) at -= 1;
+  seqs.splice(at, 0, seq);
+  block.texts.splice(at, 0, text);
+}
+
+/** Blocks per read when walking the whole log. */
+export const BLOCK_PAGE = 20;
+
+/**
+ * The whole log's blocks in key order (device, then seq), BLOCK_PAGE at a time, each page asked
+ * for as the previous one arrives, all inside `tx` (one snapshot).
+ */
+export async function* blockPages(tx: LogTx<IDBTransactionMode>): AsyncGenerator<LogBlock[], void, undefined> {
+  const store = tx.objectStore('logBlocks');
+  let next = store.getAll(undefined, BLOCK_PAGE);
+  for (;;) {
+    const page = await next;
+    if (page.length === 0) return;
+    if (page.length === BLOCK_PAGE) {
+      const last = page[page.length - 1]!;
+      next = store.getAll(IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true), BLOCK_PAGE);
+      next.catch(() => {}); // observed on the next turn, or abandoned if the consumer stops
+    } else {
+      next = Promise.resolve([]);
+    }
+    yield page;
+  }
+}
+
+/** The next page of blocks after `after` (exclusive), in its own read-only transaction. */
+export function blocksAfter(db: IDBPDatabase<TanksideDB>, after: LogBlock | null, count = BLOCK_PAGE): Promise<LogBlock[]> {
+  const range = after === null ? undefined : IDBKeyRange.lowerBound([after.deviceId, after.firstSeq], true);
+  return db.getAll('logBlocks', range, count);
+}
+
+/** How many checks the log holds (counts rows of every month bucket; a vessel's alone when given). */
+export async function countChecks(tx: LogTx<IDBTransactionMode>, vesselId?: string): Promise<number> {
+  const store = tx.objectStore('logMonths');
+  const buckets = await store.getAll(vesselId === undefined ? undefined : IDBKeyRange.bound([vesselId, -Infinity], [vesselId, Infinity]));
+  let n = 0;
+  for (const b of buckets) n += b.rows.length;
+  return n;
+}
+
+/** Which checks a listing covers. Times in ms; both ends inclusive. */
+export interface LogQuery {
+  vesselId: string | null;
+  fromMs: number;
+  toMs: number;
+  /** Exclusive: the `next` of the previous page. */
+  before?: CheckCursor | undefined;
+  after?: CheckCursor | undefined;
+  order: 'newest' | 'oldest';
+  limit: number;
+}
+
+/**
+ * The rows of one page of a listing and whether more follow. Walks month buckets from the newest
+ * (or oldest) month inward, a month at a time, and stops once the page is full: a page costs the
+ * months it touches, not the log.
+ */
+export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Promise<{ rows: MonthRow[]; more: boolean }> {
+  const newest = q.order === 'newest';
+  const inWindow = (r: MonthRow): boolean => {
+    if (r[0] < q.fromMs || r[0] > q.toMs) return false;
+    if (q.before && !(r[0] < q.before.timeMs || (r[0] === q.before.timeMs && r[1] < q.before.id))) return false;
+    if (q.after && !(r[0] > q.after.timeMs || (r[0] === q.after.timeMs && r[1] > q.after.id))) return false;
+    return true;
+  };
+  let lowMs = q.fromMs;
+  let highMs = q.toMs;
+  if (q.before) highMs = Math.min(highMs, q.before.timeMs);
+  if (q.after) lowMs = Math.max(lowMs, q.after.timeMs);
+  if (lowMs > highMs) return { rows: [], more: false };
+  const lowMonth = Number.isFinite(lowMs) ? monthOf(lowMs) : -Infinity;
+  const highMonth = Number.isFinite(highMs) ? monthOf(highMs) : Infinity;
+  const direction = newest ? 'prev' : 'next';
+  const taken: MonthRow[] = [];
+  const store = tx.objectStore('logMonths');
+  const take = (buckets: MonthBucket[]): void => {
+    const rows: MonthRow[] = [];
+    for (const b of buckets) for (const r of b.rows) if (inWindow(r)) rows.push(r);
+    rows.sort(compareRows);
+    if (newest) rows.reverse();
+    for (const r of rows) taken.push(r);
+  };
+  if (q.vesselId !== null) {
+    let cursor = await store.openCursor(IDBKeyRange.bound([q.vesselId, lowMonth], [q.vesselId, highMonth]), direction);
+    while (cursor && taken.length <= q.limit) {
+      take([cursor.value]);
+      cursor = await cursor.continue();
+    }
+    return { rows: taken.slice(0, q.limit), more: taken.length > q.limit || cursor !== null };
+  }
+  const index = store.index('by-month');
+  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), newest ? 'prevunique' : 'nextunique');
+  while (cursor && taken.length <= q.limit) {
+    take(await index.getAll(cursor.key));
+    cursor = await cursor.continue();
+  }
+  return { rows: taken.slice(0, q.limit), more: taken.length > q.limit || cursor !== null };
+}
+
+export type { LogStores };
