@@ -78,6 +78,14 @@ const STRICT = { durability: 'strict' } as const;
  * @throws StoreError('cancelled') if options.signal aborts
  */
 export async function exportBackup(options: LongWorkOptions = {}): Promise<string> {
+  return (await exportBackupParts(options)).join('');
+}
+
+/**
+ * As exportBackup, as pieces whose concatenation is the document: a Blob or File made from them
+ * skips building one string of the whole file (hundreds of megabytes for a large log).
+ */
+export async function exportBackupParts(options: LongWorkOptions = {}): Promise<string[]> {
   const db = await getDb();
   await sealMigratedChecks(db);
   throwIfAborted(options.signal);
@@ -85,8 +93,8 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   const vessels = await tx.objectStore('vessels').getAll();
   const total = await countChecks(tx);
   // Blocks come in device-then-seq order, and hold each record's canonical JSON already: the
-  // file's check lines are the stored texts, in the order read. Only each device's last record
-  // is parsed, for its chain head.
+  // file's check lines are the stored texts, in the order read, one piece per page of blocks.
+  // Only each device's last record is parsed, for its chain head.
   const checkParts: string[] = [];
   const heads: ChainHead[] = [];
   let device: { id: string; count: number; last: string } | null = null;
@@ -98,28 +106,35 @@ export async function exportBackup(options: LongWorkOptions = {}): Promise<strin
   let done = 0;
   for await (const page of blockPages(tx)) {
     throwIfAborted(options.signal);
+    const texts: string[] = [];
     for (const block of page) {
       if (block.texts.length === 0) continue;
       if (!device || device.id !== block.deviceId) {
         closeDevice();
         device = { id: block.deviceId, count: 0, last: '' };
       }
-      for (const text of block.texts) checkParts.push(text);
+      for (const text of block.texts) texts.push(text);
       device.count += block.texts.length;
       device.last = block.texts[block.texts.length - 1]!;
-      done += block.texts.length;
     }
+    if (texts.length > 0) checkParts.push(texts.join(',\n'));
+    done += texts.length;
     options.onProgress?.(done, total);
   }
   closeDevice();
   await tx.done;
   const exportedAt = formatIsoWithOffset(new Date());
-  return (
-    `{"format":${JSON.stringify(BACKUP_FORMAT)},"formatVersion":${BACKUP_FORMAT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},\n` +
-    `"vessels":[${lines(vessels.map((v) => canonicalJson(v)))}],\n` +
-    `"checks":[${lines(checkParts)}],\n` +
-    `"chains":[${lines(heads.map((h) => canonicalJson(h)))}]}\n`
-  );
+  const checkLines: string[] = [];
+  checkParts.forEach((part, i) => checkLines.push(i === 0 ? '\n' : ',\n', part));
+  if (checkLines.length > 0) checkLines.push('\n');
+  return [
+    `{"format":${JSON.stringify(BACKUP_FORMAT)},"formatVersion":${BACKUP_FORMAT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},\n`,
+    `"vessels":[${lines(vessels.map((v) => canonicalJson(v)))}],\n`,
+    '"checks":[',
+    ...checkLines,
+    '],\n',
+    `"chains":[${lines(heads.map((h) => canonicalJson(h)))}]}\n`,
+  ];
 }
 
 function lines(items: string[]): string {

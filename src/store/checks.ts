@@ -3,6 +3,7 @@
 import type { IDBPDatabase } from 'idb';
 import { getDb, setAfterOpen } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
+import { SIGNAL_ORDER, VERDICT_IDS, worstSignalOfMask, type Signal, type StoredVerdict } from './facts.ts';
 import { canonicalJson, computeCheckHash } from './integrity.ts';
 import {
   addToLog,
@@ -14,6 +15,8 @@ import {
   LOG_STORES,
   pageRows,
   readRecords,
+  visitRows,
+  type MonthRow,
   settle,
   type LogBlock,
 } from './log-layout.ts';
@@ -232,14 +235,72 @@ export interface ListOptions {
   before?: CheckCursor;
 }
 
-async function listPage(vesselId: string | null, fromMs: number, toMs: number, options: ListOptions): Promise<CheckPage> {
-  const limit = requireLimit(options.limit);
-  const order = options.order ?? 'newest';
+/** Which checks a query covers; every part optional. */
+export interface CheckFilter {
+  vesselId?: string;
+  /** Taken at or after. */
+  from?: Date;
+  /** Taken at or before. */
+  to?: Date;
+  /** The stored saturation verdict; 'none' for records without one. */
+  verdict?: StoredVerdict | 'none';
+  /** Records carrying a caution with this signal word (the standing note left out). */
+  signal?: Signal;
+  /** Part of the technician's name, any case. */
+  technician?: string;
+  /** The start of the device id, any case. */
+  device?: string;
+}
+
+interface Window {
+  vesselId: string | null;
+  fromMs: number;
+  toMs: number;
+  match: ((row: MonthRow) => boolean) | undefined;
+}
+
+function windowOf(filter: CheckFilter): Window {
+  if (filter.vesselId !== undefined) requireUuid('vesselId', filter.vesselId);
+  const fromMs = filter.from ? filter.from.getTime() : -Infinity;
+  const toMs = filter.to ? filter.to.getTime() : Infinity;
+  if (Number.isNaN(fromMs)) throw invalid('from', 'expected a valid Date');
+  if (Number.isNaN(toMs)) throw invalid('to', 'expected a valid Date');
+  const tests: ((row: MonthRow) => boolean)[] = [];
+  if (filter.verdict !== undefined) {
+    const want = filter.verdict;
+    if (want !== 'none' && !(VERDICT_IDS as readonly string[]).includes(want)) {
+      throw invalid('verdict', `expected one of ${VERDICT_IDS.join(', ')} or none`);
+    }
+    tests.push(want === 'none' ? (r) => r[4] === null : (r) => r[4] === want);
+  }
+  if (filter.signal !== undefined) {
+    const bit = 1 << SIGNAL_ORDER.indexOf(filter.signal);
+    if (bit < 1) throw invalid('signal', `expected one of ${SIGNAL_ORDER.join(', ')}`);
+    tests.push((r) => (r[5] & bit) !== 0);
+  }
+  const tech = (filter.technician ?? '').trim().toLowerCase();
+  if (tech !== '') tests.push((r) => r[6].toLowerCase().includes(tech));
+  const device = (filter.device ?? '').trim().toLowerCase();
+  if (device !== '') tests.push((r) => r[2].toLowerCase().startsWith(device));
+  const match = tests.length === 0 ? undefined : (r: MonthRow) => tests.every((t) => t(r));
+  return { vesselId: filter.vesselId ?? null, fromMs, toMs, match };
+}
+
+/**
+ * A page of the checks a filter covers, newest first unless `order` is 'oldest' (by the instant
+ * taken; ties by id). The filter is answered from the month buckets; only the blocks of the page's
+ * `limit` (1–1000, default 50) checks are read. Pass the previous page's `next` as `before`.
+ * @throws StoreError('invalid-record') naming a bad filter field, limit or cursor
+ */
+export async function queryChecks(filter: CheckFilter & ListOptions = {}): Promise<CheckPage> {
+  const w = windowOf(filter);
+  const limit = requireLimit(filter.limit);
+  const order = filter.order ?? 'newest';
   if (order !== 'newest' && order !== 'oldest') throw invalid('order', 'expected "newest" or "oldest"');
-  const cursor = options.before === undefined ? undefined : requireCursor('before', options.before);
+  const cursor = filter.before === undefined ? undefined : requireCursor('before', filter.before);
   const tx = (await getDb()).transaction(LOG_STORES);
   const { rows, more } = await pageRows(tx, {
-    vesselId, fromMs, toMs, limit, order,
+    ...w, limit, order,
     ...(order === 'newest' ? { before: cursor } : { after: cursor }),
   });
   const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
@@ -248,13 +309,73 @@ async function listPage(vesselId: string | null, fromMs: number, toMs: number, o
   return { checks, next: more && last ? { timeMs: last[0], id: last[1] } : null };
 }
 
+/** Counts over the checks a filter covers. */
+export interface CheckTally {
+  checks: number;
+  byVerdict: Record<StoredVerdict | 'none', number>;
+  /** By the most severe signal word of each check; 'none' when it had only the standing note. */
+  byWorstSignal: Record<Signal | 'none', number>;
+  vessels: number;
+  technicians: number;
+  devices: number;
+  /** First and last instant among the matches, ms; null when none matched. */
+  firstMs: number | null;
+  lastMs: number | null;
+}
+
+/**
+ * Totals over the checks a filter covers, from the month buckets alone (no record is read).
+ * `onProgress` gets the running totals after each month; returns null if `signal` aborts.
+ */
+export async function tallyChecks(
+  filter: CheckFilter = {},
+  options: { signal?: AbortSignal; onProgress?: (sofar: CheckTally) => void } = {},
+): Promise<CheckTally | null> {
+  const w = windowOf(filter);
+  const tally: CheckTally = {
+    checks: 0,
+    byVerdict: Object.fromEntries([...VERDICT_IDS, 'none'].map((v) => [v, 0])) as CheckTally['byVerdict'],
+    byWorstSignal: Object.fromEntries([...SIGNAL_ORDER, 'none'].map((s) => [s, 0])) as CheckTally['byWorstSignal'],
+    vessels: 0,
+    technicians: 0,
+    devices: 0,
+    firstMs: null,
+    lastMs: null,
+  };
+  const vessels = new Set<string>();
+  const technicians = new Set<string>();
+  const devices = new Set<string>();
+  const finished = await visitRows((await getDb()).transaction(LOG_STORES), w, (r, vesselId) => {
+    tally.checks += 1;
+    tally.byVerdict[r[4] ?? 'none'] += 1;
+    tally.byWorstSignal[worstSignalOfMask(r[5]) ?? 'none'] += 1;
+    vessels.add(vesselId);
+    technicians.add(r[6]);
+    devices.add(r[2]);
+    if (tally.firstMs === null || r[0] < tally.firstMs) tally.firstMs = r[0];
+    if (tally.lastMs === null || r[0] > tally.lastMs) tally.lastMs = r[0];
+  }, {
+    signal: options.signal,
+    onMonth: () => {
+      tally.vessels = vessels.size;
+      tally.technicians = technicians.size;
+      tally.devices = devices.size;
+      options.onProgress?.({ ...tally });
+    },
+  });
+  if (!finished) return null;
+  tally.vessels = vessels.size;
+  tally.technicians = technicians.size;
+  tally.devices = devices.size;
+  return tally;
+}
+
 /**
  * A page of the whole log, newest first unless `order` is 'oldest' (by the instant taken; ties by
- * id). Only the month buckets the page reaches and the blocks of its `limit` (1–1000, default 50)
- * checks are read. Pass the previous page's `next` as `before` for the next page.
+ * id): queryChecks with no filter.
  */
 export async function listChecks(options: ListOptions = {}): Promise<CheckPage> {
-  return listPage(null, -Infinity, Infinity, options);
+  return queryChecks(pick(options));
 }
 
 /**
@@ -266,23 +387,16 @@ export async function checksForVessel(
   options: ListOptions & { from?: Date; to?: Date } = {},
 ): Promise<CheckPage> {
   requireUuid('vesselId', vesselId);
-  const fromMs = options.from ? options.from.getTime() : -Infinity;
-  const toMs = options.to ? options.to.getTime() : Infinity;
-  if (Number.isNaN(fromMs)) throw invalid('from', 'expected a valid Date');
-  if (Number.isNaN(toMs)) throw invalid('to', 'expected a valid Date');
-  return listPage(vesselId, fromMs, toMs, options);
+  return queryChecks({ ...pick(options), vesselId, ...(options.from ? { from: options.from } : {}), ...(options.to ? { to: options.to } : {}) });
 }
 
-/**
- * A page of every vessel's checks taken from `from` to `to` inclusive (either open), newest first
- * unless `order` is 'oldest'.
- */
-export async function checksBetween(options: ListOptions & { from?: Date; to?: Date } = {}): Promise<CheckPage> {
-  const fromMs = options.from ? options.from.getTime() : -Infinity;
-  const toMs = options.to ? options.to.getTime() : Infinity;
-  if (Number.isNaN(fromMs)) throw invalid('from', 'expected a valid Date');
-  if (Number.isNaN(toMs)) throw invalid('to', 'expected a valid Date');
-  return listPage(null, fromMs, toMs, options);
+/** Only the listing options (a caller's object may carry more). */
+function pick(o: ListOptions): ListOptions {
+  return {
+    ...(o.limit !== undefined ? { limit: o.limit } : {}),
+    ...(o.order !== undefined ? { order: o.order } : {}),
+    ...(o.before !== undefined ? { before: o.before } : {}),
+  };
 }
 
 /** How many checks are stored (one vessel's when given). Reads the month buckets, not the checks. */

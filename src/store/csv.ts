@@ -2,6 +2,7 @@
 // cells neutralised against spreadsheet formula injection. RFC 4180 quoting, CRLF line ends.
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
+import { signalMaskOf, worstSignalOfMask } from './facts.ts';
 import { blockPages, countChecks, LOG_STORES, pageRows, readRecords } from './log-layout.ts';
 import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
 import { requireUuid } from './validate.ts';
@@ -33,13 +34,8 @@ function fromResult(path: string): (r: CheckRecord) => Cell {
   return (r) => scalar(at(r.result, keys));
 }
 
-const SIGNAL_ORDER = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
-/** Every result carries the standing note (a NOTICE); counting it would make every row at least NOTICE. */
-const STANDING_NOTE_RULE = 'standing-note';
-
 function highestSignal(r: CheckRecord): Cell {
-  const raised = r.cautions.filter((c) => c.rule !== STANDING_NOTE_RULE);
-  return SIGNAL_ORDER.find((s) => raised.some((c) => c.signal === s)) ?? null;
+  return worstSignalOfMask(signalMaskOf(r.cautions));
 }
 
 /**
@@ -125,12 +121,25 @@ const PAGE = 1000;
  * @throws StoreError('invalid-record') for a bad vesselId; ('cancelled') if options.signal aborts
  */
 export async function exportCsv(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string> {
+  return (await exportCsvParts(options)).join('');
+}
+
+/** Rows per piece of exportCsvParts. */
+const ROWS_PER_PART = 2000;
+
+/**
+ * As exportCsv, as pieces whose concatenation is the file: a Blob or File made from them skips
+ * building one string of the whole file.
+ */
+export async function exportCsvParts(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string[]> {
   if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
   const db = await getDb();
   const tx = db.transaction(LOG_STORES);
   const total = await countChecks(tx, options.vesselId);
-  // One string per page (its rows joined), joined once at the end.
-  const parts: string[] = [csvFromChecks([]).slice(0, -2)];
+  const parts: string[] = [csvFromChecks([])];
+  const addRows = (rows: string[]) => {
+    for (let i = 0; i < rows.length; i += ROWS_PER_PART) parts.push(rows.slice(i, i + ROWS_PER_PART).join('\r\n') + '\r\n');
+  };
   let done = 0;
   if (options.vesselId === undefined) {
     // The whole log: its blocks read in their own order (device, then seq), each row written as
@@ -147,11 +156,11 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
       }
       options.onProgress?.(done, total);
     }
+    await tx.done;
     // By (timeMs, id), the order every listing uses.
     keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
-    for (const k of keyed) parts.push(k.text);
-    await tx.done;
-    return parts.join('\r\n') + '\r\n';
+    addRows(keyed.map((k) => k.text));
+    return parts;
   }
   // One vessel: its month buckets oldest first, a page of rows at a time, each page's blocks read once.
   let after: CheckCursor | undefined;
@@ -161,7 +170,7 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
     const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
     const lines: string[] = [];
     for (const r of records) if (r) lines.push(csvRow(r));
-    if (lines.length > 0) parts.push(lines.join('\r\n'));
+    addRows(lines);
     done += rows.length;
     options.onProgress?.(done, total);
     const last = rows[rows.length - 1];
@@ -169,5 +178,5 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
     after = { timeMs: last[0], id: last[1] };
   }
   await tx.done;
-  return parts.join('\r\n') + '\r\n';
+  return parts;
 }

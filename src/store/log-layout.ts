@@ -14,14 +14,16 @@
 //   move or split, so the rule holds as long as a new block is only started below every block of
 //   its device, or above every seq the device's last block holds.
 // - logMonths, key [vesselId, monthMs], index by-month: for each vessel and UTC calendar month,
-//   [timeMs, id, deviceId, seq] of its checks ascending by (timeMs, id): what listing, paging and
-//   date filters walk, newest first, without opening a block until a page's rows are known.
+//   a row per check ascending by (timeMs, id): where it is, and the facts the review filters and
+//   totals need (MonthRow), so listing, paging, filtering and counting walk these small values and
+//   open a block only for the rows a page shows.
 // - logIds, key: the last two hex digits of a check id: where each id is stored, and the ids of
 //   the checks that correct it. A v4 UUID is random there, so 256 values share the log evenly.
 //
 // A write touches a handful of values, whatever number of checks it adds; it runs only IndexedDB
 // requests inside its transaction, as every transaction here must.
 import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
+import { factsOfRecord, type StoredVerdict } from './facts.ts';
 import type { CheckRecord, CheckCursor } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 
@@ -38,8 +40,12 @@ export interface LogBlock {
   texts: string[];
 }
 
-/** [timeMs, id, deviceId, seq] of one check. */
-export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number];
+/**
+ * One check in a month bucket: where it sorts and is stored, and the facts filters and totals use
+ * (facts.ts): its saturation verdict (null: none), the signal words among its cautions as a
+ * SIGNAL_ORDER bit mask (standing note left out), and the technician.
+ */
+export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number, verdict: StoredVerdict | null, signals: number, technician: string];
 
 /** One vessel's checks in one UTC calendar month. */
 export interface MonthBucket {
@@ -229,7 +235,8 @@ export async function addToLog(
     const key = `${monthMs}\u0000${r.vesselId}`;
     let m = months.get(key);
     if (!m) months.set(key, (m = { vesselId: r.vesselId, monthMs, rows: [] }));
-    m.rows.push([r.timeMs, r.id, r.deviceId, r.seq]);
+    const f = factsOfRecord(r);
+    m.rows.push([r.timeMs, r.id, r.deviceId, r.seq, f.verdict, f.signals, f.technician]);
   }
   const idKeys = new Set<string>();
   for (const { record: r } of entries) {
@@ -413,6 +420,8 @@ export interface LogQuery {
   after?: CheckCursor | undefined;
   order: 'newest' | 'oldest';
   limit: number;
+  /** Only rows passing this count (the facts filter); all when absent. */
+  match?: ((row: MonthRow) => boolean) | undefined;
 }
 
 /**
@@ -426,7 +435,7 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
     if (r[0] < q.fromMs || r[0] > q.toMs) return false;
     if (q.before && !(r[0] < q.before.timeMs || (r[0] === q.before.timeMs && r[1] < q.before.id))) return false;
     if (q.after && !(r[0] > q.after.timeMs || (r[0] === q.after.timeMs && r[1] > q.after.id))) return false;
-    return true;
+    return q.match === undefined || q.match(r);
   };
   let lowMs = q.fromMs;
   let highMs = q.toMs;
@@ -460,6 +469,49 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
     cursor = await cursor.continue();
   }
   return { rows: taken.slice(0, q.limit), more: taken.length > q.limit || cursor !== null };
+}
+
+/**
+ * Every row of the listing's window (vesselId, fromMs, toMs, match), newest month first, handed
+ * to `visit` with its vessel a month at a time; `onMonth` follows each month. Reads month buckets
+ * only. Stops early (returns false) when `signal` aborts.
+ */
+export async function visitRows(
+  tx: LogTx<IDBTransactionMode>,
+  q: Pick<LogQuery, 'vesselId' | 'fromMs' | 'toMs' | 'match'>,
+  visit: (row: MonthRow, vesselId: string) => void,
+  options: { signal?: AbortSignal | undefined; onMonth?: (() => void) | undefined } = {},
+): Promise<boolean> {
+  if (q.fromMs > q.toMs) return true;
+  const lowMonth = Number.isFinite(q.fromMs) ? monthOf(q.fromMs) : -Infinity;
+  const highMonth = Number.isFinite(q.toMs) ? monthOf(q.toMs) : Infinity;
+  const store = tx.objectStore('logMonths');
+  const each = (buckets: MonthBucket[]) => {
+    for (const b of buckets) {
+      for (const r of b.rows) {
+        if (r[0] < q.fromMs || r[0] > q.toMs || (q.match !== undefined && !q.match(r))) continue;
+        visit(r, b.vesselId);
+      }
+    }
+    options.onMonth?.();
+  };
+  if (q.vesselId !== null) {
+    let cursor = await store.openCursor(IDBKeyRange.bound([q.vesselId, lowMonth], [q.vesselId, highMonth]), 'prev');
+    while (cursor) {
+      if (options.signal?.aborted) return false;
+      each([cursor.value]);
+      cursor = await cursor.continue();
+    }
+    return true;
+  }
+  const index = store.index('by-month');
+  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'prevunique');
+  while (cursor) {
+    if (options.signal?.aborted) return false;
+    each(await index.getAll(cursor.key));
+    cursor = await cursor.continue();
+  }
+  return true;
 }
 
 export type { LogStores };

@@ -193,7 +193,7 @@ describe('pageRows', () => {
           const vesselId = vessel === null ? null : VESSELS[vessel]!;
           const want = all
             .filter((r) => r.timeMs >= fromMs && r.timeMs <= toMs && (vesselId === null || r.vesselId === vesselId))
-            .map((r): MonthRow => [r.timeMs, r.id, r.deviceId, r.seq])
+            .map((r): MonthRow => [r.timeMs, r.id, r.deviceId, r.seq, null, 0, r.technician])
             .sort(compareRows);
           if (order === 'newest') want.reverse();
           const got: MonthRow[] = [];

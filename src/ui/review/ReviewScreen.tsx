@@ -39,10 +39,13 @@ export function ReviewScreen() {
   // While an import writes, counting totals would only compete with it for the store.
   const [importing, setImporting] = useState(false);
   const pager = useRef<ReviewPager | null>(null);
+  // Newest and oldest first come from the store (the whole match in that order); the other orders
+  // sort the rows shown.
+  const storeOrder = order === 'oldest' ? 'oldest' : 'newest';
 
   useEffect(() => {
     const stop = new AbortController();
-    const p = new ReviewPager(filter);
+    const p = new ReviewPager(filter, 50, storeOrder);
     pager.current = p;
     setLoading(true);
     setReadError('');
@@ -70,7 +73,7 @@ export function ReviewScreen() {
       }
     })();
     return () => stop.abort();
-  }, [filter, generation, importing]);
+  }, [filter, generation, importing, storeOrder]);
 
   // Issued after the first page's read, so the picker's vessels never hold up the first rows.
   useEffect(() => { void reviewVessels().then(setVessels, () => setVessels([])); }, [generation]);

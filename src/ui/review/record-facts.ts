@@ -1,10 +1,10 @@
 // What the review needs from one saved check, read defensively from its stored result (the result
 // is the check engine's output as plain JSON; an older or damaged record may lack any part of it).
-import type { CheckRecord, StoredCaution } from '../../store/index.ts';
+import { SIGNAL_ORDER, signalMaskOf, verdictOfResult, worstSignalOfMask, type CheckRecord, type Signal } from '../../store/index.ts';
 
-export type Signal = StoredCaution['signal'];
+export type { Signal };
 /** Most severe first (ISO 3864 / ANSI Z535 order). */
-export const SIGNALS: readonly Signal[] = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'];
+export const SIGNALS: readonly Signal[] = SIGNAL_ORDER;
 
 export type VerdictId = 'consistent' | 'pressure-above-saturation' | 'pressure-below-saturation' | 'none';
 /** `short` is for tables on a phone. */
@@ -14,9 +14,6 @@ export const VERDICTS: readonly { id: VerdictId; label: string; short: string }[
   { id: 'pressure-below-saturation', label: 'Pressure below saturation', short: 'p below' },
   { id: 'none', label: 'No verdict stored', short: 'none' },
 ];
-
-/** The caution every result ends with; it says nothing about this reading, so it never counts. */
-const STANDING_RULE = 'standing-note';
 
 export interface RecordFacts {
   verdict: VerdictId;
@@ -37,24 +34,19 @@ function finite(value: unknown): number | null {
   return typeof value === 'number' && Number.isFinite(value) ? value : null;
 }
 
+/** The stored saturation verdict (the store's definition, which its filters use too). */
 export function verdictOf(record: CheckRecord): VerdictId {
-  const v = field(field(field(record.result, 'saturation'), 'verdict'), 'verdict');
-  return v === 'consistent' || v === 'pressure-above-saturation' || v === 'pressure-below-saturation' ? v : 'none';
+  return verdictOfResult(record.result) ?? 'none';
 }
 
+/** The most severe signal word among the record's cautions, the standing note left out. */
 export function worstSignalOf(record: CheckRecord): Signal | null {
-  let best = SIGNALS.length;
-  for (const c of record.cautions) {
-    if (c.rule === STANDING_RULE) continue;
-    const rank = SIGNALS.indexOf(c.signal);
-    if (rank >= 0 && rank < best) best = rank;
-  }
-  return SIGNALS[best] ?? null;
+  return worstSignalOfMask(signalMaskOf(record.cautions));
 }
 
 /** Whether the record carries a caution with this signal word (standing note left out). */
 export function hasSignal(record: CheckRecord, signal: Signal): boolean {
-  return record.cautions.some((c) => c.signal === signal && c.rule !== STANDING_RULE);
+  return (signalMaskOf(record.cautions) & (1 << SIGNALS.indexOf(signal))) !== 0;
 }
 
 export function factsOf(record: CheckRecord): RecordFacts {

@@ -1,7 +1,6 @@
 // The supervisor's filter over the check log, and how its form fields read into it. Dates are the
 // reviewing device's local calendar days (a supervisor asks "what happened on the 3rd, here").
-import type { CheckRecord } from '../../store/index.ts';
-import { hasSignal, verdictOf, type Signal, type VerdictId } from './record-facts.ts';
+import type { Signal, VerdictId } from './record-facts.ts';
 
 export interface ReviewFilter {
   vesselId: string | null;
@@ -19,25 +18,6 @@ export interface ReviewFilter {
 export const NO_FILTER: ReviewFilter = {
   vesselId: null, fromMs: null, toMs: null, verdict: null, signal: null, technician: '', device: '',
 };
-
-/** True when the filter needs more than the store's vessel and time indexes can answer. */
-export function needsScan(f: ReviewFilter): boolean {
-  return f.verdict !== null || f.signal !== null || f.technician.trim() !== '' || f.device.trim() !== '';
-}
-
-/** Whether one record passes every part of the filter. */
-export function matches(r: CheckRecord, f: ReviewFilter): boolean {
-  if (f.vesselId !== null && r.vesselId !== f.vesselId) return false;
-  if (f.fromMs !== null && r.timeMs < f.fromMs) return false;
-  if (f.toMs !== null && r.timeMs > f.toMs) return false;
-  if (f.verdict !== null && verdictOf(r) !== f.verdict) return false;
-  if (f.signal !== null && !hasSignal(r, f.signal)) return false;
-  const tech = f.technician.trim().toLowerCase();
-  if (tech !== '' && !r.technician.toLowerCase().includes(tech)) return false;
-  const device = f.device.trim().toLowerCase();
-  if (device !== '' && !r.deviceId.toLowerCase().startsWith(device)) return false;
-  return true;
-}
 
 const DAY = /^(\d{4})-(\d{2})-(\d{2})$/;
 const MONTH = /^(\d{4})-(\d{2})$/;

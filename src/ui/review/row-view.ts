@@ -1,4 +1,5 @@
-// One log row as the review list shows it, and the orders the shown rows can be put in.
+// One log row as the review list shows it, and its orders: newest and oldest first over the whole
+// match (the store pages in that order), the others over the rows shown so far.
 import type { CheckRecord } from '../../store/index.ts';
 import { SIGNALS, factsOf, stampText, verdictLabel, type Signal, type VerdictId } from './record-facts.ts';
 
@@ -37,9 +38,9 @@ export type RowOrder = 'newest' | 'oldest' | 'vessel' | 'severity' | 'technician
 export const ROW_ORDERS: readonly { id: RowOrder; label: string }[] = [
   { id: 'newest', label: 'Newest first' },
   { id: 'oldest', label: 'Oldest first' },
-  { id: 'vessel', label: 'Vessel tag' },
-  { id: 'severity', label: 'Most severe signal word' },
-  { id: 'technician', label: 'Technician' },
+  { id: 'vessel', label: 'Vessel tag (rows shown)' },
+  { id: 'severity', label: 'Most severe signal word (rows shown)' },
+  { id: 'technician', label: 'Technician (rows shown)' },
 ];
 
 const severity = (s: Signal | null) => (s === null ? SIGNALS.length : SIGNALS.indexOf(s));

@@ -1,7 +1,7 @@
 // Export and import for the review screen: file names, downloads, reading a chosen file, and the
-// import report in words. The store does the work (exportBackup, exportCsv, importBackup).
+// import report in words. The store does the work (exportBackupParts, exportCsvParts, importBackup).
 import { StoreError, type LongWorkOptions } from '../../store/index.ts';
-import { exportBackup, exportCsv, importBackup, type ImportReport } from '../../store/transfer.ts';
+import { exportBackupParts, exportCsvParts, importBackup, type ImportReport } from '../../store/transfer.ts';
 
 export type ExportKind = 'csv' | 'json';
 
@@ -14,9 +14,10 @@ export function exportFileName(kind: ExportKind, now: Date): string {
 
 /** Runs an export and returns the file to hand to the browser. */
 export async function makeExport(kind: ExportKind, options: LongWorkOptions & { vesselId?: string }): Promise<File> {
-  const text = kind === 'csv' ? await exportCsv(options) : await exportBackup(options);
+  // Pieces, not one string: the browser builds the file from them without a copy of it all.
+  const parts = kind === 'csv' ? await exportCsvParts(options) : await exportBackupParts(options);
   const type = kind === 'csv' ? 'text/csv;charset=utf-8' : 'application/json';
-  return new File([text], exportFileName(kind, new Date()), { type });
+  return new File(parts, exportFileName(kind, new Date()), { type });
 }
 
 /** A file size for people, e.g. "1,234 KB". */

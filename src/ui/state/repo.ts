@@ -101,9 +101,9 @@ export async function persistenceLabel(): Promise<string> {
 export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string; blob: Blob }> {
   const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);
   if (kind === 'csv') {
-    const { exportCsv } = await import('../../store/transfer.ts');
-    return { name: `tankside-log-${stamp}.csv`, blob: new Blob([await exportCsv()], { type: 'text/csv' }) };
+    const { exportCsvParts } = await import('../../store/transfer.ts');
+    return { name: `tankside-log-${stamp}.csv`, blob: new Blob(await exportCsvParts(), { type: 'text/csv' }) };
   }
-  const { exportBackup } = await import('../../store/transfer.ts');
-  return { name: `tankside-backup-${stamp}.json`, blob: new Blob([await exportBackup()], { type: 'application/json' }) };
+  const { exportBackupParts } = await import('../../store/transfer.ts');
+  return { name: `tankside-backup-${stamp}.json`, blob: new Blob(await exportBackupParts(), { type: 'application/json' }) };
 }

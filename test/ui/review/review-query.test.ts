@@ -1,10 +1,10 @@
 // The review's filtered paging and totals against a brute-force reading of the same log: whatever
-// the filter and page size, paging returns exactly the matching records, newest first, once each.
+// the filter, page size and order, paging returns exactly the matching records, in order, once each.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { useFreshDatabase } from '../../store/fixtures.ts';
 import { addVessel, appendCheck, listChecks, type CheckRecord, type StoredCaution } from '../../../src/store/index.ts';
-import { matches, NO_FILTER, type ReviewFilter } from '../../../src/ui/review/review-filter.ts';
+import { NO_FILTER, type ReviewFilter } from '../../../src/ui/review/review-filter.ts';
 import { ReviewPager } from '../../../src/ui/review/review-query.ts';
 import { countTotals } from '../../../src/ui/review/review-totals.ts';
 import { verdictOf, worstSignalOf, SIGNALS, VERDICTS } from '../../../src/ui/review/record-facts.ts';
@@ -51,15 +51,29 @@ async function buildLog(): Promise<CheckRecord[]> {
   }
 }
 
-function expected(all: CheckRecord[], f: ReviewFilter): string[] {
-  return all
+/** The filter read straight off each record (this test's own reading, not the store's buckets). */
+function matches(r: CheckRecord, f: ReviewFilter): boolean {
+  const verdict = (r.result as { saturation?: { verdict?: { verdict?: string } } }).saturation?.verdict?.verdict;
+  if (f.vesselId !== null && r.vesselId !== f.vesselId) return false;
+  if (f.fromMs !== null && r.timeMs < f.fromMs) return false;
+  if (f.toMs !== null && r.timeMs > f.toMs) return false;
+  if (f.verdict !== null && (VERDICT_IDS.includes(verdict as never) ? verdict : 'none') !== f.verdict) return false;
+  if (f.signal !== null && !r.cautions.some((c) => c.signal === f.signal && c.rule !== 'standing-note')) return false;
+  if (f.technician.trim() !== '' && !r.technician.toLowerCase().includes(f.technician.trim().toLowerCase())) return false;
+  if (f.device.trim() !== '' && !r.deviceId.toLowerCase().startsWith(f.device.trim().toLowerCase())) return false;
+  return true;
+}
+
+function expected(all: CheckRecord[], f: ReviewFilter, order: 'newest' | 'oldest' = 'newest'): string[] {
+  const ids = all
     .filter((r) => matches(r, f))
     .sort((a, b) => b.timeMs - a.timeMs || (a.id < b.id ? 1 : -1))
     .map((r) => r.id);
+  return order === 'newest' ? ids : ids.reverse();
 }
 
-async function pageAll(f: ReviewFilter, pageSize: number): Promise<string[]> {
-  const pager = new ReviewPager(f, pageSize);
+async function pageAll(f: ReviewFilter, pageSize: number, order: 'newest' | 'oldest' = 'newest'): Promise<string[]> {
+  const pager = new ReviewPager(f, pageSize, order);
   const ids: string[] = [];
   for (let guard = 0; guard < 200; guard += 1) {
     const page = await pager.nextPage();
@@ -87,6 +101,7 @@ describe('ReviewPager and countTotals', () => {
       technician: fc.constantFrom('', 'osei', 'TANAKA', 'nobody'),
       device: fc.constantFrom('', devices[0]!.slice(0, 4), 'zzzz'),
       pageSize: fc.integer({ min: 1, max: 25 }),
+      order: fc.constantFrom<'newest' | 'oldest'>('newest', 'oldest'),
     });
     await fc.assert(
       fc.asyncProperty(filterArb, async (a) => {
@@ -100,8 +115,8 @@ describe('ReviewPager and countTotals', () => {
           technician: a.technician,
           device: a.device,
         };
-        const want = expected(all, f);
-        expect(await pageAll(f, a.pageSize)).toEqual(want);
+        const want = expected(all, f, a.order);
+        expect(await pageAll(f, a.pageSize, a.order)).toEqual(want);
         const totals = await countTotals(f);
         expect(totals?.checks).toBe(want.length);
         const picked = all.filter((r) => want.includes(r.id));
