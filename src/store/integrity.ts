@@ -345,6 +345,50 @@ export async function digestMany(
 
 const HASH_MEMBER = ',"hash":"';
 
+/** What chain verification reads of a record. */
+export type ChainLink = Pick<CheckRecord, 'id' | 'deviceId' | 'seq' | 'hash' | 'prevHash'>;
+
+const DEVICE_MEMBER = ',"deviceId":"';
+const ID_MEMBER = ',"id":"';
+const PREV_MEMBER = ',"prevHash":"';
+
+/**
+ * The chain fields of a check filed under `seq`, and its hashed content, read from its canonical
+ * JSON text without parsing it; null when the text is not in the shape the store writes (the
+ * caller then parses it). Exact for the same reason contentOfText is: every member before
+ * "prevHash" holds strings, null, cautions of {message, rule, signal} or inputs of {text, unit,
+ * reference} objects, so the first `,"deviceId":"`, `,"hash":"` and `,"prevHash":"` (with the
+ * opening quote of a string value) are the top-level ones, and "id" follows "hash" directly. The
+ * seq sits after free-form members (result), so it is taken from where the record is filed and
+ * the text is only checked to hold it; a record filed under another seq breaks the chain's links
+ * anyway, since its hash covers its real seq.
+ */
+export function chainFieldsOfText(text: string, seq: number): { link: ChainLink; content: string } | null {
+  const d = text.indexOf(DEVICE_MEMBER);
+  if (d < 0) return null;
+  const dEnd = text.indexOf('"', d + DEVICE_MEMBER.length);
+  const h = text.indexOf(HASH_MEMBER, dEnd);
+  if (dEnd < 0 || h < 0) return null;
+  const hEnd = text.indexOf('"', h + HASH_MEMBER.length);
+  if (hEnd < 0 || !text.startsWith(ID_MEMBER, hEnd + 1)) return null;
+  const iStart = hEnd + 1 + ID_MEMBER.length;
+  const iEnd = text.indexOf('"', iStart);
+  const p = text.indexOf(PREV_MEMBER, iEnd);
+  if (iEnd < 0 || p < 0) return null;
+  const pEnd = text.indexOf('"', p + PREV_MEMBER.length);
+  if (pEnd < 0 || !text.includes(`,"seq":${seq},"technician":"`, pEnd)) return null;
+  return {
+    link: {
+      deviceId: text.slice(d + DEVICE_MEMBER.length, dEnd),
+      hash: text.slice(h + HASH_MEMBER.length, hEnd),
+      id: text.slice(iStart, iEnd),
+      prevHash: text.slice(p + PREV_MEMBER.length, pEnd),
+      seq,
+    },
+    content: text.slice(0, h) + text.slice(hEnd + 1),
+  };
+}
+
 /**
  * The hashed content of a check from its canonical JSON text: the text without its top-level
  * `"hash":"…"` member, which is hashedContent(record) without building it again. Exact for any
@@ -393,7 +437,7 @@ export class ChainVerifier {
    * Counts a record found where its own fields say it is not (another device's run, or a seq
    * other than the one it is filed under): its device's chain is broken there, as 'reordered'.
    */
-  pushMisplaced(r: CheckRecord, detail: string): void {
+  pushMisplaced(r: ChainLink, detail: string): void {
     let s = this.state.get(r.deviceId);
     if (!s) this.state.set(r.deviceId, (s = { count: 0, expectedSeq: 1, prevHash: GENESIS_HASH }));
     s.count += 1;
@@ -401,7 +445,7 @@ export class ChainVerifier {
   }
 
   /** As push, with the record's content hash already computed by the caller. */
-  pushHashed(r: CheckRecord, computedHash: string): void {
+  pushHashed(r: ChainLink, computedHash: string): void {
     let s = this.state.get(r.deviceId);
     if (!s) this.state.set(r.deviceId, (s = { count: 0, expectedSeq: 1, prevHash: GENESIS_HASH }));
     s.count += 1;

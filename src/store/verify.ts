@@ -1,6 +1,6 @@
 // Chain verification over the stored log, a page of blocks at a time (a large log never sits in memory).
 import { getDb } from './connection.ts';
-import { ChainVerifier, contentOfText, digestMany, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { ChainVerifier, chainFieldsOfText, contentOfText, digestMany, throwIfAborted, type ChainLink, type ChainStatus } from './integrity.ts';
 import { blocksAfter, countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
 import type { CheckRecord, LongWorkOptions } from './records.ts';
 
@@ -30,30 +30,33 @@ export async function verifyStoredChains(options: LongWorkOptions = {}): Promise
     throwIfAborted(options.signal);
     if (blocks.length === 0) break;
     next = readPage(blocks[blocks.length - 1]!);
-    const texts: string[] = [];
-    const records: CheckRecord[] = [];
+    // Each record's chain fields read straight from its text (no parse); a text not in the
+    // store's shape is parsed instead, and judged by what it says.
+    const contents: string[] = [];
+    const links: ChainLink[] = [];
     const misplaced: (string | null)[] = [];
     for (const block of blocks) {
       block.texts.forEach((text, i) => {
-        const r = JSON.parse(text) as CheckRecord;
-        texts.push(text);
-        records.push(r);
-        const seq = block.seqs[i];
+        const seq = block.seqs[i]!;
+        const fast = chainFieldsOfText(text, seq);
+        const link: ChainLink = fast?.link ?? (JSON.parse(text) as CheckRecord);
+        contents.push(fast ? fast.content : contentOfText(text));
+        links.push(link);
         misplaced.push(
-          r.deviceId !== block.deviceId || r.seq !== seq
-            ? `seq ${r.seq}: stored as seq ${String(seq)} of device ${block.deviceId}`
+          link.deviceId !== block.deviceId || link.seq !== seq
+            ? `seq ${link.seq}: stored as seq ${String(seq)} of device ${block.deviceId}`
             : null,
         );
       });
     }
-    const hashes = await digestMany(texts.length, (i) => (records[i]!.hash === '' ? '' : contentOfText(texts[i]!)), { signal: options.signal });
+    const hashes = await digestMany(contents.length, (i) => (links[i]!.hash === '' ? '' : contents[i]!), { signal: options.signal });
     throwIfAborted(options.signal);
-    records.forEach((r, i) => {
+    links.forEach((r, i) => {
       const wrong = misplaced[i];
       if (wrong) verifier.pushMisplaced(r, wrong);
       else verifier.pushHashed(r, r.hash === '' ? '' : hashes[i]!);
     });
-    done += records.length;
+    done += links.length;
     options.onProgress?.(done, total);
   }
   return verifier.results();

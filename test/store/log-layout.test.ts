@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { useFreshDatabase } from './fixtures.ts';
 import { getDb } from '../../src/store/connection.ts';
-import { canonicalJson, contentOfText, hashedContent } from '../../src/store/integrity.ts';
+import { canonicalJson, chainFieldsOfText, contentOfText, hashedContent } from '../../src/store/integrity.ts';
 import {
   addToLog,
   blockFor,
@@ -227,6 +227,20 @@ describe('contentOfText', () => {
           expect(contentOfText(canonicalJson(r))).toBe(hashedContent(r));
         }),
       { numRuns: 500 },
+    );
+  });
+
+  it('chainFieldsOfText reads id, device, hashes and content exactly, and refuses a text filed under another seq (property)', () => {
+    const inputs = fc.dictionary(fc.constantFrom('prevHash', 'hash', 'seq', 'id', 'temperature'), fc.record({ text, unit: text }), { maxKeys: 3 });
+    fc.assert(
+      fc.property(text, text, inputs, fc.integer({ min: 1, max: 1e9 }), fc.jsonValue(), (note, technician, typed, seq, result) => {
+        const r = { ...record(0, seq, T0, 0), note: `,"prevHash":"${note}`, technician, inputs: typed, result: { x: result, seq, technician: 'x' } as never };
+        const textOf = canonicalJson(r);
+        const got = chainFieldsOfText(textOf, seq);
+        expect(got).toEqual({ link: { id: r.id, deviceId: r.deviceId, seq, hash: r.hash, prevHash: r.prevHash }, content: hashedContent(r) });
+        expect(chainFieldsOfText(textOf, seq + 1)).toBeNull();
+      }),
+      { numRuns: 300 },
     );
   });
 });

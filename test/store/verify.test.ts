@@ -38,6 +38,12 @@ describe('verifyStoredChains', () => {
     expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'content-changed', at: { seq: 2 } }]);
   });
 
+  it('points at a record whose own seq is not the one it is filed under', async () => {
+    const saved = await seed(4);
+    await editStored(saved[2]!.id, (r) => ({ ...r, seq: 7 }));
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'reordered', at: { id: saved[2]!.id, seq: 7 } }]);
+  });
+
   it('reports progress over pages and stops on cancel', async () => {
     await seed(3);
     const seen: [number, number][] = [];
