@@ -514,4 +514,49 @@ export async function visitRows(
   return true;
 }
 
+/**
+ * Every stored record of the whole log from `fromMs` to `toMs`, oldest first by (timeMs, id), a
+ * month at a time: each month's rows from its buckets, then for each device the run of blocks its
+ * rows of that month fall in, read in one request and each record parsed once. The months of a
+ * device's chain follow its seq order closely, so each block is read about once in all.
+ */
+export async function* monthsOfRecords(
+  tx: LogTx<IDBTransactionMode>,
+  fromMs = -Infinity,
+  toMs = Infinity,
+): AsyncGenerator<CheckRecord[], void, undefined> {
+  if (fromMs > toMs) return;
+  const index = tx.objectStore('logMonths').index('by-month');
+  const lowMonth = Number.isFinite(fromMs) ? monthOf(fromMs) : -Infinity;
+  const highMonth = Number.isFinite(toMs) ? monthOf(toMs) : Infinity;
+  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'nextunique');
+  while (cursor) {
+    const rows: MonthRow[] = [];
+    for (const b of await index.getAll(cursor.key)) for (const r of b.rows) if (r[0] >= fromMs && r[0] <= toMs) rows.push(r);
+    rows.sort(compareRows);
+    const span = new Map<string, [number, number]>();
+    for (const r of rows) {
+      const s = span.get(r[2]);
+      if (!s) span.set(r[2], [r[3], r[3]]);
+      else {
+        if (r[3] < s[0]) s[0] = r[3];
+        if (r[3] > s[1]) s[1] = r[3];
+      }
+    }
+    const texts = new Map<string, Map<number, string>>();
+    await Promise.all([...span].map(async ([deviceId, [lo, hi]]) => {
+      const bySeq = new Map<number, string>();
+      for (const b of await deviceBlocks(tx, deviceId, lo, hi)) b.seqs.forEach((seq, i) => bySeq.set(seq, b.texts[i]!));
+      texts.set(deviceId, bySeq);
+    }));
+    const records: CheckRecord[] = [];
+    for (const r of rows) {
+      const text = texts.get(r[2])?.get(r[3]);
+      if (text !== undefined) records.push(JSON.parse(text) as CheckRecord);
+    }
+    yield records;
+    cursor = await cursor.continue();
+  }
+}
+
 export type { LogStores };

@@ -141,8 +141,8 @@ describe('exports across pages', () => {
     const seen: number[] = [];
     const rows = Papa.parse<Record<string, string>>(await exportCsv({ onProgress: (d) => seen.push(d) }), { header: true, skipEmptyLines: true }).data;
     expect(rows.map((r) => r['check id'])).toEqual(all.map((r) => r.id));
-    expect(seen).toHaveLength(2);
     expect(seen.at(-1)).toBe(2 * half);
+    expect(seen).toEqual([...seen].sort((x, y) => x - y));
     expect(rows.find((r) => r['note']!.startsWith("'="))).toBeDefined();
     const onA = Papa.parse<Record<string, string>>(await exportCsv({ vesselId: a.id }), { header: true, skipEmptyLines: true }).data;
     expect(onA.map((r) => r['check id'])).toEqual(all.filter((r) => r.vesselId === a.id).map((r) => r.id));
