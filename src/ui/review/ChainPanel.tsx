@@ -1,5 +1,6 @@
 // Chain status of every device whose records are here; a broken chain points at its first bad record.
 import { useState } from 'preact/hooks';
+import { StoreError } from '../../store/index.ts';
 import { hrefFor } from '../router.ts';
 import { checkChains, type ChainLine } from './chain-view.ts';
 import { useLongWork } from './use-long-work.ts';
@@ -9,13 +10,20 @@ export function ChainPanel() {
   const work = useLongWork();
   const [lines, setLines] = useState<ChainLine[] | null>(null);
   const [message, setMessage] = useState('');
+  const [cancelled, setCancelled] = useState(false);
   const verify = async () => {
     setMessage('');
+    setCancelled(false);
+    // A new run replaces the last result: kept up, it would read as the answer of a run that was
+    // cancelled, or stand for a log that an import has changed since.
+    setLines(null);
     try {
       const result = await work.run('Verifying chains', (o) => checkChains(o));
       if (result) setLines(result);
     } catch (e) {
-      setMessage(e instanceof Error ? e.message : String(e));
+      // Cancelling is the user's choice, not a fault: said plainly, not as an error.
+      if (e instanceof StoreError && e.code === 'cancelled') setCancelled(true);
+      else setMessage(e instanceof Error ? e.message : String(e));
     }
   };
   return (
@@ -25,6 +33,7 @@ export function ChainPanel() {
       <button type="button" class="primary" onClick={() => void verify()} disabled={work.running !== null}>Verify chains</button>
       <WorkProgress work={work} id="chain-progress" />
       {message ? <p class="field-error" role="alert">{message}</p> : null}
+      {cancelled ? <p class="muted" role="status" data-chain-result="cancelled">Verification cancelled before the end; no result.</p> : null}
       {lines ? (
         <ul class="review-chains" aria-label="Chain status per device">
           {lines.length === 0 ? <li>No records on this device yet.</li> : null}

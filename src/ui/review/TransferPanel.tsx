@@ -1,5 +1,6 @@
 // Export (CSV, JSON backup) and import of a backup from another device, with the import's report.
 import { useState } from 'preact/hooks';
+import { StoreError } from '../../store/index.ts';
 import { WorkProgress } from './WorkProgress.tsx';
 import { fileSizeText, importFile, makeExport, offerDownload, type ExportKind, type ImportOutcome } from './transfer.ts';
 import { useLongWork } from './use-long-work.ts';
@@ -7,22 +8,24 @@ import { ImportReportView } from './ImportReportView.tsx';
 
 export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): void; onImported(): void }) {
   const work = useLongWork();
-  const [message, setMessage] = useState('');
+  // What the last export came to, said in words and, for tests, in data-export-result.
+  const [message, setMessage] = useState<{ text: string; result: 'ready' | 'cancelled' | 'failed' } | null>(null);
   const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
   const [file, setFile] = useState<File | null>(null);
   const [runs, setRuns] = useState(0);
   const busy = work.running !== null;
 
   const exportAs = async (kind: ExportKind) => {
-    setMessage('');
+    setMessage(null);
     try {
       const made = await work.run(kind === 'csv' ? 'Writing the CSV' : 'Writing the backup', (o) => makeExport(kind, o));
       if (made) {
         offerDownload(made);
-        setMessage(`Ready: ${made.name} (${fileSizeText(made.size)}).`);
+        setMessage({ text: `Ready: ${made.name} (${fileSizeText(made.size)}).`, result: 'ready' });
       }
     } catch (e) {
-      setMessage(`Export stopped: ${e instanceof Error ? e.message : String(e)}`);
+      if (e instanceof StoreError && e.code === 'cancelled') setMessage({ text: 'Export cancelled; no file was made.', result: 'cancelled' });
+      else setMessage({ text: `Export stopped: ${e instanceof Error ? e.message : String(e)}`, result: 'failed' });
     }
   };
   const runImport = async () => {
@@ -45,7 +48,7 @@ export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): v
         <button type="button" onClick={() => void exportAs('csv')} disabled={busy}>Download CSV</button>
         <button type="button" onClick={() => void exportAs('json')} disabled={busy}>Download JSON backup</button>
       </div>
-      <p aria-live="polite" data-export-message>{message}</p>
+      <p aria-live="polite" data-export-message data-export-result={message?.result}>{message?.text ?? ''}</p>
       <div class="field">
         <label for="rt-file">Backup file from another device</label>
         <input id="rt-file" class="file-input" type="file" accept=".json,application/json" disabled={busy}
