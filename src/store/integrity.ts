@@ -325,6 +325,7 @@ export async function digestMany(
   for (let start = 0; ; start += group) {
     let issued: { start: number; digests: Promise<string[]> } | null = null;
     if (start < count) {
+      await breathe();
       throwIfAborted(options.signal);
       const texts: Promise<string>[] = [];
       for (let i = start; i < Math.min(count, start + group); i += 1) texts.push(sha256Hex(textAt(i)));
@@ -477,6 +478,30 @@ export class ChainVerifier {
           : { deviceId, status: 'ok' as const, count: s.count, headSeq: s.expectedSeq - 1, headHash: s.prevHash },
       );
   }
+}
+
+/** When the page last had a turn: long work gives it one every BREATH_MS or so. */
+let lastBreath = 0;
+const BREATH_MS = 40;
+
+/**
+ * Lets the page paint and handle input (a tap on Cancel) if this work has held the thread for
+ * BREATH_MS: the rest of the work continues in a new task (a message to itself, which unlike a
+ * timer is not held back to 4 ms). Never call it inside an IndexedDB transaction that must stay
+ * open: the transaction commits once its task ends with no request pending.
+ */
+export async function breathe(): Promise<void> {
+  const now = performance.now();
+  if (now - lastBreath < BREATH_MS) return;
+  await new Promise<void>((resolve) => {
+    const channel = new MessageChannel();
+    channel.port1.onmessage = () => {
+      channel.port1.close();
+      resolve();
+    };
+    channel.port2.postMessage(null);
+  });
+  lastBreath = performance.now();
 }
 
 /** Report progress about 200 times over a job of `total` steps, however large. */
