@@ -10,7 +10,8 @@ import type { IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
-import { canonicalJson, ChainVerifier, contentOfText, digestMany, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { hashTexts } from './hash-texts.ts';
+import { canonicalJson, ChainVerifier, contentOfText, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import {
   addToLog,
   blockPages,
@@ -531,12 +532,12 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   await sealMigratedChecks(db);
   const total = doc.checks.length * 2 + doc.vessels.length;
   // Each record's canonical text is what the store keeps; its content (the text without the
-  // hash) is what the hash covers. Hashed before any transaction opens (WebCrypto is not
-  // IndexedDB work), many digests at a time.
+  // hash) is what the hash covers. Hashed before any transaction opens (a transaction would
+  // commit while the hashing gives the page its turns).
   const texts = doc.checks.map((c) => canonicalJson(c));
   const every = progressStep(total);
   let reported = 0;
-  const hashes = await digestMany(texts.length, (i) => contentOfText(texts[i]!), {
+  const hashes = await hashTexts(texts.length, (i) => contentOfText(texts[i]!), {
     signal: options.signal,
     onProgress: (done) => {
       if (done - reported < every) return;

@@ -1,15 +1,15 @@
 // Chain verification over the stored log, a page of blocks at a time (a large log never sits in memory).
 import { getDb } from './connection.ts';
-import { ChainVerifier, chainFieldsOfText, contentOfText, digestMany, throwIfAborted, type ChainLink, type ChainStatus } from './integrity.ts';
+import { hashTexts } from './hash-texts.ts';
+import { ChainVerifier, chainFieldsOfText, contentOfText, throwIfAborted, type ChainLink, type ChainStatus } from './integrity.ts';
 import { blocksAfter, countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
 import type { CheckRecord, LongWorkOptions } from './records.ts';
 
 /**
  * Verifies every device's chain in the store, reading its blocks in device-then-seq order. Each
  * page of blocks is read in its own read-only transaction (a transaction cannot stay open across
- * WebCrypto's digests), the next one while the current one is being hashed; a page's hashes are
- * computed concurrently, each over the stored text without its hash (contentOfText), which is
- * the record's hashed content. Reports per device: ok, or the first broken record and why.
+ * the hashing between pages), the next one while the current one is being hashed; each hash is
+ * over the stored text without its hash member, which is the record's hashed content. Reports per device: ok, or the first broken record and why.
  * Writes nothing, so a cancel leaves nothing behind.
  * @throws StoreError('cancelled') if options.signal aborts
  */
@@ -49,7 +49,7 @@ export async function verifyStoredChains(options: LongWorkOptions = {}): Promise
         );
       });
     }
-    const hashes = await digestMany(contents.length, (i) => (links[i]!.hash === '' ? '' : contents[i]!), { signal: options.signal });
+    const hashes = await hashTexts(contents.length, (i) => (links[i]!.hash === '' ? '' : contents[i]!), { signal: options.signal });
     throwIfAborted(options.signal);
     links.forEach((r, i) => {
       const wrong = misplaced[i];
