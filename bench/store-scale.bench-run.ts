@@ -11,7 +11,8 @@ import { checksForVessel, closeStore, countStoredChecks, listChecks, openStore, 
 import { exportBackup, exportCsv, importBackup, verifyStoredChains } from '../src/store/transfer.ts';
 import { getDb } from '../src/store/connection.ts';
 import { canonicalJson } from '../src/store/integrity.ts';
-import { blocksAfter, type LogBlock } from '../src/store/log-layout.ts';
+import type { LogBlock } from '../src/store/log-layout.ts';
+import { blocksAfter } from '../src/store/log-walks.ts';
 import { resetPersistenceMemo } from '../src/store/settings.ts';
 import { benchChecks, benchId, benchVessels, writeRaw } from './scale-data.ts';
 

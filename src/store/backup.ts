@@ -11,12 +11,12 @@ import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
 import { hashTexts } from './hash-texts.ts';
+import { deviceBlocks } from './log-walks.ts';
 import { canonicalJson, ChainVerifier, contentOfText, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import {
   addToLog,
   blockPages,
   countChecks,
-  deviceBlocks,
   locateIds,
   LOG_STORES,
   readRecords,

@@ -3,7 +3,7 @@
 import type { IDBPDatabase } from 'idb';
 import { getDb, setAfterOpen } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
-import { SIGNAL_ORDER, VERDICT_IDS, worstSignalOfMask, type Signal, type StoredVerdict } from './facts.ts';
+import { SIGNAL_ORDER, VERDICT_IDS, type Signal, type StoredVerdict } from './facts.ts';
 import { canonicalJson, computeCheckHash } from './integrity.ts';
 import {
   addToLog,
@@ -15,7 +15,6 @@ import {
   LOG_STORES,
   pageRows,
   readRecords,
-  visitRows,
   type MonthRow,
   settle,
   type LogBlock,
@@ -252,14 +251,15 @@ export interface CheckFilter {
   device?: string;
 }
 
-interface Window {
+export interface Window {
   vesselId: string | null;
   fromMs: number;
   toMs: number;
   match: ((row: MonthRow) => boolean) | undefined;
 }
 
-function windowOf(filter: CheckFilter): Window {
+/** The filter as the month buckets answer it. @throws StoreError('invalid-record') naming a bad field */
+export function windowOf(filter: CheckFilter): Window {
   if (filter.vesselId !== undefined) requireUuid('vesselId', filter.vesselId);
   const fromMs = filter.from ? filter.from.getTime() : -Infinity;
   const toMs = filter.to ? filter.to.getTime() : Infinity;
@@ -307,67 +307,6 @@ export async function queryChecks(filter: CheckFilter & ListOptions = {}): Promi
   const checks = records.filter((r): r is CheckRecord => r !== undefined);
   const last = rows[rows.length - 1];
   return { checks, next: more && last ? { timeMs: last[0], id: last[1] } : null };
-}
-
-/** Counts over the checks a filter covers. */
-export interface CheckTally {
-  checks: number;
-  byVerdict: Record<StoredVerdict | 'none', number>;
-  /** By the most severe signal word of each check; 'none' when it had only the standing note. */
-  byWorstSignal: Record<Signal | 'none', number>;
-  vessels: number;
-  technicians: number;
-  devices: number;
-  /** First and last instant among the matches, ms; null when none matched. */
-  firstMs: number | null;
-  lastMs: number | null;
-}
-
-/**
- * Totals over the checks a filter covers, from the month buckets alone (no record is read).
- * `onProgress` gets the running totals after each month; returns null if `signal` aborts.
- */
-export async function tallyChecks(
-  filter: CheckFilter = {},
-  options: { signal?: AbortSignal; onProgress?: (sofar: CheckTally) => void } = {},
-): Promise<CheckTally | null> {
-  const w = windowOf(filter);
-  const tally: CheckTally = {
-    checks: 0,
-    byVerdict: Object.fromEntries([...VERDICT_IDS, 'none'].map((v) => [v, 0])) as CheckTally['byVerdict'],
-    byWorstSignal: Object.fromEntries([...SIGNAL_ORDER, 'none'].map((s) => [s, 0])) as CheckTally['byWorstSignal'],
-    vessels: 0,
-    technicians: 0,
-    devices: 0,
-    firstMs: null,
-    lastMs: null,
-  };
-  const vessels = new Set<string>();
-  const technicians = new Set<string>();
-  const devices = new Set<string>();
-  const finished = await visitRows((await getDb()).transaction(LOG_STORES), w, (r, vesselId) => {
-    tally.checks += 1;
-    tally.byVerdict[r[4] ?? 'none'] += 1;
-    tally.byWorstSignal[worstSignalOfMask(r[5]) ?? 'none'] += 1;
-    vessels.add(vesselId);
-    technicians.add(r[6]);
-    devices.add(r[2]);
-    if (tally.firstMs === null || r[0] < tally.firstMs) tally.firstMs = r[0];
-    if (tally.lastMs === null || r[0] > tally.lastMs) tally.lastMs = r[0];
-  }, {
-    signal: options.signal,
-    onMonth: () => {
-      tally.vessels = vessels.size;
-      tally.technicians = technicians.size;
-      tally.devices = devices.size;
-      options.onProgress?.({ ...tally });
-    },
-  });
-  if (!finished) return null;
-  tally.vessels = vessels.size;
-  tally.technicians = technicians.size;
-  tally.devices = devices.size;
-  return tally;
 }
 
 /**

@@ -3,7 +3,8 @@
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
 import { signalMaskOf, worstSignalOfMask } from './facts.ts';
-import { countChecks, LOG_STORES, monthsOfRecords, pageRows, readRecords } from './log-layout.ts';
+import { countChecks, LOG_STORES, pageRows, readRecords } from './log-layout.ts';
+import { monthsOfRecords } from './log-walks.ts';
 import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
 import { requireUuid } from './validate.ts';
 

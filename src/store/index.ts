@@ -32,8 +32,8 @@ export type {
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
 
 // Checks (append-only)
-export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, tallyChecks, countStoredChecks, correctionsOf } from './checks.ts';
-export type { CheckFilter, CheckTally, ListOptions } from './checks.ts';
+export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
+export type { CheckFilter, ListOptions } from './checks.ts';
 export { SIGNAL_ORDER, VERDICT_IDS, signalMaskOf, verdictOfResult, worstSignalOfMask } from './facts.ts';
 export type { Signal, StoredVerdict } from './facts.ts';
 

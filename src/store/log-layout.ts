@@ -68,7 +68,7 @@ export type IdBucket = Record<string, IdEntry>;
 export const LOG_STORES = ['logBlocks', 'logMonths', 'logIds'] as const;
 type LogStores = (typeof LOG_STORES)[number];
 /** Any transaction whose scope includes the three log stores. */
-type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
+export type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
 
 /** Where a check is in logBlocks. */
 export interface CheckRef {
@@ -132,7 +132,7 @@ export function blockFor(firstSeqs: readonly number[], seq: number): number | un
   return found;
 }
 
-async function firstSeqsOf(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<number[]> {
+export async function firstSeqsOf(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<number[]> {
   const keys = await tx.objectStore('logBlocks').getAllKeys(deviceRange(deviceId));
   return keys.map((k) => k[1]);
 }
@@ -176,15 +176,6 @@ export async function locateIds(tx: LogTx<IDBTransactionMode>, ids: readonly str
   return out;
 }
 
-/** Every stored id with its place, reading all of logIds (for an import's duplicate check). */
-export async function allIdEntries(tx: LogTx<IDBTransactionMode>): Promise<Map<string, IdEntry>> {
-  const out = new Map<string, IdEntry>();
-  for (const bucket of await tx.objectStore('logIds').getAll()) {
-    for (const id in bucket) out.set(id, bucket[id]!);
-  }
-  return out;
-}
-
 /** The last stored check of a device: its seq and hash (seq 0 when it has none). */
 export async function chainHead(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<{ seq: number; hash: string } | null> {
   const cursor = await tx.objectStore('logBlocks').openCursor(deviceRange(deviceId), 'prev');
@@ -192,13 +183,6 @@ export async function chainHead(tx: LogTx<IDBTransactionMode>, deviceId: string)
   if (!block || block.texts.length === 0) return null;
   const last = JSON.parse(block.texts[block.texts.length - 1]!) as CheckRecord;
   return { seq: last.seq, hash: last.hash };
-}
-
-/** The blocks of one device whose firstSeq lies in [fromSeq, toSeq], ascending. */
-export async function deviceBlocks(tx: LogTx<IDBTransactionMode>, deviceId: string, fromSeq: number, toSeq: number): Promise<LogBlock[]> {
-  const firstSeqs = await firstSeqsOf(tx, deviceId);
-  const start = blockFor(firstSeqs, fromSeq) ?? -Infinity;
-  return tx.objectStore('logBlocks').getAll(IDBKeyRange.bound([deviceId, start], [deviceId, toSeq]));
 }
 
 /** A refusal inside a write: the transaction is aborted and nothing is written. Named as IndexedDB names its own. */
@@ -395,12 +379,6 @@ export async function* blockPages(tx: LogTx<IDBTransactionMode>): AsyncGenerator
   }
 }
 
-/** The next page of blocks after `after` (exclusive), in its own read-only transaction. */
-export function blocksAfter(db: IDBPDatabase<TanksideDB>, after: LogBlock | null, count = BLOCK_PAGE): Promise<LogBlock[]> {
-  const range = after === null ? undefined : IDBKeyRange.lowerBound([after.deviceId, after.firstSeq], true);
-  return db.getAll('logBlocks', range, count);
-}
-
 /** How many checks the log holds (counts rows of every month bucket; a vessel's alone when given). */
 export async function countChecks(tx: LogTx<IDBTransactionMode>, vesselId?: string): Promise<number> {
   const store = tx.objectStore('logMonths');
@@ -469,94 +447,6 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
     cursor = await cursor.continue();
   }
   return { rows: taken.slice(0, q.limit), more: taken.length > q.limit || cursor !== null };
-}
-
-/**
- * Every row of the listing's window (vesselId, fromMs, toMs, match), newest month first, handed
- * to `visit` with its vessel a month at a time; `onMonth` follows each month. Reads month buckets
- * only. Stops early (returns false) when `signal` aborts.
- */
-export async function visitRows(
-  tx: LogTx<IDBTransactionMode>,
-  q: Pick<LogQuery, 'vesselId' | 'fromMs' | 'toMs' | 'match'>,
-  visit: (row: MonthRow, vesselId: string) => void,
-  options: { signal?: AbortSignal | undefined; onMonth?: (() => void) | undefined } = {},
-): Promise<boolean> {
-  if (q.fromMs > q.toMs) return true;
-  const lowMonth = Number.isFinite(q.fromMs) ? monthOf(q.fromMs) : -Infinity;
-  const highMonth = Number.isFinite(q.toMs) ? monthOf(q.toMs) : Infinity;
-  const store = tx.objectStore('logMonths');
-  const each = (buckets: MonthBucket[]) => {
-    for (const b of buckets) {
-      for (const r of b.rows) {
-        if (r[0] < q.fromMs || r[0] > q.toMs || (q.match !== undefined && !q.match(r))) continue;
-        visit(r, b.vesselId);
-      }
-    }
-    options.onMonth?.();
-  };
-  if (q.vesselId !== null) {
-    let cursor = await store.openCursor(IDBKeyRange.bound([q.vesselId, lowMonth], [q.vesselId, highMonth]), 'prev');
-    while (cursor) {
-      if (options.signal?.aborted) return false;
-      each([cursor.value]);
-      cursor = await cursor.continue();
-    }
-    return true;
-  }
-  const index = store.index('by-month');
-  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'prevunique');
-  while (cursor) {
-    if (options.signal?.aborted) return false;
-    each(await index.getAll(cursor.key));
-    cursor = await cursor.continue();
-  }
-  return true;
-}
-
-/**
- * Every stored record of the whole log from `fromMs` to `toMs`, oldest first by (timeMs, id), a
- * month at a time: each month's rows from its buckets, then for each device the run of blocks its
- * rows of that month fall in, read in one request and each record parsed once. The months of a
- * device's chain follow its seq order closely, so each block is read about once in all.
- */
-export async function* monthsOfRecords(
-  tx: LogTx<IDBTransactionMode>,
-  fromMs = -Infinity,
-  toMs = Infinity,
-): AsyncGenerator<CheckRecord[], void, undefined> {
-  if (fromMs > toMs) return;
-  const index = tx.objectStore('logMonths').index('by-month');
-  const lowMonth = Number.isFinite(fromMs) ? monthOf(fromMs) : -Infinity;
-  const highMonth = Number.isFinite(toMs) ? monthOf(toMs) : Infinity;
-  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'nextunique');
-  while (cursor) {
-    const rows: MonthRow[] = [];
-    for (const b of await index.getAll(cursor.key)) for (const r of b.rows) if (r[0] >= fromMs && r[0] <= toMs) rows.push(r);
-    rows.sort(compareRows);
-    const span = new Map<string, [number, number]>();
-    for (const r of rows) {
-      const s = span.get(r[2]);
-      if (!s) span.set(r[2], [r[3], r[3]]);
-      else {
-        if (r[3] < s[0]) s[0] = r[3];
-        if (r[3] > s[1]) s[1] = r[3];
-      }
-    }
-    const texts = new Map<string, Map<number, string>>();
-    await Promise.all([...span].map(async ([deviceId, [lo, hi]]) => {
-      const bySeq = new Map<number, string>();
-      for (const b of await deviceBlocks(tx, deviceId, lo, hi)) b.seqs.forEach((seq, i) => bySeq.set(seq, b.texts[i]!));
-      texts.set(deviceId, bySeq);
-    }));
-    const records: CheckRecord[] = [];
-    for (const r of rows) {
-      const text = texts.get(r[2])?.get(r[3]);
-      if (text !== undefined) records.push(JSON.parse(text) as CheckRecord);
-    }
-    yield records;
-    cursor = await cursor.continue();
-  }
 }
 
 export type { LogStores };

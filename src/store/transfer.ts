@@ -6,3 +6,5 @@ export { verifyStoredChains } from './verify.ts';
 export { exportBackup, exportBackupParts, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
 export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
+export { tallyChecks } from './tally.ts';
+export type { CheckTally } from './tally.ts';

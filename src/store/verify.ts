@@ -2,15 +2,17 @@
 import { getDb } from './connection.ts';
 import { hashTexts } from './hash-texts.ts';
 import { ChainVerifier, chainFieldsOfText, contentOfText, throwIfAborted, type ChainLink, type ChainStatus } from './integrity.ts';
-import { blocksAfter, countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
+import { countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
+import { blocksAfter } from './log-walks.ts';
 import type { CheckRecord, LongWorkOptions } from './records.ts';
 
 /**
  * Verifies every device's chain in the store, reading its blocks in device-then-seq order. Each
  * page of blocks is read in its own read-only transaction (a transaction cannot stay open across
  * the hashing between pages), the next one while the current one is being hashed; each hash is
- * over the stored text without its hash member, which is the record's hashed content. Reports per device: ok, or the first broken record and why.
- * Writes nothing, so a cancel leaves nothing behind.
+ * over the stored text without its hash member, which is the record's hashed content. Reports
+ * per device: ok, or the first broken record and why. Writes nothing, so a cancel leaves nothing
+ * behind.
  * @throws StoreError('cancelled') if options.signal aborts
  */
 export async function verifyStoredChains(options: LongWorkOptions = {}): Promise<ChainStatus[]> {

@@ -14,12 +14,12 @@ import {
   LOG_STORES,
   LogConflict,
   monthOf,
-  monthsOfRecords,
   pageRows,
   readRecords,
   seqIndex,
   type MonthRow,
 } from '../../src/store/log-layout.ts';
+import { monthsOfRecords } from '../../src/store/log-walks.ts';
 import type { CheckRecord } from '../../src/store/records.ts';
 
 useFreshDatabase();

@@ -1,6 +1,6 @@
 // Totals for a filter, counted by the store from its month buckets (no record is read), reported
 // as they grow so the screen can show them.
-import { tallyChecks, type CheckTally } from '../../store/index.ts';
+import { tallyChecks, type CheckTally } from '../../store/transfer.ts';
 import type { ReviewFilter } from './review-filter.ts';
 import { storeFilter } from './review-query.ts';
 
