@@ -248,6 +248,8 @@ export async function addToLog(
   // ids: refuse one already stored; note where each new one goes and who corrects whom.
   const ids = new Map<string, IdBucket>(idBuckets);
   const entryOf = (id: string): IdEntry => {
+    // Ids are validated UUIDs; this one name would set a plain object's prototype instead.
+    if (id === '__proto__') throw new LogConflict('"__proto__" is not a check id');
     const bucket = ids.get(idBucketOf(id))!;
     // Own properties only: a bucket is a plain object read back from the store.
     return Object.hasOwn(bucket, id) ? bucket[id]! : (bucket[id] = {});
