@@ -12,7 +12,7 @@ import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
 import { hashTexts } from './hash-texts.ts';
 import { deviceBlocks } from './log-walks.ts';
-import { canonicalJson, ChainVerifier, contentOfText, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
+import { breathe, canonicalJson, ChainVerifier, contentOfText, progressStep, throwIfAborted, type ChainStatus } from './integrity.ts';
 import {
   addToLog,
   blockPages,
@@ -266,6 +266,36 @@ function requireList(field: string, value: unknown, max: number): unknown[] {
  * @throws StoreError('invalid-backup') naming the first bad field
  */
 export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKUP_LIMITS): BackupDocument {
+  const steps = parsingSteps(text, limits);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
+}
+
+/**
+ * As parseBackup, giving the page a turn (integrity.ts `breathe`) between groups of records while
+ * it validates them, and stopping on a cancel. The parse of the text itself is one step.
+ * @throws StoreError('invalid-backup') as parseBackup; ('cancelled') if `signal` aborts
+ */
+export async function parseBackupInSteps(
+  text: string,
+  options: { signal?: AbortSignal | undefined; limits?: Readonly<BackupLimits> } = {},
+): Promise<BackupDocument> {
+  const steps = parsingSteps(text, options.limits ?? BACKUP_LIMITS);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+    await breathe();
+    throwIfAborted(options.signal);
+  }
+}
+
+/** Records validated between the pauses of parsingSteps. */
+const VALIDATE_GROUP = 2000;
+
+/** parseBackup's work, pausing (yielding) after the parse and every VALIDATE_GROUP records. */
+function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<void, BackupDocument, undefined> {
   if (typeof text !== 'string') throw bad('file', 'expected text');
   if (text.length > limits.maxChars) throw bad('file', `${text.length} characters; at most ${limits.maxChars}`);
   let raw: unknown;
@@ -286,6 +316,7 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
     // Includes nesting too deep for the parser (a RangeError from the engine).
     throw bad('file', 'not valid JSON');
   }
+  yield;
   const top = requireObject('file', raw);
   if (top['format'] !== BACKUP_FORMAT) throw bad('format', `expected "${BACKUP_FORMAT}"`);
   if (typeof top['formatVersion'] === 'number' && top['formatVersion'] > BACKUP_FORMAT_VERSION) {
@@ -295,7 +326,12 @@ export function parseBackup(text: string, limits: Readonly<BackupLimits> = BACKU
   requireKeys('file', top, TOP_KEYS);
   requireIso('exportedAt', top['exportedAt']);
   const vessels = requireList('vessels', top['vessels'], limits.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
-  const checks = requireList('checks', top['checks'], limits.maxChecks).map((c, i) => validateCheck(`checks[${i}]`, c));
+  const listed = requireList('checks', top['checks'], limits.maxChecks);
+  const checks: CheckRecord[] = [];
+  for (let i = 0; i < listed.length; i += 1) {
+    if (i % VALIDATE_GROUP === 0) yield;
+    checks.push(validateCheck(`checks[${i}]`, listed[i]));
+  }
   const chains = requireList('chains', top['chains'], limits.maxChecks).map((h, i) => {
     const head = requireObject(`chains[${i}]`, h);
     requireKeys(`chains[${i}]`, head, CHAIN_KEYS);
@@ -526,7 +562,7 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
  *   ('cancelled' | 'quota-exceeded' | 'write-failed') with nothing written
  */
 export async function importBackup(text: string, options: LongWorkOptions = {}): Promise<ImportReport> {
-  const doc = parseBackup(text);
+  const doc = await parseBackupInSteps(text, { signal: options.signal });
   throwIfAborted(options.signal);
   const db = await getDb();
   await sealMigratedChecks(db);
@@ -534,10 +570,10 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   // Each record's canonical text is what the store keeps; its content (the text without the
   // hash) is what the hash covers. Hashed before any transaction opens (a transaction would
   // commit while the hashing gives the page its turns).
-  const texts = doc.checks.map((c) => canonicalJson(c));
+  const texts = new Array<string>(doc.checks.length);
   const every = progressStep(total);
   let reported = 0;
-  const hashes = await hashTexts(texts.length, (i) => contentOfText(texts[i]!), {
+  const hashes = await hashTexts(texts.length, (i) => contentOfText((texts[i] = canonicalJson(doc.checks[i]!))), {
     signal: options.signal,
     onProgress: (done) => {
       if (done - reported < every) return;

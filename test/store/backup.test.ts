@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { IDBFactory } from 'fake-indexeddb';
 import { closeStore, computeCheckHash, listVessels, updateVessel, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
-import { BACKUP_LIMITS, parseBackup } from '../../src/store/backup.ts';
+import { BACKUP_LIMITS, parseBackup, parseBackupInSteps } from '../../src/store/backup.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
 import { failWritesOverQuota } from './fixtures.ts';
 import type { LogBlock } from '../../src/store/log-layout.ts';
@@ -243,5 +243,22 @@ describe('all or nothing', () => {
     await importBackup(backup, { onProgress: (d, t) => seen.push([d, t]) });
     expect(seen.at(-1)).toEqual([4 * 2 + 2, 4 * 2 + 2]);
     expect(seen.map((s) => s[0])).toEqual([...seen.map((s) => s[0])].sort((a, b) => a - b));
+  });
+});
+
+describe('validating a backup in steps (the import\'s way)', () => {
+  it('gives what parseBackup gives, document or first error, across validation groups; stops on cancel', async () => {
+    const { backup } = await makeDeviceWithBackup(3);
+    const doc = JSON.parse(backup) as { checks: Record<string, unknown>[] };
+    // 1,500 copies of the checks (6,000 records) with fresh ids: the steps pause every 2,000.
+    const many = Array.from({ length: 1500 }, (_, k) => doc.checks.map((c, j) => ({ ...c, id: `00000000-0000-4000-8000-${String(k * doc.checks.length + j).padStart(12, '0')}` }))).flat();
+    const big = JSON.stringify({ ...doc, checks: many });
+    expect(await parseBackupInSteps(big)).toEqual(parseBackup(big));
+    const broken = JSON.stringify({ ...doc, checks: many.map((c, i) => (i === 4321 ? { ...c, seq: 0 } : c)) });
+    expect(() => parseBackup(broken)).toThrow(/checks\[4321\]\.seq/);
+    await expect(parseBackupInSteps(broken)).rejects.toMatchObject({ code: 'invalid-backup', field: 'checks[4321].seq' });
+    const stop = new AbortController();
+    stop.abort();
+    await expect(parseBackupInSteps(big, { signal: stop.signal })).rejects.toMatchObject({ code: 'cancelled' });
   });
 });
