@@ -88,10 +88,13 @@ export async function* monthsOfRecords(
   const index = tx.objectStore('logMonths').index('by-month');
   const lowMonth = Number.isFinite(fromMs) ? monthOf(fromMs) : -Infinity;
   const highMonth = Number.isFinite(toMs) ? monthOf(toMs) : Infinity;
-  let cursor = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'nextunique');
-  while (cursor) {
+  const months: number[] = [];
+  for (let c = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'nextunique'); c; c = await c.continue()) months.push(c.key);
+  // One month's rows and the texts they need; the next month is asked for before this one is
+  // handed out, so the browser reads it while the caller works on this one.
+  const load = async (month: number) => {
     const rows: MonthRow[] = [];
-    for (const b of await index.getAll(cursor.key)) for (const r of b.rows) if (r[0] >= fromMs && r[0] <= toMs) rows.push(r);
+    for (const b of await index.getAll(month)) for (const r of b.rows) if (r[0] >= fromMs && r[0] <= toMs) rows.push(r);
     rows.sort(compareRows);
     const span = new Map<string, [number, number]>();
     for (const r of rows) {
@@ -108,13 +111,18 @@ export async function* monthsOfRecords(
       for (const b of await deviceBlocks(tx, deviceId, lo, hi)) b.seqs.forEach((seq, i) => bySeq.set(seq, b.texts[i]!));
       texts.set(deviceId, bySeq);
     }));
+    return { rows, texts };
+  };
+  let next = months.length > 0 ? load(months[0]!) : null;
+  for (let m = 0; next; m += 1) {
+    const { rows, texts } = await next;
+    next = m + 1 < months.length ? load(months[m + 1]!) : null;
+    next?.catch(() => {}); // observed on the next turn, or abandoned if the caller stops
     const records: CheckRecord[] = [];
     for (const r of rows) {
       const text = texts.get(r[2])?.get(r[3]);
       if (text !== undefined) records.push(JSON.parse(text) as CheckRecord);
     }
     yield records;
-    cursor = await cursor.continue();
   }
 }
-

@@ -32,7 +32,9 @@ export function offerDownload(file: File): void {
   a.href = url;
   a.download = file.name;
   a.click();
-  setTimeout(() => URL.revokeObjectURL(url), 60_000);
+  // The URL keeps the whole file in the browser's memory while it lives (over 100 MB for a large
+  // log, a lot on a phone); the download has taken hold of it well within seconds of the click.
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
 export interface ReportLine { id: string; why: string }
