@@ -74,10 +74,11 @@ export async function visitRows(
 }
 
 /**
- * Every stored record of the whole log from `fromMs` to `toMs`, oldest first by (timeMs, id), a
- * month at a time: each month's rows from its buckets, then for each device the run of blocks its
- * rows of that month fall in, read in one request and each record parsed once. The months of a
- * device's chain follow its seq order closely, so each block is read about once in all.
+ * Every stored record of the whole log from `fromMs` to `toMs`, oldest first by (timeMs, id), in
+ * groups of a few hundred, read a month at a time: each month's rows from its buckets, then for
+ * each device the run of blocks its rows of that month fall in, read in one request, and each
+ * record parsed once. The months of a device's chain follow its seq order closely, so each block
+ * is read about once in all.
  */
 export async function* monthsOfRecords(
   tx: LogTx<IDBTransactionMode>,
@@ -90,9 +91,7 @@ export async function* monthsOfRecords(
   const highMonth = Number.isFinite(toMs) ? monthOf(toMs) : Infinity;
   const months: number[] = [];
   for (let c = await index.openKeyCursor(IDBKeyRange.bound(lowMonth, highMonth), 'nextunique'); c; c = await c.continue()) months.push(c.key);
-  // One month's rows and the texts they need; the next month is asked for before this one is
-  // handed out, so the browser reads it while the caller works on this one.
-  const load = async (month: number) => {
+  for (const month of months) {
     const rows: MonthRow[] = [];
     for (const b of await index.getAll(month)) for (const r of b.rows) if (r[0] >= fromMs && r[0] <= toMs) rows.push(r);
     rows.sort(compareRows);
@@ -111,18 +110,18 @@ export async function* monthsOfRecords(
       for (const b of await deviceBlocks(tx, deviceId, lo, hi)) b.seqs.forEach((seq, i) => bySeq.set(seq, b.texts[i]!));
       texts.set(deviceId, bySeq);
     }));
-    return { rows, texts };
-  };
-  let next = months.length > 0 ? load(months[0]!) : null;
-  for (let m = 0; next; m += 1) {
-    const { rows, texts } = await next;
-    next = m + 1 < months.length ? load(months[m + 1]!) : null;
-    next?.catch(() => {}); // observed on the next turn, or abandoned if the caller stops
-    const records: CheckRecord[] = [];
-    for (const r of rows) {
-      const text = texts.get(r[2])?.get(r[3]);
-      if (text !== undefined) records.push(JSON.parse(text) as CheckRecord);
+    // Parsed a few hundred at a time: records the caller has finished with die young, which costs
+    // the collector far less than a month of them alive at once.
+    for (let start = 0; start < rows.length; start += RECORDS_PER_YIELD) {
+      const records: CheckRecord[] = [];
+      for (const r of rows.slice(start, start + RECORDS_PER_YIELD)) {
+        const text = texts.get(r[2])?.get(r[3]);
+        if (text !== undefined) records.push(JSON.parse(text) as CheckRecord);
+      }
+      yield records;
     }
-    yield records;
   }
 }
+
+/** Records handed out at a time by monthsOfRecords. */
+const RECORDS_PER_YIELD = 500;
