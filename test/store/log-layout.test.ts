@@ -19,7 +19,6 @@ import {
   seqIndex,
   type MonthRow,
 } from '../../src/store/log-layout.ts';
-import { monthsOfRecords } from '../../src/store/log-walks.ts';
 import type { CheckRecord } from '../../src/store/records.ts';
 
 useFreshDatabase();
@@ -214,32 +213,6 @@ describe('pageRows', () => {
         },
       ),
       { numRuns: 60 },
-    );
-  });
-});
-
-describe('monthsOfRecords', () => {
-  it('gives every record of a window once, oldest first by (time, id), a month at a time (property)', async () => {
-    // 300 checks of two devices over five months, some at the same instant.
-    const all: CheckRecord[] = [];
-    for (let i = 0; i < 300; i += 1) all.push(record(i % 2, Math.floor(i / 2) + 1, T0 + Math.floor(i / 3) * 36 * 3_600_000, (i >> 2) % 2));
-    await add(all);
-    const span = all.at(-1)!.timeMs - T0;
-    await fc.assert(
-      fc.asyncProperty(fc.integer({ min: -1, max: span + 1 }), fc.integer({ min: -1, max: span + 1 }), async (a, b) => {
-        const fromMs = T0 + Math.min(a, b);
-        const toMs = T0 + Math.max(a, b);
-        const want = all.filter((r) => r.timeMs >= fromMs && r.timeMs <= toMs)
-          .sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : 1));
-        const got: CheckRecord[] = [];
-        const tx = (await getDb()).transaction(LOG_STORES);
-        for await (const month of monthsOfRecords(tx, fromMs, toMs)) {
-          if (month.length > 0) expect(new Set(month.map((r) => monthOf(r.timeMs))).size).toBe(1);
-          got.push(...month);
-        }
-        expect(got).toEqual(want);
-      }),
-      { numRuns: 40 },
     );
   });
 });
