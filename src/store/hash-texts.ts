@@ -31,3 +31,49 @@ export async function hashTexts(
   }
   return hashes;
 }
+
+/** The hashing worker, made on first use; null where workers are missing or refused (then this thread hashes). */
+let worker: Worker | null | undefined;
+let asked = 0;
+const waiting = new Map<number, (hashes: string[]) => void>();
+
+function hashWorker(): Worker | null {
+  if (worker !== undefined) return worker;
+  try {
+    worker = typeof Worker === 'undefined' ? null : new Worker(new URL('./hash-worker.ts', import.meta.url));
+  } catch {
+    worker = null;
+  }
+  if (worker) {
+    worker.onmessage = (e: MessageEvent<{ id: number; hashes: string[] }>) => {
+      waiting.get(e.data.id)?.(e.data.hashes);
+      waiting.delete(e.data.id);
+    };
+    worker.onerror = () => {
+      // A worker that fails (not loadable offline, say) is not asked again; what it held is hashed here.
+      const lost = worker;
+      worker = null;
+      lost?.terminate();
+      for (const done of waiting.values()) done([]);
+      waiting.clear();
+    };
+  }
+  return worker;
+}
+
+/**
+ * SHA-256 hex of each text, on the hashing worker when there is one (another core), else on this
+ * thread in groups with turns for the page (hashTexts). Same digests either way.
+ */
+export async function hashTextsAside(texts: string[]): Promise<string[]> {
+  const w = hashWorker();
+  if (w) {
+    const id = (asked += 1);
+    const hashes = await new Promise<string[]>((resolve) => {
+      waiting.set(id, resolve);
+      w.postMessage({ id, texts });
+    });
+    if (hashes.length === texts.length) return hashes;
+  }
+  return hashTexts(texts.length, (i) => texts[i]!);
+}

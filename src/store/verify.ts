@@ -1,6 +1,6 @@
 // Chain verification over the stored log, a page of blocks at a time (a large log never sits in memory).
 import { getDb } from './connection.ts';
-import { hashTexts } from './hash-texts.ts';
+import { hashTextsAside } from './hash-texts.ts';
 import { ChainVerifier, chainFieldsOfText, contentOfText, throwIfAborted, type ChainLink, type ChainStatus } from './integrity.ts';
 import { countChecks, LOG_STORES, type LogBlock } from './log-layout.ts';
 import { blocksAfter } from './log-walks.ts';
@@ -27,39 +27,62 @@ export async function verifyStoredChains(options: LongWorkOptions = {}): Promise
   };
   let done = 0;
   let next = readPage(null);
+  // While one page is hashed (on the hashing worker when there is one), the next is read and its
+  // chain fields cut out; then the first page's results are judged, in order.
+  let hashing: Prepared | null = null;
   for (;;) {
     const blocks = await next;
     throwIfAborted(options.signal);
-    if (blocks.length === 0) break;
-    next = readPage(blocks[blocks.length - 1]!);
-    // Each record's chain fields read straight from its text (no parse); a text not in the
-    // store's shape is parsed instead, and judged by what it says.
-    const contents: string[] = [];
-    const links: ChainLink[] = [];
-    const misplaced: (string | null)[] = [];
-    for (const block of blocks) {
-      block.texts.forEach((text, i) => {
-        const seq = block.seqs[i]!;
-        const fast = chainFieldsOfText(text, seq);
-        const link: ChainLink = fast?.link ?? (JSON.parse(text) as CheckRecord);
-        contents.push(fast ? fast.content : contentOfText(text));
-        links.push(link);
-        misplaced.push(
-          link.deviceId !== block.deviceId || link.seq !== seq
-            ? `seq ${link.seq}: stored as seq ${String(seq)} of device ${block.deviceId}`
-            : null,
-        );
+    if (blocks.length > 0) next = readPage(blocks[blocks.length - 1]!);
+    const prepared = blocks.length > 0 ? prepare(blocks) : null;
+    if (hashing) {
+      const hashes = await hashing.hashes;
+      throwIfAborted(options.signal);
+      hashing.links.forEach((r, i) => {
+        const wrong = hashing!.misplaced[i];
+        if (wrong) verifier.pushMisplaced(r, wrong);
+        else verifier.pushHashed(r, r.hash === '' ? '' : hashes[i]!);
       });
+      done += hashing.links.length;
+      options.onProgress?.(done, total);
     }
-    const hashes = await hashTexts(contents.length, (i) => (links[i]!.hash === '' ? '' : contents[i]!), { signal: options.signal });
-    throwIfAborted(options.signal);
-    links.forEach((r, i) => {
-      const wrong = misplaced[i];
-      if (wrong) verifier.pushMisplaced(r, wrong);
-      else verifier.pushHashed(r, r.hash === '' ? '' : hashes[i]!);
-    });
-    done += links.length;
-    options.onProgress?.(done, total);
+    if (!prepared) break;
+    hashing = prepared;
   }
   return verifier.results();
+}
+
+/** One page of blocks made ready for judging: each record's chain fields, and its hash on the way. */
+interface Prepared {
+  links: ChainLink[];
+  misplaced: (string | null)[];
+  hashes: Promise<string[]>;
+}
+
+/**
+ * Each record's chain fields read straight from its text (no parse), and the hashing of its
+ * content started; a text not in the store's shape is parsed instead, and judged by what it says.
+ */
+function prepare(blocks: readonly LogBlock[]): Prepared {
+  const contents: string[] = [];
+  const links: ChainLink[] = [];
+  const misplaced: (string | null)[] = [];
+  for (const block of blocks) {
+    block.texts.forEach((text, i) => {
+      const seq = block.seqs[i]!;
+      const fast = chainFieldsOfText(text, seq);
+      const link: ChainLink = fast?.link ?? (JSON.parse(text) as CheckRecord);
+      // An unsealed record has no hash to check; an empty text stands in for it.
+      contents.push(link.hash === '' ? '' : fast ? fast.content : contentOfText(text));
+      links.push(link);
+      misplaced.push(
+        link.deviceId !== block.deviceId || link.seq !== seq
+          ? `seq ${link.seq}: stored as seq ${String(seq)} of device ${block.deviceId}`
+          : null,
+      );
+    });
+  }
+  const hashes = hashTextsAside(contents);
+  hashes.catch(() => {}); // observed when the page is judged, or abandoned on cancel
+  return { links, misplaced, hashes };
 }
