@@ -3,7 +3,7 @@
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
 import { signalMaskOf, worstSignalOfMask } from './facts.ts';
-import { blockPages, countChecks, LOG_STORES, pageRows, readRecords } from './log-layout.ts';
+import { blockPages, compareRows, countChecks, LOG_STORES, pageRows, readRecords, type MonthRow } from './log-layout.ts';
 import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
 import { requireUuid } from './validate.ts';
 
@@ -135,35 +135,68 @@ export async function exportCsvParts(options: LongWorkOptions & { vesselId?: str
   if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
   const db = await getDb();
   const tx = db.transaction(LOG_STORES);
-  const total = await countChecks(tx, options.vesselId);
   const parts: string[] = [csvFromChecks([])];
   const addRows = (rows: string[]) => {
     for (let i = 0; i < rows.length; i += ROWS_PER_PART) parts.push(rows.slice(i, i + ROWS_PER_PART).join('\r\n') + '\r\n');
   };
   let done = 0;
   if (options.vesselId === undefined) {
-    // The whole log: its blocks read in their own order (device, then seq), each record turned
-    // into its row as it arrives and only the row kept, then the rows put in time order. Cheaper in
-    // browser CPU than walking the month buckets in time order (bench/review-scale.bench-run.ts):
-    // the blocks are read in large pages without the buckets at all.
-    const keyed: { timeMs: number; id: string; text: string }[] = [];
+    // The whole log. Its order comes from the month buckets (every check's time, id, device and
+    // seq, small values): sorted once, they give each check its line number. Then the blocks are
+    // read in their own order (device, then seq: large pages, cheaper than any other walk), each
+    // record parsed once and its row put straight on its line, so nothing but the rows is kept
+    // and nothing is sorted beside them (bench/review-scale.bench-run.ts measured the ways).
+    const order: MonthRow[] = [];
+    for (const bucket of await tx.objectStore('logMonths').getAll()) for (const r of bucket.rows) order.push(r);
+    order.sort(compareRows);
+    const total = order.length;
+    const lineOf = new Map<string, { first: number; lines: Int32Array }>();
+    {
+      const span = new Map<string, [number, number]>();
+      for (const r of order) {
+        const sp = span.get(r[2]);
+        if (!sp) span.set(r[2], [r[3], r[3]]);
+        else if (r[3] < sp[0]) sp[0] = r[3];
+        else if (r[3] > sp[1]) sp[1] = r[3];
+      }
+      for (const [deviceId, [lo, hi]] of span) lineOf.set(deviceId, { first: lo, lines: new Int32Array(hi - lo + 1).fill(-1) });
+      order.forEach((r, i) => {
+        const d = lineOf.get(r[2])!;
+        d.lines[r[3] - d.first] = i;
+      });
+    }
+    const lines = new Array<string | undefined>(total);
+    // A stored record the buckets do not list (only a hand-edited store has one) still goes out, in its place by time.
+    const unlisted: { timeMs: number; id: string; text: string }[] = [];
     for await (const page of blockPages(tx)) {
       throwIfAborted(options.signal);
       for (const block of page) {
-        for (const text of block.texts) {
+        const d = lineOf.get(block.deviceId);
+        block.texts.forEach((text, i) => {
+          const seq = block.seqs[i]!;
           const r = JSON.parse(text) as CheckRecord;
-          keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
-        }
+          const line = d && seq >= d.first && seq - d.first < d.lines.length ? d.lines[seq - d.first]! : -1;
+          if (line >= 0 && order[line]![1] === r.id && lines[line] === undefined) lines[line] = csvRow(r);
+          else unlisted.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
+        });
         done += block.texts.length;
       }
       options.onProgress?.(done, total);
     }
     await tx.done;
-    // By (timeMs, id), the order every listing uses.
-    keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
-    addRows(keyed.map((k) => k.text));
+    if (unlisted.length === 0) {
+      addRows(lines.filter((l): l is string => l !== undefined));
+      return parts;
+    }
+    const all = unlisted;
+    lines.forEach((text, i) => {
+      if (text !== undefined) all.push({ timeMs: order[i]![0], id: order[i]![1], text });
+    });
+    all.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+    addRows(all.map((k) => k.text));
     return parts;
   }
+  const total = await countChecks(tx, options.vesselId);
   // One vessel: its month buckets oldest first, a page of rows at a time, each page's blocks read once.
   let after: CheckCursor | undefined;
   for (;;) {

@@ -5,6 +5,7 @@ import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
 import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
 import { exportCsv } from '../../src/store/transfer.ts';
 import { csvCell, csvFromChecks, CSV_COLUMNS } from '../../src/store/csv.ts';
+import { editStored } from './log-access.ts';
 
 useFreshDatabase();
 
@@ -122,5 +123,18 @@ describe('CSV highest signal word', () => {
       { signal: 'WARNING', message: 'b', rule: 'flash-on-release' },
       { signal: 'NOTICE', message: 'c', rule: 'standing-note' },
     ]))).toBe('WARNING');
+  });
+});
+
+describe('CSV of a hand-edited store', () => {
+  it('a stored record the month buckets do not list still goes out, in its place by time', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    const t0 = Date.parse('2026-11-30T06:00:00Z');
+    const saved: CheckRecord[] = [];
+    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: result(i) })));
+    const stranger = '99999999-0000-4000-8000-000000000099';
+    await editStored(saved[2]!.id, (r) => ({ ...r, id: stranger }));
+    const ids = parse(await exportCsv()).data.map((r) => r['check id']);
+    expect(ids).toEqual(saved.map((r, i) => (i === 2 ? stranger : r.id)));
   });
 });
