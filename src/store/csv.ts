@@ -166,8 +166,21 @@ export async function exportCsvParts(options: LongWorkOptions & { vesselId?: str
       });
     }
     const lines = new Array<string | undefined>(total);
-    // A stored record the buckets do not list (only a hand-edited store has one) still goes out, in its place by time.
-    const unlisted: { timeMs: number; id: string; text: string }[] = [];
+    // Lines are joined into their piece as soon as the piece is full, so the rows already written
+    // are held as a few large strings rather than as many small ones.
+    const pieces = new Array<string | null>(Math.ceil(total / ROWS_PER_PART)).fill(null);
+    const filled = new Int32Array(pieces.length);
+    const joinPiece = (p: number): string => {
+      const out: string[] = [];
+      for (let i = p * ROWS_PER_PART; i < Math.min(total, (p + 1) * ROWS_PER_PART); i += 1) {
+        const line = lines[i];
+        if (line !== undefined) out.push(line);
+        lines[i] = undefined;
+      }
+      return out.length === 0 ? '' : out.join('\r\n') + '\r\n';
+    };
+    // Stored records the buckets do not list (only a hand-edited store has them); they still go out, in their place by time.
+    let unlisted = 0;
     for await (const page of blockPages(tx)) {
       throwIfAborted(options.signal);
       for (const block of page) {
@@ -176,24 +189,43 @@ export async function exportCsvParts(options: LongWorkOptions & { vesselId?: str
           const seq = block.seqs[i]!;
           const r = JSON.parse(text) as CheckRecord;
           const line = d && seq >= d.first && seq - d.first < d.lines.length ? d.lines[seq - d.first]! : -1;
-          if (line >= 0 && order[line]![1] === r.id && lines[line] === undefined) lines[line] = csvRow(r);
-          else unlisted.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
+          if (line >= 0 && order[line]![1] === r.id && pieces[Math.floor(line / ROWS_PER_PART)] === null && lines[line] === undefined) {
+            lines[line] = csvRow(r);
+            const p = Math.floor(line / ROWS_PER_PART);
+            filled[p] = filled[p]! + 1;
+            if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
+          } else {
+            unlisted += 1;
+          }
         });
         done += block.texts.length;
       }
       options.onProgress?.(done, total);
     }
-    await tx.done;
-    if (unlisted.length === 0) {
-      addRows(lines.filter((l): l is string => l !== undefined));
+    if (unlisted > 0) {
+      // Rare (a hand-edited store): read the same snapshot again, every row beside its time and
+      // id, and sort them all.
+      const keyed: { timeMs: number; id: string; text: string }[] = [];
+      for await (const page of blockPages(tx)) {
+        throwIfAborted(options.signal);
+        for (const block of page) {
+          for (const text of block.texts) {
+            const r = JSON.parse(text) as CheckRecord;
+            keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
+          }
+        }
+      }
+      await tx.done;
+      keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+      parts.length = 1;
+      addRows(keyed.map((k) => k.text));
       return parts;
     }
-    const all = unlisted;
-    lines.forEach((text, i) => {
-      if (text !== undefined) all.push({ timeMs: order[i]![0], id: order[i]![1], text });
+    await tx.done;
+    pieces.forEach((piece, p) => {
+      const text = piece ?? joinPiece(p);
+      if (text !== '') parts.push(text);
     });
-    all.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
-    addRows(all.map((k) => k.text));
     return parts;
   }
   const total = await countChecks(tx, options.vesselId);

@@ -137,4 +137,13 @@ describe('CSV of a hand-edited store', () => {
     const ids = parse(await exportCsv()).data.map((r) => r['check id']);
     expect(ids).toEqual(saved.map((r, i) => (i === 2 ? stranger : r.id)));
   });
+
+  it('a record deleted from its block (its month row left behind) is simply absent', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    const t0 = Date.parse('2026-11-30T06:00:00Z');
+    const saved: CheckRecord[] = [];
+    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: result(i) })));
+    await editStored(saved[1]!.id, () => null);
+    expect(parse(await exportCsv()).data.map((r) => r['check id'])).toEqual(saved.filter((_, i) => i !== 1).map((r) => r.id));
+  });
 });
