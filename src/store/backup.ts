@@ -536,7 +536,8 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
     let done = base;
     const step = (n: number) => {
       done += n;
-      if (!cancelled) options.onProgress?.(done, total);
+      // The last step is the commit: a full bar would say "done" while a cancel could still undo it all.
+      if (!cancelled) options.onProgress?.(Math.min(done, total - 1), total);
     };
     await Promise.all([
       ...plan.vesselWrites.map((v) => vessels.put(v).then(() => step(1))),
