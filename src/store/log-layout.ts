@@ -1,4 +1,5 @@
-// How the check log sits in IndexedDB (schema v4), and the only code that reads or writes it.
+// How the check log sits in IndexedDB (schema v4); this file and log-walks.ts are the only code
+// that reads or writes it.
 //
 // Why not one IndexedDB record per check: in Chromium every stored value and every index entry
 // costs about the same whatever its size, and a log of 100,000 checks made one value plus four
@@ -66,7 +67,6 @@ export interface IdEntry {
 export type IdBucket = Record<string, IdEntry>;
 
 export const LOG_STORES = ['logBlocks', 'logMonths', 'logIds'] as const;
-type LogStores = (typeof LOG_STORES)[number];
 /** Any transaction whose scope includes the three log stores. */
 export type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
 
@@ -176,7 +176,7 @@ export async function locateIds(tx: LogTx<IDBTransactionMode>, ids: readonly str
   return out;
 }
 
-/** The last stored check of a device: its seq and hash (seq 0 when it has none). */
+/** The last stored check of a device: its seq and hash; null when it has none. */
 export async function chainHead(tx: LogTx<IDBTransactionMode>, deviceId: string): Promise<{ seq: number; hash: string } | null> {
   const cursor = await tx.objectStore('logBlocks').openCursor(deviceRange(deviceId), 'prev');
   const block = cursor?.value;
@@ -451,4 +451,3 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
   return { rows: taken.slice(0, q.limit), more: taken.length > q.limit || cursor !== null };
 }
 
-export type { LogStores };
