@@ -2,6 +2,7 @@
 // whole job still works: add a vessel, enter a check, see the verdict, save it; then the browser
 // is closed and relaunched with the same profile, still offline, and the check is in the log.
 import { afterAll, describe, expect, it } from 'vitest';
+import type { Worker } from 'playwright-core';
 import { DIST, launch, pickVessel, startServer, tempProfile, waitForControl } from './harness.ts';
 
 describe('offline first use and restart', () => {
@@ -95,6 +96,14 @@ describe('offline first use and restart', () => {
     await page.getByRole('link', { name: 'Review' }).click();
     await expect.poll(() => page.locator('#rf-vessel').count()).toBe(1);
     expect(await page.getByText(/could not be loaded/).count()).toBe(0);
+    // Verifying the chain offline: the hashing worker's script comes from the worker's cache too.
+    const workers: Worker[] = [];
+    page.on('worker', (w) => workers.push(w));
+    await page.getByRole('button', { name: 'Verify chains' }).click();
+    await page.locator('[data-chain="ok"]').waitFor();
+    const hashing = workers.find((w) => w.url().includes('hash-worker'));
+    expect(hashing, 'the hashing worker started').toBeDefined();
+    expect(await hashing!.evaluate(() => typeof (globalThis as { onmessage?: unknown }).onmessage)).toBe('function');
     await ctx.close();
 
     // Nothing ever left for another origin (no fonts, analytics or CDNs).
