@@ -251,7 +251,8 @@ export interface CheckFilter {
   device?: string;
 }
 
-export interface Window {
+/** A filter as the month buckets answer it: the vessel and time window, and a test of each row's facts. */
+export interface LogWindow {
   vesselId: string | null;
   fromMs: number;
   toMs: number;
@@ -259,7 +260,7 @@ export interface Window {
 }
 
 /** The filter as the month buckets answer it. @throws StoreError('invalid-record') naming a bad field */
-export function windowOf(filter: CheckFilter): Window {
+export function windowOf(filter: CheckFilter): LogWindow {
   if (filter.vesselId !== undefined) requireUuid('vesselId', filter.vesselId);
   const fromMs = filter.from ? filter.from.getTime() : -Infinity;
   const toMs = filter.to ? filter.to.getTime() : Infinity;
@@ -314,7 +315,7 @@ export async function queryChecks(filter: CheckFilter & ListOptions = {}): Promi
  * id): queryChecks with no filter.
  */
 export async function listChecks(options: ListOptions = {}): Promise<CheckPage> {
-  return queryChecks(pick(options));
+  return queryChecks(options);
 }
 
 /**
@@ -325,17 +326,7 @@ export async function checksForVessel(
   vesselId: string,
   options: ListOptions & { from?: Date; to?: Date } = {},
 ): Promise<CheckPage> {
-  requireUuid('vesselId', vesselId);
-  return queryChecks({ ...pick(options), vesselId, ...(options.from ? { from: options.from } : {}), ...(options.to ? { to: options.to } : {}) });
-}
-
-/** Only the listing options (a caller's object may carry more). */
-function pick(o: ListOptions): ListOptions {
-  return {
-    ...(o.limit !== undefined ? { limit: o.limit } : {}),
-    ...(o.order !== undefined ? { order: o.order } : {}),
-    ...(o.before !== undefined ? { before: o.before } : {}),
-  };
+  return queryChecks({ ...options, vesselId });
 }
 
 /** How many checks are stored (one vessel's when given). Reads the month buckets, not the checks. */

@@ -1,10 +1,12 @@
 // CSV export of the check log: one row per check, SI units in the header, ISO 8601 times, text
 // cells neutralised against spreadsheet formula injection. RFC 4180 quoting, CRLF line ends.
+import type { IDBPTransaction } from 'idb';
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
 import { signalMaskOf, worstSignalOfMask } from './facts.ts';
 import { blockPages, compareRows, countChecks, LOG_STORES, pageRows, readRecords, type MonthRow } from './log-layout.ts';
 import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
+import type { TanksideDB } from './schema.ts';
 import { requireUuid } from './validate.ts';
 
 type Cell = string | number | boolean | null;
@@ -127,123 +129,132 @@ export async function exportCsv(options: LongWorkOptions & { vesselId?: string }
 /** Rows per piece of exportCsvParts. */
 const ROWS_PER_PART = 2000;
 
+type LogReadTx = IDBPTransaction<TanksideDB, (typeof LOG_STORES)[number][], 'readonly'>;
+
 /**
  * As exportCsv, as pieces whose concatenation is the file: a Blob or File made from them skips
  * building one string of the whole file.
  */
 export async function exportCsvParts(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string[]> {
   if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
-  const db = await getDb();
-  const tx = db.transaction(LOG_STORES);
-  const parts: string[] = [csvFromChecks([])];
-  const addRows = (rows: string[]) => {
-    for (let i = 0; i < rows.length; i += ROWS_PER_PART) parts.push(rows.slice(i, i + ROWS_PER_PART).join('\r\n') + '\r\n');
+  const tx = (await getDb()).transaction(LOG_STORES);
+  const pieces = options.vesselId === undefined ? await wholeLogPieces(tx, options) : await vesselPieces(tx, options.vesselId, options);
+  await tx.done;
+  return [csvFromChecks([]), ...pieces];
+}
+
+/** Rows with their line ends, ROWS_PER_PART to a piece. */
+function piecesOf(rows: readonly string[]): string[] {
+  const pieces: string[] = [];
+  for (let i = 0; i < rows.length; i += ROWS_PER_PART) pieces.push(rows.slice(i, i + ROWS_PER_PART).join('\r\n') + '\r\n');
+  return pieces;
+}
+
+/**
+ * The whole log's rows, oldest first. The order comes from the month buckets (every check's
+ * time, id, device and seq, small values), sorted once: it gives each check its line. Then the
+ * blocks are read in their own order (device, then seq: large pages, cheaper than any other
+ * walk), each record parsed once and its row put straight on its line, and each piece of lines
+ * joined as soon as it is full, so the rows written are held as a few large strings and nothing is
+ * sorted beside them (bench/review-scale.bench-run.ts measured the ways; src/store/README.md).
+ */
+async function wholeLogPieces(tx: LogReadTx, options: LongWorkOptions): Promise<string[]> {
+  const order: MonthRow[] = [];
+  for (const bucket of await tx.objectStore('logMonths').getAll()) for (const r of bucket.rows) order.push(r);
+  order.sort(compareRows);
+  const total = order.length;
+  const lineOf = lineNumbers(order);
+  const lines = new Array<string | undefined>(total);
+  const pieces = new Array<string | null>(Math.ceil(total / ROWS_PER_PART)).fill(null);
+  const filled = new Int32Array(pieces.length);
+  const joinPiece = (p: number): string => {
+    const out: string[] = [];
+    for (let i = p * ROWS_PER_PART; i < Math.min(total, (p + 1) * ROWS_PER_PART); i += 1) {
+      const line = lines[i];
+      if (line !== undefined) out.push(line);
+      lines[i] = undefined;
+    }
+    return out.length === 0 ? '' : out.join('\r\n') + '\r\n';
   };
   let done = 0;
-  if (options.vesselId === undefined) {
-    // The whole log. Its order comes from the month buckets (every check's time, id, device and
-    // seq, small values): sorted once, they give each check its line number. Then the blocks are
-    // read in their own order (device, then seq: large pages, cheaper than any other walk), each
-    // record parsed once and its row put straight on its line, so nothing but the rows is kept
-    // and nothing is sorted beside them (bench/review-scale.bench-run.ts measured the ways).
-    const order: MonthRow[] = [];
-    for (const bucket of await tx.objectStore('logMonths').getAll()) for (const r of bucket.rows) order.push(r);
-    order.sort(compareRows);
-    const total = order.length;
-    const lineOf = new Map<string, { first: number; lines: Int32Array }>();
-    {
-      const span = new Map<string, [number, number]>();
-      for (const r of order) {
-        const sp = span.get(r[2]);
-        if (!sp) span.set(r[2], [r[3], r[3]]);
-        else if (r[3] < sp[0]) sp[0] = r[3];
-        else if (r[3] > sp[1]) sp[1] = r[3];
+  for await (const page of blockPages(tx)) {
+    throwIfAborted(options.signal);
+    for (const block of page) {
+      for (let i = 0; i < block.texts.length; i += 1) {
+        const r = JSON.parse(block.texts[i]!) as CheckRecord;
+        const line = lineOf(block.deviceId, block.seqs[i]!);
+        const p = Math.floor(line / ROWS_PER_PART);
+        // A stored record the buckets do not list (only a hand-edited store has one).
+        if (line < 0 || order[line]![1] !== r.id || pieces[p] !== null || lines[line] !== undefined) return sortedByTime(tx, options.signal);
+        lines[line] = csvRow(r);
+        filled[p] = filled[p]! + 1;
+        if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
       }
-      for (const [deviceId, [lo, hi]] of span) lineOf.set(deviceId, { first: lo, lines: new Int32Array(hi - lo + 1).fill(-1) });
-      order.forEach((r, i) => {
-        const d = lineOf.get(r[2])!;
-        d.lines[r[3] - d.first] = i;
-      });
+      done += block.texts.length;
     }
-    const lines = new Array<string | undefined>(total);
-    // Lines are joined into their piece as soon as the piece is full, so the rows already written
-    // are held as a few large strings rather than as many small ones.
-    const pieces = new Array<string | null>(Math.ceil(total / ROWS_PER_PART)).fill(null);
-    const filled = new Int32Array(pieces.length);
-    const joinPiece = (p: number): string => {
-      const out: string[] = [];
-      for (let i = p * ROWS_PER_PART; i < Math.min(total, (p + 1) * ROWS_PER_PART); i += 1) {
-        const line = lines[i];
-        if (line !== undefined) out.push(line);
-        lines[i] = undefined;
-      }
-      return out.length === 0 ? '' : out.join('\r\n') + '\r\n';
-    };
-    // Stored records the buckets do not list (only a hand-edited store has them); they still go out, in their place by time.
-    let unlisted = 0;
-    for await (const page of blockPages(tx)) {
-      throwIfAborted(options.signal);
-      for (const block of page) {
-        const d = lineOf.get(block.deviceId);
-        block.texts.forEach((text, i) => {
-          const seq = block.seqs[i]!;
-          const r = JSON.parse(text) as CheckRecord;
-          const line = d && seq >= d.first && seq - d.first < d.lines.length ? d.lines[seq - d.first]! : -1;
-          if (line >= 0 && order[line]![1] === r.id && pieces[Math.floor(line / ROWS_PER_PART)] === null && lines[line] === undefined) {
-            lines[line] = csvRow(r);
-            const p = Math.floor(line / ROWS_PER_PART);
-            filled[p] = filled[p]! + 1;
-            if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
-          } else {
-            unlisted += 1;
-          }
-        });
-        done += block.texts.length;
-      }
-      options.onProgress?.(done, total);
-    }
-    if (unlisted > 0) {
-      // Rare (a hand-edited store): read the same snapshot again, every row beside its time and
-      // id, and sort them all.
-      const keyed: { timeMs: number; id: string; text: string }[] = [];
-      for await (const page of blockPages(tx)) {
-        throwIfAborted(options.signal);
-        for (const block of page) {
-          for (const text of block.texts) {
-            const r = JSON.parse(text) as CheckRecord;
-            keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
-          }
-        }
-      }
-      await tx.done;
-      keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
-      parts.length = 1;
-      addRows(keyed.map((k) => k.text));
-      return parts;
-    }
-    await tx.done;
-    pieces.forEach((piece, p) => {
-      const text = piece ?? joinPiece(p);
-      if (text !== '') parts.push(text);
-    });
-    return parts;
+    options.onProgress?.(done, total);
   }
-  const total = await countChecks(tx, options.vesselId);
-  // One vessel: its month buckets oldest first, a page of rows at a time, each page's blocks read once.
+  return pieces.map((piece, p) => piece ?? joinPiece(p)).filter((piece) => piece !== '');
+}
+
+/** The line of each (deviceId, seq) in `order`, or −1. */
+function lineNumbers(order: readonly MonthRow[]): (deviceId: string, seq: number) => number {
+  const span = new Map<string, [number, number]>();
+  for (const r of order) {
+    const sp = span.get(r[2]);
+    if (!sp) span.set(r[2], [r[3], r[3]]);
+    else if (r[3] < sp[0]) sp[0] = r[3];
+    else if (r[3] > sp[1]) sp[1] = r[3];
+  }
+  const byDevice = new Map<string, { first: number; lines: Int32Array }>();
+  for (const [deviceId, [lo, hi]] of span) byDevice.set(deviceId, { first: lo, lines: new Int32Array(hi - lo + 1).fill(-1) });
+  order.forEach((r, i) => {
+    const d = byDevice.get(r[2])!;
+    d.lines[r[3] - d.first] = i;
+  });
+  return (deviceId, seq) => {
+    const d = byDevice.get(deviceId);
+    return d && seq >= d.first && seq - d.first < d.lines.length ? d.lines[seq - d.first]! : -1;
+  };
+}
+
+/**
+ * The whole log's rows from the same snapshot, every row kept beside its time and id and all of
+ * them sorted: for a store whose month buckets do not list every stored record, so that each
+ * still goes out, in its place by time.
+ */
+async function sortedByTime(tx: LogReadTx, signal: AbortSignal | undefined): Promise<string[]> {
+  const keyed: { timeMs: number; id: string; text: string }[] = [];
+  for await (const page of blockPages(tx)) {
+    throwIfAborted(signal);
+    for (const block of page) {
+      for (const text of block.texts) {
+        const r = JSON.parse(text) as CheckRecord;
+        keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
+      }
+    }
+  }
+  keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+  return piecesOf(keyed.map((k) => k.text));
+}
+
+/** One vessel's rows, oldest first: its month buckets a page of rows at a time, each page's blocks read once. */
+async function vesselPieces(tx: LogReadTx, vesselId: string, options: LongWorkOptions): Promise<string[]> {
+  const total = await countChecks(tx, vesselId);
+  const pieces: string[] = [];
+  let done = 0;
   let after: CheckCursor | undefined;
   for (;;) {
-    const { rows, more } = await pageRows(tx, { vesselId: options.vesselId, fromMs: -Infinity, toMs: Infinity, after, order: 'oldest', limit: PAGE });
+    const { rows, more } = await pageRows(tx, { vesselId, fromMs: -Infinity, toMs: Infinity, after, order: 'oldest', limit: PAGE });
     throwIfAborted(options.signal);
     const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
     const lines: string[] = [];
     for (const r of records) if (r) lines.push(csvRow(r));
-    addRows(lines);
+    pieces.push(...piecesOf(lines));
     done += rows.length;
     options.onProgress?.(done, total);
     const last = rows[rows.length - 1];
-    if (!more || !last) break;
+    if (!more || !last) return pieces;
     after = { timeMs: last[0], id: last[1] };
   }
-  await tx.done;
-  return parts;
 }
