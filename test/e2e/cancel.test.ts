@@ -13,7 +13,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
-import { DIST, launch, startServer, tempProfile, type StaticServer } from './harness.ts';
+import { DIST, LONG_JOB_MS, launch, startServer, tempProfile, verifyChainsOnScreen, type StaticServer } from './harness.ts';
 import { generatedBackup } from '../../bench/generated-log.ts';
 
 const SMALL = {
@@ -70,7 +70,7 @@ describe('cancelling a long job on the review screen', () => {
     await page.setInputFiles('#rt-file', file);
     await page.getByRole('button', { name: 'Import and merge' }).click();
     const report = page.locator(`[data-import-run="${run}"] [data-import-result]`);
-    await report.waitFor();
+    await report.waitFor({ timeout: LONG_JOB_MS });
     return { result: (await report.getAttribute('data-import-result')) ?? '', text: (await report.textContent()) ?? '' };
   }
 
@@ -79,12 +79,12 @@ describe('cancelling a long job on the review screen', () => {
     // While an import runs the panel holds no figures (counting waits for the import), so figures
     // marked complete after a report are counted from the store as the import left it.
     const figures = page.locator('.review-totals[data-complete="yes"]');
-    await figures.waitFor();
+    await figures.waitFor({ timeout: LONG_JOB_MS });
     return figures.innerText();
   }
 
   async function exportBackup(page: Page, name: string): Promise<string> {
-    const [dl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download JSON backup' }).click()]);
+    const [dl] = await Promise.all([page.waitForEvent('download', { timeout: LONG_JOB_MS }), page.getByRole('button', { name: 'Download JSON backup' }).click()]);
     const path = join(files, name);
     await dl.saveAs(path);
     expect(await page.getAttribute('[data-export-message]', 'data-export-result')).toBe('ready');
@@ -136,9 +136,10 @@ describe('cancelling a long job on the review screen', () => {
     expect(await page.textContent('[data-total="checks"]')).toBe('40');
     const vesselOptions = await page.locator('#rf-vessel option').allTextContents();
     expect(vesselOptions).toHaveLength(SMALL.vessels + 1);
-    await page.getByRole('button', { name: 'Verify chains' }).click();
-    await page.locator('[data-chain="ok"]').waitFor();
-    expect(await page.textContent('[data-chain="ok"]')).toContain(`${SMALL.checks} records`);
+    const small = await verifyChainsOnScreen(page);
+    expect(small.state).toBe('done');
+    expect(small.lines.map((l) => l.chain)).toEqual(['ok']);
+    expect(small.lines[0]!.text).toContain(`${SMALL.checks} records`);
     const first = await exportBackup(page, 'before.json');
     expect(recordLines(first)).toHaveLength(SMALL.vessels + SMALL.checks + 1);
 
@@ -188,17 +189,19 @@ describe('cancelling a long job on the review screen', () => {
     await totals(page);
     expect(await page.textContent('[data-total="checks"]')).toBe((SMALL.checks + LARGE.checks).toLocaleString('en-GB'));
 
-    // Both chains intact, the large one whole.
-    await page.getByRole('button', { name: 'Verify chains' }).click();
-    await expect.poll(() => page.locator('[data-chain="ok"]').count()).toBe(2);
-    const chains = await page.locator('[data-chain="ok"]').allTextContents();
+    // Both chains intact, the large one whole: waited for on the panel's own end-of-run state (a
+    // poll with a fixed timeout here once failed under load, with verification still running).
+    const both = await verifyChainsOnScreen(page);
+    expect(both.state).toBe('done');
+    expect(both.lines.map((l) => l.chain)).toEqual(['ok', 'ok']);
+    const chains = both.lines.map((l) => l.text);
     expect(chains.some((c) => c.includes(`${SMALL.checks} records, seq 1 to ${SMALL.checks}`))).toBe(true);
     expect(chains.some((c) => c.includes(`${LARGE.checks.toString()} records, seq 1 to ${LARGE.checks.toString()}`))).toBe(true);
 
     // 4a. Verification cancelled with pages still to read: no result, not even the one above.
     await cancelAt(page, 'chain-progress', { above: 0, below: Infinity });
     await page.getByRole('button', { name: 'Verify chains' }).click();
-    await page.locator('[data-chain-result="cancelled"]').waitFor();
+    await page.locator('[data-chain-result="cancelled"]').waitFor({ timeout: LONG_JOB_MS });
     expect(await cancelledAt(page)).not.toBeNull();
     expect(await page.locator('[data-chain]').count()).toBe(0);
     expect(await page.locator('#chain-progress').count()).toBe(0);
@@ -207,7 +210,7 @@ describe('cancelling a long job on the review screen', () => {
     for (const button of ['Download CSV', 'Download JSON backup']) {
       await cancelAt(page, 'transfer-progress', { above: 0, below: Infinity });
       await page.getByRole('button', { name: button }).click();
-      await page.locator('[data-export-result="cancelled"]').waitFor();
+      await page.locator('[data-export-result="cancelled"]').waitFor({ timeout: LONG_JOB_MS });
       expect(await cancelledAt(page), button).not.toBeNull();
       expect(await page.textContent('[data-export-message]')).not.toMatch(/Ready/);
     }

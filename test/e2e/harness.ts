@@ -143,3 +143,22 @@ export async function smallTargets(page: Page): Promise<string[]> {
     return out;
   });
 }
+
+/** How long a browser test waits for one of the app's long jobs to end (a loaded 2-core CI machine). */
+export const LONG_JOB_MS = 170_000;
+
+/**
+ * Clicks "Verify chains" on the Review screen and waits for that run to end, on the panel's own
+ * completion state (data-chain-runs counts ended runs; data-chain-state says how the last ended).
+ * Returns how it ended and each device's line as shown.
+ */
+export async function verifyChainsOnScreen(page: Page): Promise<{ state: string; lines: { chain: string; text: string }[] }> {
+  const panel = page.locator('[data-chain-runs]');
+  const before = Number(await panel.getAttribute('data-chain-runs'));
+  await page.getByRole('button', { name: 'Verify chains' }).click();
+  await page.locator(`[data-chain-runs="${before + 1}"]`).waitFor({ timeout: LONG_JOB_MS });
+  const state = (await panel.getAttribute('data-chain-state')) ?? '';
+  const lines = await page.locator('[data-chain]').evaluateAll((els) =>
+    els.map((el) => ({ chain: el.getAttribute('data-chain') ?? '', text: el.textContent ?? '' })));
+  return { state, lines };
+}

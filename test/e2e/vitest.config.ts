@@ -11,5 +11,8 @@ export default defineConfig({
     fileParallelism: false,
     testTimeout: 180_000,
     hookTimeout: 180_000,
+    // expect.poll waits on what the page shows; its default second is too short on a loaded 2-core
+    // machine. The waits stay on the app's own state: this only bounds how long they may take.
+    expect: { poll: { timeout: 60_000, interval: 100 } },
   },
 });
