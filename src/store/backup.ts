@@ -1,14 +1,14 @@
 // The full JSON backup ("tankside-backup", formatVersion 1; BACKUP-FORMAT.md is its reference):
 // export, validation, and all-or-nothing import-and-merge.
 //
-// Import policy: any schema failure rejects the whole file (nothing is written, the error names
-// the first bad field). A file that passes the schema is merged record by record: a check already
-// here and identical is skipped; a check whose content does not match its hash, whose link to the
-// previous record fails, or that collides with a different record here is rejected with its
-// reason; everything else is added, all in one transaction.
+// Import policy: the whole file is refused, and nothing is written, when any part of it fails:
+// the schema (the error names the first bad field), or any check's hash, its link to the record
+// before it, or its seq (the error lists every such check by device and seq). A file that passes
+// is merged: a check already here and identical is skipped, every other record is added, vessels
+// by their later edit, all in one transaction.
 import type { IDBPDatabase } from 'idb';
 import { getDb } from './connection.ts';
-import { StoreError, storeErrorFromWrite } from './errors.ts';
+import { StoreError, storeErrorFromWrite, type RefusedRecord } from './errors.ts';
 import { requireCautions, requireInputs, sealMigratedChecks, TEXT_LIMITS } from './checks.ts';
 import { hashTexts } from './hash-texts.ts';
 import { deviceBlocks } from './log-walks.ts';
@@ -58,13 +58,13 @@ export interface BackupDocument {
   chains: ChainHead[];
 }
 
-/** What importBackup did, record by record. */
+/** What importBackup did, record by record (a refused file throws instead: see importBackup). */
 export interface ImportReport {
   vessels: { added: string[]; updated: string[]; skipped: { id: string; why: string }[] };
-  checks: { added: string[]; skipped: { id: string; why: string }[]; rejected: { id: string; why: string }[] };
+  checks: { added: string[]; skipped: { id: string; why: string }[] };
   /** Chain status of each device's records as they stand in the file. */
   fileChains: ChainStatus[];
-  /** Things worth telling the user that reject nothing (e.g. the file ends before the chain head it names). */
+  /** Things worth telling the user that refuse nothing. */
   warnings: string[];
 }
 
@@ -381,6 +381,8 @@ interface MergePlan {
   vesselWrites: VesselRecord[];
   checkAdds: NewLogEntry[];
   report: ImportReport;
+  /** Checks that refuse the whole file; when any, nothing is written. */
+  refused: RefusedRecord[];
 }
 
 function byInstant(a: string, b: string): number {
@@ -444,7 +446,7 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, text
 
   const report: ImportReport = {
     vessels: { added: [], updated: [], skipped: [] },
-    checks: { added: [], skipped: [], rejected: [] },
+    checks: { added: [], skipped: [] },
     fileChains: [],
     warnings: [],
   };
@@ -465,6 +467,7 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, text
   });
 
   const checkAdds: NewLogEntry[] = [];
+  const refused: RefusedRecord[] = [];
   const verifier = new ChainVerifier();
   deviceIds.forEach((d, deviceIndex) => {
     const order = devices.get(d)!.slice().sort((a, b) => doc.checks[a]!.seq - doc.checks[b]!.seq || a - b);
@@ -478,28 +481,32 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, text
     for (const i of order) {
       const r = doc.checks[i]!;
       verifier.pushHashed(r, hashes[i]!);
-      const reject = (why: string) => report.checks.rejected.push({ id: r.id, why });
+      const refuse = (why: string) => refused.push({ deviceId: d, seq: r.seq, id: r.id, why });
+      // The hash first: a record changed after it was saved says so, whether or not its id is here.
+      if (hashes[i] !== r.hash) {
+        refuse(`seq ${r.seq}: content does not match its hash (changed after it was saved)`);
+        continue;
+      }
       const same = existingById[i];
       if (same) {
         if (canonicalJson(same) === texts[i]) report.checks.skipped.push({ id: r.id, why: 'already here, identical' });
-        else reject('a different check with this id is already here');
-        continue;
-      }
-      if (hashes[i] !== r.hash) {
-        reject(`seq ${r.seq}: content does not match its hash (changed after it was saved)`);
+        else refuse(`seq ${r.seq}: a different check with this id is already here`);
         continue;
       }
       const occupant = here.get(r.seq);
       if (occupant || taken.has(r.seq)) {
-        reject(`seq ${r.seq} of device ${d} is already taken by check ${occupant ? occupant.id : 'earlier in this file'}`);
+        refuse(`seq ${r.seq} of device ${d} is already taken by check ${occupant ? occupant.id : 'earlier in this file'}`);
         continue;
       }
       const prev = r.seq === 1 ? GENESIS_HASH : (here.get(r.seq - 1) ?? fileBySeq.get(r.seq - 1))?.hash;
-      if (prev !== undefined && prev !== r.prevHash) {
-        reject(`seq ${r.seq}: prevHash is not the hash of seq ${r.seq - 1} (a record was changed or swapped)`);
+      if (prev === undefined) {
+        refuse(`seq ${r.seq - 1} is neither in the file nor here, so seq ${r.seq} cannot be linked to the chain`);
         continue;
       }
-      if (prev === undefined) report.warnings.push(`Device ${d}: seq ${r.seq - 1} is missing, so seq ${r.seq} could not be linked.`);
+      if (prev !== r.prevHash) {
+        refuse(`seq ${r.seq}: prevHash is not the hash of seq ${r.seq - 1} (a record was changed or swapped)`);
+        continue;
+      }
       taken.add(r.seq);
       checkAdds.push({ record: r, text: texts[i]! });
       report.checks.added.push(r.id);
@@ -507,15 +514,35 @@ async function planMerge(db: IDBPDatabase<TanksideDB>, doc: BackupDocument, text
   });
   report.fileChains = verifier.results();
   for (const head of doc.chains) {
-    let lastInFile = 0;
-    for (const i of devices.get(head.deviceId) ?? []) lastInFile = Math.max(lastInFile, doc.checks[i]!.seq);
-    if (lastInFile < head.headSeq) {
-      report.warnings.push(
-        `Device ${head.deviceId}: the file was exported up to seq ${head.headSeq} but holds records only up to seq ${lastInFile}.`,
-      );
+    let last: CheckRecord | undefined;
+    for (const i of devices.get(head.deviceId) ?? []) if (!last || doc.checks[i]!.seq > last.seq) last = doc.checks[i];
+    const lastSeq = last?.seq ?? 0;
+    if (lastSeq < head.headSeq) {
+      // Records cut from the end of a file leave a chain that is whole as far as it goes; only the head says so.
+      refused.push({
+        deviceId: head.deviceId,
+        seq: head.headSeq,
+        id: '',
+        why: `the file was exported up to seq ${head.headSeq} but holds records only up to seq ${lastSeq}`,
+      });
+    } else if (last && last.seq === head.headSeq && last.hash !== head.headHash) {
+      refused.push({ deviceId: head.deviceId, seq: last.seq, id: last.id, why: `seq ${last.seq}: its hash is not the chain head the file names` });
     }
   }
-  return { vesselWrites, checkAdds, report };
+  refused.sort((a, b) => (a.deviceId < b.deviceId ? -1 : a.deviceId > b.deviceId ? 1 : a.seq - b.seq));
+  return { vesselWrites, checkAdds, report, refused };
+}
+
+/** The error of a file refused for its records: every one listed, by device and seq. */
+export function refusal(refused: readonly RefusedRecord[]): StoreError {
+  const first = refused[0]!;
+  const count = refused.length === 1 ? 'one record fails' : `${refused.length.toLocaleString('en-GB')} records fail`;
+  return new StoreError(
+    'invalid-backup',
+    `Backup file not imported, nothing changed: ${count} its checks (the first: device ${first.deviceId.slice(0, 8)} seq ${first.seq}: ${first.why}).`,
+    'checks',
+    { refused },
+  );
 }
 
 /** Writes the plan in one strict transaction: all of it, or (on any failure or a cancel) none. */
@@ -557,9 +584,10 @@ async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options:
 
 /**
  * Validates a backup completely, then merges it into the store in one strict transaction: all of
- * it lands or none of it does. Returns what was added, skipped and rejected, and why.
+ * it lands or none of it does. Returns what was added and skipped, and why.
  * Progress counts hashing the file's checks, then writing.
- * @throws StoreError('invalid-backup') naming the first bad field, with nothing written;
+ * @throws StoreError('invalid-backup') naming the first bad field, or (field 'checks', `refused`)
+ *   listing every check whose hash, link or seq fails, with nothing written;
  *   ('cancelled' | 'quota-exceeded' | 'write-failed') with nothing written
  */
 export async function importBackup(text: string, options: LongWorkOptions = {}): Promise<ImportReport> {
@@ -586,6 +614,7 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
     throwIfAborted(options.signal);
     const plan = await planMerge(db, doc, texts, hashes);
     throwIfAborted(options.signal);
+    if (plan.refused.length > 0) throw refusal(plan.refused);
     try {
       // Done so far: every check hashed, plus every record the plan does not write.
       const skipped = doc.vessels.length - plan.vesselWrites.length + doc.checks.length - plan.checkAdds.length;

@@ -15,17 +15,29 @@ export type StoreErrorCode =
   | 'cancelled'          // the caller's AbortSignal fired; nothing was written
   | 'write-failed';      // the browser refused or aborted a write for another reason; nothing was written
 
+/** A record that made an import refuse its whole file: where it is (device and seq), its id, and why. */
+export interface RefusedRecord {
+  deviceId: string;
+  seq: number;
+  /** The record's id; '' when the problem is a missing record (nothing in the file to name). */
+  id: string;
+  why: string;
+}
+
 /** A typed failure from src/store. Nothing was written when one of these is thrown from a write. */
 export class StoreError extends Error {
   override readonly name = 'StoreError';
+  /** For 'invalid-backup' refused for its records' hashes, links, seqs or signatures: every such record, by device then seq. */
+  readonly refused: readonly RefusedRecord[];
   constructor(
     readonly code: StoreErrorCode,
     message: string,
     /** The field a caller got wrong (for 'invalid-record' and 'invalid-backup'), in dotted form. */
     readonly field?: string,
-    options?: { cause?: unknown },
+    options?: { cause?: unknown; refused?: readonly RefusedRecord[] },
   ) {
     super(message, options);
+    this.refused = options?.refused ?? [];
   }
 }
 

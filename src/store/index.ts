@@ -7,7 +7,7 @@ export type { OpenStoreOptions, StoreEvent } from './connection.ts';
 
 // Errors
 export { StoreError } from './errors.ts';
-export type { StoreErrorCode } from './errors.ts';
+export type { RefusedRecord, StoreErrorCode } from './errors.ts';
 
 // Records
 export { GENESIS_HASH } from './records.ts';

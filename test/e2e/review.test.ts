@@ -1,7 +1,7 @@
 // The review screen as a supervisor uses it, across two browser profiles (two devices): import a
 // generated log, filter it, check the chains, print the vessel report, export a backup; in the
-// second profile a backup with one field changed is reported at exactly that record, the chain
-// gap it leaves is pointed at, and the untouched backup then makes both profiles' records identical.
+// second profile a backup with one field changed is refused whole, naming exactly that record, and
+// the untouched backup then makes both profiles' records identical.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import Papa from 'papaparse';
-import { DIST, SCREENS_DIR, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, type StaticServer, verifyChainsOnScreen } from './harness.ts';
+import { DIST, LONG_JOB_MS, SCREENS_DIR, axeViolations, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, type StaticServer, verifyChainsOnScreen } from './harness.ts';
 import { generatedBackup } from '../../bench/generated-log.ts';
 
 const DEVICE = '6b1e0d2a-3c4f-4a5b-8c6d-7e8f90a1b2c3';
@@ -146,7 +146,7 @@ describe('review across two profiles', () => {
     }
   });
 
-  it('profile B: one changed field is reported at exactly that record, its gap is pointed at, then records match A', async () => {
+  it('profile B: one changed field refuses the whole file, naming that record by device and seq; the untouched file then makes records match A', async () => {
     const original = readFileSync(join(files, 'a.json'), 'utf8');
     const lines = original.split('\n');
     const i = lines.findIndex((l) => l.includes('"seq":13,'));
@@ -157,22 +157,29 @@ describe('review across two profiles', () => {
     writeFileSync(join(files, 'changed.json'), lines.join('\n'));
 
     const page = await open(1);
-    await importFile(page, join(files, 'changed.json'));
-    expect(await page.getAttribute('[data-import-rejected]', 'data-import-rejected')).toBe('1');
-    expect(await page.getAttribute('[data-import-added]', 'data-import-added')).toBe('39');
-    const rejected = await page.locator('[data-import="rejected"] li').allTextContents();
-    expect(rejected).toHaveLength(1);
-    expect(rejected[0]).toContain(changedId);
-    expect(rejected[0]).toMatch(/hash/);
-
-    await page.getByRole('button', { name: 'Verify chains' }).click();
-    await page.locator('[data-chain="broken"]').waitFor();
-    const broken = await page.textContent('[data-chain="broken"]');
-    expect(broken).toMatch(/seq 14/);
-    expect(broken).toMatch(/missing/);
+    // The panel's promise, and the import keeping it: nothing of the damaged file is written.
+    expect(await page.textContent('#rt-file + .hint')).toMatch(/nothing is imported and every such record is listed/);
+    run += 1;
+    await page.setInputFiles('#rt-file', join(files, 'changed.json'));
+    await page.getByRole('button', { name: 'Import and merge' }).click();
+    const refused = page.locator(`[data-import-run="${run}"] [data-import-result]`);
+    await refused.waitFor({ timeout: LONG_JOB_MS });
+    expect(await refused.getAttribute('data-import-result')).toBe('refused');
+    expect(await refused.getAttribute('data-import-refused')).toBe('1');
+    expect(await refused.textContent()).toMatch(/nothing changed/);
+    const listed = await page.locator('[data-import="refused"] li').allTextContents();
+    expect(listed).toHaveLength(1);
+    expect(listed[0]).toContain(`device ${DEVICE.slice(0, 8)} seq 13`);
+    expect(listed[0]).toContain(changedId);
+    expect(listed[0]).toMatch(/content does not match its hash/);
+    await page.locator('.review-totals[data-complete="yes"]').waitFor({ timeout: LONG_JOB_MS });
+    expect(await page.textContent('[data-total="checks"]')).toBe('0');
+    const none = await verifyChainsOnScreen(page);
+    expect(none.state).toBe('done');
+    expect(none.lines).toEqual([]);
 
     await importFile(page, join(files, 'a.json'));
-    expect(await page.getAttribute(`[data-import-run="${run}"] [data-import-added]`, 'data-import-added')).toBe('1');
+    expect(await page.getAttribute(`[data-import-run="${run}"] [data-import-added]`, 'data-import-added')).toBe('40');
     expect((await verifyChainsOnScreen(page)).lines.map((l) => l.chain)).toEqual(['ok']);
     const again = await download(page, 'Download JSON backup', 'b.json');
     expect(withoutStamp(readFileSync(again, 'utf8'))).toBe(withoutStamp(original));

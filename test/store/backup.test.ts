@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { IDBFactory } from 'fake-indexeddb';
-import { closeStore, computeCheckHash, listVessels, updateVessel, type CheckRecord } from '../../src/store/index.ts';
+import { closeStore, computeCheckHash, listVessels, StoreError, updateVessel, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { BACKUP_LIMITS, parseBackup, parseBackupInSteps } from '../../src/store/backup.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
@@ -27,7 +27,6 @@ describe('export and import', () => {
     const report = await importBackup(source.backup);
     expect(report.checks.added).toHaveLength(9);
     expect(report.vessels.added).toHaveLength(2);
-    expect(report.checks.rejected).toEqual([]);
     expect(report.warnings).toEqual([]);
     expect(report.fileChains).toMatchObject([{ status: 'ok', count: 9, headSeq: 9 }]);
     expect(await dump()).toEqual(before);
@@ -85,39 +84,83 @@ describe('export and import', () => {
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 7 }]);
   });
 
-  it('one changed field in the file: exactly that record is rejected, with the reason', async () => {
+  /** Imports `text`, expects the whole file refused with exactly `refused` listed, and the store unchanged. */
+  async function expectRefusedFor(text: string, refused: { deviceId?: string; seq: number; id?: string; why: RegExp }[]) {
+    const before = await dump();
+    const error = (await importBackup(text).then(() => null, (e: unknown) => e)) as StoreError | null;
+    expect(error, 'the file was imported').not.toBeNull();
+    expect(error).toMatchObject({ name: 'StoreError', code: 'invalid-backup', field: 'checks' });
+    expect(error!.message).toMatch(/^Backup file not imported, nothing changed/);
+    expect(error!.refused).toEqual(refused.map((r) => expect.objectContaining({ ...r, why: expect.stringMatching(r.why) })));
+    expect(await dump()).toEqual(before);
+    return error!;
+  }
+
+  it('one changed field in the file: the whole file is refused, naming that record by device and seq', async () => {
     const { backup } = await makeDeviceWithBackup(6);
     const doc = JSON.parse(backup);
     const target = doc.checks[3];
     target.reading.pressurePa += 1;
     await useDevice(new IDBFactory());
-    const report = await importBackup(JSON.stringify(doc));
-    expect(report.checks.rejected).toEqual([{ id: target.id, why: expect.stringMatching(/content does not match its hash/) }]);
-    expect(report.checks.added).toHaveLength(6);
-    expect(report.fileChains).toMatchObject([{ status: 'broken', problem: 'content-changed', at: { id: target.id, seq: 4 } }]);
-    expect((await dump()).checks.map((c) => c.id)).not.toContain(target.id);
-    expect(await verifyStoredChains()).toMatchObject([{ status: 'broken', problem: 'missing-seq', at: { seq: 5 } }]);
+    await seedDevice(1, 'HM');
+    const error = await expectRefusedFor(JSON.stringify(doc), [
+      { deviceId: target.deviceId, seq: 4, id: target.id, why: /seq 4: content does not match its hash/ },
+    ]);
+    expect(error.message).toContain(`device ${String(target.deviceId).slice(0, 8)} seq 4`);
+    // The untouched file then imports whole.
+    expect((await importBackup(backup)).checks.added).toHaveLength(7);
+    expect((await verifyStoredChains()).map((c) => c.status)).toEqual(['ok', 'ok']);
   });
 
-  it('a record re-hashed after editing breaks the next link: that next record is rejected', async () => {
+  it('every bad record is listed, across devices, in device then seq order', async () => {
+    const a = await makeDeviceWithBackup(5, 'AA');
+    const b = await makeDeviceWithBackup(5, 'BB');
+    await useDevice(a.factory);
+    await importBackup(b.backup);
+    const both = JSON.parse(await exportBackup());
+    // Two records of one device and one of the other changed after they were saved.
+    const picks = [both.checks[1], both.checks[4], both.checks[8]];
+    for (const c of picks) c.note = `${c.note} (changed)`;
+    await useDevice(new IDBFactory());
+    const sorted = [...picks].sort((x, y) => (x.deviceId < y.deviceId ? -1 : x.deviceId > y.deviceId ? 1 : x.seq - y.seq));
+    await expectRefusedFor(JSON.stringify(both), sorted.map((c) => ({ deviceId: c.deviceId, seq: c.seq, id: c.id, why: /content does not match its hash/ })));
+  });
+
+  it('the device\'s own backup with one record altered: refused as a failed hash, not only as an id already here', async () => {
+    const device = await makeDeviceWithBackup(4);
+    const doc = JSON.parse(device.backup);
+    const target = doc.checks[2];
+    target.technician = 'Someone Else';
+    // Imported back into the same device, where every id is already here.
+    await expectRefusedFor(JSON.stringify(doc), [{ deviceId: target.deviceId, seq: 3, id: target.id, why: /seq 3: content does not match its hash \(changed after it was saved\)/ }]);
+  });
+
+  it('a record re-hashed after editing breaks the next link: refused at that next record', async () => {
     const { backup } = await makeDeviceWithBackup(4);
     const doc = JSON.parse(backup);
     doc.checks[1].note = 'rewritten';
     doc.checks[1].hash = await computeCheckHash(doc.checks[1]);
     await useDevice(new IDBFactory());
-    const report = await importBackup(JSON.stringify(doc));
-    expect(report.checks.rejected).toEqual([{ id: doc.checks[2].id, why: expect.stringMatching(/prevHash is not the hash of seq 2/) }]);
+    await expectRefusedFor(JSON.stringify(doc), [{ seq: 3, id: doc.checks[2].id, why: /prevHash is not the hash of seq 2/ }]);
   });
 
-  it('a different record under an id already here is rejected; the one here is kept', async () => {
+  it('a different record under an id already here refuses the file; the one here is kept', async () => {
     const { backup } = await makeDeviceWithBackup(3);
-    const before = await dump();
     const doc = JSON.parse(backup);
     doc.checks[0].note = 'other';
     doc.checks[0].hash = await computeCheckHash(doc.checks[0]);
-    const report = await importBackup(JSON.stringify(doc));
-    expect(report.checks.rejected).toEqual([{ id: doc.checks[0].id, why: 'a different check with this id is already here' }]);
-    expect(await dump()).toEqual(before);
+    await expectRefusedFor(JSON.stringify(doc), [
+      // The records after it are here already, identical, and skipped.
+      { seq: 1, id: doc.checks[0].id, why: /seq 1: a different check with this id is already here/ },
+    ]);
+  });
+
+  it('a record missing from the middle of a chain refuses the file at the record after the gap', async () => {
+    const { backup } = await makeDeviceWithBackup(5);
+    const doc = JSON.parse(backup);
+    const [gone] = doc.checks.splice(2, 1);
+    await useDevice(new IDBFactory());
+    await expectRefusedFor(JSON.stringify(doc), [{ seq: 4, id: doc.checks[2].id, why: new RegExp(`seq ${gone.seq} is neither in the file nor here`) }]);
   });
 
   it('a newer edit of a vessel replaces the one here; an older one is skipped', async () => {
@@ -135,12 +178,11 @@ describe('export and import', () => {
     expect((await listVessels()).find((x) => x.id === v!.id)!.description).toBe('edited elsewhere, even later');
   });
 
-  it('warns when the file stops before the chain head it names', async () => {
+  it('refuses a file that stops before the chain head it names', async () => {
     const { backup } = await makeDeviceWithBackup(3);
     const cut = edit(backup, (doc) => void doc.checks.pop());
     await useDevice(new IDBFactory());
-    const report = await importBackup(cut);
-    expect(report.warnings).toEqual([expect.stringMatching(/exported up to seq 4 but holds records only up to seq 3/)]);
+    await expectRefusedFor(cut, [{ seq: 4, id: '', why: /exported up to seq 4 but holds records only up to seq 3/ }]);
   });
 });
 

@@ -1,4 +1,5 @@
-// What an import did: added, skipped and rejected, each with its reason.
+// What an import did: added and skipped, each with its reason; or, for a refused file, every record
+// that refused it (nothing was written).
 import type { ImportOutcome, ReportLine } from './transfer.ts';
 
 function Lines({ title, lines, kind }: { title: string; lines: readonly ReportLine[]; kind: string }) {
@@ -8,7 +9,7 @@ function Lines({ title, lines, kind }: { title: string; lines: readonly ReportLi
     <details open={lines.length <= 20} class="import-lines">
       <summary>{title}: {lines.length.toLocaleString('en-GB')}</summary>
       <ul data-import={kind}>
-        {shown.map((l) => <li key={l.id}><code>{l.id}</code>: {l.why}</li>)}
+        {shown.map((l) => <li key={l.key}><code>{l.label}</code>: {l.why}</li>)}
         {lines.length > shown.length ? <li>… and {lines.length - shown.length} more.</li> : null}
       </ul>
     </details>
@@ -17,16 +18,21 @@ function Lines({ title, lines, kind }: { title: string; lines: readonly ReportLi
 
 export function ImportReportView({ outcome }: { outcome: ImportOutcome }) {
   if (outcome.kind === 'cancelled') return <p role="status" data-import-result="cancelled">Import cancelled; nothing was changed.</p>;
-  if (outcome.kind === 'refused') return <p class="field-error" role="alert" data-import-result="refused">{outcome.message}</p>;
+  if (outcome.kind === 'refused') {
+    return (
+      <div role="alert" data-import-result="refused" data-import-refused={outcome.records.length}>
+        <p class="field-error">{outcome.message}</p>
+        <Lines title="Records that refuse the file" lines={outcome.records} kind="refused" />
+      </div>
+    );
+  }
   const v = outcome.view;
   return (
     <div class="import-report" role="status" data-import-result="done">
       <p>
         <strong data-import-added={v.added}>Added {v.added.toLocaleString('en-GB')} checks</strong>, {v.vesselsAdded} new
-        vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>,
-        rejected <span data-import-rejected={v.rejected.length}>{v.rejected.length}</span>.
+        vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>.
       </p>
-      <Lines title="Rejected" lines={v.rejected} kind="rejected" />
       <Lines title="Skipped" lines={v.skipped} kind="skipped" />
       {v.warnings.length + v.brokenChains.length > 0 ? (
         <ul class="import-warnings">

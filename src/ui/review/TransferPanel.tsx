@@ -53,7 +53,7 @@ export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): v
         <label for="rt-file">Backup file from another device</label>
         <input id="rt-file" class="file-input" type="file" accept=".json,application/json" disabled={busy}
           onChange={(e) => setFile((e.currentTarget as HTMLInputElement).files?.[0] ?? null)} />
-        <p class="hint">The whole file is checked before anything is written; a damaged file changes nothing.</p>
+        <p class="hint">The whole file is checked before anything is written. If any record fails its hash, its link to the record before it or its seq, nothing is imported and every such record is listed.</p>
       </div>
       <button type="button" class="primary" onClick={() => void runImport()} disabled={busy || !file}>Import and merge</button>
       <WorkProgress work={work} id="transfer-progress" />

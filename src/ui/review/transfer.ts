@@ -1,6 +1,6 @@
 // Export and import for the review screen: file names, downloads, reading a chosen file, and the
 // import report in words. The store does the work (exportBackupParts, exportCsvParts, importBackup).
-import { StoreError, type LongWorkOptions } from '../../store/index.ts';
+import { StoreError, type LongWorkOptions, type RefusedRecord } from '../../store/index.ts';
 import { exportBackupParts, exportCsvParts, importBackup, type ImportReport } from '../../store/transfer.ts';
 
 export type ExportKind = 'csv' | 'json';
@@ -37,14 +37,14 @@ export function offerDownload(file: File): void {
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
-export interface ReportLine { id: string; why: string }
+/** One line of an import report: what it is about (a record id, or where a record is missing) and why. */
+export interface ReportLine { key: string; label: string; why: string }
 
 export interface ImportView {
   added: number;
   vesselsAdded: number;
   vesselsUpdated: number;
   skipped: ReportLine[];
-  rejected: ReportLine[];
   warnings: string[];
   brokenChains: string[];
 }
@@ -54,16 +54,25 @@ export function importView(r: ImportReport): ImportView {
     added: r.checks.added.length,
     vesselsAdded: r.vessels.added.length,
     vesselsUpdated: r.vessels.updated.length,
-    skipped: [...r.vessels.skipped.map((s) => ({ id: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped],
-    rejected: r.checks.rejected,
+    skipped: [...r.vessels.skipped.map((s) => ({ key: s.id, label: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why }))],
     warnings: r.warnings,
     brokenChains: r.fileChains.filter((c) => c.status === 'broken').map((c) => `device ${c.deviceId.slice(0, 8)}: ${c.status === 'broken' ? c.detail : ''}`),
   };
 }
 
+/** Each record that refused a file, named by device and seq (and id when there is one). */
+export function refusedLines(refused: readonly RefusedRecord[]): ReportLine[] {
+  return refused.map((r) => ({
+    key: `${r.deviceId} ${r.seq}`,
+    label: `device ${r.deviceId.slice(0, 8)} seq ${r.seq}${r.id ? ` (${r.id})` : ''}`,
+    why: r.why,
+  }));
+}
+
 export type ImportOutcome =
   | { kind: 'done'; view: ImportView }
-  | { kind: 'refused'; message: string }
+  /** Nothing was written; `records` lists every record that refused the file (empty when the file itself is unreadable). */
+  | { kind: 'refused'; message: string; records: ReportLine[] }
   | { kind: 'cancelled' };
 
 /** Reads a chosen backup file and merges it; a refused or cancelled import changed nothing. */
@@ -73,6 +82,7 @@ export async function importFile(file: File, options: LongWorkOptions): Promise<
     return { kind: 'done', view: importView(await importBackup(text, options)) };
   } catch (e) {
     if (e instanceof StoreError && e.code === 'cancelled') return { kind: 'cancelled' };
-    return { kind: 'refused', message: e instanceof Error ? e.message : String(e) };
+    const records = e instanceof StoreError ? refusedLines(e.refused) : [];
+    return { kind: 'refused', message: e instanceof Error ? e.message : String(e), records };
   }
 }

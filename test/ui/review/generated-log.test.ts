@@ -1,8 +1,9 @@
 // The generated log the benchmark and browser tests use is a valid backup: the store's own
-// importer takes all of it, and its chain verifies; one changed field is rejected by itself.
+// importer takes all of it, and its chain verifies; one changed field refuses the file, naming that record.
 import { describe, expect, it } from 'vitest';
 import { useFreshDatabase } from '../../store/fixtures.ts';
 import { importBackup, verifyStoredChains } from '../../../src/store/transfer.ts';
+import { countStoredChecks, StoreError } from '../../../src/store/index.ts';
 import { generatedBackup } from '../../../bench/generated-log.ts';
 
 useFreshDatabase();
@@ -23,19 +24,19 @@ describe('generated log', () => {
     const report = await importBackup(await generatedBackup(SPEC));
     expect(report.checks.added).toHaveLength(30);
     expect(report.vessels.added).toHaveLength(4);
-    expect(report.checks.rejected).toEqual([]);
     expect(await verifyStoredChains()).toEqual([expect.objectContaining({ deviceId: SPEC.deviceId, status: 'ok', count: 30 })]);
   });
 
-  it('with one field changed, exactly that record is rejected', async () => {
+  it('with one field changed, the file is refused, naming exactly that record', async () => {
     const text = await generatedBackup(SPEC);
     const lines = text.split('\n');
     const i = lines.findIndex((l) => l.includes('"seq":12,'));
     lines[i] = lines[i]!.replace('"technician":"Gen Two"', '"technician":"Someone Else"');
-    const report = await importBackup(lines.join('\n'));
-    expect(report.checks.rejected).toHaveLength(1);
-    expect(report.checks.rejected[0]!.why).toMatch(/hash/);
-    expect(lines[i]).toContain(report.checks.rejected[0]!.id);
-    expect(report.checks.added).toHaveLength(29);
+    const error = (await importBackup(lines.join('\n')).catch((e: unknown) => e)) as StoreError;
+    expect(error).toBeInstanceOf(StoreError);
+    expect(error.refused).toHaveLength(1);
+    expect(error.refused[0]).toMatchObject({ deviceId: SPEC.deviceId, seq: 12, why: expect.stringMatching(/hash/) });
+    expect(lines[i]).toContain(error.refused[0]!.id);
+    expect(await countStoredChecks()).toBe(0);
   });
 });
