@@ -1,6 +1,6 @@
 // The append-only check log. A check is saved once, with `add` (which refuses an existing id), and
 // never changed; a correction is a new record pointing at the one it corrects.
-import type { IDBPDatabase } from 'idb';
+import type { IDBPDatabase, StoreNames } from 'idb';
 import { getDb, setAfterOpen } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import { SIGNAL_ORDER, VERDICT_IDS, type Signal, type StoredVerdict } from './facts.ts';
@@ -91,6 +91,15 @@ export function requireCautions(field: string, value: unknown): StoredCaution[] 
   return value as StoredCaution[];
 }
 
+/** Options of appendCheck. */
+export interface AppendOptions {
+  /**
+   * The draft (saveDraft's key) that held this entry: deleted in the same transaction that adds
+   * the check, so no moment exists at which the check is saved and its entry still looks unsaved.
+   */
+  clearDraft?: string;
+}
+
 /**
  * Saves a check to the log and returns the saved record. The record counts as saved only when this
  * resolves (its transaction committed with strict durability). The hash is computed before the
@@ -98,9 +107,11 @@ export function requireCautions(field: string, value: unknown): StoredCaution[] 
  * the write is abandoned and redone from the new head.
  * At the first saved check the store asks the browser to persist its data (see persistenceState).
  * @throws StoreError('invalid-record') naming the field; ('not-found') for an unknown vessel or
- *   corrected check; ('quota-exceeded' | 'write-failed' | 'chain-busy') with nothing saved
+ *   corrected check; ('quota-exceeded' | 'write-failed' | 'chain-busy') with nothing saved (and
+ *   the draft kept)
  */
-export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
+export async function appendCheck(input: NewCheck, options: AppendOptions = {}): Promise<CheckRecord> {
+  if (options.clearDraft !== undefined) requireText('clearDraft', options.clearDraft, 1, 100);
   requireUuid('vesselId', input.vesselId);
   const technician = requireText('technician', typeof input.technician === 'string' ? input.technician.trim() : input.technician, 1, TEXT_LIMITS.technician);
   const note = requireText('note', input.note ?? '', 0, TEXT_LIMITS.note);
@@ -157,7 +168,8 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
     const record: CheckRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
     const text = canonicalJson(record);
 
-    const tx = db.transaction(LOG_STORES, 'readwrite', STRICT);
+    const scope: StoreNames<TanksideDB>[] = options.clearDraft === undefined ? [...LOG_STORES] : [...LOG_STORES, 'drafts'];
+    const tx = db.transaction(scope, 'readwrite', STRICT);
     const done = tx.done;
     done.catch(() => {}); // observed below; keeps an abort from surfacing as unhandled
     let moved = false;
@@ -170,7 +182,9 @@ export async function appendCheck(input: NewCheck): Promise<CheckRecord> {
         tx.abort();
         await done;
       } else {
-        await settle(tx, addToLog(tx, [{ record, text }]));
+        const writes: Promise<unknown>[] = [addToLog(tx, [{ record, text }])];
+        if (options.clearDraft !== undefined) writes.push(tx.objectStore('drafts').delete(options.clearDraft));
+        await settle(tx, Promise.all(writes));
       }
     } catch (error) {
       // Moved, or (another tab between our reads) the seq or id was taken: start again from the new head.

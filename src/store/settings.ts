@@ -39,7 +39,9 @@ export async function putSetting(key: string, value: JsonValue): Promise<void> {
 
 /**
  * Saves a draft under `key` (e.g. "new-check"), replacing the previous one. Call it as the user
- * types: drafts live in IndexedDB, so they survive a reload, a closed tab and an app update.
+ * types: drafts live in IndexedDB, so they survive a reload, a closed tab and an app update. Once
+ * the store is open, the write is issued and its commit asked for within the task that calls this
+ * (only microtasks come between), so a page closed straight after still has it written.
  * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
  */
 export async function saveDraft(key: string, value: JsonValue): Promise<void> {
@@ -48,7 +50,11 @@ export async function saveDraft(key: string, value: JsonValue): Promise<void> {
   const db = await getDb();
   const tx = db.transaction('drafts', 'readwrite', STRICT);
   try {
-    await Promise.all([tx.store.put({ value, savedAt: formatIsoWithOffset(new Date(), undefined, true) }, key), tx.done]);
+    const put = tx.store.put({ value, savedAt: formatIsoWithOffset(new Date(), undefined, true) }, key);
+    // Without this the commit waits for the put's success event to come back to this page: a
+    // page closed in between loses the write (an uncommitted transaction is aborted with it).
+    tx.commit();
+    await Promise.all([put, tx.done]);
   } catch (error) {
     throw storeErrorFromWrite(error, 'Saving the draft');
   }

@@ -68,9 +68,10 @@ describe('offline first use and restart', () => {
     await page.getByRole('button', { name: 'Save check' }).click();
     await expect.poll(() => page.getByText('Saved to the log').count()).toBe(1);
 
-    // Start the next check, then close the tab and the browser: the half entry is a saved draft.
+    // Start the next check, then close the tab and the browser: the half entry is a saved draft
+    // (written as typed; the page's own data-drafts state says when it is stored).
     await page.fill('#chk-temperature', '88,8');
-    await page.waitForTimeout(800);
+    await page.locator('html[data-drafts="saved"]').waitFor({ state: 'attached' });
     await page.close();
     await ctx.close();
 

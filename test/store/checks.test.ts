@@ -1,6 +1,6 @@
 import { describe, expect, it, vi } from 'vitest';
 import { SPEC, failWritesOverQuota, sampleCheck, useFreshDatabase } from './fixtures.ts';
-import { GENESIS_HASH, addVessel, appendCheck, checksForVessel, computeCheckHash, correctionsOf, deviceId, getCheck, listChecks, persistenceState, type CheckRecord } from '../../src/store/index.ts';
+import { GENESIS_HASH, addVessel, appendCheck, loadDraft, saveDraft, checksForVessel, computeCheckHash, correctionsOf, deviceId, getCheck, listChecks, persistenceState, type CheckRecord } from '../../src/store/index.ts';
 import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import type { LogBlock } from '../../src/store/log-layout.ts';
@@ -28,6 +28,37 @@ describe('appendCheck', () => {
     expect(saved.corrects).toBeNull();
     expect(saved.hash).toBe(await computeCheckHash(saved));
     expect(await getCheck(saved.id)).toEqual(saved);
+  });
+
+  it('deletes the entry\'s draft in the same transaction that adds the check; a failed save keeps it', async () => {
+    const v = await addVessel({ tag: 'FT-204', spec: SPEC });
+    await saveDraft('check', { vesselId: v.id, note: 'typed' });
+    // The quota runs out on the write carrying the block: nothing lands, neither check nor deletion.
+    const restore = failWritesOverQuota((value) => Array.isArray((value as LogBlock).texts));
+    try {
+      await expect(appendCheck(sampleCheck(v.id), { clearDraft: 'check' })).rejects.toMatchObject({ code: 'quota-exceeded' });
+    } finally {
+      restore();
+    }
+    expect((await loadDraft('check'))?.value).toEqual({ vesselId: v.id, note: 'typed' });
+    expect((await listChecks()).checks).toEqual([]);
+    // Both in one transaction: once the check is there, the draft is gone.
+    const db = await getDb();
+    const scopes: string[][] = [];
+    const real = db.transaction.bind(db);
+    const spy = vi.spyOn(db, 'transaction').mockImplementation(((names: string | string[], mode?: IDBTransactionMode, o?: IDBTransactionOptions) => {
+      if (mode === 'readwrite') scopes.push([names].flat().sort());
+      return real(names as never, mode, o);
+    }) as never);
+    try {
+      const saved = await appendCheck(sampleCheck(v.id), { clearDraft: 'check' });
+      expect((await listChecks()).checks.map((c) => c.id)).toEqual([saved.id]);
+    } finally {
+      spy.mockRestore();
+    }
+    expect(await loadDraft('check')).toBeUndefined();
+    expect(scopes).toEqual([['drafts', 'logBlocks', 'logIds', 'logMonths']]);
+    await expect(appendCheck(sampleCheck(v.id), { clearDraft: '' })).rejects.toThrow(/clearDraft: 0 characters; allowed 1 to 100/);
   });
 
   it('chains each device\'s records: seq 1, 2, 3 and prevHash = previous hash', async () => {

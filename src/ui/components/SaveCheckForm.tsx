@@ -49,7 +49,7 @@ export function SaveCheckForm({ draft, onChange, evaluation, vessel, onSaved }: 
       <TextField id="chk-tech" label="Technician" value={draft.technician} onInput={(technician) => onChange({ ...draft, technician })} />
       <TextField id="chk-note" label="Note (optional)" multiline value={draft.note} onInput={(note) => onChange({ ...draft, note })} />
       <button type="submit" class="primary" disabled={!ready || busy}>Save check</button>
-      <p aria-live="polite" class={status.error ? 'field-error' : ''}>
+      <p aria-live="polite" class={status.error ? 'field-error' : ''} data-save={busy ? 'saving' : status.id ? 'saved' : status.error ? 'failed' : 'idle'}>
         {status.text} {status.id ? <a href={hrefFor('log', status.id)}>Open the record</a> : null}
       </p>
     </form>

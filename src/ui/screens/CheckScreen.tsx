@@ -28,7 +28,7 @@ export function CheckScreen() {
   const measured = settings.atmosphere.mode === 'barometer' && atm.ok ? atm.pressurePa : undefined;
   const evaluation = useMemo(() => evaluateDraft(d, vessel, measured, prefs), [d, vessel, settings]);
   return (
-    <div>
+    <div data-draft={draft.loaded ? 'loaded' : 'loading'}>
       <VesselPicker vessels={vessels} value={vessel ? d.vesselId : ''} onChange={(vesselId) => draft.set({ ...d, vesselId })} />
       {vessel && isDemoVessel(vessel) ? <p class="demo-notice" role="note"><span class="demo-tag">DEMO DATA</span> {DEMO_RESULT_NOTICE}</p> : null}
       {settings.atmosphere.mode === 'barometer' ? <AtmosphereLine atm={atm} /> : (

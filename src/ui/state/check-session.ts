@@ -5,7 +5,8 @@ import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '..
 import type { Reading } from '../../core/index.ts';
 import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
 import * as repo from './repo.ts';
-import type { CheckDraft } from './check-draft.ts';
+import { CHECK_DRAFT_KEY, type CheckDraft } from './check-draft.ts';
+import { settleDraft } from './drafts.ts';
 import { readingFromDraft, type ReadingField } from './check-reading.ts';
 import { messageOf } from './atmosphere.ts';
 import { resultView, verdictText } from './result-text.ts';
@@ -48,13 +49,19 @@ export function evaluateDraft(
   }
 }
 
-/** Appends the check to the log; resolves once the store has committed it. */
-export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evaluation, { kind: 'result' }>): Promise<CheckRecord> {
+/**
+ * Appends the check to the log; resolves once the store has committed it, and with it the deletion
+ * of the entry's draft (one transaction: a close at any moment leaves either the entry unsaved in
+ * the form, or the check saved and the form empty, never a saved check still in the form).
+ */
+export async function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evaluation, { kind: 'result' }>): Promise<CheckRecord> {
   const inputs: Record<string, TypedInput> = {
     temperature: { text: d.temperature.text, unit: d.temperature.unit },
     pressure: { text: d.pressure.text, unit: d.pressure.unit, reference: d.pressure.kind },
   };
   if (d.gross.text.trim() !== '') inputs.grossWeight = { text: d.gross.text, unit: d.gross.unit };
+  // A draft write still on its way could otherwise land after the deletion and bring the entry back.
+  await settleDraft(CHECK_DRAFT_KEY);
   return repo.appendCheck({
     vesselId: vessel.id,
     technician: d.technician.trim(),
@@ -67,7 +74,7 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
     cautions: e.result.cautions.map(({ signal, message, rule }) => ({ signal, message, rule })),
     appVersion: __APP_VERSION__,
     formulationId: e.result.formulationId,
-  });
+  }, CHECK_DRAFT_KEY);
 }
 
 /**

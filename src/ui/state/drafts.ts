@@ -1,77 +1,106 @@
-// Entries in progress are saved as the person types (debounced), so a reload, a closed tab or an
-// accepted update never loses them. flushDrafts() writes whatever is pending and resolves when
-// the store has committed it; the update flow calls it before reloading.
+// Entries in progress are written to the store on every change, with no delay: a reload, a closed
+// tab or an accepted update straight after a keystroke still finds it (the store asks for the
+// commit within the same task, test/e2e/faults.test.ts closes the browser at 0 ms to prove it).
+// A draft is a few hundred bytes, so one small transaction per keystroke costs nothing a person
+// notices. flushDrafts() resolves once every write issued so far has committed (retrying any that
+// failed); the update flow calls it before reloading.
+//
+// <html data-drafts="writing" | "saved" | "failed"> says where the writes stand, for tests.
 import { useEffect, useRef, useState } from 'preact/hooks';
 import * as repo from './repo.ts';
 import { reportSaveError } from './app-state.ts';
 
-const SAVE_DELAY_MS = 250;
+/** The latest write issued per key. */
+const writing = new Map<string, Promise<void>>();
+/** Values whose latest write failed; written again by flushDrafts. */
+const failed = new Map<string, unknown>();
 
-const pending = new Map<string, unknown>();
-let timer: number | undefined;
-let inFlight: Promise<void> = Promise.resolve();
-
-function schedule(): void {
-  if (timer !== undefined) window.clearTimeout(timer);
-  timer = window.setTimeout(() => void flushDrafts().catch(() => undefined), SAVE_DELAY_MS);
+function showState(): void {
+  if (typeof document === 'undefined') return;
+  document.documentElement.dataset['drafts'] = writing.size > 0 ? 'writing' : failed.size > 0 ? 'failed' : 'saved';
 }
 
-/** Writes every pending draft now; rejects (and keeps them pending) if the store refuses. */
-export function flushDrafts(): Promise<void> {
-  if (timer !== undefined) window.clearTimeout(timer);
-  timer = undefined;
-  const batch = [...pending.entries()];
-  pending.clear();
-  inFlight = inFlight.catch(() => undefined).then(async () => {
-    try {
-      for (const [key, value] of batch) await repo.saveDraft(key, value);
-    } catch (e) {
-      for (const [key, value] of batch) if (!pending.has(key)) pending.set(key, value);
-      reportSaveError(`Entry in progress not saved: ${repo.storageMessage(e)}`);
+function write(key: string, value: unknown): Promise<void> {
+  failed.delete(key);
+  const w: Promise<void> = repo.saveDraft(key, value).then(
+    () => {
+      if (writing.get(key) === w) writing.delete(key);
+      showState();
+    },
+    (e: unknown) => {
+      // Only the latest value matters: an older write that failed is covered by the newer one.
+      if (writing.get(key) === w) {
+        writing.delete(key);
+        failed.set(key, value);
+        reportSaveError(`Entry in progress not saved: ${repo.storageMessage(e)}`);
+      }
+      showState();
       throw e;
-    }
-  });
-  return inFlight;
+    },
+  );
+  w.catch(() => undefined);
+  writing.set(key, w);
+  showState();
+  return w;
 }
 
-/** Forgets a draft (after its entry was saved for good). */
+/** Resolves once every draft written so far is stored; rejects (keeping it for the next try) if the store refuses one. */
+export async function flushDrafts(): Promise<void> {
+  for (const [key, value] of [...failed]) void write(key, value);
+  await Promise.all([...writing.values()]);
+}
+
+/**
+ * Waits for the writes already issued for `key` and stops retrying a failed one: call it before a
+ * save that deletes the draft in its own transaction (repo.appendCheck), so no older write of the
+ * entry can land after it.
+ */
+export async function settleDraft(key: string): Promise<void> {
+  failed.delete(key);
+  await writing.get(key)?.catch(() => undefined);
+  showState();
+}
+
+/** Forgets a draft (the user discarded the entry). */
 export async function discardDraft(key: string): Promise<void> {
-  pending.delete(key);
-  await inFlight.catch(() => undefined);
+  await settleDraft(key);
   await repo.clearDraft(key);
 }
 
-// A hidden page may be frozen or closed next; write now rather than after the delay.
+// A hidden page may be frozen or closed next: try again now whatever failed.
 if (typeof document !== 'undefined') {
   document.addEventListener('visibilitychange', () => {
     if (document.visibilityState === 'hidden') void flushDrafts().catch(() => undefined);
   });
-  window.addEventListener('pagehide', () => void flushDrafts().catch(() => undefined));
 }
 
 /**
- * A value kept in a draft: starts from `initial`, is replaced by the stored draft once loaded,
- * and every change is saved. `loaded` is false until the stored draft was read.
+ * A value kept in a draft: starts from `initial`, is replaced by the stored draft once loaded
+ * (unless the person already changed it), and every change is written at once. `loaded` is false
+ * until the stored draft was read.
  */
 export function useDraft<T extends object>(key: string, initial: T): { value: T; set: (next: T) => void; loaded: boolean; reset: () => void } {
   const [value, setValue] = useState<T>(initial);
   const [loaded, setLoaded] = useState(false);
   const initialRef = useRef(initial);
+  const touched = useRef(false);
   useEffect(() => {
     let live = true;
+    touched.current = false;
     void repo.loadDraft<T>(key).then((stored) => {
       if (!live) return;
-      if (stored !== undefined && !pending.has(key)) setValue({ ...initialRef.current, ...stored });
+      if (stored !== undefined && !touched.current) setValue({ ...initialRef.current, ...stored });
       setLoaded(true);
     }, () => live && setLoaded(true));
     return () => { live = false; };
   }, [key]);
   const set = (next: T) => {
+    touched.current = true;
     setValue(next);
-    pending.set(key, next);
-    schedule();
+    void write(key, next);
   };
   const reset = () => {
+    touched.current = true;
     setValue(initialRef.current);
     void discardDraft(key);
   };

@@ -53,8 +53,9 @@ export function retireVessel(id: string): Promise<VesselRecord> {
   return store.retireVessel(id);
 }
 
-export function appendCheck(check: NewCheck): Promise<CheckRecord> {
-  return store.appendCheck(check);
+/** Saves a check; `draftKey`, when given, is the draft of the entry, deleted in the same transaction. */
+export function appendCheck(check: NewCheck, draftKey?: string): Promise<CheckRecord> {
+  return store.appendCheck(check, draftKey === undefined ? {} : { clearDraft: draftKey });
 }
 
 export function getCheck(id: string): Promise<CheckRecord | undefined> {
