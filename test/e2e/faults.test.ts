@@ -12,7 +12,8 @@
 // after Save).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { DIST, LONG_JOB_MS, launch, pickVessel, startServer, tempProfile, type StaticServer } from './harness.ts';
+import { DIST, LONG_JOB_MS, launch, pickVessel, startServer, tempProfile, waitForControl, type StaticServer } from './harness.ts';
+import { SCREENS } from '../../src/ui/router.ts';
 
 interface Row {
   scenario: string;
@@ -163,6 +164,40 @@ describe('fault matrix', () => {
     rows.push({ scenario: 'reload at 0 ms mid-entry', before, after, lost: lost + Math.max(0, before - after), duplicated: Math.max(0, after - before), message: lost === 0 ? '(entry back in the form)' : '' });
     expect(lost).toBe(0);
     expect(after).toBe(before);
+  });
+
+  it('offline: every route and a deep path render from the service worker', async () => {
+    let page = await relaunch('#/vessels');
+    await waitForControl(page);
+    const before = await storedChecks(page);
+    await ctx!.setOffline(true);
+    // A fresh start offline, as on a phone with no signal, then each route and two paths no link makes.
+    page = await relaunch('#/vessels');
+    await ctx!.setOffline(true);
+    const targets = [
+      ...SCREENS.map((s) => ({ path: `#/${s.id}`, title: s.title })),
+      { path: 'some/deep/path', title: 'New check' },
+      { path: 'some/deep/path#/log', title: 'Log' },
+      { path: 'a/b/c/d/index.html#/settings', title: 'Settings' },
+    ];
+    const failed: string[] = [];
+    for (const t of targets) {
+      // From a blank page, so a route that differs only in its hash is still a load of the shell.
+      await page.goto('about:blank');
+      const response = await page.goto(`${server.url}${t.path}`);
+      const heading = page.locator('main h1');
+      const shown = await heading.waitFor({ timeout: 20_000 }).then(() => heading.textContent(), () => null);
+      const styled = await page.evaluate(() => getComputedStyle(document.body).margin === '0px');
+      if (shown !== t.title || !response?.fromServiceWorker() || !styled) failed.push(`${t.path}: ${shown ?? 'blank'}`);
+    }
+    const after = await storedChecks(page);
+    await ctx!.setOffline(false);
+    rows.push({
+      scenario: `offline load of ${SCREENS.length} routes and 3 deep paths`,
+      before, after, lost: Math.max(0, before - after), duplicated: Math.max(0, after - before),
+      message: failed.length === 0 ? `all ${targets.length} rendered from the service worker` : `blank or wrong: ${failed.join('; ')}`,
+    });
+    expect(failed).toEqual([]);
   });
 
   it('no scenario lost or duplicated anything', () => {
