@@ -1,4 +1,4 @@
-// SHA-256 of record-sized text: µs per call for the synchronous sha256OfText next to WebCrypto's
+// SHA-256 of record-sized text: µs per call for the synchronous sha256OfText and @noble/hashes next to WebCrypto's
 // digest as the store issues it (digestMany: TextEncoder, crypto.subtle.digest, 256 in flight,
 // hex) and Node's createHash (string in, hex out). Medians of repeated timed runs over 256 varied
 // texts of 1,100 UTF-16 units, all ASCII or with a few non-ASCII characters. Prints a table and
@@ -10,36 +10,11 @@ import { loadavg } from 'node:os';
 import { expect, it } from 'vitest';
 import { sha256OfText } from '../src/store/sha256.ts';
 import { digestMany } from '../src/store/integrity.ts';
+import { LENGTH, nobleSha256Hex, recordText } from './sha256-candidates.ts';
 
 const N = 256;
-const LENGTH = 1100;
 const RUNS = 25;
 const ASYNC_RUNS = 15;
-
-/**
- * A record-like text of exactly LENGTH UTF-16 units (invented; shaped like the store's canonical
- * JSON), varied with `i` so no two calls see the same input.
- */
-function recordText(i: number, nonAscii: boolean): string {
-  const note = nonAscii
-    ? `Reading ${i}: gauge −0.2 bar against the transmitter, shell 41 °C, relief valve réglée and sealed.`
-    : `Reading ${i}: gauge -0.2 bar against the transmitter, shell 41 degC, relief valve reset and sealed.`;
-  const head = JSON.stringify({
-    at: `2026-11-${String(1 + (i % 28)).padStart(2, '0')}T07:${String(i % 60).padStart(2, '0')}:00+01:00`,
-    deviceId: `5f3a${(i * 2654435761 >>> 0).toString(16).padStart(8, '0')}-0000-4000-8000-000000000000`,
-    gaugePa: 1.0e6 + i * 137,
-    liquidLevel: (i % 100) / 100,
-    note,
-    seq: i + 1,
-    temperatureK: 300 + (i % 50) * 1.5,
-  });
-  const filler = 'Walkdown ok; no leaks at flanges, drains closed, tag legible. ';
-  let pad = '';
-  while (head.length + pad.length + 12 < LENGTH) pad += filler;
-  const text = `${head.slice(0, -1)},"remarks":"${pad}`.slice(0, LENGTH - 2) + '"}';
-  if (text.length !== LENGTH) throw new Error(`text of ${text.length} units`);
-  return text;
-}
 
 function median(xs: number[]): number {
   const s = [...xs].sort((x, y) => x - y);
@@ -88,20 +63,24 @@ it('prints µs per call for SHA-256 of 1,100-character texts (the three agree)',
   for (const { name, texts } of cases) {
     const bytes = Buffer.byteLength(texts[0] as string, 'utf8');
     const ours = timeSync(texts, sha256OfText);
+    const noble = timeSync(texts, nobleSha256Hex);
     const node = timeSync(texts, (t) => createHash('sha256').update(t).digest('hex'));
     const web = await timeStoreDigests(texts);
     const row = (label: string, m: { median: number; fastest: number }): string =>
-      `  ${label.padEnd(44)} ${m.median.toFixed(2).padStart(7)} µs   (fastest run ${m.fastest.toFixed(2)} µs)`;
+      `  ${label.padEnd(48)} ${m.median.toFixed(2).padStart(7)} µs   (fastest run ${m.fastest.toFixed(2)} µs)`;
     lines.push(
       `${name}, ${LENGTH} units, ${bytes} bytes of UTF-8:`,
       row('sha256OfText', ours),
+      row('@noble/hashes sha256 (TextEncoder, bytesToHex)', noble),
+      `  ${'noble ÷ ours'.padEnd(48)} ${(noble.median / ours.median).toFixed(2).padStart(7)}×`,
       row('WebCrypto digest, 256 in flight (digestMany)', web),
       row("Node createHash('sha256')", node),
     );
     const expected = texts.map((t) => createHash('sha256').update(t).digest('hex'));
     expect(texts.map(sha256OfText)).toEqual(expected);
+    expect(texts.map(nobleSha256Hex)).toEqual(expected);
     expect(await digestMany(texts.length, (i) => texts[i] as string)).toEqual(expected);
-    expect(ours.sink + node.sink).toBeGreaterThan(0);
+    expect(ours.sink + noble.sink + node.sink).toBeGreaterThan(0);
   }
   const loadAfter = loadavg().map((x) => x.toFixed(2)).join(', ');
   console.log(
