@@ -1,8 +1,10 @@
-// Generated benchmark and test data (invented, not demo data): a "tankside-backup" v1 file of
+// Generated benchmark and test data (invented, not demo data): a "tankside-backup" v2 file of
 // vessels and a hash-chained check log of one device, written with the store's own canonical JSON
-// and SHA-256 so it imports as a backup from another device would.
+// and SHA-256 (and, when asked, signed with a key made for it, as the store's signing.ts signs) so
+// it imports as a backup from another device would.
 import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
-import { GENESIS_HASH, type CheckRecord, type VesselRecord } from '../src/store/records.ts';
+import { GENESIS_HASH, type CheckRecord, type PublicJwk, type VesselRecord } from '../src/store/records.ts';
+import { base64url, chainHeadMessage, SIGNATURE_PARAMS, SIGNING_ALGORITHM } from '../src/store/signing.ts';
 import { tagKeyOf } from '../src/store/vessels.ts';
 
 export interface LogSpec {
@@ -16,6 +18,28 @@ export interface LogSpec {
   stepMs: number;
   technicians: readonly string[];
   seed: number;
+  /** Sign every record's chain head with a key pair made for this file (a new one each run). */
+  signed?: boolean;
+}
+
+/** A device's key and each record's signature, for a signed file. */
+export interface GeneratedSigning {
+  publicJwk: PublicJwk;
+  /** Base64url signature by seq. */
+  signatures: Map<number, string>;
+  privateKey: CryptoKey;
+}
+
+/** Signs every record's chain head with a new P-256 key pair. */
+export async function signGenerated(checks: readonly CheckRecord[]): Promise<GeneratedSigning> {
+  const pair = await crypto.subtle.generateKey(SIGNING_ALGORITHM, false, ['sign', 'verify']);
+  const jwk = await crypto.subtle.exportKey('jwk', pair.publicKey);
+  const signatures = new Map<number, string>();
+  for (const c of checks) {
+    const s = await crypto.subtle.sign(SIGNATURE_PARAMS, pair.privateKey, chainHeadMessage(c.deviceId, c.seq, c.hash));
+    signatures.set(c.seq, base64url(new Uint8Array(s)));
+  }
+  return { publicJwk: { crv: 'P-256', kty: 'EC', x: String(jwk.x), y: String(jwk.y) }, signatures, privateKey: pair.privateKey };
 }
 
 /** A small deterministic generator (mulberry32), so every run writes the same file. */
@@ -119,15 +143,17 @@ export async function generatedChecks(spec: LogSpec, vessels: readonly VesselRec
   return out;
 }
 
-/** The backup file text: the same layout exportBackup writes (one canonical record per line). */
-export function backupText(vessels: readonly VesselRecord[], checks: readonly CheckRecord[], exportedAt: string): string {
+/** The backup file text: the same layout exportBackup writes (format version 2, one canonical record per line). */
+export function backupText(vessels: readonly VesselRecord[], checks: readonly CheckRecord[], exportedAt: string, signing?: GeneratedSigning): string {
   const last = checks[checks.length - 1];
-  const chains = last ? [{ deviceId: last.deviceId, count: checks.length, headSeq: last.seq, headHash: last.hash }] : [];
+  const chains = last ? [{ deviceId: last.deviceId, count: checks.length, headSeq: last.seq, headHash: last.hash, publicKey: signing?.publicJwk ?? null }] : [];
+  const signatures = signing ? checks.map((c) => ({ deviceId: c.deviceId, seq: c.seq, signature: signing.signatures.get(c.seq)! })) : [];
   const lines = (items: unknown[]) => (items.length === 0 ? '' : `\n${items.map((x) => canonicalJson(x)).join(',\n')}\n`);
   return (
-    `{"format":"tankside-backup","formatVersion":1,"exportedAt":${JSON.stringify(exportedAt)},\n` +
+    `{"format":"tankside-backup","formatVersion":2,"exportedAt":${JSON.stringify(exportedAt)},\n` +
     `"vessels":[${lines([...vessels].sort((a, b) => (a.id < b.id ? -1 : 1)))}],\n` +
     `"checks":[${lines([...checks])}],\n` +
+    `"signatures":[${lines(signatures)}],\n` +
     `"chains":[${lines(chains)}]}\n`
   );
 }
@@ -135,5 +161,6 @@ export function backupText(vessels: readonly VesselRecord[], checks: readonly Ch
 /** A whole generated backup file. */
 export async function generatedBackup(spec: LogSpec): Promise<string> {
   const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
-  return backupText(vessels, await generatedChecks(spec, vessels), iso(spec.startMs + spec.checks * spec.stepMs));
+  const checks = await generatedChecks(spec, vessels);
+  return backupText(vessels, checks, iso(spec.startMs + spec.checks * spec.stepMs), spec.signed ? await signGenerated(checks) : undefined);
 }

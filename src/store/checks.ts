@@ -30,6 +30,7 @@ import {
 } from './records.ts';
 import { SETTING_SEAL_PENDING, type TanksideDB } from './schema.ts';
 import { askPersistenceOnce, deviceId } from './settings.ts';
+import { deviceSigningKey, signChainHead } from './signing.ts';
 import { formatIsoWithOffset } from './time.ts';
 import { cloneJson, invalid, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 
@@ -141,6 +142,7 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
     throw new StoreError('not-found', `No check with id ${corrects} to correct.`, 'corrects');
   }
   const device = await deviceId();
+  const key = await deviceSigningKey(db);
   const time = formatIsoWithOffset(takenAt);
   const base = {
     id: crypto.randomUUID(),
@@ -167,6 +169,9 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
     const unsigned = { ...base, seq: head.seq + 1, prevHash: head.hash };
     const record: CheckRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
     const text = canonicalJson(record);
+    // Signed before the write opens (no await of anything but IndexedDB inside it); a signature that
+    // cannot be made leaves the check unsigned rather than unsaved.
+    const signature = key ? await signChainHead(key, device, record.seq, record.hash).catch(() => '') : '';
 
     const scope: StoreNames<TanksideDB>[] = options.clearDraft === undefined ? [...LOG_STORES] : [...LOG_STORES, 'drafts'];
     const tx = db.transaction(scope, 'readwrite', STRICT);
@@ -182,7 +187,7 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
         tx.abort();
         await done;
       } else {
-        const writes: Promise<unknown>[] = [addToLog(tx, [{ record, text }])];
+        const writes: Promise<unknown>[] = [addToLog(tx, [{ record, text, signature }])];
         if (options.clearDraft !== undefined) writes.push(tx.objectStore('drafts').delete(options.clearDraft));
         await settle(tx, Promise.all(writes));
       }

@@ -39,6 +39,11 @@ export interface LogBlock {
   seqs: number[];
   /** canonicalJson of each full record (hash included). */
   texts: string[];
+  /**
+   * The signature of each record's chain head (signing.ts), '' where it has none; absent in a
+   * block no signed record was ever added to (all its records unsigned).
+   */
+  sigs?: string[];
 }
 
 /**
@@ -76,10 +81,11 @@ export interface CheckRef {
   seq: number;
 }
 
-/** A record to add, with its canonical text. */
+/** A record to add, with its canonical text and (when signed) its chain-head signature. */
 export interface NewLogEntry {
   record: CheckRecord;
   text: string;
+  signature?: string | undefined;
 }
 
 /** The month bucket of an instant. */
@@ -292,7 +298,7 @@ export async function addToLog(
         starts.push(seq);
         first = seq;
       }
-      insertInto(block, seq, e.text);
+      insertInto(block, seq, e.text, e.signature);
       note(block, `${first}\u0000${deviceId}`);
     }
     // Below every block of the device: new blocks of BLOCK_TARGET, each starting at its lowest seq.
@@ -300,7 +306,7 @@ export async function addToLog(
       const run = below.slice(i, i + BLOCK_TARGET);
       const block: LogBlock = { deviceId, firstSeq: run[0]!.record.seq, seqs: [], texts: [] };
       for (const e of run) {
-        insertInto(block, e.record.seq, e.text);
+        insertInto(block, e.record.seq, e.text, e.signature);
         note(block, `${block.firstSeq}\u0000${deviceId}`);
       }
     }
@@ -343,11 +349,15 @@ export async function settle(tx: { abort(): void; done: Promise<void> }, work: P
   await tx.done;
 }
 
-function insertInto(block: LogBlock, seq: number, text: string): void {
+function insertInto(block: LogBlock, seq: number, text: string, signature = ''): void {
   const seqs = block.seqs;
+  // A block gets its signature list with its first signed record; the records before it had none.
+  if (signature !== '' && !block.sigs) block.sigs = block.texts.map(() => '');
+  const sigs = block.sigs;
   if (seqs.length === 0 || seq > seqs[seqs.length - 1]!) {
     seqs.push(seq);
     block.texts.push(text);
+    sigs?.push(signature);
     return;
   }
   if (seqIndex(seqs, seq) >= 0) throw new LogConflict(`seq ${seq} of device ${block.deviceId} is already taken`);
@@ -355,6 +365,7 @@ function insertInto(block: LogBlock, seq: number, text: string): void {
   while (at > 0 && seqs[at - 1]! > seq) at -= 1;
   seqs.splice(at, 0, seq);
   block.texts.splice(at, 0, text);
+  sigs?.splice(at, 0, signature);
 }
 
 /** Blocks per read when walking the whole log. */

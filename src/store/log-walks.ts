@@ -2,11 +2,13 @@
 // next page of blocks, every row of a window. Used only by the long jobs (import, verification,
 // totals), so this module loads with them, not at start-up.
 import type { IDBPDatabase } from 'idb';
+import { chainFieldsOfText, type ChainLink } from './integrity.ts';
 import {
   BLOCK_PAGE,
   blockFor,
   firstSeqsOf,
   monthOf,
+  seqIndex,
   type LogBlock,
   type LogQuery,
   type LogTx,
@@ -20,6 +22,23 @@ export async function deviceBlocks(tx: LogTx<IDBTransactionMode>, deviceId: stri
   const firstSeqs = await firstSeqsOf(tx, deviceId);
   const start = blockFor(firstSeqs, fromSeq) ?? -Infinity;
   return tx.objectStore('logBlocks').getAll(IDBKeyRange.bound([deviceId, start], [deviceId, toSeq]));
+}
+
+/**
+ * One record's chain head as stored (id, seq, hash and its signature, '' for none), read from its
+ * block in a read-only transaction of its own; undefined if no record has that seq.
+ */
+export async function storedHeadAt(db: IDBPDatabase<TanksideDB>, deviceId: string, seq: number): Promise<{ id: string; seq: number; hash: string; signature: string } | undefined> {
+  const tx = db.transaction('logBlocks');
+  const keys = await tx.store.getAllKeys(IDBKeyRange.bound([deviceId, -Infinity], [deviceId, seq]));
+  const last = keys[keys.length - 1];
+  if (!last) return undefined;
+  const block = await tx.store.get(last);
+  const at = block ? seqIndex(block.seqs, seq) : -1;
+  if (!block || at < 0) return undefined;
+  const text = block.texts[at]!;
+  const link = chainFieldsOfText(text, seq)?.link ?? (JSON.parse(text) as ChainLink);
+  return { id: link.id, seq, hash: link.hash, signature: block.sigs?.[at] ?? '' };
 }
 
 /** The next page of blocks after `after` (exclusive), in its own read-only transaction. */

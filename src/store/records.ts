@@ -143,5 +143,33 @@ export interface LongWorkOptions {
   onProgress?: (done: number, total: number) => void;
 }
 
+/** The public half of a device key as a JSON Web Key (RFC 7517, EC members of RFC 7518 §6.2.1). */
+export interface PublicJwk {
+  crv: 'P-256';
+  kty: 'EC';
+  /** The curve point's x and y, 32 bytes each, base64url without padding (43 characters). */
+  x: string;
+  y: string;
+}
+
+/** This install's key pair as the store keeps it (settings key store:signingKey; signing.ts). */
+export interface DeviceKey {
+  privateKey: CryptoKey;
+  publicKey: CryptoKey;
+  publicJwk: PublicJwk;
+  /** RFC 7638 JWK thumbprint (SHA-256, base64url) of publicJwk: the key's fingerprint as people compare it. */
+  fingerprint: string;
+  createdAt: IsoDateTime;
+}
+
+/** Another device's public key, as learnt from a backup it signed (settings key store:deviceKey:<deviceId>). */
+export interface KnownDeviceKey {
+  deviceId: string;
+  publicJwk: PublicJwk;
+  fingerprint: string;
+  /** When this device first imported it. */
+  learntAt: IsoDateTime;
+}
+
 /** The chain hash that the first record on a device points back to. */
 export const GENESIS_HASH = '0'.repeat(64);

@@ -5,7 +5,7 @@
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
 import { addToLog, type IdBucket, type LogBlock, type MonthBucket, type NewLogEntry } from './log-layout.ts';
-import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
+import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
 
 export const DB_NAME = 'tankside';
 /**
@@ -28,6 +28,12 @@ export const RESERVED_SETTING_PREFIX = 'store:';
 export const SETTING_DEVICE_ID = 'store:deviceId';
 export const SETTING_SEAL_PENDING = 'store:sealPending';
 export const SETTING_PERSISTENCE = 'store:persistence';
+/** When this install's log was last exported as a backup, and last consolidated (BackupState). */
+export const SETTING_LAST_BACKUP = 'store:lastBackup';
+/** This install's signing key pair (records.ts DeviceKey). */
+export const SETTING_SIGNING_KEY = 'store:signingKey';
+/** Followed by a device id: that device's public key, learnt from a backup it signed (KnownDeviceKey). */
+export const SETTING_DEVICE_KEY_PREFIX = 'store:deviceKey:';
 
 /** A saved draft: whatever the screen wants back after a reload, with when it was saved. */
 export interface DraftRecord {
@@ -44,7 +50,7 @@ export interface TanksideDB extends DBSchema {
   logBlocks: { key: [string, number]; value: LogBlock };
   logMonths: { key: [string, number]; value: MonthBucket; indexes: { 'by-month': number } };
   logIds: { key: string; value: IdBucket };
-  settings: { key: string; value: JsonValue };
+  settings: { key: string; value: JsonValue | DeviceKey | KnownDeviceKey };
   drafts: { key: string; value: DraftRecord };
 }
 

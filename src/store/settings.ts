@@ -2,7 +2,7 @@
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import type { IsoDateTime, JsonValue } from './records.ts';
-import { RESERVED_SETTING_PREFIX, SETTING_DEVICE_ID, SETTING_PERSISTENCE } from './schema.ts';
+import { RESERVED_SETTING_PREFIX, SETTING_DEVICE_ID, SETTING_LAST_BACKUP, SETTING_PERSISTENCE } from './schema.ts';
 import { formatIsoWithOffset } from './time.ts';
 import { requireJson, requireText } from './validate.ts';
 
@@ -18,7 +18,8 @@ function requireSettingKey(key: string): void {
 /** Reads one setting (technician name, preferred units ...), or undefined if never saved. */
 export async function getSetting(key: string): Promise<JsonValue | undefined> {
   requireSettingKey(key);
-  return (await getDb()).get('settings', key);
+  // Keys outside "store:" hold only what putSetting wrote, which is plain JSON.
+  return (await getDb()).get('settings', key) as Promise<JsonValue | undefined>;
 }
 
 /**
@@ -176,4 +177,43 @@ export function askPersistenceOnce(): Promise<PersistenceState | null> {
 /** Forgets the once-per-page memo (tests open fresh databases). */
 export function resetPersistenceMemo(): void {
   firstAsk = null;
+}
+
+/** When the log last left this device whole: exported as a backup file, or consolidated at the plant. */
+export interface BackupState {
+  /** The last backup export, ISO 8601 with offset; null if never. */
+  exportedAt: IsoDateTime | null;
+  /** The last plant-wide consolidation (written by the sync work when it lands); null if never. */
+  consolidatedAt: IsoDateTime | null;
+}
+
+/**
+ * Records that the log was exported whole ('export', backup.ts does it when a backup is made) or
+ * consolidated ('consolidation'), at `at`.
+ * @throws StoreError('quota-exceeded' | 'write-failed')
+ */
+export async function recordBackup(kind: 'export' | 'consolidation', at: IsoDateTime): Promise<void> {
+  const db = await getDb();
+  const tx = db.transaction('settings', 'readwrite', STRICT);
+  const write = async () => {
+    const now = await backupStateIn(tx.store.get(SETTING_LAST_BACKUP));
+    const next: BackupState = kind === 'export' ? { ...now, exportedAt: at } : { ...now, consolidatedAt: at };
+    await tx.store.put({ ...next }, SETTING_LAST_BACKUP);
+  };
+  try {
+    await Promise.all([write(), tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, 'Recording the backup');
+  }
+}
+
+/** When the log was last exported and last consolidated. */
+export async function backupState(): Promise<BackupState> {
+  return backupStateIn((await getDb()).get('settings', SETTING_LAST_BACKUP));
+}
+
+async function backupStateIn(stored: Promise<unknown>): Promise<BackupState> {
+  const v = (await stored) as Partial<Record<keyof BackupState, unknown>> | undefined;
+  const at = (x: unknown) => (typeof x === 'string' ? x : null);
+  return { exportedAt: at(v?.exportedAt), consolidatedAt: at(v?.consolidatedAt) };
 }

@@ -3,6 +3,8 @@
 // (the Review screen and the Settings download), so a technician's phone does not parse the backup
 // validator at start. Same rules as src/store/index.ts: the rest of the app never sees IndexedDB.
 export { verifyStoredChains } from './verify.ts';
+export type { StoredChainStatus } from './verify.ts';
+export type { SignatureStatus } from './signatures.ts';
 export { exportBackup, exportBackupParts, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
 export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';

@@ -26,6 +26,7 @@ const SMALL = {
 const LARGE = {
   deviceId: '9d04e6b2-71ac-4f3e-b5d8-2a6c0e1f3b47', vesselPrefix: '5eed0102', vessels: 20, checks: 30_000,
   startMs: Date.parse('2023-01-01T00:00:00Z'), stepMs: 3_600_000, technicians: ['Gen Three', 'Gen Four', 'Gen Five'], seed: 32,
+  signed: true,
 };
 
 /** The backup text with its export instant blanked: all that may differ between two exports of the same store. */

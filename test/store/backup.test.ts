@@ -38,13 +38,13 @@ describe('export and import', () => {
     const { backup } = await makeDeviceWithBackup(2);
     const doc = parseBackup(backup);
     expect(doc.format).toBe('tankside-backup');
-    expect(doc.formatVersion).toBe(1);
+    expect(doc.formatVersion).toBe(2);
     expect(doc.exportedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(Z|[+-]\d\d:\d\d)$/);
-    // Header, then each section with one record per line (2 vessels, 3 checks, 1 chain head).
+    // Header, then each section with one record per line (2 vessels, 3 checks, 3 signatures, 1 chain head).
     const recordLines = backup.split('\n').filter((l) => l.startsWith('{"') && !l.startsWith('{"format"'));
-    expect(recordLines).toHaveLength(2 + 3 + 1);
+    expect(recordLines).toHaveLength(2 + 3 + 3 + 1);
     for (const line of recordLines) expect(() => JSON.parse(line.replace(/,$/, ''))).not.toThrow();
-    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":1,"exportedAt":')).toBe(true);
+    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":2,"exportedAt":')).toBe(true);
   });
 
   it('importing the same file again adds nothing and reports every record as already here', async () => {
@@ -216,7 +216,8 @@ describe('hostile and damaged files change nothing', () => {
     await expectRefused(edit(backup, (d) => void (d.checks[0]!['hash'] = 'A'.repeat(64))), 'checks[0].hash');
     await expectRefused(edit(backup, (d) => void (d.vessels[0]!['tagKey'] = 'nope')), 'vessels[0].tagKey');
     await expectRefused(edit(backup, (d) => void (d.vessels[1]!['id'] = d.vessels[0]!['id'])), 'vessels[1]');
-    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 2)), 'formatVersion');
+    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 3)), 'formatVersion');
+    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 0)), 'formatVersion');
     await expectRefused(edit(backup, (d) => void (d['format'] = 'other')), 'format');
     await expectRefused(edit(backup, (d) => void (d['extra'] = true)), 'file.extra');
     await expectRefused(backup.slice(0, -10), 'file');
@@ -228,7 +229,7 @@ describe('hostile and damaged files change nothing', () => {
 
   it('names a newer format version so the user knows to update', async () => {
     const { backup } = await makeDeviceWithBackup(1);
-    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 2)))).rejects.toThrow(/newer Tankside/);
+    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 3)))).rejects.toThrow(/3 was written by a newer Tankside/);
   });
 
   it('refuses a file over the size or count limits before parsing it', async () => {

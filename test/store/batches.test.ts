@@ -77,7 +77,7 @@ describe('verifyStoredChains across pages', () => {
     await writeChecks(chain);
     const seen: [number, number][] = [];
     expect(await verifyStoredChains({ onProgress: (d, t) => seen.push([d, t]) })).toEqual([
-      { deviceId: D1, status: 'ok', count: VERIFY_PAGE + 2, headSeq: VERIFY_PAGE + 2, headHash: chain.at(-1)!.hash },
+      { deviceId: D1, status: 'ok', count: VERIFY_PAGE + 2, headSeq: VERIFY_PAGE + 2, headHash: chain.at(-1)!.hash, signature: { state: 'unsigned' } },
     ]);
     expect(seen).toEqual([[VERIFY_PAGE, VERIFY_PAGE + 2], [VERIFY_PAGE + 2, VERIFY_PAGE + 2]]);
 
@@ -158,8 +158,8 @@ describe('exports across pages', () => {
     const doc = parseBackup(text);
     expect(doc.checks.map((c) => c.id)).toEqual([...d1, ...d2].map((c) => c.id));
     expect(doc.chains).toEqual([
-      { deviceId: D1, count: 1001, headSeq: 1001, headHash: d1.at(-1)!.hash },
-      { deviceId: D2, count: 3, headSeq: 3, headHash: d2.at(-1)!.hash },
+      { deviceId: D1, count: 1001, headSeq: 1001, headHash: d1.at(-1)!.hash, publicKey: null },
+      { deviceId: D2, count: 3, headSeq: 3, headHash: d2.at(-1)!.hash, publicKey: null },
     ]);
     expect(text.split('\n').filter((l) => l.startsWith('{"appVersion"'))).toHaveLength(1004);
     const before = await dump();
@@ -187,8 +187,8 @@ describe('JSON export in device and seq order whatever the ids', () => {
     expect(doc.checks.map((c) => c.id)).toEqual([...d1, ...d2].map((c) => c.id));
     expect(doc.checks).toEqual([...d1, ...d2]);
     expect(doc.chains).toEqual([
-      { deviceId: D1, count: n, headSeq: n, headHash: d1.at(-1)!.hash },
-      { deviceId: D2, count: 4, headSeq: 4, headHash: d2.at(-1)!.hash },
+      { deviceId: D1, count: n, headSeq: n, headHash: d1.at(-1)!.hash, publicKey: null },
+      { deviceId: D2, count: 4, headSeq: 4, headHash: d2.at(-1)!.hash, publicKey: null },
     ]);
     expect(seen).toEqual([VERIFY_PAGE, n + 4]);
   });

@@ -69,7 +69,11 @@ describe('appendCheck', () => {
     expect([a.seq, b.seq, c.seq]).toEqual([1, 2, 3]);
     expect(b.prevHash).toBe(a.hash);
     expect(c.prevHash).toBe(b.hash);
-    expect(await verifyStoredChains()).toEqual([{ deviceId: a.deviceId, status: 'ok', count: 3, headSeq: 3, headHash: c.hash }]);
+    expect(await verifyStoredChains()).toEqual([{
+      deviceId: a.deviceId, status: 'ok', count: 3, headSeq: 3, headHash: c.hash,
+      // Each save signs the new head with this install's key.
+      signature: { state: 'signed', fingerprint: expect.stringMatching(/^[A-Za-z0-9_-]{43}$/), throughSeq: 3 },
+    }]);
   });
 
   it('saves concurrent appends one after another on the chain (head re-checked inside the write)', async () => {

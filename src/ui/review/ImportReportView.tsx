@@ -34,6 +34,7 @@ export function ImportReportView({ outcome }: { outcome: ImportOutcome }) {
         vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>.
       </p>
       <Lines title="Skipped" lines={v.skipped} kind="skipped" />
+      {v.signatures.length > 0 ? <ul class="import-signatures" data-import="signatures">{v.signatures.map((t) => <li key={t}>{t}</li>)}</ul> : null}
       {v.warnings.length + v.brokenChains.length > 0 ? (
         <ul class="import-warnings">
           {[...v.brokenChains.map((b) => `Chain in the file: ${b}`), ...v.warnings].map((w) => <li key={w}>{w}</li>)}

@@ -1,6 +1,6 @@
 // Chain status per device, in words a supervisor can act on, pointing at the first bad record.
-import type { ChainProblem, ChainStatus, LongWorkOptions } from '../../store/index.ts';
-import { verifyStoredChains } from '../../store/transfer.ts';
+import type { ChainProblem, LongWorkOptions } from '../../store/index.ts';
+import { verifyStoredChains, type StoredChainStatus } from '../../store/transfer.ts';
 
 export interface ChainLine {
   deviceId: string;
@@ -21,12 +21,19 @@ const PROBLEM_TEXT: Record<ChainProblem, string> = {
   'unsealed': 'a record moved from an older version was never sealed',
 };
 
-export function chainLine(s: ChainStatus): ChainLine {
+export function chainLine(s: StoredChainStatus): ChainLine {
   const base = { deviceId: s.deviceId, deviceShort: s.deviceId.slice(0, 8), count: s.count };
-  if (s.status === 'ok') {
-    return { ...base, ok: true, text: `${s.count} records, seq 1 to ${s.headSeq}`, at: null };
+  const sig = s.signature;
+  if (s.status !== 'ok') {
+    return { ...base, ok: false, text: `broken at seq ${s.at.seq}: ${PROBLEM_TEXT[s.problem]} (${s.detail})`, at: s.at };
   }
-  return { ...base, ok: false, text: `broken at seq ${s.at.seq}: ${PROBLEM_TEXT[s.problem]} (${s.detail})`, at: s.at };
+  const records = `${s.count} records, seq 1 to ${s.headSeq}`;
+  if (sig.state === 'failed') {
+    // The links hold, so the records were re-hashed after a change; only the signatures tell.
+    return { ...base, ok: false, text: `${records}; signature fails at seq ${sig.at.seq}: ${sig.detail}`, at: sig.at.id ? sig.at : null };
+  }
+  if (sig.state === 'unsigned') return { ...base, ok: true, text: `${records}; not signed (saved before this device signed its records)`, at: null };
+  return { ...base, ok: true, text: `${records}; signed by device ${base.deviceShort} (key fingerprint ${sig.fingerprint})`, at: null };
 }
 
 /** Verifies every device's chain in the store and words the result. */

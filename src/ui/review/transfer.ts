@@ -47,6 +47,8 @@ export interface ImportView {
   skipped: ReportLine[];
   warnings: string[];
   brokenChains: string[];
+  /** Per device of the file: who signed its records, or that they are unsigned. */
+  signatures: string[];
 }
 
 export function importView(r: ImportReport): ImportView {
@@ -57,6 +59,12 @@ export function importView(r: ImportReport): ImportView {
     skipped: [...r.vessels.skipped.map((s) => ({ key: s.id, label: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why }))],
     warnings: r.warnings,
     brokenChains: r.fileChains.filter((c) => c.status === 'broken').map((c) => `device ${c.deviceId.slice(0, 8)}: ${c.status === 'broken' ? c.detail : ''}`),
+    signatures: r.fileSignatures.map(({ deviceId, signature: s }) => {
+      const device = `device ${deviceId.slice(0, 8)}`;
+      if (s.state === 'signed') return `Records of ${device} up to seq ${s.throughSeq} signed by ${device} (key fingerprint ${s.fingerprint}).`;
+      if (s.state === 'unsigned') return `Records of ${device} are not signed (saved before the device signed its records).`;
+      return `Records of ${device} up to seq ${s.throughSeq} signed; ${s.detail}.`;
+    }),
   };
 }
 

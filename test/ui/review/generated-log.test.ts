@@ -27,6 +27,13 @@ describe('generated log', () => {
     expect(await verifyStoredChains()).toEqual([expect.objectContaining({ deviceId: SPEC.deviceId, status: 'ok', count: 30 })]);
   });
 
+  it('signed, imports whole and verifies as signed by its key, through its last record', async () => {
+    const report = await importBackup(await generatedBackup({ ...SPEC, signed: true }));
+    expect(report.checks.added).toHaveLength(30);
+    expect(report.fileSignatures).toEqual([{ deviceId: SPEC.deviceId, signature: expect.objectContaining({ state: 'signed', throughSeq: 30 }) }]);
+    expect(await verifyStoredChains()).toEqual([expect.objectContaining({ status: 'ok', signature: expect.objectContaining({ state: 'signed', throughSeq: 30 }) })]);
+  });
+
   it('with one field changed, the file is refused, naming exactly that record', async () => {
     const text = await generatedBackup(SPEC);
     const lines = text.split('\n');

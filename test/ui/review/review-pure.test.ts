@@ -125,9 +125,19 @@ describe('rows and chains', () => {
     expect(rows.map((r) => r.id)).toEqual(['a', 'b', 'c', 'd']);
   });
   it('points a broken chain at its first bad record', () => {
-    const line = chainLine({ deviceId: 'abcdef0123', status: 'broken', count: 9, at: { id: 'rec-5', seq: 5 }, problem: 'content-changed', detail: 'seq 5: content does not match its hash' });
+    const line = chainLine({ deviceId: 'abcdef0123', status: 'broken', count: 9, at: { id: 'rec-5', seq: 5 }, problem: 'content-changed', detail: 'seq 5: content does not match its hash', signature: { state: 'unsigned' } });
     expect(line).toMatchObject({ ok: false, deviceShort: 'abcdef01', at: { id: 'rec-5', seq: 5 } });
     expect(line.text).toContain('seq 5');
     expect(line.text).toContain('changed');
+  });
+  it('says who signed an intact chain, and points a chain whose signatures fail at the first record they no longer vouch for', () => {
+    const ok = { deviceId: 'abcdef0123', status: 'ok', count: 9, headSeq: 9, headHash: 'h' } as const;
+    expect(chainLine({ ...ok, signature: { state: 'signed', fingerprint: 'FP-1', throughSeq: 9 } })).toMatchObject({
+      ok: true, at: null, text: '9 records, seq 1 to 9; signed by device abcdef01 (key fingerprint FP-1)',
+    });
+    expect(chainLine({ ...ok, signature: { state: 'unsigned' } }).text).toMatch(/not signed/);
+    const failed = chainLine({ ...ok, signature: { state: 'failed', fingerprint: 'FP-1', throughSeq: 4, at: { id: 'rec-5', seq: 5 }, detail: 'seq 5: its signature does not verify' } });
+    expect(failed).toMatchObject({ ok: false, at: { id: 'rec-5', seq: 5 } });
+    expect(failed.text).toContain('signature fails at seq 5');
   });
 });
