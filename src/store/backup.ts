@@ -17,7 +17,7 @@ import { hashTexts } from './hash-texts.ts';
 import { canonicalJson, contentOfText, progressStep, throwIfAborted } from './integrity.ts';
 import { blockPages, countChecks, LOG_STORES } from './log-layout.ts';
 import type { CheckRecord, LongWorkOptions, PublicJwk } from './records.ts';
-import { recordBackup } from './settings.ts';
+import { recordBackup } from './backup-record.ts';
 import { signatureCoverage, verifyingKey, type SignedHead, type VerifyingKey } from './signatures.ts';
 import { formatIsoWithOffset } from './time.ts';
 
@@ -184,8 +184,18 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
   return importDocument(doc, options);
 }
 
+/** Options of importDocument: those of any long job, and a last word before the write. */
+export interface ImportOptions extends LongWorkOptions {
+  /**
+   * Called when everything is checked and the one write transaction is about to open; the write
+   * waits for it, and does not happen if it throws. The import worker asks the page here, so a
+   * Cancel the page heard before this point can stop it by ending the worker (nothing written).
+   */
+  beforeWrite?: () => Promise<void>;
+}
+
 /** importBackup's work after the file is parsed and validated. */
-export async function importDocument(doc: BackupDocument, options: LongWorkOptions = {}): Promise<ImportReport> {
+export async function importDocument(doc: BackupDocument, options: ImportOptions = {}): Promise<ImportReport> {
   throwIfAborted(options.signal);
   const db = await getDb();
   await sealMigratedChecks(db);
@@ -215,6 +225,10 @@ export async function importDocument(doc: BackupDocument, options: LongWorkOptio
     const plan = await planMerge(db, doc, { texts, hashes, otherHashes, signing, signatureOf });
     throwIfAborted(options.signal);
     if (plan.refused.length > 0) throw refusal(plan.refused);
+    if (options.beforeWrite) {
+      await options.beforeWrite();
+      throwIfAborted(options.signal);
+    }
     try {
       // Done so far: every check hashed, plus every record the plan does not write.
       const skipped = doc.vessels.length - plan.vesselWrites.length + doc.checks.length - plan.checkAdds.length;

@@ -87,6 +87,11 @@ export async function openStore(opts: OpenStoreOptions = {}): Promise<void> {
   await connect();
 }
 
+/** The name of the database the store opens (a worker doing the store's work opens the same). */
+export function storeName(): string {
+  return options.name ?? DB_NAME;
+}
+
 /** Closes the connection (tests, or before deleting data). The next call reopens. */
 export async function closeStore(): Promise<void> {
   const current = connection;

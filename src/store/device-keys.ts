@@ -5,6 +5,7 @@ import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
 import type { KnownDeviceKey, PublicJwk } from './records.ts';
 import { SETTING_DEVICE_ID, SETTING_DEVICE_KEY_PREFIX, SETTING_SIGNING_KEY, type TanksideDB } from './schema.ts';
 import type { DeviceKey } from './records.ts';
+import { jwkThumbprint } from './signatures.ts';
 
 /** A device's public key as the store knows it. */
 export interface StoredPublicKey {
@@ -33,8 +34,8 @@ export async function storedPublicKeys(tx: SettingsReader, deviceIds: readonly s
     if (k && typeof k === 'object' && typeof k.fingerprint === 'string') out.set(d, { publicJwk: k.publicJwk, fingerprint: k.fingerprint });
   });
   const mine = ownKey as DeviceKey | undefined;
-  if (typeof own === 'string' && mine && typeof mine === 'object' && typeof mine.fingerprint === 'string') {
-    out.set(own, { publicJwk: mine.publicJwk, fingerprint: mine.fingerprint, cryptoKey: mine.publicKey });
+  if (typeof own === 'string' && mine && typeof mine === 'object' && typeof mine.publicJwk === 'object') {
+    out.set(own, { publicJwk: mine.publicJwk, fingerprint: await jwkThumbprint({ ...mine.publicJwk }), cryptoKey: mine.publicKey });
   }
   return out;
 }

@@ -33,7 +33,7 @@ export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from '.
 
 // Checks (append-only)
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
-export type { CheckFilter, ListOptions } from './checks.ts';
+export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';
 export { SIGNAL_ORDER, VERDICT_IDS, signalMaskOf, verdictOfResult, worstSignalOfMask } from './facts.ts';
 export type { Signal, StoredVerdict } from './facts.ts';
 
@@ -47,8 +47,10 @@ export {
   deviceId,
   requestPersistence,
   persistenceState,
+  backupState,
+  storageUsage,
 } from './settings.ts';
-export type { PersistenceState } from './settings.ts';
+export type { BackupState, PersistenceState } from './settings.ts';
 
 // Integrity (the long jobs — backup, CSV, verifying the stored log — are in ./transfer.ts, loaded on demand)
 export { verifyChains, canonicalJson, computeCheckHash } from './integrity.ts';

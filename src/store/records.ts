@@ -157,8 +157,6 @@ export interface DeviceKey {
   privateKey: CryptoKey;
   publicKey: CryptoKey;
   publicJwk: PublicJwk;
-  /** RFC 7638 JWK thumbprint (SHA-256, base64url) of publicJwk: the key's fingerprint as people compare it. */
-  fingerprint: string;
   createdAt: IsoDateTime;
 }
 

@@ -187,33 +187,25 @@ export interface BackupState {
   consolidatedAt: IsoDateTime | null;
 }
 
-/**
- * Records that the log was exported whole ('export', backup.ts does it when a backup is made) or
- * consolidated ('consolidation'), at `at`.
- * @throws StoreError('quota-exceeded' | 'write-failed')
- */
-export async function recordBackup(kind: 'export' | 'consolidation', at: IsoDateTime): Promise<void> {
-  const db = await getDb();
-  const tx = db.transaction('settings', 'readwrite', STRICT);
-  const write = async () => {
-    const now = await backupStateIn(tx.store.get(SETTING_LAST_BACKUP));
-    const next: BackupState = kind === 'export' ? { ...now, exportedAt: at } : { ...now, consolidatedAt: at };
-    await tx.store.put({ ...next }, SETTING_LAST_BACKUP);
-  };
-  try {
-    await Promise.all([write(), tx.done]);
-  } catch (error) {
-    throw storeErrorFromWrite(error, 'Recording the backup');
-  }
-}
-
 /** When the log was last exported and last consolidated. */
 export async function backupState(): Promise<BackupState> {
   return backupStateIn((await getDb()).get('settings', SETTING_LAST_BACKUP));
 }
 
-async function backupStateIn(stored: Promise<unknown>): Promise<BackupState> {
+export async function backupStateIn(stored: Promise<unknown>): Promise<BackupState> {
   const v = (await stored) as Partial<Record<keyof BackupState, unknown>> | undefined;
   const at = (x: unknown) => (typeof x === 'string' ? x : null);
   return { exportedAt: at(v?.exportedAt), consolidatedAt: at(v?.consolidatedAt) };
+}
+
+/** How much the browser says this app stores and may store, in bytes (navigator.storage.estimate()); null where it does not say. */
+export async function storageUsage(): Promise<{ usageBytes: number | null; quotaBytes: number | null }> {
+  const manager = storageManager();
+  if (!manager || typeof manager.estimate !== 'function') return { usageBytes: null, quotaBytes: null };
+  try {
+    const e = await manager.estimate();
+    return { usageBytes: e.usage ?? null, quotaBytes: e.quota ?? null };
+  } catch {
+    return { usageBytes: null, quotaBytes: null };
+  }
 }

@@ -6,7 +6,9 @@
 // there on fails). That costs about log2(records) verifications, not one per record.
 import { StoreError } from './errors.ts';
 import type { PublicJwk } from './records.ts';
-import { chainHeadMessage, jwkThumbprint, SIGNATURE_PARAMS, SIGNING_ALGORITHM } from './signing.ts';
+import { base64url, chainHeadMessage, SIGNATURE_PARAMS, SIGNING_ALGORITHM } from './signing.ts';
+
+const UTF8 = new TextEncoder();
 
 /** How far a device's records are vouched for by its signatures. */
 export type SignatureStatus =
@@ -19,6 +21,16 @@ export type SignatureStatus =
    * later one makes up for it); records up to throughSeq (0: none) are vouched for.
    */
   | { state: 'failed'; fingerprint: string | null; throughSeq: number; at: { id: string; seq: number }; detail: string };
+
+/**
+ * RFC 7638 JWK thumbprint: SHA-256 of the key's required members (for EC: crv, kty, x, y; for RSA:
+ * e, kty, n) written as JSON in that order with no whitespace, in base64url.
+ */
+export async function jwkThumbprint(jwk: Readonly<Record<string, string>>): Promise<string> {
+  const required = jwk['kty'] === 'RSA' ? ['e', 'kty', 'n'] : ['crv', 'kty', 'x', 'y'];
+  const text = `{${required.map((k) => `${JSON.stringify(k)}:${JSON.stringify(jwk[k] ?? '')}`).join(',')}}`;
+  return base64url(new Uint8Array(await crypto.subtle.digest('SHA-256', UTF8.encode(text))));
+}
 
 /** A device's public key, ready to verify with. */
 export interface VerifyingKey {

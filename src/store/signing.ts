@@ -33,16 +33,6 @@ export function base64url(bytes: Uint8Array): string {
   return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
 }
 
-/**
- * RFC 7638 JWK thumbprint: SHA-256 of the key's required members (for EC: crv, kty, x, y; for RSA:
- * e, kty, n) written as JSON in that order with no whitespace, in base64url.
- */
-export async function jwkThumbprint(jwk: Readonly<Record<string, string>>): Promise<string> {
-  const required = jwk['kty'] === 'RSA' ? ['e', 'kty', 'n'] : ['crv', 'kty', 'x', 'y'];
-  const text = `{${required.map((k) => `${JSON.stringify(k)}:${JSON.stringify(jwk[k] ?? '')}`).join(',')}}`;
-  return base64url(new Uint8Array(await crypto.subtle.digest('SHA-256', UTF8.encode(text))));
-}
-
 /** Signs a chain head with the device key: 64 bytes (r ‖ s, IEEE P1363, as WebCrypto gives them), base64url. */
 export async function signChainHead(key: DeviceKey, deviceId: string, seq: number, hash: string): Promise<string> {
   const signature = await crypto.subtle.sign(SIGNATURE_PARAMS, key.privateKey, chainHeadMessage(deviceId, seq, hash));
@@ -74,13 +64,8 @@ async function loadOrMakeKey(db: IDBPDatabase<TanksideDB>): Promise<DeviceKey | 
   const pair = await crypto.subtle.generateKey(SIGNING_ALGORITHM, false, ['sign', 'verify']);
   const jwk = await crypto.subtle.exportKey('jwk', pair.publicKey);
   const publicJwk: PublicJwk = { crv: 'P-256', kty: 'EC', x: String(jwk.x), y: String(jwk.y) };
-  const made: DeviceKey = {
-    privateKey: pair.privateKey,
-    publicKey: pair.publicKey,
-    publicJwk,
-    fingerprint: await jwkThumbprint({ ...publicJwk }),
-    createdAt: formatIsoWithOffset(new Date()),
-  };
+  // Its fingerprint (RFC 7638) is worked out where it is shown (signatures.ts), not at start-up.
+  const made: DeviceKey = { privateKey: pair.privateKey, publicKey: pair.publicKey, publicJwk, createdAt: formatIsoWithOffset(new Date()) };
   const tx = db.transaction('settings', 'readwrite', { durability: 'strict' });
   const keep = async (): Promise<DeviceKey> => {
     const again = await tx.store.get(SETTING_SIGNING_KEY);
@@ -94,5 +79,5 @@ async function loadOrMakeKey(db: IDBPDatabase<TanksideDB>): Promise<DeviceKey | 
 
 function isDeviceKey(value: unknown): value is DeviceKey {
   const k = value as Partial<DeviceKey> | undefined;
-  return typeof k === 'object' && k !== null && typeof k.fingerprint === 'string' && typeof k.privateKey === 'object' && k.privateKey !== null;
+  return typeof k === 'object' && k !== null && typeof k.publicJwk === 'object' && typeof k.privateKey === 'object' && k.privateKey !== null;
 }

@@ -7,6 +7,8 @@ export type { StoredChainStatus } from './verify.ts';
 export type { SignatureStatus } from './signatures.ts';
 export { exportBackup, exportBackupParts, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
 export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
+export { importBackupFile } from './import-job.ts';
+export { recordBackup } from './backup-record.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
 export { tallyChecks } from './tally.ts';
 export type { CheckTally } from './tally.ts';

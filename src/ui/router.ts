@@ -38,6 +38,9 @@ export function useRoute(): Route {
   useEffect(() => {
     const onHash = () => setRoute(parseRoute(window.location.hash));
     window.addEventListener('hashchange', onHash);
+    // A hash that changed between the first render and this effect (a tap on the menu as the app
+    // opens) fired its event before anyone listened: read it again now.
+    onHash();
     return () => window.removeEventListener('hashchange', onHash);
   }, []);
   return route;

@@ -307,3 +307,17 @@ describe('validating a backup in steps (the import\'s way)', () => {
     await expect(parseBackupInSteps(big, { signal: stop.signal })).rejects.toMatchObject({ code: 'cancelled' });
   });
 });
+
+describe('importBackupFile', () => {
+  it('where no worker can be made (Node), imports the file on this thread, the same as importBackup', async () => {
+    const { importBackupFile } = await import('../../src/store/import-job.ts');
+    const { backup } = await makeDeviceWithBackup(3);
+    await useDevice(new IDBFactory());
+    expect(typeof Worker).toBe('undefined');
+    const report = await importBackupFile(new Blob([backup]));
+    expect(report.checks.added).toHaveLength(4);
+    const stop = new AbortController();
+    stop.abort();
+    await expect(importBackupFile(new Blob([backup]), { signal: stop.signal })).rejects.toMatchObject({ code: 'cancelled' });
+  });
+});

@@ -48,3 +48,22 @@ describe('settings', () => {
     expect(await deviceId()).toBe(a);
   });
 });
+
+describe('when the log last left the device', () => {
+  it('records exports and consolidations apart, and an export of a backup records itself', async () => {
+    const { backupState } = await import('../../src/store/settings.ts');
+    const { recordBackup } = await import('../../src/store/backup-record.ts');
+    const { exportBackup } = await import('../../src/store/transfer.ts');
+    expect(await backupState()).toEqual({ exportedAt: null, consolidatedAt: null });
+    await recordBackup('consolidation', '2026-12-01T08:00:00+01:00');
+    expect(await backupState()).toEqual({ exportedAt: null, consolidatedAt: '2026-12-01T08:00:00+01:00' });
+    const t0 = Math.floor(Date.now() / 1000) * 1000;
+    await exportBackup();
+    const t1 = Date.now();
+    const state = await backupState();
+    expect(state.consolidatedAt).toBe('2026-12-01T08:00:00+01:00');
+    // Stamped to the second, between the export's start and its end.
+    expect(Date.parse(state.exportedAt!)).toBeGreaterThanOrEqual(t0);
+    expect(Date.parse(state.exportedAt!)).toBeLessThanOrEqual(t1);
+  });
+});

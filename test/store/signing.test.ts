@@ -6,10 +6,11 @@ import { IDBFactory } from 'fake-indexeddb';
 import { computeCheckHash, StoreError, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
-import { deviceSigningKey, jwkThumbprint, SIGNING_ALGORITHM, signChainHead, base64url } from '../../src/store/signing.ts';
-import { verifyP256, verifyingKey } from '../../src/store/signatures.ts';
+import { deviceSigningKey, SIGNING_ALGORITHM, signChainHead, base64url } from '../../src/store/signing.ts';
+import { jwkThumbprint, verifyP256, verifyingKey } from '../../src/store/signatures.ts';
 import { SETTING_SIGNING_KEY } from '../../src/store/schema.ts';
 import type { LogBlock } from '../../src/store/log-layout.ts';
+import type { DeviceKey } from '../../src/store/records.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
 import { editStored } from './log-access.ts';
 
@@ -71,13 +72,12 @@ describe('the device key', () => {
     await expect(crypto.subtle.exportKey('jwk', key.privateKey)).rejects.toThrow();
     await expect(crypto.subtle.exportKey('pkcs8', key.privateKey)).rejects.toThrow();
     // What the store holds is the same opaque key, not its bytes.
-    const stored = (await db.get('settings', SETTING_SIGNING_KEY)) as { privateKey: CryptoKey; fingerprint: string };
+    const stored = (await db.get('settings', SETTING_SIGNING_KEY)) as DeviceKey;
     expect(stored.privateKey.extractable).toBe(false);
-    expect(stored.fingerprint).toBe(key.fingerprint);
-    expect(key.fingerprint).toBe(await jwkThumbprint({ ...key.publicJwk }));
+    expect(stored.publicJwk).toEqual(key.publicJwk);
     // A later open finds the same key.
     await useDevice(globalThis.indexedDB as IDBFactory);
-    expect((await deviceSigningKey(await getDb()))!.fingerprint).toBe(key.fingerprint);
+    expect((await deviceSigningKey(await getDb()))!.publicJwk).toEqual(key.publicJwk);
   });
 });
 
@@ -85,7 +85,7 @@ describe('verifying the stored log', () => {
   it('an untouched chain is signed by this device through its last record', async () => {
     await useDevice(new IDBFactory());
     await seedDevice(6);
-    const fingerprint = (await deviceSigningKey(await getDb()))!.fingerprint;
+    const fingerprint = await jwkThumbprint({ ...(await deviceSigningKey(await getDb()))!.publicJwk });
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 7, signature: { state: 'signed', fingerprint, throughSeq: 7 } }]);
   });
 
@@ -123,7 +123,7 @@ describe('verifying the stored log', () => {
 describe('signed backups', () => {
   it('carry the public key and every signature; another device learns the key and verifies the same', async () => {
     const source = await makeDeviceWithBackup(4);
-    const fingerprint = (await deviceSigningKey(await getDb()))!.fingerprint;
+    const fingerprint = await jwkThumbprint({ ...(await deviceSigningKey(await getDb()))!.publicJwk });
     const doc = JSON.parse(source.backup) as Doc;
     expect(doc.formatVersion).toBe(2);
     expect(doc.signatures.map((s) => s.seq)).toEqual([1, 2, 3, 4, 5]);
@@ -174,7 +174,7 @@ describe('signed backups', () => {
     const genuine = doc.chains[0]!.publicKey as Record<string, string>;
     const other = await crypto.subtle.generateKey(SIGNING_ALGORITHM, true, ['sign', 'verify']);
     const jwk = await crypto.subtle.exportKey('jwk', other.publicKey);
-    const forged = { privateKey: other.privateKey, publicKey: other.publicKey, publicJwk: { crv: 'P-256' as const, kty: 'EC' as const, x: jwk.x!, y: jwk.y! }, fingerprint: '', createdAt: '' };
+    const forged = { privateKey: other.privateKey, publicKey: other.publicKey, publicJwk: { crv: 'P-256' as const, kty: 'EC' as const, x: jwk.x!, y: jwk.y! }, createdAt: '', fingerprint: '' };
     forged.fingerprint = await jwkThumbprint({ ...forged.publicJwk });
     doc.chains[0]!.publicKey = forged.publicJwk;
     doc.signatures = await Promise.all(doc.checks.map(async (c) => ({ deviceId: c.deviceId, seq: c.seq, signature: await signChainHead(forged, c.deviceId, c.seq, c.hash) })));

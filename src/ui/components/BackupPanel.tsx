@@ -1,15 +1,12 @@
-// Storage state and the backup reminder: the browser may clear site data, so export is the real backup.
-import { useEffect, useState } from 'preact/hooks';
+// Export: the browser may clear site data, so a file kept elsewhere is the real backup (the storage
+// state and the last backup are in StoragePanel).
+import { useState } from 'preact/hooks';
 import * as repo from '../state/repo.ts';
-import { updateSettings, useSettings } from '../state/app-state.ts';
-import { shortTime } from '../state/format.ts';
+import { updateSettings } from '../state/app-state.ts';
 import { formatIsoWithOffset } from '../../store/index.ts';
 
 export function BackupPanel() {
-  const s = useSettings();
-  const [persisted, setPersisted] = useState<string>('checking…');
   const [message, setMessage] = useState('');
-  useEffect(() => { void repo.persistenceLabel().then(setPersisted); }, []);
   const exportNow = async (kind: 'backup' | 'csv') => {
     try {
       const file = await repo.exportFile(kind);
@@ -27,11 +24,10 @@ export function BackupPanel() {
   };
   return (
     <section class="panel" aria-labelledby="set-store">
-      <h2 id="set-store">Storage and backup</h2>
-      <p>Storage on this device: <strong>{persisted}</strong></p>
+      <h2 id="set-store">Backup</h2>
       <p>
-        Last backup: <strong>{s.lastBackup ? shortTime(s.lastBackup) : 'never'}</strong>. The log lives only on
-        this device until you export it; clearing the browser's site data deletes it. Export at the end of each shift.
+        The log lives only on this device until you export it; clearing the browser's site data deletes it. Export
+        at the end of each shift.
       </p>
       <div class="row">
         <button type="button" class="primary" onClick={() => void exportNow('backup')}>Export full backup (JSON)</button>

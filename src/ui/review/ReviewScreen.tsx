@@ -14,6 +14,7 @@ import { ReviewPager, reviewVessels } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
 import { SIGNALS, VERDICTS } from './record-facts.ts';
+import { refreshVessels } from '../state/app-state.ts';
 
 const VERDICT_IDS = VERDICTS.map((v) => v.id);
 
@@ -124,7 +125,11 @@ export function ReviewScreen() {
       )}
       <div class="no-print">
         <ChainPanel />
-        <TransferPanel onBusy={setImporting} onImported={() => setGeneration((g) => g + 1)} />
+        <TransferPanel onBusy={setImporting} onImported={() => {
+          setGeneration((g) => g + 1);
+          // The field screens' vessel list too: an import may have brought vessels.
+          void refreshVessels().catch(() => undefined);
+        }} />
       </div>
     </div>
   );

@@ -1,7 +1,7 @@
 // Export and import for the review screen: file names, downloads, reading a chosen file, and the
 // import report in words. The store does the work (exportBackupParts, exportCsvParts, importBackup).
 import { StoreError, type LongWorkOptions, type RefusedRecord } from '../../store/index.ts';
-import { exportBackupParts, exportCsvParts, importBackup, type ImportReport } from '../../store/transfer.ts';
+import { exportBackupParts, exportCsvParts, importBackupFile, type ImportReport } from '../../store/transfer.ts';
 
 export type ExportKind = 'csv' | 'json';
 
@@ -83,11 +83,10 @@ export type ImportOutcome =
   | { kind: 'refused'; message: string; records: ReportLine[] }
   | { kind: 'cancelled' };
 
-/** Reads a chosen backup file and merges it; a refused or cancelled import changed nothing. */
+/** Reads a chosen backup file and merges it (on a worker: the page stays free); a refused or cancelled import changed nothing. */
 export async function importFile(file: File, options: LongWorkOptions): Promise<ImportOutcome> {
   try {
-    const text = await file.text();
-    return { kind: 'done', view: importView(await importBackup(text, options)) };
+    return { kind: 'done', view: importView(await importBackupFile(file, options)) };
   } catch (e) {
     if (e instanceof StoreError && e.code === 'cancelled') return { kind: 'cancelled' };
     const records = e instanceof StoreError ? refusedLines(e.refused) : [];

@@ -7,9 +7,10 @@ import { shortTime } from '../state/format.ts';
 import { CheckRecordView } from '../components/CheckRecordView.tsx';
 import { verdictOfRecord } from '../state/check-session.ts';
 import { isDemo } from '../state/demo-label.ts';
+import { BackupReminder } from '../components/BackupReminder.tsx';
 
 export function LogScreen({ param }: { param?: string | undefined }) {
-  return param ? <OneRecord id={param} /> : <LogList />;
+  return param ? <OneRecord id={param} /> : <><BackupReminder /><LogList /></>;
 }
 
 function LogList() {

@@ -4,6 +4,7 @@ import { Choice } from '../components/Choice.tsx';
 import { UnitPrefsPicker } from '../components/UnitPrefsPicker.tsx';
 import { AtmosphereSettings } from '../components/AtmosphereSettings.tsx';
 import { BackupPanel } from '../components/BackupPanel.tsx';
+import { StoragePanel } from '../components/StoragePanel.tsx';
 import { updateSettings, useSettings } from '../state/app-state.ts';
 import type { UnitSystem } from '../state/settings-model.ts';
 import { FORMULATION_ID } from '../../core/index.ts';
@@ -38,6 +39,7 @@ export function SettingsScreen() {
         <p class="hint">Either is read when it cannot be mistaken; this choice decides "1,250" and "1.250".</p>
       </section>
       <AtmosphereSettings />
+      <StoragePanel />
       <BackupPanel />
       <p class="hint">App version {__APP_VERSION__}. Steam properties from {FORMULATION_ID}.</p>
     </div>

@@ -98,6 +98,21 @@ export async function persistenceLabel(): Promise<string> {
   }
 }
 
+/** How much this app stores and may store, in bytes (null where the browser does not say). */
+export function storageUsage(): Promise<{ usageBytes: number | null; quotaBytes: number | null }> {
+  return store.storageUsage();
+}
+
+/** When the log was last exported whole, and last consolidated. */
+export function backupState(): Promise<store.BackupState> {
+  return store.backupState();
+}
+
+/** Whether any check is saved on this device. */
+export async function hasChecks(): Promise<boolean> {
+  return (await store.countStoredChecks()) > 0;
+}
+
 /** The full backup (JSON) or the log as CSV, as a file to download. */
 export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string; blob: Blob }> {
   const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);

@@ -27,9 +27,14 @@ export interface AppSettings {
   atmosphere: SiteAtmosphere;
   /** How numbers are typed and shown: decimal point or decimal comma. */
   decimalSeparator: DecimalSeparator;
-  /** ISO 8601 time of the last export the person made, if any. */
+  /** ISO 8601 time of the last export made from Settings by versions before the store kept it (store backupState). */
   lastBackup?: string;
+  /** Days without a backup after which the Log screen reminds the person; absent in older records (then the default). */
+  backupReminderDays?: number;
 }
+
+/** The reminder's default and range, in whole days. */
+export const BACKUP_REMINDER = { defaultDays: 7, minDays: 1, maxDays: 60 } as const;
 
 export const UNIT_PRESETS: Readonly<Record<'SI' | 'US', UnitPrefs>> = {
   SI: { pressure: 'kPa', temperature: 'degC', mass: 'kg', volume: 'L', length: 'm' },
