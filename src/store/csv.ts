@@ -62,7 +62,7 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'regime', cell: fromResult('inventory.regime') },
   { header: 'quality (kg/kg)', cell: fromResult('inventory.quality') },
   { header: 'liquid mass (kg)', cell: fromResult('inventory.liquidMassKg') },
-  { header: 'vapor mass (kg)', cell: fromResult('inventory.vaporMassKg') },
+  { header: 'vapour mass (kg)', cell: fromResult('inventory.vaporMassKg') },
   { header: 'liquid level (m)', cell: fromResult('inventory.liquidLevel.levelM') },
   {
     header: 'inputs as typed',

@@ -69,7 +69,7 @@ describe('vessel form', () => {
     const r = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6', atmosphereMode: 'elevation', elevationM: '40000' });
     if (r.ok) throw new Error('expected a refusal');
     // Valid range −500 m … 11 000 m = −1640.42 ft … 36 089.2 ft.
-    expect(r.errors.elevationM).toMatch(/40000 ft is outside the valid range, \u22121640\.42 to 36089\.2 ft\.$/);
+    expect(r.errors.elevationM).toMatch(/"40000" ft is outside the valid range, \u22121640\.42 to 36089\.2 ft\.$/);
   });
 
   it('shows stored metres in the preferred length unit (US customary: ft) and reads them back', () => {

@@ -30,6 +30,10 @@ function typedUnit(d: CheckDraft, field: ReadingField): FieldUnit {
   }
 }
 
+function typedText(d: CheckDraft, field: ReadingField): string {
+  return field === 'gross' ? d.gross.text : d[field].text;
+}
+
 /** Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any. */
 export function evaluateDraft(
   d: CheckDraft, vessel: VesselRecord | undefined, measuredAtmospherePa: number | undefined, prefs: UnitPrefs,
@@ -43,7 +47,7 @@ export function evaluateDraft(
     return { kind: 'result', view: resultView(result, spec, prefs), reading: r.reading, result };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
-    if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field)) } };
+    if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field), typedText(d, field)) } };
     return { kind: 'input-error', errors: {}, general: `No result: ${messageOf(e)}` };
   }
 }

@@ -37,7 +37,7 @@ export type FillEvaluation =
   | { kind: 'plan'; plan: FillPlan; view: ResultView };
 
 const ENGINE_FIELDS: Record<string, FillField> = {
-  'target temperature': 'target', 'start temperature': 'start', quality: 'targetValue', 'vapor-space fraction': 'targetValue',
+  'target temperature': 'target', 'start temperature': 'start', quality: 'targetValue', 'vapour-space fraction': 'targetValue',
   'liquid-full margin': 'margin', 'heater power': 'power', 'vessel heat capacity': 'heatCapacity',
 };
 
@@ -67,7 +67,7 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
-    return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
+    return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn, field === 'target' ? d.target : field === 'start' ? d.start : undefined) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
 }
 

@@ -44,7 +44,7 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
 export function specFromForm(f: VesselForm): SpecResult {
   const errors: Partial<Record<FormField, string>> = {};
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
-    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field)); return NaN; }
+    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field), f[field]); return NaN; }
   };
   const lengthUnit = formLengthUnit(f);
   const len = (n: number) => lengthToM(n, lengthUnit);
@@ -80,7 +80,7 @@ export function specFromForm(f: VesselForm): SpecResult {
     validateVessel(spec);
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] ?? 'tag' : 'tag';
-    return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field)) } };
+    return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field), f[field]) } };
   }
   return { ok: true, spec };
 }
