@@ -52,7 +52,7 @@ describe('results in the unit the reading was typed in', () => {
     const T = 403.15;
     const r = evaluateCheck(vessel, { time, temperatureK: T, pressure: { reference: 'gauge', pressurePa: saturationPressure(T) - 101_325 }, weight: { kind: 'not-weighed' } });
     const v = (resultView as unknown as (...a: unknown[]) => ReturnType<typeof resultView>)(r, vessel, UNIT_PRESETS.SI, { pressure: 'psi' });
-    const abs = v.figures.find((f) => /^Absolute pressure/.test(f.label))?.value ?? '';
+    const abs = v.figures.find((f) => /^(Absolute pressure|Pressure)$/.test(f.label))?.value ?? '';
     expect(abs).toMatch(/psi/);
     expect(abs).toMatch(/kPa/);
   });

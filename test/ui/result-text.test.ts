@@ -33,7 +33,13 @@ describe('resultView', () => {
     expect(v.sketch?.orientation).toBe('vertical');
     expect(v.sketch!.low).toBeLessThanOrEqual(v.sketch!.level);
     expect(v.sketch!.high).toBeGreaterThanOrEqual(v.sketch!.level);
-    expect(v.hazards.some((h) => h.startsWith('Margin to MAWP'))).toBe(true);
+    expect(v.figures.some((h) => h.label === 'Margin to MAWP')).toBe(true);
+    expect(v.outcome).toBe('none');
+    expect(v.groups.map((g) => g.id)).toEqual(['saturation', 'contents', 'heating', 'hazards']);
+    // Each caution once across the findings and the groups' notes (the standing note is shown on its own).
+    const shown = [...v.findings, ...v.groups.flatMap((g) => g.notes)].map((c) => c.rule);
+    expect(new Set(shown).size).toBe(shown.length);
+    expect(shown.sort()).toEqual(v.cautions.map((c) => c.rule).sort());
     expect(v.cautions.some((c) => c.rule === 'standing-note')).toBe(true);
   });
 

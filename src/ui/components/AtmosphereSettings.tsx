@@ -1,5 +1,5 @@
 // Site atmosphere: 1 standard atmosphere, a barometer reading, or the site elevation.
-import { LENGTH_UNITS, PRESSURE_UNITS, type LengthUnit, type PressureUnit } from '../../core/index.ts';
+import { LENGTH_UNITS, PRESSURE_UNITS, type LengthUnit, type PressureUnit } from '../../core/basics.ts';
 import { Choice } from './Choice.tsx';
 import { NumberField } from './NumberField.tsx';
 import { AtmosphereLine } from './AtmosphereLine.tsx';

@@ -9,7 +9,7 @@ import { refreshVessels, useSettings } from '../state/app-state.ts';
 import { atmosphereDefaults, unitsInForce } from '../state/settings-model.ts';
 import { emptyVesselForm, type FormField, type VesselForm } from '../state/vessel-form.ts';
 import { formFromSpec, specFromForm } from '../state/vessel-spec.ts';
-import { isDemoVessel } from '../state/demo-plant.ts';
+import { isDemoVessel } from '../state/demo-label.ts';
 import { shortTime } from '../state/format.ts';
 
 export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) {

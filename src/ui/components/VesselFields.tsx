@@ -1,7 +1,7 @@
 // The vessel editor's inputs, in four groups: identity and shape, weight, pressure, temperature
 // and atmosphere. Units picked once per group apply to every field of that quantity.
-import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
-import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/basics.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
 import { TextField } from './TextField.tsx';
 import { NumberField } from './NumberField.tsx';
 import { Choice } from './Choice.tsx';

@@ -4,9 +4,8 @@ import * as repo from './repo.ts';
 import type { VesselRecord } from './repo.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
 
-import { isDemo } from './demo-label.ts';
 
-export { DEMO_TAG_PREFIX } from './demo-label.ts';
+export { DEMO_TAG_PREFIX, isDemoVessel } from './demo-label.ts';
 
 const COMMON = {
   designTemperatureK: 473.15,
@@ -62,9 +61,6 @@ const DEMO_PLANT: readonly VesselSpec[] = [
   },
 ];
 
-export function isDemoVessel(v: VesselRecord): boolean {
-  return isDemo(v) || isDemo(v.spec as { tag?: unknown; description?: unknown });
-}
 
 /** Adds the demo vessels that are not in the inventory yet; returns how many were added. */
 export async function loadDemoPlant(existing: readonly VesselRecord[]): Promise<number> {

@@ -1,7 +1,7 @@
 // Entries in progress are saved as the person types (debounced), so a reload, a closed tab or an
 // accepted update never loses them. flushDrafts() writes whatever is pending and resolves when
 // the store has committed it; the update flow calls it before reloading.
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import * as repo from './repo.ts';
 import { reportSaveError } from './app-state.ts';
 
@@ -53,7 +53,9 @@ if (typeof document !== 'undefined') {
  * A value kept in a draft: starts from `initial`, is replaced by the stored draft once loaded,
  * and every change is saved. `loaded` is false until the stored draft was read.
  */
-export function useDraft<T extends object>(key: string, initial: T): { value: T; set: (next: T) => void; loaded: boolean; reset: () => void } {
+export function useDraft<T extends object>(key: string, initial: T): {
+  value: T; set: (next: T) => void; update: (change: (current: T) => T) => void; loaded: boolean; reset: () => void;
+} {
   const [value, setValue] = useState<T>(initial);
   const [loaded, setLoaded] = useState(false);
   const initialRef = useRef(initial);
@@ -71,9 +73,20 @@ export function useDraft<T extends object>(key: string, initial: T): { value: T;
     pending.set(key, next);
     schedule();
   };
+  // Stable across renders, so components handed it re-render only when their own props change.
+  const update = useMemo(() => (change: (current: T) => T) => {
+    setValue((current) => {
+      const next = change(current);
+      if (next !== current) {
+        pending.set(key, next);
+        schedule();
+      }
+      return next;
+    });
+  }, [key]);
   const reset = () => {
     setValue(initialRef.current);
     void discardDraft(key);
   };
-  return { value, set, loaded, reset };
+  return { value, set, update, loaded, reset };
 }

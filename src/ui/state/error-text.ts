@@ -9,7 +9,7 @@ import {
   InputError, LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS,
   lengthFromM, massFromKg, pressureFromPa, temperatureFromK,
   type LengthUnit, type MassUnit, type PressureUnit, type TemperatureUnit,
-} from '../../core/index.ts';
+} from '../../core/basics.ts';
 import { formatNumber } from './format.ts';
 import { messageOf } from './atmosphere.ts';
 

@@ -1,6 +1,6 @@
 // Reading and showing numbers at the UI's edge, with the person's decimal separator. The parsing
 // and formatting rules are the core's; this module only supplies the separator setting.
-import { formatNumber as coreFormat, parseDecimal, type DecimalSeparator } from '../../core/index.ts';
+import { formatNumber as coreFormat, parseDecimal, type DecimalSeparator } from '../../core/basics.ts';
 
 let separator: DecimalSeparator = '.';
 
