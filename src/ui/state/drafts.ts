@@ -11,7 +11,13 @@ const pending = new Map<string, unknown>();
 let timer: number | undefined;
 let inFlight: Promise<void> = Promise.resolve();
 
+/** Says on the page whether every draft is stored: browser tests wait on it (`data-draft-state`). */
+function markDrafts(state: 'pending' | 'saved'): void {
+  if (typeof document !== 'undefined') document.documentElement.dataset.draftState = state;
+}
+
 function schedule(): void {
+  markDrafts('pending');
   if (timer !== undefined) window.clearTimeout(timer);
   timer = window.setTimeout(() => void flushDrafts().catch(() => undefined), SAVE_DELAY_MS);
 }
@@ -25,6 +31,7 @@ export function flushDrafts(): Promise<void> {
   inFlight = inFlight.catch(() => undefined).then(async () => {
     try {
       for (const [key, value] of batch) await repo.saveDraft(key, value);
+      if (pending.size === 0) markDrafts('saved');
     } catch (e) {
       for (const [key, value] of batch) if (!pending.has(key)) pending.set(key, value);
       reportSaveError(`Entry in progress not saved: ${repo.storageMessage(e)}`);
