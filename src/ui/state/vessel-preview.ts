@@ -6,7 +6,7 @@ import {
   atmosphereFromElevation, elevationFromAtmosphere, headDepthM, lengthFromM, lengthToM, pressureFromPa, pressureToPa,
   vesselVolume, volumeFromM3, volumeToM3, LENGTH_UNITS, PRESSURE_UNITS, VOLUME_UNITS,
 } from '../../core/index.ts';
-import { formatNumber, readNumber } from './format.ts';
+import { formatFixed, formatNumber, readNumber } from './format.ts';
 import { lengthUnitOf, type VesselForm } from './vessel-form.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
@@ -60,7 +60,7 @@ export function siteCounterpart(f: VesselForm): string {
     if (p === undefined) return '';
     const m = elevationFromAtmosphere(pressureToPa(p, f.pressureUnit));
     const unit = lengthUnitOf(f, 'elevationM');
-    return `That pressure is an average day at about ${formatNumber(lengthFromM(m, unit), 3)} ${label(LENGTH_UNITS, unit)} above sea level (US Standard Atmosphere 1976); if the site is far from that, check the value.`;
+    return `That pressure is an average day at about ${formatFixed(lengthFromM(m, unit), 0)} ${label(LENGTH_UNITS, unit)} above sea level (US Standard Atmosphere 1976); if the site is far from that, check the value.`;
   } catch (e) {
     return e instanceof Error ? e.message : String(e);
   }
