@@ -7,7 +7,8 @@ import { extname, join, normalize, resolve } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 export const ROOT = resolve(import.meta.dirname, '../..');
-export const DIST = join(ROOT, 'dist');
+// TANKSIDE_DIST serves another build (for example an older one, to see a new test fail on it).
+export const DIST = process.env.TANKSIDE_DIST ?? join(ROOT, 'dist');
 export const SCREENS_DIR = join(ROOT, 'test-results/screens');
 
 const MIME: Record<string, string> = {

@@ -35,7 +35,7 @@ describe('a check starts in the vessel\'s units', () => {
 
   it('a vessel saved without instrument units falls back to the person\'s preferred units', () => {
     const { readingUnits: _none, ...older } = vessel;
-    expect(vesselUnits(older, UNIT_PRESETS.US)).toEqual({ pressure: 'psi', temperature: 'degF', mass: 'lb' });
+    expect(vesselUnits(older as VesselSpec, UNIT_PRESETS.US)).toEqual({ pressure: 'psi', temperature: 'degF', mass: 'lb' });
   });
 });
 

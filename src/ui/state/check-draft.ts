@@ -2,7 +2,7 @@
 // field always takes the vessel's own unit (its gauge's, thermometer's, scale's), so a unit picked
 // for one reading never carries over to the next check or the next launch; a field with text keeps
 // the unit it was typed in, marked when it differs from the vessel's.
-import type { MassUnit, PressureUnit, ReadingUnits, TemperatureUnit, VesselSpec } from '../../core/index.ts';
+import type { MassUnit, PressureUnit, ReadingUnits, TemperatureUnit } from '../../core/index.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
 export interface TypedValue<U extends string> { text: string; unit: U }
@@ -30,7 +30,7 @@ export function emptyCheckDraft(units: UnitPrefs, technician: string): CheckDraf
 }
 
 /** The units a vessel's instruments read in; the person's preferred units for a vessel saved without them. */
-export function vesselUnits(spec: Pick<VesselSpec, 'readingUnits'> | undefined, prefs: UnitPrefs): ReadingUnits {
+export function vesselUnits(spec: { readingUnits?: ReadingUnits | undefined } | undefined, prefs: UnitPrefs): ReadingUnits {
   return spec?.readingUnits ?? { pressure: prefs.pressure, temperature: prefs.temperature, mass: prefs.mass };
 }
 

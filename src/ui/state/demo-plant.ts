@@ -12,6 +12,7 @@ const COMMON = {
   vacuumRated: false,
   siteAtmospherePa: 101_325,
   ambientTemperatureK: 293.15,
+  readingUnits: { pressure: 'kPa', temperature: 'degC', mass: 'kg' },
 } as const;
 
 const DEMO_PLANT: readonly VesselSpec[] = [
@@ -43,6 +44,8 @@ const DEMO_PLANT: readonly VesselSpec[] = [
     description: 'DEMO DATA: invented condensate receiver, horizontal, 2:1 heads',
     geometry: { shape: 'horizontal-cylinder', innerDiameterM: 0.8, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } },
     tareKg: 600, mawpGaugePa: 350e3, reliefSetGaugePa: 345e3,
+    // An invented receiver whose gauge, thermometer and scale read US customary units.
+    readingUnits: { pressure: 'psi', temperature: 'degF', mass: 'lb' },
     instruments: {
       pressureGauge: { spanPa: 600e3, accuracyPercentOfSpan: 1.6 }, temperatureSensor: { kind: 'stated', toleranceK: 1 },
       weightToleranceKg: 3, volumeTolerancePercent: 3, barometerTolerancePa: 0,

@@ -13,16 +13,16 @@ const SUGGESTED: readonly PressureUnit[] = ['kPa', 'bar', 'psi', 'MPa', 'kgf/cm2
 const label = (u: PressureUnit) => PRESSURE_UNITS.find((x) => x.id === u)?.label ?? u;
 
 /**
- * A message when `value` (typed as `text` in `unit`, gauge or absolute) lies beyond the vessel's
- * gauge span, from a full vacuum to the span above the atmosphere; undefined when it fits.
- * atmospherePa: the atmosphere the reading is referred to.
+ * A message when `value` (typed as `text` in `unit`, gauge or absolute) lies above the vessel's
+ * gauge span; undefined when it fits. A value below zero absolute is the engine's to refuse (its
+ * range message says why). atmospherePa: the atmosphere the reading is referred to.
  */
 export function gaugeSpanError(
   value: number, text: string, unit: PressureUnit, kind: 'gauge' | 'absolute', spec: VesselSpec, atmospherePa: number,
 ): string | undefined {
   const span = spec.instruments.pressureGauge.spanPa;
   const gaugePa = (v: number, u: PressureUnit) => (kind === 'gauge' ? pressureToPa(v, u) : pressureToPa(v, u) - atmospherePa);
-  const fits = (v: number, u: PressureUnit) => gaugePa(v, u) <= span && gaugePa(v, u) > -atmospherePa;
+  const fits = (v: number, u: PressureUnit) => gaugePa(v, u) <= span;
   if (fits(value, unit)) return undefined;
   const gaugeUnit = spec.readingUnits?.pressure;
   const shown = (pa: number, u: PressureUnit) => formatNumber(pressureFromPa(pa, u), 3);
