@@ -6,10 +6,11 @@ import type { VesselSpec } from '../../core/index.ts';
 import { formatNumber } from '../state/format.ts';
 import { hrefFor } from '../router.ts';
 import { AtmosphereLine } from './AtmosphereLine.tsx';
+import { pure } from './pure.ts';
 
 interface Props { settings: AppSettings; atm: AtmosphereResult; vessel: VesselRecord | undefined }
 
-export function CheckAtmosphere({ settings, atm, vessel }: Props) {
+function CheckAtmosphereView({ settings, atm, vessel }: Props) {
   if (settings.atmosphere.mode === 'barometer') return <AtmosphereLine atm={atm} link={false} />;
   const site = (vessel?.spec as VesselSpec | undefined)?.siteAtmospherePa;
   return (
@@ -19,3 +20,5 @@ export function CheckAtmosphere({ settings, atm, vessel }: Props) {
     </p>
   );
 }
+
+export const CheckAtmosphere = pure(CheckAtmosphereView);

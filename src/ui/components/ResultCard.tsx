@@ -9,10 +9,11 @@ import { Figures } from './Figures.tsx';
 import { SaturationChart } from './SaturationChart.tsx';
 import { StandingNote } from './StandingNote.tsx';
 import { VesselSketch } from './VesselSketch.tsx';
+import { pure } from './pure.ts';
 
 interface Props { view: ResultView; heading?: string; verdict?: boolean; settled?: boolean; findingsTitle?: string }
 
-export function ResultCard({ view, heading = 'Result', verdict = true, settled = true, findingsTitle = 'Findings' }: Props) {
+function ResultCardView({ view, heading = 'Result', verdict = true, settled = true, findingsTitle = 'Findings' }: Props) {
   return (
     <section class="panel result" id="result" aria-labelledby="result-h" data-settled={settled ? 'true' : 'false'}>
       <h2 id="result-h" tabIndex={-1}>{heading}{view.demo ? <> <span class="demo-tag">DEMO DATA</span></> : null}</h2>
@@ -46,3 +47,6 @@ export function ResultCard({ view, heading = 'Result', verdict = true, settled =
     </section>
   );
 }
+
+/** Re-renders only for a new view (a keystroke that leaves the shown result alone costs nothing here). */
+export const ResultCard = pure(ResultCardView);

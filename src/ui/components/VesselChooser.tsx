@@ -6,6 +6,7 @@ import type { VesselRecord } from '../state/repo.ts';
 import { VesselPicker } from './VesselPicker.tsx';
 import { TextField } from './TextField.tsx';
 import { lazyScreen } from './LazyScreen.tsx';
+import { pure } from './pure.ts';
 
 const hasDetector = () => typeof window !== 'undefined' && 'BarcodeDetector' in window;
 const ScanLabel = lazyScreen('The label scanner', () => import('../labels/ScanLabel.tsx').then((m) => m.ScanLabel));
@@ -20,7 +21,7 @@ export function vesselByTag(vessels: readonly VesselRecord[], typed: string): Ve
   return active.find((v) => v.tagKey === key) ?? (active.filter((v) => v.tagKey.startsWith(key)).length === 1 ? active.find((v) => v.tagKey.startsWith(key)) : undefined);
 }
 
-export function VesselChooser({ vessels, value, onChange }: Props) {
+function VesselChooserView({ vessels, value, onChange }: Props) {
   const [scanning, setScanning] = useState(false);
   const [tag, setTag] = useState('');
   const [message, setMessage] = useState('');
@@ -48,3 +49,5 @@ export function VesselChooser({ vessels, value, onChange }: Props) {
     </div>
   );
 }
+
+export const VesselChooser = pure(VesselChooserView);

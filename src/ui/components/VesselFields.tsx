@@ -41,8 +41,10 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
     <>
       <fieldset class="editor-section">
         <legend>Shape</legend>
-        <TextField id="v-tag" label="Tag (as written on the vessel)" value={f.tag} onInput={(tag) => set({ tag })} error={e.tag} />
-        <TextField id="v-desc" label="Description" value={f.description} onInput={(description) => set({ description })} error={e.description} />
+        <div class="pair">
+          <TextField id="v-tag" label="Tag (as on the vessel)" value={f.tag} onInput={(tag) => set({ tag })} error={e.tag} />
+          <TextField id="v-desc" label="Description" value={f.description} onInput={(description) => set({ description })} error={e.description} />
+        </div>
         <SelectField id="v-shape" label="Shape" value={f.shape} options={SHAPES} onChange={(shape) => set({ shape })} />
         {f.shape === 'stated-volume' ? (
           <NumberField id="v-volume" label="Internal volume" value={f.volume} onInput={(volume) => set({ volume })}
@@ -61,20 +63,28 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
       </fieldset>
       <fieldset class="editor-section">
         <legend>Limits (from the nameplate)</legend>
-        {num('mawp', `MAWP (gauge, ${pu})`)}
-        {num('relief', `Relief set pressure (gauge, ${pu})`)}
+        <div class="pair">
+          {num('mawp', `MAWP (gauge, ${pu})`)}
+          {num('relief', `Relief set (gauge, ${pu})`)}
+        </div>
         {num('designTemperature', `Design temperature (${tu})`)}
         <Choice name="v-vacuum" legend="Vacuum rating" value={f.vacuumRated} options={VACUUM} onChange={(vacuumRated) => set({ vacuumRated })} />
       </fieldset>
       <fieldset class="editor-section">
         <legend>Instruments</legend>
-        <SelectField id="v-pressure-unit" label="The gauge reads in" value={f.pressureUnit} options={PRESSURE_UNITS} onChange={(u) => set({ pressureUnit: u as PressureUnit })} />
-        {num('gaugeSpan', `Gauge span, full scale (${pu})`)}
-        <SelectField id="v-temperature-unit" label="The thermometer reads in" value={f.temperatureUnit} options={TEMPERATURE_UNITS} onChange={(u) => set({ temperatureUnit: u as TemperatureUnit })} />
-        <SelectField id="v-sensor" label="Temperature sensor" value={f.sensor} options={SENSORS} onChange={(sensor) => set({ sensor })} />
+        <div class="pair">
+          <SelectField id="v-pressure-unit" label="Gauge reads in" value={f.pressureUnit} options={PRESSURE_UNITS} onChange={(u) => set({ pressureUnit: u as PressureUnit })} />
+          {num('gaugeSpan', `Gauge span (${pu})`)}
+        </div>
+        <div class="pair">
+          <SelectField id="v-temperature-unit" label="Thermometer reads in" value={f.temperatureUnit} options={TEMPERATURE_UNITS} onChange={(u) => set({ temperatureUnit: u as TemperatureUnit })} />
+          <SelectField id="v-sensor" label="Sensor" value={f.sensor} options={SENSORS} onChange={(sensor) => set({ sensor })} />
+        </div>
         {f.sensor === 'stated' ? num('sensorTol', `Sensor tolerance ± (${du})`) : null}
-        <SelectField id="v-mass-unit" label="The scale reads in" value={f.massUnit} options={MASS_UNITS} onChange={(u) => set({ massUnit: u as MassUnit })} />
-        {num('tare', `Tare: empty weight on the scale (${mu})`)}
+        <div class="pair">
+          <SelectField id="v-mass-unit" label="Scale reads in" value={f.massUnit} options={MASS_UNITS} onChange={(u) => set({ massUnit: u as MassUnit })} />
+          {num('tare', `Tare, empty (${mu})`)}
+        </div>
         {num('weightTol', `Scale reading tolerance ± (${mu})`)}
         <details class="result-folded">
           <summary>Accuracy and volume tolerance (usual values filled in)</summary>
@@ -87,7 +97,7 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
         <Choice name="v-atm" legend="Give the site as" value={f.atmosphereMode} options={ATM} onChange={(atmosphereMode) => set({ atmosphereMode })} />
         {f.atmosphereMode === 'elevation'
           ? length('elevationM', 'Elevation above sea level')
-          : <>{num('atmosphere', `Atmospheric pressure (absolute, ${pu})`)}{num('barometerTol', `Barometer tolerance ± (${pu})`)}</>}
+          : <div class="pair">{num('atmosphere', `Atmosphere (absolute, ${pu})`)}{num('barometerTol', `Its tolerance ± (${pu})`)}</div>}
         {counterpart ? <p class="hint" data-site-counterpart>{counterpart}</p> : null}
         {num('ambientTemperature', `Ambient temperature around the vessel (${tu})`)}
       </fieldset>

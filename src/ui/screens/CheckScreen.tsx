@@ -23,7 +23,7 @@ export function CheckScreen({ param }: { param?: string | undefined }) {
   const shown = c.details.value;
   return (
     <div class="check-screen">
-      <VesselChooser vessels={c.vessels} value={c.vessel ? d.vesselId : ''} onChange={(vesselId) => c.draft.update((x) => ({ ...x, vesselId }))} />
+      <VesselChooser vessels={c.vessels} value={c.vessel ? d.vesselId : ''} onChange={c.chooseVessel} />
       <OutcomeStrip view={c.strip} onOpen={openResult} />
       <ReadingInputs draft={d} update={c.draft.update} errors={e?.kind === 'input-error' ? e.errors : {}} vesselUnits={c.units} />
       <CheckAtmosphere settings={c.settings} atm={c.atm} vessel={c.vessel} />

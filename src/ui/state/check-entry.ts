@@ -58,11 +58,12 @@ export function useCheckEntry(routeVesselId: string | undefined) {
   }, [draft.loaded, vessel?.id, units?.pressure, units?.temperature, units?.mass]);
 
   const engine = useEngine();
-  const atm = siteAtmosphere(settings.atmosphere);
+  const atm = useMemo(() => siteAtmosphere(settings.atmosphere), [settings.atmosphere]);
   const measured = settings.atmosphere.mode === 'barometer' && atm.ok ? atm.pressurePa : undefined;
   const evaluation = useMemo(() => engine?.evaluateDraft(d, vessel, measured, prefs), [engine, d, vessel, settings]);
   const strip = useMemo(() => stripOf(engine !== undefined, evaluation), [engine, evaluation]);
   const details = useSettled(evaluation, DETAILS_AFTER_MS);
+  const chooseVessel = useMemo(() => (vesselId: string) => draft.update((x) => ({ ...x, vesselId })), [draft.update]);
   const afterSave = () => draft.set(inVesselUnits({ ...emptyCheckDraft(prefs, d.technician), vesselId: d.vesselId }, units ?? vesselUnits(undefined, prefs)));
-  return { settings, vessels, draft, vessel, units, atm, evaluation, strip, details, afterSave };
+  return { settings, vessels, draft, vessel, units, atm, evaluation, strip, details, afterSave, chooseVessel };
 }
