@@ -8,3 +8,25 @@ export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './ba
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
 export { tallyChecks } from './tally.ts';
 export type { CheckTally } from './tally.ts';
+export {
+  ownChainHead,
+  ownRecords,
+  mergePulledRecords,
+  getSyncState,
+  updateSyncState,
+  applyVesselVersions,
+  vesselEditsToPublish,
+  recordPublished,
+} from './sync-log.ts';
+export type {
+  LastSync,
+  OwnRecord,
+  PlantConflict,
+  PlantReport,
+  PulledRecord,
+  PulledVersion,
+  PullMergeReport,
+  SyncState,
+  VesselEdit,
+  VesselVersion,
+} from './sync-log.ts';
