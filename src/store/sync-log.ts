@@ -11,7 +11,7 @@ import { hashTexts } from './hash-texts.ts';
 import { canonicalJson, chainFieldsOfText, contentOfText, throwIfAborted } from './integrity.ts';
 import { chainHead, LOG_STORES } from './log-layout.ts';
 import { deviceBlocks } from './log-walks.ts';
-import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
+import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type JsonValue, type VesselRecord } from './records.ts';
 import { deviceId } from './settings.ts';
 import { sha256OfText } from './sha256.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -173,6 +173,56 @@ function hasForbiddenKey(value: unknown, depth = 0): boolean {
 function problemOf(error: unknown): string {
   if (error instanceof StoreError) return error.message.replace(/^Backup file not imported, nothing changed\. /, '');
   throw error;
+}
+
+/** Where a device's chain is not whole, in the ranges linksAround looked at. */
+export interface LinkProblem {
+  deviceId: string;
+  /** The first record after the problem. */
+  seq: number;
+  /** 'gap': seq − 1 (and maybe more) is not here; 'broken': its prevHash is not the hash of seq − 1 here. */
+  problem: 'gap' | 'broken';
+  detail: string;
+}
+
+/**
+ * Checks the links of each device's stored records over [fromSeq, toSeq] and one record either
+ * side (prevHash of each equal to the hash of the one before). Records pulled out of seq order
+ * (the server's feed follows its own write order, which a batch re-sent after a crash may break)
+ * are each merged before the one they point to is here, so the links around them are checked
+ * again once the pull is over. Contents were checked against their hashes by the merge; this
+ * reads only the chain fields.
+ */
+export async function linksAround(ranges: readonly { deviceId: string; fromSeq: number; toSeq: number }[]): Promise<LinkProblem[]> {
+  const db = await getDb();
+  const tx = db.transaction(LOG_STORES);
+  const problems: LinkProblem[] = [];
+  await Promise.all(
+    ranges.map(async ({ deviceId: device, fromSeq, toSeq }) => {
+      const low = Math.max(1, fromSeq - 1);
+      const blocks = await deviceBlocks(tx, device, low, toSeq + 1);
+      let prev: { seq: number; hash: string } | null = null;
+      for (const block of blocks) {
+        for (let i = 0; i < block.seqs.length; i += 1) {
+          const seq = block.seqs[i]!;
+          if (seq < low || seq > toSeq + 1) continue;
+          const text = block.texts[i]!;
+          const link = chainFieldsOfText(text, seq)?.link ?? (JSON.parse(text) as CheckRecord);
+          if (seq >= fromSeq) {
+            const linked = prev !== null && prev.seq === seq - 1;
+            if (seq === 1 ? link.prevHash !== GENESIS_HASH : linked && link.prevHash !== prev!.hash) {
+              problems.push({ deviceId: device, seq, problem: 'broken', detail: `seq ${seq}: prevHash is not the hash of seq ${seq - 1}` });
+            } else if (seq > 1 && !linked) {
+              const missing = prev && prev.seq + 1 < seq - 1 ? `seq ${prev.seq + 1} to ${seq - 1}` : `seq ${seq - 1}`;
+              problems.push({ deviceId: device, seq, problem: 'gap', detail: `${missing} missing before seq ${seq}` });
+            }
+          }
+          prev = { seq, hash: link.hash };
+        }
+      }
+    }),
+  );
+  return problems.sort((x, y) => (x.deviceId < y.deviceId ? -1 : x.deviceId > y.deviceId ? 1 : x.seq - y.seq));
 }
 
 // ---------------------------------------------------------------- sync state (settings)

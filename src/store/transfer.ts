@@ -12,6 +12,7 @@ export {
   ownChainHead,
   ownRecords,
   mergePulledRecords,
+  linksAround,
   getSyncState,
   updateSyncState,
   applyVesselVersions,
@@ -20,6 +21,7 @@ export {
 } from './sync-log.ts';
 export type {
   LastSync,
+  LinkProblem,
   OwnRecord,
   PlantConflict,
   PlantReport,

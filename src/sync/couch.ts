@@ -90,6 +90,12 @@ export class Couch {
     return r;
   }
 
+  /** The next request signs in first (the server no longer knows this session). */
+  forgetSession(): void {
+    this.signedIn = false;
+    this.cookie = null;
+  }
+
   private async send<T>(method: string, path: string, body: unknown, retryServerErrors: boolean): Promise<CouchAnswer<T>> {
     const url = new URL(path, this.root).href;
     const headers: Record<string, string> = { accept: 'application/json' };

@@ -2,7 +2,7 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, mergePulledRecords, updateSyncState, type PlantReport, type PullMergeReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
 import { answerError, type Couch } from './couch.ts';
 import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
@@ -62,9 +62,20 @@ async function pullFeed<T extends { _id: string }>(
 }
 
 /** What pulling the check log did. */
-export interface ChecksPullResult extends PullMergeReport {
+export interface ChecksPullResult {
   /** Documents read from the feed. */
   read: number;
+  /** Ids of the checks stored. */
+  added: string[];
+  /** Records already here, identical. */
+  skipped: number;
+  /** Records not stored, by document id, and why (bad envelope, hash, link, seq taken, not a valid record). */
+  refused: { label: string; why: string }[];
+  /**
+   * Where the chains of the devices pulled from are not whole once the pull is over, around the
+   * records it stored: a gap shows as a gap (a record not on the server, or not pulled yet).
+   */
+  gaps: LinkProblem[];
   /** Documents of a kind this version of the app does not know (later record kinds), not stored. */
   unknownKinds: number;
   /**
@@ -75,7 +86,8 @@ export interface ChecksPullResult extends PullMergeReport {
 }
 
 /**
- * A supervisor's pull of every device's records from tankside-checks into the store.
+ * A supervisor's pull of every device's records from tankside-checks into the store. The links
+ * around the records stored are checked again at the end (the feed need not follow seq order).
  * @throws SyncError('offline' | 'credentials' | 'refused' | 'server' | 'cancelled'); StoreError from the store's write
  */
 export async function pullChecks(
@@ -83,21 +95,35 @@ export async function pullChecks(
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined; batch?: number | undefined } = {},
 ): Promise<ChecksPullResult> {
   const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [] };
+  const touched = new Map<string, { fromSeq: number; toSeq: number }>();
   result.read = await pullFeed<RecordDoc>(couch, CHECKS_DB, async (docs) => {
     const records: { label: string; text: string }[] = [];
+    const seqOf = new Map<string, RecordDoc>();
     for (const doc of docs) {
       const problem = envelopeProblem(doc);
       if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
       else if (doc.seq === 0) result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
       else if (doc.type !== 'check') result.unknownKinds += 1;
-      else records.push({ label: doc._id, text: doc.text });
+      else {
+        records.push({ label: doc._id, text: doc.text });
+        seqOf.set(doc.id!, doc);
+      }
     }
     const merged = await mergePulledRecords(records, options.signal ? { signal: options.signal } : {});
-    for (const id of merged.added) result.added.push(id);
+    for (const id of merged.added) {
+      result.added.push(id);
+      const doc = seqOf.get(id)!;
+      const range = touched.get(doc.deviceId);
+      if (!range) touched.set(doc.deviceId, { fromSeq: doc.seq, toSeq: doc.seq });
+      else {
+        range.fromSeq = Math.min(range.fromSeq, doc.seq);
+        range.toSeq = Math.max(range.toSeq, doc.seq);
+      }
+    }
     result.skipped += merged.skipped;
     result.refused.push(...merged.refused);
-    result.gaps.push(...merged.gaps);
   }, options);
+  result.gaps = await linksAround([...touched].map(([deviceId, r]) => ({ deviceId, ...r })));
   return result;
 }
 

@@ -110,7 +110,13 @@ async function fillWindow(couch: Couch, deviceId: string, head: number): Promise
  * same text means it was stored by an earlier try; any other answer stops the sync.
  */
 export async function sendDocs<D extends { _id: string; text: string }>(couch: Couch, docs: readonly D[], db: string = CHECKS_DB): Promise<number> {
-  const r = await couch.request<BulkRow[] | { error?: string; reason?: string }>('POST', `${db}/_bulk_docs`, { docs });
+  let r = await couch.request<BulkRow[] | { error?: string; reason?: string }>('POST', `${db}/_bulk_docs`, { docs });
+  if (Array.isArray(r.body) && r.body.some((row) => row.error === 'unauthorized')) {
+    // Seen from the stand-in just after a restart: the session is no longer known, and each
+    // document of the batch is answered "unauthorized" instead of the request. Sign in again once.
+    couch.forgetSession();
+    r = await couch.request<BulkRow[] | { error?: string; reason?: string }>('POST', `${db}/_bulk_docs`, { docs });
+  }
   if (r.status !== 201 && r.status !== 200) throw answerError('Sending records', r);
   if (!Array.isArray(r.body) || r.body.length !== docs.length) throw new SyncError('server', 'The server\'s answer to a batch of records does not list each of them.', undefined, r.status);
   let stored = 0;

@@ -73,11 +73,11 @@ describe('writes the rules refuse (signed in as device A)', () => {
   });
 
   it('a new record claiming B\'s device id', async () => {
-    const forged = { ...bDoc, _id: `${b.id}:0000000006`, seq: 6 };
+    const forged: Record<string, unknown> = { ...bDoc, _id: `${b.id}:0000000006`, seq: 6 };
     delete forged['_rev'];
-    const r = await asA.request('PUT', `${CHECKS}/${encodeURIComponent(forged._id)}`, forged);
+    const r = await asA.request('PUT', `${CHECKS}/${encodeURIComponent(forged['_id'] as string)}`, forged);
     expect(r.status).toBe(403);
-    expect((await server.admin('GET', `${CHECKS}/${encodeURIComponent(forged._id)}`)).status).toBe(404);
+    expect((await server.admin('GET', `${CHECKS}/${encodeURIComponent(forged['_id'] as string)}`)).status).toBe(404);
   });
 
   it('a branch of B\'s record through new_edits:false, leaving no _conflicts', async () => {
@@ -121,8 +121,8 @@ describe('writes the rules refuse (signed in as device A)', () => {
   });
 
   it('an envelope that disagrees with its text (hash, id, seq, _id, kind, extra field)', async () => {
-    const good = { ...(await ownDoc(1)), _id: `${a.id}:0000000100`, seq: 100 };
-    const bad = [
+    const good: Record<string, unknown> = { ...(await ownDoc(1)), _id: `${a.id}:0000000100`, seq: 100 };
+    const bad: Record<string, unknown>[] = [
       { ...good, text: (good.text as string).replace('"seq":1,', '"seq":100,'), hash: '0'.repeat(64) }, // hash differs from text
       { ...good, text: (good.text as string).replace('"seq":1,', '"seq":100,'), id: fakeUuid(1, 1) }, // id differs
       { ...good, seq: 100 }, // seq in text is 1
@@ -132,7 +132,7 @@ describe('writes the rules refuse (signed in as device A)', () => {
       { ...good, text: 'not json' },
     ];
     for (const doc of bad) {
-      const r = await asA.request('PUT', `${CHECKS}/${encodeURIComponent(doc._id)}`, doc);
+      const r = await asA.request('PUT', `${CHECKS}/${encodeURIComponent(doc['_id'] as string)}`, doc);
       expect(r.status, JSON.stringify(r.body)).toBe(403);
     }
   });
