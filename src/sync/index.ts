@@ -42,7 +42,7 @@ export interface SyncOptions {
    * chain. The hook for per-device signing: pass it at enrolment once the store signs chains.
    */
   deviceKeyText?: string | null;
-  /** Changes per pull request (default 1000). */
+  /** Changes per pull request (default PULL_BATCH, 2,000). */
   pullBatch?: number;
 }
 
