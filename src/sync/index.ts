@@ -121,7 +121,11 @@ export async function syncNow(options: SyncOptions): Promise<SyncReport> {
 }
 
 function summary(push: PushResult, plant: SyncReport['plant'], checks: ChecksPullResult | null): string {
-  const parts = [`${push.pushed} check${push.pushed === 1 ? '' : 's'} sent; all ${push.localHead} of this device's are on the server`];
+  const parts = [
+    push.localHead === 0
+      ? 'No checks saved on this device yet'
+      : `${push.pushed} check${push.pushed === 1 ? '' : 's'} sent; all ${push.localHead} of this device's are on the server`,
+  ];
   if (plant.applied.length > 0) parts.push(`${plant.applied.length} vessel definition${plant.applied.length === 1 ? '' : 's'} updated`);
   if (plant.conflicts.length > 0) parts.push(`${plant.conflicts.length} vessel definition${plant.conflicts.length === 1 ? '' : 's'} need a supervisor (two edits of one version, or an edit here)`);
   if (checks) {
