@@ -55,7 +55,7 @@ const T_MAX_REGION2 = STEAM_LINE_LIMITS.throttledTemperatureK.max;
 
 /**
  * The temperature, K, at which vapour at p Pa has enthalpy h J/kg, for h above h_g(p): region 2,
- * where h rises with T (c_p > 0), solved by bracketed Newton on [T_s(p), 1073.15 K] to 1e-9 relative
+ * where h rises with T (c_p > 0), solved by bracketed Newton on [T_s(p), 1073.15 K] to 1e-12 relative
  * in h. Throws InputError on `field` when h is beyond what IF97 region 2 covers at p.
  */
 export function temperatureFromEnthalpy(pressurePa: number, enthalpyJPerKg: number, field: string): number {
@@ -76,5 +76,5 @@ export function temperatureFromEnthalpy(pressurePa: number, enthalpyJPerKg: numb
     }
     out[0] = s.h - enthalpyJPerKg;
     out[1] = s.cp;
-  }, lo, sat.vaporEnthalpyJPerKg - enthalpyJPerKg, T_MAX_REGION2, hTop - enthalpyJPerKg, lo + 10, 1e-9 * enthalpyJPerKg, 1e-13);
+  }, lo, sat.vaporEnthalpyJPerKg - enthalpyJPerKg, T_MAX_REGION2, hTop - enthalpyJPerKg, lo + 10, 1e-12 * enthalpyJPerKg, 1e-13);
 }

@@ -50,6 +50,8 @@ export function throttlingDryness(reading: ThrottlingCalorimeterReading): { dryn
   }
   const hfg = line.vaporEnthalpyJPerKg - line.liquidEnthalpyJPerKg;
   const dryness = (h2 - line.liquidEnthalpyJPerKg) / hfg;
+  // Within 1e-9 of 1 is the rounding of the enthalpies, not a measurement: dry saturated.
+  if (dryness > 1 && dryness <= 1 + 1e-9) return { dryness: 1 };
   if (dryness > 1) {
     const Tdry = temperatureFromEnthalpy(p2, line.vaporEnthalpyJPerKg, 'calorimeter temperature');
     throw new InputError('calorimeter temperature', 'inconsistent', T2, { min: saturatedAtPressure(p2).temperatureK, max: Tdry, unit: 'K' },
