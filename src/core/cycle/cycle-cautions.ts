@@ -62,7 +62,7 @@ export function cycleCautions(e: CycleFigures): Graded {
   const findings: Caution[] = [];
 
   if (h.status === 'not-reached') {
-    const highest = e.pairs.reduce((m, p) => Math.max(m, p.temperatureK), -Infinity);
+    const highest = e.temperatureRange.maxK;
     findings.push(rule('cycle-band-not-reached',
       say`The temperature did not reach the band's lower limit (${celsius(lowerK)}); the highest reading was ${celsius(highest)}. These readings show no hold.`));
   } else if (h.status === 'short') {

@@ -2,7 +2,8 @@
 // measured pressure over time, the instruments' band around T_sat(p), the temperature band, and
 // the hold. The drawing and the display units belong to the screen.
 
-import type { CycleEvaluation } from './cycle-evaluation.ts';
+import { InputError } from '../errors.ts';
+import type { CycleEvaluation, CycleReading } from './cycle-evaluation.ts';
 
 export interface CycleChart {
   /** One point per reading: seconds from the first reading, T K, T_sat(p) K and the instruments' ± band K. */
@@ -20,16 +21,24 @@ export interface CycleChart {
   durationS: number;
 }
 
-/** The chart data of an evaluated cycle (times as seconds from the first reading). */
-export function cycleChart(e: CycleEvaluation): CycleChart {
+/**
+ * The chart data of an evaluated cycle, from the evaluation and the readings it was made from (times
+ * as seconds from the first reading). Throws InputError on "readings" if they are not those readings.
+ */
+export function cycleChart(e: CycleEvaluation, readings: readonly CycleReading[]): CycleChart {
+  const s = e.saturationByReading;
+  if (!Array.isArray(readings) || readings.length !== e.readingCount || readings[0]?.timeS !== e.firstTimeS) {
+    throw new InputError('readings', 'inconsistent', Array.isArray(readings) ? readings.length : String(readings), undefined,
+      `readings: not the ${e.readingCount} readings this evaluation was made from.`);
+  }
   const t0 = e.firstTimeS;
   const h = e.hold;
   return {
-    points: e.pairs.map((p) => ({
-      elapsedS: p.timeS - t0,
-      temperatureK: p.temperatureK,
-      saturationTemperatureK: p.saturationTemperatureK,
-      instrumentBandK: p.instrumentBandK,
+    points: readings.map((r, i) => ({
+      elapsedS: r.timeS - t0,
+      temperatureK: r.temperatureK,
+      saturationTemperatureK: s.saturationTemperatureK[i]!,
+      instrumentBandK: s.instrumentBandK[i]!,
     })),
     band: { ...e.band, sterilisingTemperatureK: e.cycleType.sterilisingTemperatureK },
     saturationLimitK: e.cycleType.saturationLimitK,

@@ -5,7 +5,7 @@ import type { FORMULATION_ID } from '../steam/index.ts';
 import type { Graded } from '../graded-result.ts';
 import type { CycleType, CycleTypeInput } from './cycle-type.ts';
 import type { CycleHold, Equilibration } from './hold.ts';
-import type { PressureMeasurement, SaturationPair } from './saturation-pairs.ts';
+import type { PressureMeasurement, SaturationColumns } from './saturation-pairs.ts';
 
 /** One reading of a cycle: seconds from any origin, temperature K, absolute pressure Pa. */
 export interface CycleReading {
@@ -65,8 +65,10 @@ export interface CycleEvaluation extends Graded {
   /** Largest interval between readings over the judged interval, s; null when not reached. */
   largestReadingIntervalDuringHoldS: number | null;
   holdSaturation: HoldSaturation | null;
-  /** Every reading's saturation agreement, in time order. */
-  pairs: SaturationPair[];
+  /** Lowest and highest temperature of the whole record, K. */
+  temperatureRange: { minK: number; maxK: number };
+  /** Every reading's saturation agreement, as columns in the order of the readings. */
+  saturationByReading: SaturationColumns;
   lethality: { referenceTemperatureK: number; zK: number; wholeRecordMinutes: number; holdMinutes: number };
 }
 

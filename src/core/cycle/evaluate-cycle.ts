@@ -17,7 +17,7 @@ import type { CycleEvaluation, CycleFigures, CycleRecordInput, HoldSaturation } 
 import { resolveCycleType } from './cycle-type.ts';
 import { findEquilibration, findHold, type CycleHold } from './hold.ts';
 import { lethalityMinutesOf } from './lethality.ts';
-import { saturationPairs, type PressureMeasurement, type SaturationPair } from './saturation-pairs.ts';
+import { saturationColumns, saturationPairs, type PressureMeasurement, type SaturationPair } from './saturation-pairs.ts';
 import {
   extremesWithin, largestIntervalWithin, requireEachInRange, requireTimeSeries, sliceSeries, timeWithin, type Series,
 } from './time-series.ts';
@@ -82,7 +82,11 @@ export function evaluateCycle(vessel: VesselSpec, input: CycleRecordInput): Cycl
     hold,
     timeInBandS: timeWithin(temperature, band.lowerK, band.upperK, firstTimeS, lastTimeS),
     ...duringHold,
-    pairs,
+    temperatureRange: {
+      minK: temperature.values.reduce((m, v) => Math.min(m, v), Infinity),
+      maxK: temperature.values.reduce((m, v) => Math.max(m, v), -Infinity),
+    },
+    saturationByReading: saturationColumns(pairs),
     lethality: { referenceTemperatureK, zK, wholeRecordMinutes: lethalityMinutesOf(readings, referenceTemperatureK, zK), holdMinutes },
   };
   return requireFiniteData({ ...figures, ...cycleCautions(figures) });

@@ -6,7 +6,7 @@ export type { CycleType, CycleTypeInput } from './cycle-type.ts';
 export { evaluateCycle } from './evaluate-cycle.ts';
 export type { CycleEvaluation, CycleReading, CycleRecordInput, HoldSaturation } from './cycle-evaluation.ts';
 export type { CycleHold, Equilibration, HoldStatus } from './hold.ts';
-export type { PressureMeasurement, SaturationPair } from './saturation-pairs.ts';
+export type { PressureMeasurement, SaturationColumns } from './saturation-pairs.ts';
 export { CYCLE_CAUTION_RULES, CYCLE_STANDING_NOTE, CYCLE_STANDING_RULES, SPARSE_READINGS_FRACTION_OF_HOLD, durationText } from './cycle-cautions.ts';
 export type { CycleCautionRule } from './cycle-cautions.ts';
 export { cycleChart } from './cycle-chart.ts';

@@ -37,7 +37,8 @@ const rules = (e: { findings: { rule: string }[] }) => e.findings.map((f) => f.r
 const GOOD = [[0, 100], [220, 122], [1220, 122], [1440, 100]] as [number, number][];
 
 describe('a cycle that holds its band with saturated steam', () => {
-  const e = evaluate(record(GOOD));
+  const readings = record(GOOD);
+  const e = evaluate(readings);
   it('finds the hold where the heat-up crosses 121 °C and its end where the cool-down does (closed form)', () => {
     expect(e.hold.status).toBe('met');
     expect(e.hold.startS).toBeCloseTo(210, 6);
@@ -71,13 +72,23 @@ describe('a cycle that holds its band with saturated steam', () => {
     expect(JSON.parse(JSON.stringify(e))).toEqual(e);
   });
   it('each pair carries the single check\'s band and verdict for the same reading (one method, not a copy)', () => {
-    const p = e.pairs[100]!;
-    const check = evaluateCheck(chamber, {
-      time: '2026-12-04T10:00:00Z', temperatureK: p.temperatureK, pressure: { reference: 'absolute', pressurePa: p.absolutePressurePa }, weight: { kind: 'not-weighed' },
-    });
-    expect(p.instrumentBandK).toBe(check.saturation.temperatureBandK.plusMinus);
-    expect(p.instrumentVerdict).toBe(check.saturation.verdict.verdict);
-    expect(p.saturationTemperatureK).toBe(check.saturation.saturationTemperatureK);
+    const s = e.saturationByReading;
+    expect(s.deviationK).toHaveLength(readings.length);
+    for (const i of [0, 50, 100, 250]) {
+      const r = readings[i]!;
+      const check = evaluateCheck(chamber, {
+        time: '2026-12-04T10:00:00Z', temperatureK: r.temperatureK, pressure: { reference: 'absolute', pressurePa: r.absolutePressurePa }, weight: { kind: 'not-weighed' },
+      });
+      expect(s.instrumentBandK[i]).toBe(check.saturation.temperatureBandK.plusMinus);
+      expect(s.instrumentVerdict[i]).toBe(check.saturation.verdict.verdict);
+      expect(s.saturationTemperatureK[i]).toBe(check.saturation.saturationTemperatureK);
+      expect(s.deviationK[i]).toBe(check.saturation.temperatureDeviationK);
+      expect(s.withinLimit[i]).toBe(true);
+    }
+  });
+  it('the temperature range of the whole record', () => {
+    expect(e.temperatureRange.minK).toBeCloseTo(C(100), 9);
+    expect(e.temperatureRange.maxK).toBeCloseTo(C(122), 9);
   });
 });
 
@@ -161,8 +172,9 @@ describe('what goes wrong shows as findings', () => {
     const measured = evaluate(record(GOOD), { pressureMeasured: 'gauge', atmosphere: { pressurePa: 100e3, source: 'measured' } });
     expect(measured.findings).toEqual([]);
     const absolute = evaluate(record(GOOD));
-    expect(site.pairs[100]!.instrumentBandK).toBeGreaterThan(measured.pairs[100]!.instrumentBandK);
-    expect(measured.pairs[100]!.instrumentBandK).toBeGreaterThan(absolute.pairs[100]!.instrumentBandK);
+    const band = (x: typeof site) => x.saturationByReading.instrumentBandK[100]!;
+    expect(band(site)).toBeGreaterThan(band(measured));
+    expect(band(measured)).toBeGreaterThan(band(absolute));
   });
 });
 
@@ -209,7 +221,7 @@ describe('chart data', () => {
   it('one point per reading from 0 s, T and T_sat(p) with the band, and the hold interval', () => {
     const readings = record(GOOD).map((r) => ({ ...r, timeS: r.timeS + 5000 }));
     const e = evaluate(readings);
-    const chart = cycleChart(e);
+    const chart = cycleChart(e, readings);
     expect(chart.points).toHaveLength(readings.length);
     expect(chart.points[0]!.elapsedS).toBe(0);
     expect(chart.durationS).toBe(1440);
@@ -217,11 +229,17 @@ describe('chart data', () => {
     expect(chart.hold!.startS).toBeCloseTo(210, 6);
     expect(chart.hold!.endS).toBeCloseTo(1230, 6);
     expect(chart.hold!.requiredEndS).toBeCloseTo(1110, 6);
-    expect(chart.points[100]!.saturationTemperatureK).toBe(e.pairs[100]!.saturationTemperatureK);
+    expect(chart.points[100]!.saturationTemperatureK).toBe(e.saturationByReading.saturationTemperatureK[100]);
+    expect(chart.points[100]!.temperatureK).toBe(readings[100]!.temperatureK);
     expect(JSON.parse(JSON.stringify(chart))).toEqual(chart);
   });
   it('has no hold when the band was not reached', () => {
-    expect(cycleChart(evaluate(record([[0, 100], [200, 110]]))).hold).toBeNull();
+    const readings = record([[0, 100], [200, 110]]);
+    expect(cycleChart(evaluate(readings), readings).hold).toBeNull();
+  });
+  it('refuses readings that are not the evaluation\'s', () => {
+    const readings = record(GOOD);
+    expect(() => cycleChart(evaluate(readings), readings.slice(1))).toThrow(/readings: not the 289 readings/);
   });
 });
 
