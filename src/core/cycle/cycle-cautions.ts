@@ -40,7 +40,8 @@ export const SPARSE_READINGS_FRACTION_OF_HOLD = 0.1;
 const rule = (r: CycleCautionRule, wording: string | CautionWording) => catalogueCaution(CYCLE_CAUTION_RULES, r, wording);
 
 /** The note every cycle record carries (wording ours). Names only the standards the defaults rely on. */
-export const CYCLE_STANDING_NOTE: Caution = rule('cycle-standing-note',
+// Marked pure so a build that does not use the cycle room leaves the wording out of the start-up JavaScript.
+export const CYCLE_STANDING_NOTE: Caution = /* @__PURE__ */ rule('cycle-standing-note',
   'This record reports what the readings show at the measuring point against the band, hold time and saturation limit entered. ' +
     'Whether a load may be released is decided by the site\'s validated sterilising procedure, the standards it follows ' +
     '(such as EN 285 and ISO 17665-1) and licensed practice.');

@@ -45,12 +45,13 @@ export function testCaution(rule: PeriodicTestCautionRule, wording: string | Cau
 }
 
 /** The note every periodic test carries (wording ours). Names only the standard the default limits come from. */
-export const PERIODIC_TEST_STANDING_NOTE: Caution = testCaution('periodic-test-standing-note',
+// Marked pure (this and the next) so a build that does not use the tests leaves their wording out of the start-up JavaScript.
+export const PERIODIC_TEST_STANDING_NOTE: Caution = /* @__PURE__ */ testCaution('periodic-test-standing-note',
   'This record reports what the test readings show against the limits entered. The test methods, the limits and whether the ' +
     'steriliser may be used are set by the site\'s validated procedures, the standards they follow (such as EN 285) and licensed practice.');
 
 /** Live steam at the sampling point: every steam-sampling test carries it. Practice as for autoclave work (field-practice.md §6.4). */
-export const STEAM_SAMPLING_HOT: Caution = testCaution('steam-sampling-hot',
+export const STEAM_SAMPLING_HOT: Caution = /* @__PURE__ */ testCaution('steam-sampling-hot',
   'Sampling live steam: the sampling valve, pipework and test apparatus scald on contact, and a connection that slips releases a steam jet. ' +
     'Wear face, eye and heat-resistant hand protection and open the sampling valve slowly.');
 
