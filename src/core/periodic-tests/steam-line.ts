@@ -10,13 +10,16 @@ import { InputError, requireInRange } from '../errors.ts';
 import { saturation, saturationTemperature, stateTP } from '../steam/index.ts';
 import { solveBracketed } from '../steam/solvers.ts';
 
+/** Top of IAPWS-IF97 region 2 (R7-97(2012), Section 5), K. */
+const T_MAX_REGION2 = 1073.15;
+
 /** Valid ranges, SI. */
 export const STEAM_LINE_LIMITS = {
   linePressurePa: { min: 10e3, max: 10e6, unit: 'Pa' },
   /** Lowest pressure after a throttle or expansion, Pa (absolute). */
   throttledPressurePa: { min: 1e3, max: 10e6, unit: 'Pa' },
   /** IF97's region 2 reaches 1073.15 K. */
-  throttledTemperatureK: { min: 273.16, max: 1073.15, unit: 'K' },
+  throttledTemperatureK: { min: 273.16, max: T_MAX_REGION2, unit: 'K' },
 } as const;
 
 /** Saturation at pressure p Pa: T_s K, h_f and h_g J/kg. p must be valid. */
@@ -50,8 +53,6 @@ export function superheatedEnthalpyJPerKg(temperatureK: number, pressurePa: numb
   const s = stateTP(temperatureK, pressurePa);
   return s.region === 2 ? s.h : null;
 }
-
-const T_MAX_REGION2 = STEAM_LINE_LIMITS.throttledTemperatureK.max;
 
 /**
  * The temperature, K, at which vapour at p Pa has enthalpy h J/kg, for h above h_g(p): region 2,
