@@ -79,8 +79,8 @@ export function cycleCautions(e: CycleFigures): Graded {
       say`The temperature fell below ${celsius(lowerK)} at ${at(i.belowFromS)}, ${durationText(h.achievedS)} into the ${durationText(h.requiredS)} hold, and stayed below it for ${durationText(i.belowUntilS - i.belowFromS)} (lowest ${celsius(i.lowestK)}). ${later}`));
   }
 
-  const x = e.largestExcursion;
-  if (x && x.direction === 'above') {
+  const x = e.bandExceeded;
+  if (x) {
     findings.push(rule('cycle-band-exceeded',
       say`During the hold the temperature rose above the band's upper limit (${celsius(upperK)}) by up to ${kelvinDifference(x.byK)}, at ${at(x.timeS)}.`));
   }

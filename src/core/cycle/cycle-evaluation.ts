@@ -62,6 +62,8 @@ export interface CycleEvaluation extends Graded {
   holdTemperature: { minK: number; maxK: number } | null;
   /** Largest departure from the band over the judged interval; null when it stayed inside. */
   largestExcursion: { direction: 'above' | 'below'; byK: number; timeS: number } | null;
+  /** Highest rise above the band's upper limit over the judged interval (even when a dip below was larger); null if none. */
+  bandExceeded: { byK: number; timeS: number } | null;
   /** Largest interval between readings over the judged interval, s; null when not reached. */
   largestReadingIntervalDuringHoldS: number | null;
   holdSaturation: HoldSaturation | null;

@@ -69,7 +69,7 @@ export function evaluateCycle(vessel: VesselSpec, input: CycleRecordInput): Cycl
   const judged = judgedInterval(hold);
   const { holdMinutes, ...duringHold } = judged
     ? figuresDuringHold(temperature, pairs, band, judged, cycleType.lethality)
-    : { timeInBandDuringHoldS: 0, holdTemperature: null, largestExcursion: null, largestReadingIntervalDuringHoldS: null, holdSaturation: null, holdMinutes: 0 };
+    : { timeInBandDuringHoldS: 0, holdTemperature: null, largestExcursion: null, bandExceeded: null, largestReadingIntervalDuringHoldS: null, holdSaturation: null, holdMinutes: 0 };
   const figures: CycleFigures = {
     formulationId: FORMULATION_ID,
     cycleType,
@@ -93,7 +93,7 @@ export function evaluateCycle(vessel: VesselSpec, input: CycleRecordInput): Cycl
 }
 
 type DuringHold = Pick<CycleEvaluation,
-  'timeInBandDuringHoldS' | 'holdTemperature' | 'largestExcursion' | 'largestReadingIntervalDuringHoldS' | 'holdSaturation'> & { holdMinutes: number };
+  'timeInBandDuringHoldS' | 'holdTemperature' | 'largestExcursion' | 'bandExceeded' | 'largestReadingIntervalDuringHoldS' | 'holdSaturation'> & { holdMinutes: number };
 
 /** The figures of the judged interval [fromS, toS]. */
 function figuresDuringHold(
@@ -114,6 +114,7 @@ function figuresDuringHold(
     timeInBandDuringHoldS: timeWithin(temperature, band.lowerK, band.upperK, fromS, toS),
     holdTemperature: { minK: ext.min.value, maxK: ext.max.value },
     largestExcursion,
+    bandExceeded: above > 0 ? { byK: above, timeS: ext.max.timeS } : null,
     largestReadingIntervalDuringHoldS: largestIntervalWithin(temperature, fromS, toS),
     holdSaturation: holdSaturation(pairs.filter((p) => p.timeS >= fromS && p.timeS <= toS)),
     holdMinutes: lethalityMinutesOf(points, F.referenceTemperatureK, F.zK),

@@ -136,6 +136,13 @@ describe('what goes wrong shows as findings', () => {
     expect(rules(e)).toEqual(['cycle-hold-interrupted']);
     expect(e.findings[0]!.message).toMatch(/A later stretch at temperature lasted the hold time/);
   });
+  it('an interrupted hold that also overshoots the band reports both, though the dip is the larger excursion', () => {
+    const e = evaluate(record([[0, 100], [220, 122], [500, 122], [520, 124.5], [540, 122], [600, 122], [620, 118], [640, 122], [1800, 122], [2020, 100]]));
+    expect(e.largestExcursion).toMatchObject({ direction: 'below' });
+    expect(e.largestExcursion!.byK).toBeCloseTo(3, 9);
+    expect(e.bandExceeded!.byK).toBeCloseTo(0.5, 9);
+    expect(rules(e)).toEqual(['cycle-hold-interrupted', 'cycle-band-exceeded']);
+  });
   it('short: the cycle ends 5 min early; and a record that ends during the hold', () => {
     const early = evaluate(record([[0, 100], [220, 122], [920, 122], [1140, 100]]));
     expect(early.hold).toMatchObject({ status: 'short', endedWithRecord: false });
