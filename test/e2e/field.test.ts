@@ -22,6 +22,8 @@ describe('field screens', () => {
     server = await startServer(DIST);
     ctx = await launch(profile.dir);
     page = ctx.pages()[0] ?? (await ctx.newPage());
+    // TANKSIDE_E2E_WAIT_MS shortens every wait, for running these tests against an older build to see them fail.
+    if (process.env.TANKSIDE_E2E_WAIT_MS) page.setDefaultTimeout(Number(process.env.TANKSIDE_E2E_WAIT_MS));
     await page.goto(`${server.url}#/vessels`);
     await waitForControl(page);
     await page.getByRole('button', { name: 'Load demo plant' }).click();

@@ -17,6 +17,8 @@ describe('vessel labels', () => {
     server = await startServer(DIST);
     ctx = await launch(profile.dir, 'light', ['--use-fake-device-for-media-stream', '--use-fake-ui-for-media-stream']);
     page = ctx.pages()[0] ?? (await ctx.newPage());
+    // TANKSIDE_E2E_WAIT_MS shortens every wait, for running these tests against an older build to see them fail.
+    if (process.env.TANKSIDE_E2E_WAIT_MS) page.setDefaultTimeout(Number(process.env.TANKSIDE_E2E_WAIT_MS));
     await page.goto(`${server.url}#/vessels`);
     await waitForControl(page);
     await page.getByRole('button', { name: 'Load demo plant' }).click();
