@@ -51,18 +51,27 @@ it('field screens at 4× CPU throttle', async () => {
     await page.getByRole('link', { name: /DEMO-JK-04/ }).waitFor();
     await page.goto(`${server.url}#/check`);
     await page.reload();
-    await page.locator('main[data-app-state="ready"]').waitFor();
+    // (Waits on the form itself, so the same benchmark also runs against an older build: TANKSIDE_DIST.)
+    await page.locator('#chk-temperature').waitFor();
     await pickVessel(page, '#pick-vessel', 'DEMO-FT-02');
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: THROTTLE });
     // Event Timing reports key events of 16 ms or more (its smallest threshold); the proxy times
     // every key from the event's timestamp to the first task after the next frame.
     await page.evaluate(() => {
-      const w = window as unknown as { eventDurations: number[]; proxy: number[] };
+      const w = window as unknown as { eventDurations: number[]; proxy: number[]; byInteraction: Map<number, number> };
       w.eventDurations = [];
       w.proxy = [];
+      // One figure per key press: the longest event of its interaction (keydown, keypress, keyup
+      // share an interactionId), as Chromium's interaction-to-next-paint counts them.
+      w.byInteraction = new Map();
+      const since = performance.now();
       new PerformanceObserver((list) => {
-        for (const e of list.getEntries()) if (e.name === 'keydown') w.eventDurations.push(e.duration);
-      }).observe({ type: 'event', durationThreshold: 16, buffered: true } as PerformanceObserverInit);
+        for (const e of list.getEntries() as (PerformanceEntry & { interactionId?: number })[]) {
+          if (!e.interactionId || e.startTime < since) continue;
+          w.byInteraction.set(e.interactionId, Math.max(w.byInteraction.get(e.interactionId) ?? 0, e.duration));
+        }
+        w.eventDurations = [...w.byInteraction.values()];
+      }).observe({ type: 'event', durationThreshold: 16 } as PerformanceObserverInit);
       document.addEventListener('keydown', (ev) => {
         const t0 = ev.timeStamp;
         requestAnimationFrame(() => {
@@ -82,8 +91,12 @@ it('field screens at 4× CPU throttle', async () => {
         keys += text.length;
       }
     }
-    await page.locator('#result[data-settled="true"]').waitFor();
-    const { eventDurations, proxy } = await page.evaluate(() => (window as unknown as { eventDurations: number[]; proxy: number[] }));
+    await page.locator('#result[data-settled="true"], .verdict').first().waitFor();
+    const evaluate = await page.evaluate(() => performance.getEntriesByName('tankside: evaluate the check').map((e) => e.duration));
+    const { eventDurations, proxy } = await page.evaluate(() => {
+      const w = window as unknown as { eventDurations: number[]; proxy: number[] };
+      return { eventDurations: [...w.eventDurations], proxy: [...w.proxy] };
+    });
     // Keys Event Timing did not report took under 16 ms: they count below every reported one.
     const timed = [...eventDurations, ...Array<number>(Math.max(0, keys - eventDurations.length)).fill(0)];
     const med = quantile(timed, 0.5), p90 = quantile(timed, 0.9);
@@ -94,6 +107,7 @@ it('field screens at 4× CPU throttle', async () => {
     line('key press to next paint, p90 (Event Timing)', show(p90), '≤ 32 ms');
     line('key press to the first task after the next frame, median (proxy)', `${quantile(proxy, 0.5).toFixed(1)} ms`, '(beside the above)');
     line('key press to the first task after the next frame, p90 (proxy)', `${quantile(proxy, 0.9).toFixed(1)} ms`, '(beside the above)');
+    line(`of which evaluating the check (engine and strip figures), median of ${evaluate.length}`, `${quantile(evaluate, 0.5).toFixed(1)} ms`, '(part of the above)');
     line('cold first visit: first paint', `${cold.fp.toFixed(0)} ms`, '≤ 800 ms');
     line('cold first visit: first contentful paint', `${cold.fcp.toFixed(0)} ms`, '(beside it)');
     line('repeat visit (service worker): first paint', `${warm.fp.toFixed(0)} ms, ${warm2.fp.toFixed(0)} ms`, '≤ 250 ms');

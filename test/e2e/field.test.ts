@@ -255,8 +255,8 @@ describe('field screens', () => {
     it('print: the report puts the vessel description and the period on lines of their own', async () => {
       await page.goto(`${server.url}#/review`);
       await page.locator('#rf-vessel').waitFor();
-      const value = await page.$eval('#rf-vessel', (el) => [...(el as HTMLSelectElement).options].find((o) => o.text.includes('DEMO-FT-02'))!.value);
-      await page.selectOption('#rf-vessel', value);
+      // The filter's vessel list fills in after the first rows: pickVessel waits for the option.
+      await pickVessel(page, '#rf-vessel', 'DEMO-FT-02');
       await page.getByRole('button', { name: /Trend and report for DEMO-FT-02/ }).click();
       await page.locator('.report-period').waitFor();
       await page.emulateMedia({ media: 'print' });

@@ -27,8 +27,8 @@ export function CheckScreen({ param }: { param?: string | undefined }) {
       <OutcomeStrip view={c.strip} onOpen={openResult} />
       <ReadingInputs draft={d} update={c.draft.update} errors={e?.kind === 'input-error' ? e.errors : {}} vesselUnits={c.units} />
       <CheckAtmosphere settings={c.settings} atm={c.atm} vessel={c.vessel} />
-      <div aria-live="polite" aria-atomic="true" class="visually-hidden">{e?.kind === 'result' ? e.view.verdict.short : ''}</div>
-      {shown?.kind === 'result' ? <ResultCard view={shown.view} verdict={false} settled={c.details.settled} /> : <StandingNote />}
+      <div aria-live="polite" aria-atomic="true" class="visually-hidden">{e?.kind === 'result' ? e.strip.verdict : ''}</div>
+      {shown?.kind === 'result' ? <ResultCard view={shown.view()} verdict={false} settled={c.details.settled} /> : <StandingNote />}
       <SaveCheckForm draft={d} onChange={c.draft.set} evaluation={e} vessel={c.vessel} onSaved={c.afterSave} />
     </div>
   );

@@ -10,14 +10,21 @@ import * as repo from './repo.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { readingFromDraft, type ReadingField } from './check-reading.ts';
 import { messageOf } from './atmosphere.ts';
-import { resultView, verdictText, type TypedUnits } from './result-text.ts';
-import type { ResultView } from './result-view.ts';
+import { keyFiguresOf, resultView, verdictText, type TypedUnits } from './result-text.ts';
+import { isDemo } from './demo-label.ts';
+import type { Figure, ResultView } from './result-view.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
 export type Evaluation =
   | { kind: 'incomplete'; message: string }
   | { kind: 'input-error'; errors: Partial<Record<ReadingField, string>>; general?: string }
-  | { kind: 'result'; view: ResultView; reading: Reading; result: CheckResult };
+  | {
+    kind: 'result'; reading: Reading; result: CheckResult;
+    /** What the outcome strip shows: cheap, computed with every keystroke. */
+    strip: { outcome: Outcome; verdict: string; figures: readonly Figure[]; demo: boolean };
+    /** The full result, worked out on first use (when the keys pause) and kept. */
+    view: () => ResultView;
+  };
 
 const ENGINE_FIELDS: Record<string, ReadingField> = {
   temperature: 'temperature', pressure: 'pressure', 'pressure (gauge)': 'pressure', 'pressure (absolute)': 'pressure',
@@ -50,7 +57,9 @@ export function evaluateDraft(
   try {
     const result = evaluateCheck(spec, r.reading);
     const typed = { pressure: d.pressure.unit, temperature: d.temperature.unit, mass: d.gross.unit };
-    return { kind: 'result', view: resultView(result, spec, prefs, typed), reading: r.reading, result };
+    let view: ResultView | undefined;
+    const strip = { outcome: splitOutcome(result).outcome, verdict: verdictText(result).short, figures: keyFiguresOf(result, prefs, typed), demo: isDemo(spec) };
+    return { kind: 'result', reading: r.reading, result, strip, view: () => (view ??= resultView(result, spec, prefs, typed)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field), typedText(d, field)) } };

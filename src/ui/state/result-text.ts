@@ -135,17 +135,12 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed
     { id: 'heating', title: 'Heating and limits', figures: heating, notes: notes('heating'), folded: false },
     { id: 'hazards', title: 'Hazards of the contents', figures: hazards.map((h) => ({ label: h.label, value: h.value })), notes: notes('hazards'), folded: true },
   ];
-  const keyFigures: Figure[] = [
-    { label: 'p − p_sat', value: f.pBand(s.pressureDeviationPa, s.pressureBand.plusMinus).replace(/ \(.*\)$/, '') },
-    { label: 'T_sat', value: f.t(s.saturationTemperatureK, absBand / s.saturationSlopePaPerK).replace(/ \(.*\)$/, '') },
-    ...keyContents,
-  ];
   const c0 = s.pressureBand.contributions;
   return {
     demo: isDemo(spec),
     outcome: split.outcome,
     verdict: verdictText(r),
-    keyFigures: keyFigures.slice(0, 3),
+    keyFigures: keyFiguresOf(r, u, typed, keyContents),
     findings: split.findings,
     groups,
     figures: [...saturation, ...contents, ...heating],
@@ -157,6 +152,27 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed
     }, { ...u, pressure: f.pressureUnit, temperature: typed.temperature ?? u.temperature }),
     sketch,
   };
+}
+
+/**
+ * The two or three figures that decide the outcome, for the strip: p − p_sat with its band, T_sat,
+ * and the quality (or what the contents are). Cheap enough for every keystroke.
+ */
+export function keyFiguresOf(r: CheckResult, u: UnitPrefs, typed: TypedUnits = {}, contents?: readonly Figure[]): Figure[] {
+  const f = units({ ...u, pressure: typed.pressure ?? u.pressure, temperature: typed.temperature ?? u.temperature, mass: typed.mass ?? u.mass }, typed);
+  const s = r.saturation;
+  const c = s.pressureBand.contributions;
+  const inv = r.inventory;
+  const b = r.inventoryBands;
+  const third = contents ?? (inv.regime === 'two-phase'
+    ? [{ label: 'x', value: b ? f.pctBand(inv.quality, b.quality.plusMinus) : f.pct(inv.quality, 0) }]
+    : inv.regime === 'liquid-full' ? [{ label: 'Contents', value: 'liquid-full' }]
+    : inv.regime === 'superheated' ? [{ label: 'Contents', value: 'all steam' }] : []);
+  return [
+    { label: 'p − p_sat', value: f.pBand(s.pressureDeviationPa, s.pressureBand.plusMinus) },
+    { label: 'T_sat', value: f.t(s.saturationTemperatureK, Math.hypot(c.pressureGauge, c.atmosphere) / s.saturationSlopePaPerK) },
+    ...third,
+  ].slice(0, 3);
 }
 
 function contentsFigures(r: CheckResult, spec: VesselSpec, f: Fmt): { contents: Figure[]; sketch: SketchData | undefined; keyContents: Figure[] } {
