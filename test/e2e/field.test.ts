@@ -172,7 +172,7 @@ describe('field screens', () => {
       await page.fill('#v-straightLengthM', '1,2');
       // πD²L/4 + 2·πD³/24 for 2:1 heads (common practice) = 0.396 m³.
       await expect.poll(() => page.locator('[data-volume]').textContent()).toMatch(/0\.396 m³/);
-      await page.getByLabel('Elevation', { exact: true }).check();
+      await page.selectOption('#v-atm', 'elevation');
       expect(await page.inputValue('#v-elevationM-unit')).toBe('m');
       await page.fill('#v-elevationM', '1600');
       // US Standard Atmosphere 1976: about 83.5 kPa at 1600 m (its table, from memory).

@@ -68,7 +68,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
       <p aria-live="polite" class={status ? 'field-error' : ''}>{status}</p>
       <div class="row">
         {vessel?.retired ? null : <button type="submit" class="primary">Save vessel</button>}
-        <button type="button" onClick={() => navigate('vessels')}>Back to the list (the entry is kept)</button>
+        <button type="button" onClick={() => navigate('vessels')}>Back (entry kept)</button>
         <button type="button" onClick={() => { draft.reset(); setStatus(''); }}>Start over</button>
         {vessel && !vessel.retired ? (
           <button type="button" class="danger" onClick={() => void retire()}>

@@ -7,7 +7,6 @@ import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNI
 import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
 import { TextField } from './TextField.tsx';
 import { NumberField } from './NumberField.tsx';
-import { Choice } from './Choice.tsx';
 import { SelectField } from './SelectField.tsx';
 import { ShapeSketch } from './ShapeSketch.tsx';
 import { HEADS, SENSORS, SHAPES, lengthUnitChange, lengthUnitOf, type FormField, type LengthField, type VesselForm } from '../state/vessel-form.ts';
@@ -22,8 +21,7 @@ interface Props {
   prefs: UnitPrefs;
 }
 
-const VACUUM = [{ id: 'yes', label: 'Rated for full vacuum' }, { id: 'no', label: 'Not rated for vacuum' }] as const;
-const ATM = [{ id: 'elevation', label: 'Elevation' }, { id: 'pressure', label: 'Atmospheric pressure' }] as const;
+const ATM = [{ id: 'elevation', label: 'Its elevation' }, { id: 'pressure', label: 'Its atmospheric pressure' }] as const;
 
 export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
   const pu = unitLabel(f.pressureUnit), tu = unitLabel(f.temperatureUnit), mu = unitLabel(f.massUnit);
@@ -45,7 +43,10 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
           <TextField id="v-tag" label="Tag (as on the vessel)" value={f.tag} onInput={(tag) => set({ tag })} error={e.tag} />
           <TextField id="v-desc" label="Description" value={f.description} onInput={(description) => set({ description })} error={e.description} />
         </div>
-        <SelectField id="v-shape" label="Shape" value={f.shape} options={SHAPES} onChange={(shape) => set({ shape })} />
+        <div class="pair">
+          <SelectField id="v-shape" label="Shape" value={f.shape} options={SHAPES} onChange={(shape) => set({ shape })} />
+          {f.shape === 'stated-volume' ? null : <SelectField id="v-head" label="Heads (both ends)" value={f.head} options={HEADS} onChange={(head) => set({ head })} />}
+        </div>
         {f.shape === 'stated-volume' ? (
           <NumberField id="v-volume" label="Internal volume" value={f.volume} onInput={(volume) => set({ volume })}
             unit={f.volumeUnit} units={VOLUME_UNITS} onUnit={(u) => set({ volumeUnit: u as VolumeUnit })} error={e.volume} />
@@ -53,7 +54,6 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
           <>
             {length('diameterM', 'Inner diameter')}
             {length('straightLengthM', 'Straight length between tangent lines')}
-            <SelectField id="v-head" label="Heads (both ends)" value={f.head} options={HEADS} onChange={(head) => set({ head })} />
           </>
         )}
         <div class="shape-preview" aria-live="polite">
@@ -68,7 +68,12 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
           {num('relief', `Relief set (gauge, ${pu})`)}
         </div>
         {num('designTemperature', `Design temperature (${tu})`)}
-        <Choice name="v-vacuum" legend="Vacuum rating" value={f.vacuumRated} options={VACUUM} onChange={(vacuumRated) => set({ vacuumRated })} />
+        <div class="field">
+          <label class="row">
+            <input type="checkbox" class="check" id="v-vacuum" checked={f.vacuumRated === 'yes'} onChange={(ev) => set({ vacuumRated: ev.currentTarget.checked ? 'yes' : 'no' })} />
+            Rated for full vacuum
+          </label>
+        </div>
       </fieldset>
       <fieldset class="editor-section">
         <legend>Instruments</legend>
@@ -94,7 +99,7 @@ export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
       </fieldset>
       <fieldset class="editor-section">
         <legend>Site</legend>
-        <Choice name="v-atm" legend="Give the site as" value={f.atmosphereMode} options={ATM} onChange={(atmosphereMode) => set({ atmosphereMode })} />
+        <SelectField id="v-atm" label="Give the site as" value={f.atmosphereMode} options={ATM} onChange={(atmosphereMode) => set({ atmosphereMode })} />
         {f.atmosphereMode === 'elevation'
           ? length('elevationM', 'Elevation above sea level')
           : <div class="pair">{num('atmosphere', `Atmosphere (absolute, ${pu})`)}{num('barometerTol', `Its tolerance ± (${pu})`)}</div>}
