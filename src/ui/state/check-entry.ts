@@ -51,8 +51,10 @@ export function stripOf(engineReady: boolean, e: Evaluation | undefined): StripV
   if (!engineReady || !e) return { kind: 'loading', message: 'Getting the steam tables ready…' };
   if (e.kind === 'incomplete') return { kind: 'incomplete', message: e.message };
   if (e.kind === 'input-error') {
-    const first = e.general ?? Object.values(e.errors)[0] ?? 'Check the fields marked below.';
-    return { kind: 'input-error', message: first };
+    // A short line: the full message stands under its field, which the strip must not cover.
+    const names = { temperature: 'temperature', pressure: 'pressure', gross: 'gross weight' } as const;
+    const fields = (Object.keys(e.errors) as (keyof typeof names)[]).map((k) => names[k]);
+    return { kind: 'input-error', message: fields.length ? `No result: see the ${fields.join(' and ')} field below.` : (e.general ?? 'No result.') };
   }
   return { kind: 'result', ...e.strip };
 }
