@@ -4,3 +4,5 @@ export type { InputProblem } from './errors.ts';
 export * from './units/index.ts';
 export * from './steam/index.ts';
 export * from './check/index.ts';
+export * from './statistics/index.ts';
+export * from './instrument/index.ts';
