@@ -5,6 +5,8 @@ import {
   type CalibrationRecord, type InstrumentSpec,
 } from '../../../src/core/index.ts';
 import { expectInputError } from '../units/expect-input-error.ts';
+import { temperatureToleranceK } from '../../../src/core/check/uncertainty.ts';
+import { testVessel } from '../check/test-vessel.ts';
 
 const NOW = Date.parse('2026-12-04T09:00:00Z');
 // Invented instruments of an invented steriliser chamber (test data).
@@ -79,6 +81,20 @@ describe('instrument limit: the parts', () => {
       return Math.abs(l.band.plusMinus - Math.hypot(...parts)) <= 1e-9 * (1 + l.band.plusMinus) &&
         Math.abs(l.band.worstCase - parts.reduce((a, b) => a + b, 0)) <= 1e-9 * (1 + l.band.worstCase) && parts.every((p) => p >= 0 && Number.isFinite(p));
     }));
+  });
+});
+
+describe("instrument limit: today's vessel instruments", () => {
+  it('with no calibration on record, the limit is the figure the check engine uses now (class × span; the IEC 60751 class at T; a stated ±)', () => {
+    const { pressureGauge } = testVessel().instruments;
+    const asGauge: InstrumentSpec = { tag: 'G', kind: 'pressure-gauge', range: { low: 0, high: pressureGauge.spanPa }, tolerance: { kind: 'percent-of-span', percentOfSpan: pressureGauge.accuracyPercentOfSpan } };
+    expect(instrumentLimit(asGauge, [], { nowMs: NOW }).band.plusMinus).toBeCloseTo((pressureGauge.accuracyPercentOfSpan / 100) * pressureGauge.spanPa, 9);
+    for (const sensorClass of ['AA', 'A', 'B'] as const) {
+      const asRtd: InstrumentSpec = { tag: 'T', kind: 'rtd', range: { low: 273.15, high: 673.15 }, tolerance: { kind: 'iec-60751', sensorClass } };
+      expect(instrumentLimit(asRtd, [], { nowMs: NOW, readingValue: 407.15 }).band.plusMinus).toBe(temperatureToleranceK({ kind: 'iec-60751', sensorClass }, 407.15));
+    }
+    const stated: InstrumentSpec = { tag: 'T', kind: 'thermometer', range: { low: 273.15, high: 673.15 }, tolerance: { kind: 'stated', plusMinus: 0.7 } };
+    expect(instrumentLimit(stated, [], { nowMs: NOW }).band.plusMinus).toBe(0.7);
   });
 });
 
