@@ -100,10 +100,12 @@ export interface LogDriftEstimate {
 }
 
 /**
- * Estimates the offset between one gauge and one thermometer from checks that showed saturated
- * steam (the caller filters: two-phase inventory, or a check not weighed whose verdict a person
- * accepted as saturated; pass the checks since the later of the two instruments' last calibrations,
- * since an adjustment resets the offset). Order does not matter; equal times are allowed.
+ * Estimates the offset between one gauge and one thermometer from checks of saturated contents.
+ * The caller chooses them: checks whose inventory was two-phase, or, for a vessel that is not
+ * weighed, the checks taken in saturated service (a steriliser's holding phase); never by the
+ * saturation verdict, which would cut off the very offsets this looks for. Pass the checks since
+ * the later of the two instruments' last calibrations (an adjustment resets the offset). Order does
+ * not matter; equal times are allowed.
  * Throws InputError naming the field: check time (a date), check temperature (273.16–647.096 K),
  * check absolute pressure (611.657 Pa–22.064 MPa), check pressure band and pressure band (0–22.064 MPa),
  * next calibration due date (a date).
