@@ -104,10 +104,12 @@ describe('Convert\'s atmosphere', () => {
   const rec = (tag: string, pa: number) => ({ id: tag, tag, retired: false, spec: { siteAtmospherePa: pa } }) as unknown as VesselRecord;
   it('defaults to a vessel\'s own site, not the standard atmosphere, when vessels have one; the barometer first when entered', () => {
     const none = { ok: false as const, error: 'x' };
-    const choices = atmosphereChoices(none, false, [rec('HIGH-1', 83_500)]);
+    const choices = atmosphereChoices(none, 'standard', [rec('HIGH-1', 83_500)]);
     expect(chosenAtmosphere(choices, '').id).toBe('vessel:HIGH-1');
     expect(chosenAtmosphere(choices, 'standard').pressurePa).toBe(101_325);
-    const baro = atmosphereChoices({ ok: true, pressurePa: 98_000, source: 'barometer reading 980 hPa' }, true, [rec('HIGH-1', 83_500)]);
+    const baro = atmosphereChoices({ ok: true, pressurePa: 98_000, source: 'barometer reading 980 hPa' }, 'barometer', [rec('HIGH-1', 83_500)]);
+    const site = atmosphereChoices({ ok: true, pressurePa: 97_191, source: 'elevation 350 m' }, 'elevation', []);
+    expect(chosenAtmosphere(site, '').id).toBe('settings');
     expect(chosenAtmosphere(baro, '').id).toBe('barometer');
   });
 });

@@ -25,7 +25,7 @@ export function ConvertScreen() {
   const draft = useDraft<ConvertDraft>('convert', { text: '', unit: unitsInForce(settings).pressure, kind: 'gauge', atmosphere: '' });
   const d = draft.value;
   const set = (change: Partial<ConvertDraft>) => draft.set({ ...d, ...change });
-  const choices = atmosphereChoices(siteAtmosphere(settings.atmosphere), settings.atmosphere.mode === 'barometer', vessels);
+  const choices = atmosphereChoices(siteAtmosphere(settings.atmosphere), settings.atmosphere.mode, vessels);
   const atm = chosenAtmosphere(choices, d.atmosphere);
   const table = pressureInAllUnits(d.text, d.unit, d.kind, atm.pressurePa);
   return (
