@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { DIST, PHONE, SMALL_PHONE, launch, pickVessel, smallTargets, startServer, tempProfile, waitForControl, type StaticServer } from './harness.ts';
+import { DIST, PHONE, SMALL_PHONE, launch, pickVessel, screenshot, smallTargets, startServer, tempProfile, waitForControl, type StaticServer } from './harness.ts';
 
 const SIGNALS = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE', 'none'];
 
@@ -74,6 +74,7 @@ describe('field screens', () => {
         expect(await whollyInView('[data-outcome]'), 'strip in view while the weight is typed').toBe(true);
         expect(await whollyInView('#chk-gross'), 'the field typed in is not hidden behind the tab bar').toBe(true);
         expect((await strip.textContent()) ?? '').toMatch(/No finding|DANGER|WARNING|CAUTION|NOTICE/);
+        await screenshot(page, `14-check-typing-${size.width}x${size.height}`);
         await strip.click();
         await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe('result-h');
       });
