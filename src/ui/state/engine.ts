@@ -1,7 +1,8 @@
-// The check engine (IAPWS-IF97, the check rules, the result wording) is its own chunk, loaded as
-// soon as the shell has rendered and warmed on invented data while the page is idle, so the start-up
-// JavaScript stays small and the first real result still fits in a frame. Every screen that computes
-// a check goes through here.
+// The check engine (IAPWS-IF97, the check rules, the result wording) is its own chunk, loaded when
+// the page is first idle after the first screen has rendered (at most half a second later) and
+// warmed on invented data, so the start-up JavaScript stays small, the first screen is not held up
+// by compiling the engine, and the first real result still fits in a frame. Every screen that
+// computes a check goes through here.
 import { shared, useShared } from './observable.ts';
 import { UNIT_PRESETS } from './settings-model.ts';
 
@@ -19,21 +20,29 @@ export function loadEngine(): Promise<Engine> {
   return loading;
 }
 
-/** The engine once loaded; undefined before (the screen shows that it is getting ready). */
-export function useEngine(): Engine | undefined {
-  const engine = useShared(engineState);
-  if (!engine) void loadEngine();
-  return engine;
-}
-
 type IdleWindow = Window & { requestIdleCallback?: (cb: () => void, opts?: { timeout: number }) => number };
 
-/** Loads the engine now and runs it once on invented data when the page is next idle. */
+/** Runs `job` when the page is next idle, and at the latest after `timeoutMs`. */
+function whenIdle(job: () => void, timeoutMs: number): void {
+  const w = window as IdleWindow;
+  if (w.requestIdleCallback) w.requestIdleCallback(job, { timeout: timeoutMs });
+  else setTimeout(job, 0);
+}
+
+let warming = false;
+
+/** Loads the engine when the page is next idle, then runs it once on invented data when idle again. */
 export function warmEngineWhenIdle(): void {
-  void loadEngine().then((m) => {
-    const w = window as IdleWindow;
-    const run = () => m.warmUp(UNIT_PRESETS.SI);
-    if (w.requestIdleCallback) w.requestIdleCallback(run, { timeout: 2000 });
-    else setTimeout(run, 0);
-  }, () => undefined);
+  if (warming) return;
+  warming = true;
+  whenIdle(() => {
+    void loadEngine().then((m) => whenIdle(() => m.warmUp(UNIT_PRESETS.SI), 2000), () => undefined);
+  }, 500);
+}
+
+/** The engine once loaded; undefined before (the screen shows that it is getting ready, and asks for it when idle). */
+export function useEngine(): Engine | undefined {
+  const engine = useShared(engineState);
+  if (!engine) warmEngineWhenIdle();
+  return engine;
 }
