@@ -144,7 +144,7 @@ export async function pickVessel(page: Page, selector: string, tag: string): Pro
   await page.selectOption(selector, value);
 }
 
-/** Interactive elements smaller than 48 px in either direction (inline text links excepted). */
+/** Interactive elements smaller than 48 px tall or wide (a link inside a sentence: at least 48 px tall). */
 export async function smallTargets(page: Page): Promise<string[]> {
   return page.evaluate(() => {
     const out: string[] = [];
@@ -153,6 +153,11 @@ export async function smallTargets(page: Page): Promise<string[]> {
       const r = el.getBoundingClientRect();
       if (r.width === 0 && r.height === 0) continue;
       if (r.height < 47.5 || r.width < 47.5) out.push(`${el.tagName.toLowerCase()}#${el.id || el.textContent?.trim().slice(0, 20)} ${Math.round(r.width)}x${Math.round(r.height)}`);
+    }
+    for (const el of document.querySelectorAll<HTMLElement>('main a:not(.button)')) {
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 && r.height === 0) continue;
+      if (r.height < 47.5) out.push(`link "${el.textContent?.trim().slice(0, 20)}" ${Math.round(r.width)}x${Math.round(r.height)}`);
     }
     return out;
   });
