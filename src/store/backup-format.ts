@@ -122,7 +122,8 @@ const LINK_KEYS = ['id', 'deviceId', 'seq', 'prevHash', 'hash', 'kind'] as const
 const B64URL_32 = /^[A-Za-z0-9_-]{43}$/;
 const B64URL_64 = /^[A-Za-z0-9_-]{86}$/;
 
-function validateVessel(field: string, value: unknown): VesselRecord {
+/** One vessel record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateVessel(field: string, value: unknown): VesselRecord {
   const v = requireObject(field, value);
   requireKeys(field, v, VESSEL_KEYS);
   within(() => {
@@ -142,7 +143,8 @@ function validateVessel(field: string, value: unknown): VesselRecord {
   return v as unknown as VesselRecord;
 }
 
-function validateCheck(field: string, value: unknown): CheckRecord {
+/** One check record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateCheck(field: string, value: unknown): CheckRecord {
   const c = requireObject(field, value);
   requireKeys(field, c, CHECK_KEYS);
   within(() => {

@@ -1,7 +1,10 @@
-// Deciding what an import does (planMerge) and doing it in one transaction (writePlan). The plan
-// refuses the whole file when any record fails: its hash, its links to the records beside it, its
-// seq, or (for a device that signs) the signatures that should vouch for it. Otherwise it adds what
-// is new, skips what is here already, and takes each vessel's later edit.
+// Deciding what an import does (planMerge) and doing it in one transaction (writePlan). Under the
+// import's policy ('whole-file') the plan refuses the whole file when any record fails: its hash,
+// its links to the records beside it, its seq, or (for a device that signs) the signatures that
+// should vouch for it. Records pulled from the plant server are merged 'record-by-record': a bad
+// record is rejected alone, and one whose predecessor has not arrived yet is taken with a warning
+// (the pull's feed does not follow seq order). Either way it adds what is new, skips what is here
+// already, and takes each vessel's later edit.
 import type { IDBPDatabase } from 'idb';
 import type { BackupDocument, OtherRecord } from './backup-format.ts';
 import { learnPublicKey } from './device-keys.ts';
@@ -17,7 +20,12 @@ import { parseIsoWithOffset } from './time.ts';
 /** What importBackup did, record by record (a refused file throws instead: see importBackup). */
 export interface ImportReport {
   vessels: { added: string[]; updated: string[]; skipped: { id: string; why: string }[] };
-  checks: { added: string[]; skipped: { id: string; why: string }[] };
+  checks: {
+    added: string[];
+    skipped: { id: string; why: string }[];
+    /** Only under the 'record-by-record' policy (a 'whole-file' merge refuses instead): records not taken, and why. */
+    rejected: RefusedRecord[];
+  };
   /** Chain status of each device's records as they stand in the file. */
   fileChains: ChainStatus[];
   /** How far each device's signatures in the file vouch for its records, by device. */
@@ -27,6 +35,14 @@ export interface ImportReport {
   /** Things worth telling the user that refuse nothing. */
   warnings: string[];
 }
+
+/**
+ * How a merge treats a bad record. 'whole-file' (an import): any refuses everything, a gap or a file
+ * cut short included, and a device known to sign must have its new records vouched for.
+ * 'record-by-record' (a pull from the plant server): a bad record is rejected alone, a gap is taken
+ * with a warning, and signatures are checked only where the records came with them.
+ */
+export type MergePolicy = 'whole-file' | 'record-by-record';
 
 /** How one device of the file stands with its signatures (importBackup works it out before the plan). */
 export interface DeviceSigning {
@@ -82,9 +98,13 @@ type FileLink = { check: number; other?: undefined } | { check?: undefined; othe
 export async function planMerge(
   db: IDBPDatabase<TanksideDB>,
   doc: BackupDocument,
-  input: { texts: string[]; hashes: string[]; otherHashes: string[]; signing: Map<string, DeviceSigning>; signatureOf: (deviceId: string, seq: number) => string },
+  input: {
+    texts: string[]; hashes: string[]; otherHashes: string[]; signing: Map<string, DeviceSigning>;
+    signatureOf: (deviceId: string, seq: number) => string; policy: MergePolicy;
+  },
 ): Promise<MergePlan> {
   const { texts, hashes, signing } = input;
+  const wholeFile = input.policy === 'whole-file';
   const tx = db.transaction(['vessels', ...LOG_STORES] as const);
   const vesselStore = tx.objectStore('vessels');
   const devices = new Map<string, FileLink[]>();
@@ -127,7 +147,7 @@ export async function planMerge(
 
   const report: ImportReport = {
     vessels: { added: [], updated: [], skipped: [] },
-    checks: { added: [], skipped: [] },
+    checks: { added: [], skipped: [], rejected: [] },
     fileChains: [],
     fileSignatures: deviceIds.map((d) => ({ deviceId: d, signature: signing.get(d)?.status ?? { state: 'unsigned' } })),
     skippedKinds: {},
@@ -186,11 +206,12 @@ export async function planMerge(
         continue;
       }
       const prev = r.seq === 1 ? GENESIS_HASH : (here.get(r.seq - 1) ?? fileBySeq.get(r.seq - 1))?.hash;
-      if (prev === undefined) {
+      if (prev === undefined && wholeFile) {
         refuse(`seq ${r.seq - 1} is neither in the file nor here, so seq ${r.seq} cannot be linked to the chain`);
         continue;
       }
-      if (prev !== r.prevHash) {
+      if (prev === undefined) report.warnings.push(`Device ${d}: seq ${r.seq - 1} is missing, so seq ${r.seq} could not be linked.`);
+      else if (prev !== r.prevHash) {
         refuse(`seq ${r.seq}: prevHash is not the hash of seq ${r.seq - 1} (a record was changed or swapped)`);
         continue;
       }
@@ -200,7 +221,7 @@ export async function planMerge(
         refuse(`seq ${r.seq}: seq ${r.seq + 1} here links to another record (a record was changed or swapped)`);
         continue;
       }
-      const unvouched = sign ? signatureProblem(sign, d, r.seq) : null;
+      const unvouched = sign ? signatureProblem(sign, d, r.seq, wholeFile) : null;
       if (unvouched) {
         refuse(unvouched);
         continue;
@@ -215,7 +236,7 @@ export async function planMerge(
     }
   });
   report.fileChains = verifier.results();
-  for (const head of doc.chains) {
+  for (const head of wholeFile ? doc.chains : []) {
     let last: ChainLink | undefined;
     for (const l of devices.get(head.deviceId) ?? []) {
       const r: ChainLink = l.other ?? doc.checks[l.check]!;
@@ -243,13 +264,20 @@ export async function planMerge(
   }
   refused.sort((a, b) => (a.deviceId < b.deviceId ? -1 : a.deviceId > b.deviceId ? 1 : a.seq - b.seq));
   const keys = [...signing.values()].flatMap((s) => (s.learn ? [s.learn] : []));
+  if (!wholeFile) {
+    // Record by record: what failed stays out, reported; the rest goes in.
+    report.checks.rejected = refused;
+    return { vesselWrites, checkAdds, keys, report, refused: [] };
+  }
   return { vesselWrites, checkAdds, keys, report, refused };
 }
 
 /** Why a new record of a signing device cannot be taken, or null if a valid signature in the file vouches for it. */
-function signatureProblem(sign: DeviceSigning, deviceId: string, seq: number): string | null {
+function signatureProblem(sign: DeviceSigning, deviceId: string, seq: number, wholeFile: boolean): string | null {
   // A key conflict refuses the device as a whole (planMerge), not record by record.
-  if (sign.keyConflict || !sign.required) return null;
+  if (sign.keyConflict) return null;
+  // Records pulled without signatures (the plant server does not carry them yet) are taken as unsigned.
+  if (!sign.required || (!wholeFile && sign.status.state === 'unsigned')) return null;
   const s = sign.status;
   if (s.state === 'signed' && seq <= s.throughSeq) return null;
   if (s.state === 'failed') {

@@ -8,7 +8,7 @@
 // record by device and seq). A file that passes is merged: a check already here and identical is
 // skipped, every other record is added, vessels by their later edit, all in one transaction.
 import { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, parseBackupInSteps, type BackupDocument, type ChainHead } from './backup-format.ts';
-import { planMerge, refusal, writePlan, type DeviceSigning, type ImportReport } from './backup-merge.ts';
+import { planMerge, refusal, writePlan, type DeviceSigning, type ImportReport, type MergePolicy } from './backup-merge.ts';
 import { sealMigratedChecks } from './checks.ts';
 import { getDb } from './connection.ts';
 import { readPublicKeys, storedPublicKeys } from './device-keys.ts';
@@ -21,9 +21,9 @@ import { recordBackup } from './backup-record.ts';
 import { signatureCoverage, verifyingKey, type SignedHead, type VerifyingKey } from './signatures.ts';
 import { formatIsoWithOffset } from './time.ts';
 
-export { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS, mayHoldForbiddenKey, parseBackup, parseBackupInSteps } from './backup-format.ts';
+export { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS, mayHoldForbiddenKey, parseBackup, parseBackupInSteps, validateCheck, validateVessel } from './backup-format.ts';
 export type { BackupDocument, BackupLimits, ChainHead, FileSignature, OtherRecord } from './backup-format.ts';
-export type { ImportReport } from './backup-merge.ts';
+export type { ImportReport, MergePolicy } from './backup-merge.ts';
 
 // ---------------------------------------------------------------- export
 
@@ -214,6 +214,29 @@ export async function importDocument(doc: BackupDocument, options: ImportOptions
       options.onProgress?.(done, total);
     },
   });
+  const report = await mergeRecords(doc, texts, hashes, { ...options, progressBase: doc.checks.length, progressTotal: total });
+  options.onProgress?.(total, total);
+  return report;
+}
+
+/**
+ * The merge of importBackup for a validated document whose checks' canonical texts and content
+ * hashes are given (index for index): checks signatures, plans against the store's current state,
+ * then writes in one strict transaction, planning again if another tab took a seq meanwhile. Also
+ * the merge of records pulled from the plant server (sync-log.ts), with policy 'record-by-record'.
+ * @throws StoreError('invalid-backup') (policy 'whole-file') listing every record that refuses the
+ *   document; ('cancelled' | 'quota-exceeded' | 'write-failed') with nothing written
+ */
+export async function mergeRecords(
+  doc: BackupDocument,
+  texts: string[],
+  hashes: string[],
+  options: ImportOptions & { policy?: MergePolicy; progressBase?: number; progressTotal?: number } = {},
+): Promise<ImportReport> {
+  const db = await getDb();
+  const base = options.progressBase ?? 0;
+  const total = options.progressTotal ?? doc.checks.length + doc.vessels.length;
+  const policy = options.policy ?? 'whole-file';
   const otherHashes = await hashTexts(doc.others.length, (i) => otherContent(doc.others[i]!.record), { signal: options.signal });
   const signatures = new Map<string, string>();
   for (const s of doc.signatures) signatures.set(`${s.deviceId} ${s.seq}`, s.signature);
@@ -222,7 +245,7 @@ export async function importDocument(doc: BackupDocument, options: ImportOptions
     throwIfAborted(options.signal);
     const deviceIds = [...new Set([...doc.checks, ...doc.others].map((r) => r.deviceId))];
     const signing = await deviceSigning(doc, await readPublicKeys(db, deviceIds), signatureOf);
-    const plan = await planMerge(db, doc, { texts, hashes, otherHashes, signing, signatureOf });
+    const plan = await planMerge(db, doc, { texts, hashes, otherHashes, signing, signatureOf, policy });
     throwIfAborted(options.signal);
     if (plan.refused.length > 0) throw refusal(plan.refused);
     if (options.beforeWrite) {
@@ -230,10 +253,9 @@ export async function importDocument(doc: BackupDocument, options: ImportOptions
       throwIfAborted(options.signal);
     }
     try {
-      // Done so far: every check hashed, plus every record the plan does not write.
+      // Done so far: what came before, plus every record the plan does not write.
       const skipped = doc.vessels.length - plan.vesselWrites.length + doc.checks.length - plan.checkAdds.length;
-      await writePlan(db, plan, options, doc.checks.length + skipped, total);
-      options.onProgress?.(total, total);
+      await writePlan(db, plan, options, base + skipped, total);
       return plan.report;
     } catch (error) {
       // Another tab saved a check with a seq the plan gave out: plan again from the new state.

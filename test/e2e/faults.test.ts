@@ -7,8 +7,8 @@
 // screen's totals and from the files the test made; the typed values are the ones the test typed;
 // hostile strings are looked for in the DOM itself. The data is invented: generated logs
 // (bench/generated-log.ts) and the demo plant, which is labelled DEMO DATA. No fixed waits stand
-// for "the app is done": every wait is on the app's own completion state (data-save, data-draft,
-// data-drafts, data-import-result, data-complete); the only timed pauses are the faults themselves
+// for "the app is done": every wait is on the app's own completion state (data-save-state, data-draft,
+// data-draft-state, data-import-result, data-complete); the only timed pauses are the faults themselves
 // (a close 100 ms after Save).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
@@ -200,9 +200,9 @@ describe('fault matrix', () => {
     await page.fill('#chk-gross', entry.gross);
   }
 
-  /** Waits until every draft write the page issued has committed (the app's own data-drafts state). */
+  /** Waits until every draft write the page issued has committed (the app's own data-draft-state). */
   async function draftsStored(page: Page): Promise<void> {
-    await page.locator('html[data-drafts="saved"]').waitFor({ state: 'attached', timeout: LONG_JOB_MS });
+    await page.locator('html[data-draft-state="saved"]').waitFor({ state: 'attached', timeout: LONG_JOB_MS });
   }
 
   /** The typed fields of `entry` not in the form as shown. */
@@ -274,7 +274,7 @@ describe('fault matrix', () => {
       // A person reads the result before pressing Save: by then the entry is stored as a draft.
       await draftsStored(page);
       await page.getByRole('button', { name: 'Save check' }).click();
-      const status = page.locator('[data-save="saved"]');
+      const status = page.locator('[data-save-state="saved"]');
       await status.waitFor({ timeout: LONG_JOB_MS });
       let message = (await status.textContent()) ?? '';
       await pause(ms);
@@ -284,7 +284,7 @@ describe('fault matrix', () => {
       const back = (await fieldsLost(page, ENTRY)) === 0;
       if (back && (await page.getByRole('button', { name: 'Save check' }).isEnabled())) {
         await page.getByRole('button', { name: 'Save check' }).click();
-        await page.locator('[data-save="saved"]').waitFor({ timeout: LONG_JOB_MS });
+        await page.locator('[data-save-state="saved"]').waitFor({ timeout: LONG_JOB_MS });
         message += ' / after reopening: the saved entry was back in the form, saved again';
       }
       const after = await storedChecks(page);
@@ -320,7 +320,7 @@ describe('fault matrix', () => {
     await checkScreen(page);
     await typeEntry(page, ENTRY, 'saved offline');
     await page.getByRole('button', { name: 'Save check' }).click();
-    const status = page.locator('[data-save="saved"]');
+    const status = page.locator('[data-save-state="saved"]');
     await status.waitFor({ timeout: LONG_JOB_MS });
     const message = (await status.textContent()) ?? '';
     await ctx!.close();
@@ -368,7 +368,7 @@ describe('fault matrix', () => {
       return n;
     });
     await page.getByRole('button', { name: 'Save check' }).click();
-    const failed = page.locator('[data-save="failed"]');
+    const failed = page.locator('[data-save-state="failed"]');
     await failed.waitFor({ timeout: LONG_JOB_MS });
     const message = (await failed.textContent()) ?? '';
     const kept = await fieldsLost(page, ENTRY);
@@ -376,7 +376,7 @@ describe('fault matrix', () => {
     await page.evaluate(() => new Promise((done) => { indexedDB.deleteDatabase('fault-filler').onsuccess = done; }));
     await (await ctx!.newCDPSession(page)).send('Storage.overrideQuotaForOrigin', { origin });
     await page.getByRole('button', { name: 'Save check' }).click();
-    await page.locator('[data-save="saved"]').waitFor({ timeout: LONG_JOB_MS });
+    await page.locator('[data-save-state="saved"]').waitFor({ timeout: LONG_JOB_MS });
     const after = await storedChecks(page);
     rows.push({ scenario: 'quota exceeded on save, then room', before, after, lost: kept + Math.max(0, before + 1 - after), duplicated: Math.max(0, after - before - 1), message });
     expect(filled).toBeGreaterThan(0);

@@ -32,7 +32,7 @@ describe('storage panel and backup reminder', () => {
       await page.fill('#chk-pressure', '400');
       await page.fill('#chk-tech', 'Storage Test');
       await page.getByRole('button', { name: 'Save check' }).click();
-      await page.locator('[data-save="saved"]').waitFor({ timeout: LONG_JOB_MS });
+      await page.locator('[data-save-state="saved"]').waitFor({ timeout: LONG_JOB_MS });
 
       await page.goto(`${server.url}#/log`);
       const reminder = page.locator('[data-backup-reminder="due"]');

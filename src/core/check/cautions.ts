@@ -182,7 +182,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
     const h = inv.hydraulic;
     out.push(caution('liquid-full-now', h.withinFormulation
       ? joined(
-        say`The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge `,
+        say`The vessel is liquid-full at ${celsius(T)}: no vapour space is left, and this fill would reach ${kilopascal(h.gaugePressurePa)} gauge `,
         say`(MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`)
       : say`The vessel is liquid-full at ${celsius(T)}: this fill would exceed 100 MPa, far above the MAWP. Stop heating and check the weight.`));
   }
@@ -234,7 +234,7 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   } else if (v.verdict === 'pressure-below-saturation') {
     out.push(caution('pressure-below-saturation', joined(
       say`Pressure is ${kilopascal(-result.saturation.pressureDeviationPa)} below saturation for ${celsius(T)}: suspect a gauge or thermometer fault, `,
-      say`a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapor' : ''}.`)));
+      say`a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapour' : ''}.`)));
   } else {
     out.push(caution('saturation-check-limits', joined(
       say`Pressure and temperature agree with saturated steam within ±${kelvinDifference(result.saturation.temperatureBandK.plusMinus, 2)} (root-sum-square of the instrument limits). `,
@@ -247,14 +247,14 @@ export function cautionsForCheck(vessel: VesselSpec, result: Omit<CheckResult, '
   if (inv.regime === 'superheated') {
     if (Math.abs(inv.differenceFromReadingPa) > inv.differenceBandPa) {
       out.push(caution('superheated-pressure-mismatch',
-        say`By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
+        say`By weight there is no liquid: this mass of vapour would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
     }
   }
   if (inv.regime === 'two-phase') {
     if (result.inventoryBands && inv.quality - result.inventoryBands.quality.plusMinus <= 0) {
       out.push(caution('quality-band-reaches-liquid-full', 'Within the weight, temperature and volume tolerances the contents could be liquid-full.'));
     }
-    out.push(caution('bulk-quality-not-dryness', 'Quality here is the bulk vapor mass fraction of the vessel contents, not the dryness of supply steam (EN 285 dryness value).'));
+    out.push(caution('bulk-quality-not-dryness', 'Quality here is the bulk vapour mass fraction of the vessel contents, not the dryness of supply steam (EN 285 dryness value).'));
   }
 
   const flash = result.hazards.flash;

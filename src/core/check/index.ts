@@ -5,7 +5,7 @@ export type { CheckResult, Hazards } from './evaluate-check.ts';
 export { planFill } from './plan-fill.ts';
 export type { ChargeState, FillPlan, FillRequest, FillTarget } from './plan-fill.ts';
 export { validateVessel, VESSEL_LIMITS } from './vessel-spec.ts';
-export type { InstrumentAccuracy, TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
+export type { InstrumentAccuracy, ReadingUnits, TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
 export { resolveReading, READING_LIMITS } from './reading.ts';
 export type { Reading, ResolvedReading } from './reading.ts';
 export {

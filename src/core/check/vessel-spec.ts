@@ -3,6 +3,16 @@
 
 import { InputError, requireInRange } from '../errors.ts';
 import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
+import { isMassUnit, type MassUnit } from '../units/mass.ts';
+import { isPressureUnit, type PressureUnit } from '../units/pressure.ts';
+import { isTemperatureUnit, type TemperatureUnit } from '../units/temperature.ts';
+
+/** The units the vessel's own instruments show: its gauge's dial, its thermometer, its scale. */
+export interface ReadingUnits {
+  pressure: PressureUnit;
+  temperature: TemperatureUnit;
+  mass: MassUnit;
+}
 
 /** Temperature sensor tolerance: an IEC 60751 platinum RTD class, or a stated ± limit. */
 export type TemperatureSensorTolerance =
@@ -43,6 +53,11 @@ export interface VesselSpec {
   /** Surroundings the vessel cools to when idle, K. */
   ambientTemperatureK: number;
   instruments: InstrumentAccuracy;
+  /**
+   * The units its instruments read in, so a check starts in them; the engine computes in SI and
+   * does not use them. Absent on vessels saved before they existed.
+   */
+  readingUnits?: ReadingUnits;
 }
 
 /** Valid ranges, SI. Atmosphere: every inhabited elevation up to the 108.38 kPa record high (1083.8 hPa, Agata, 31 Dec 1968: WMO Weather and Climate Extremes Archive, https://wmo.asu.edu/content/world-highest-sea-level-air-pressure-below-700m). */
@@ -106,6 +121,11 @@ export function validateVessel(spec: VesselSpec): void {
   inRange('weight tolerance', ins.weightToleranceKg, L.weightToleranceKg);
   inRange('volume tolerance', ins.volumeTolerancePercent, L.volumeTolerancePercent);
   inRange('barometer tolerance', ins.barometerTolerancePa, L.barometerTolerancePa);
+  const u = spec.readingUnits;
+  if (u !== undefined && (typeof u !== 'object' || u === null || !isPressureUnit(u.pressure) || !isTemperatureUnit(u.temperature) || !isMassUnit(u.mass))) {
+    throw new InputError('instrument units', 'out-of-range', JSON.stringify(u), undefined,
+      'instrument units: the gauge, thermometer and scale units must each be one of the app\'s units.');
+  }
 }
 
 function inRange(field: string, value: number, r: { min: number; max: number; unit: string }): void {

@@ -1,5 +1,6 @@
 // What the review needs from one saved check, read defensively from its stored result (the result
 // is the check engine's output as plain JSON; an older or damaged record may lack any part of it).
+import { shortTime } from '../state/format.ts';
 import { SIGNAL_ORDER, signalMaskOf, verdictOfResult, worstSignalOfMask, type CheckRecord, type Signal } from '../../store/index.ts';
 
 export type { Signal };
@@ -65,8 +66,7 @@ export function verdictLabel(id: VerdictId, form: 'label' | 'short' = 'label'): 
   return VERDICTS.find((v) => v.id === id)?.[form] ?? id;
 }
 
-/** A stored time as "2026-12-01 14:05 +01:00" (the offset the technician's device stamped). */
+/** A stored time as "2026-12-01 14:05 UTC+01:00" (the offset the technician's device stamped), as every screen shows it. */
 export function stampText(iso: string): string {
-  const offset = iso.endsWith('Z') ? 'UTC' : iso.slice(-6);
-  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} ${offset}`;
+  return shortTime(iso);
 }

@@ -1,12 +1,12 @@
 // Entries in progress are written to the store on every change, with no delay: a reload, a closed
 // tab or an accepted update straight after a keystroke still finds it (the store asks for the
-// commit within the same task, test/e2e/faults.test.ts closes the browser at 0 ms to prove it).
+// commit within the same task; test/e2e/faults.test.ts closes the browser at 0 ms to prove it).
 // A draft is a few hundred bytes, so one small transaction per keystroke costs nothing a person
 // notices. flushDrafts() resolves once every write issued so far has committed (retrying any that
 // failed); the update flow calls it before reloading.
 //
-// <html data-drafts="writing" | "saved" | "failed"> says where the writes stand, for tests.
-import { useEffect, useRef, useState } from 'preact/hooks';
+// <html data-draft-state="pending" | "saved" | "failed"> says where the writes stand: browser tests wait on it.
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import * as repo from './repo.ts';
 import { reportSaveError } from './app-state.ts';
 
@@ -17,7 +17,7 @@ const failed = new Map<string, unknown>();
 
 function showState(): void {
   if (typeof document === 'undefined') return;
-  document.documentElement.dataset['drafts'] = writing.size > 0 ? 'writing' : failed.size > 0 ? 'failed' : 'saved';
+  document.documentElement.dataset['draftState'] = writing.size > 0 ? 'pending' : failed.size > 0 ? 'failed' : 'saved';
 }
 
 function write(key: string, value: unknown): Promise<void> {
@@ -79,7 +79,9 @@ if (typeof document !== 'undefined') {
  * (unless the person already changed it), and every change is written at once. `loaded` is false
  * until the stored draft was read.
  */
-export function useDraft<T extends object>(key: string, initial: T): { value: T; set: (next: T) => void; loaded: boolean; reset: () => void } {
+export function useDraft<T extends object>(key: string, initial: T): {
+  value: T; set: (next: T) => void; update: (change: (current: T) => T) => void; loaded: boolean; reset: () => void;
+} {
   const [value, setValue] = useState<T>(initial);
   const [loaded, setLoaded] = useState(false);
   const initialRef = useRef(initial);
@@ -99,10 +101,19 @@ export function useDraft<T extends object>(key: string, initial: T): { value: T;
     setValue(next);
     void write(key, next);
   };
+  // Stable across renders, so components handed it re-render only when their own props change.
+  const update = useMemo(() => (change: (current: T) => T) => {
+    touched.current = true;
+    setValue((current) => {
+      const next = change(current);
+      if (next !== current) void write(key, next);
+      return next;
+    });
+  }, [key]);
   const reset = () => {
     touched.current = true;
     setValue(initialRef.current);
     void discardDraft(key);
   };
-  return { value, set, loaded, reset };
+  return { value, set, update, loaded, reset };
 }
