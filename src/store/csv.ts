@@ -217,7 +217,7 @@ function piecesOf(rows: readonly string[]): string[] {
  */
 async function wholeLogPieces(tx: LogReadTx, options: LongWorkOptions): Promise<string[]> {
   const order: MonthRow[] = [];
-  for (const bucket of await tx.objectStore('logMonths').getAll()) for (const r of bucket.rows) order.push(r);
+  for (const bucket of await tx.objectStore('logMonthParts').getAll()) for (const r of bucket.rows) order.push(r);
   order.sort(compareRows);
   const total = order.length;
   const lineOf = lineNumbers(order);

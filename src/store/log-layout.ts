@@ -14,10 +14,15 @@
 //   with seq s of device d lives in the block of d with the greatest firstSeq ≤ s. Blocks never
 //   move or split, so the rule holds as long as a new block is only started below every block of
 //   its device, or above every seq the device's last block holds.
-// - logMonths, key [vesselId, monthMs], index by-month: for each vessel and UTC calendar month,
-//   a row per check ascending by (timeMs, id): where it is, and the facts the review filters and
-//   totals need (MonthRow), so listing, paging, filtering and counting walk these small values and
-//   open a block only for the rows a page shows.
+// - logMonthParts, key [vesselId, monthMs, startMs, startId], index by-month: for each vessel and
+//   UTC calendar month, the parts of its month bucket: runs of at most MONTH_PART_MAX rows, a row
+//   per check ascending by (timeMs, id): where it is, and the facts the review filters and totals
+//   need (MonthRow), so listing, paging, filtering and counting walk these small values and open a
+//   block only for the rows a page shows. A row lives in the part of its month with the greatest
+//   start at or below it; a month's first part starts at (monthMs, ''), below every row of the
+//   month. A save rewrites one part, never a whole month: a vessel checked tens of thousands of
+//   times in a month (schema v5; until v4 one value held the month) no longer makes each save
+//   rewrite megabytes.
 // - logIds, key: the last two hex digits of a check id: where each id is stored, and the ids of
 //   the checks that correct it. A v4 UUID is random there, so 256 values share the log evenly.
 //
@@ -53,13 +58,26 @@ export interface LogBlock {
  */
 export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number, verdict: StoredVerdict | null, signals: number, technician: string];
 
-/** One vessel's checks in one UTC calendar month. */
+/** A run of one vessel's checks in one UTC calendar month (a part of its month bucket). */
 export interface MonthBucket {
   vesselId: string;
   /** Date.UTC of the month's first day. */
   monthMs: number;
+  /** Where the part starts: no row of it sorts below (startMs, startId); the month's first part starts at (monthMs, ''). */
+  startMs: number;
+  startId: string;
   /** Ascending by (timeMs, id). */
   rows: MonthRow[];
+}
+
+/** Rows a month part is given when it is started (an in-order save starts a new part past it). */
+export const MONTH_PART_TARGET = 500;
+/** A part written with more rows than this (rows inserted below the newest) is split into parts of MONTH_PART_TARGET. */
+export const MONTH_PART_MAX = 1000;
+
+/** Every part of one vessel's months from `lowMonth` to `highMonth` (either may be infinite), inclusive. */
+export function monthPartRange(vesselId: string, lowMonth: number, highMonth: number): IDBKeyRange {
+  return IDBKeyRange.bound([vesselId, lowMonth], [vesselId, highMonth, Infinity]);
 }
 
 /** Where a check id is stored (`at`), and the ids of checks that correct it (`by`), either may be absent. */
@@ -71,7 +89,7 @@ export interface IdEntry {
 /** Entries of the ids that end in one pair of hex digits. */
 export type IdBucket = Record<string, IdEntry>;
 
-export const LOG_STORES = ['logBlocks', 'logMonths', 'logIds'] as const;
+export const LOG_STORES = ['logBlocks', 'logMonthParts', 'logIds'] as const;
 /** Any transaction whose scope includes the three log stores. */
 export type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
 
@@ -209,7 +227,7 @@ export async function addToLog(
 ): Promise<void> {
   if (entries.length === 0) return;
   const blocksStore = tx.objectStore('logBlocks');
-  const monthsStore = tx.objectStore('logMonths');
+  const monthsStore = tx.objectStore('logMonthParts');
   const idsStore = tx.objectStore('logIds');
 
   // Everything that will change, read at once.
@@ -247,7 +265,15 @@ export async function addToLog(
         return { deviceId, firstSeqs, list, blocks: new Map(blocks.filter((b) => b !== undefined).map((b) => [b.firstSeq, b])) };
       }),
     ),
-    Promise.all([...months.values()].map((m) => monthsStore.get([m.vesselId, m.monthMs]))),
+    Promise.all([...months.values()].map(async (m) => {
+      // The parts the new rows fall in: the one holding the lowest, and every one above it up to the highest.
+      m.rows.sort(compareRows);
+      const lo = m.rows[0]!;
+      const hi = m.rows[m.rows.length - 1]!;
+      const holder = await monthsStore.openCursor(IDBKeyRange.bound([m.vesselId, m.monthMs], [m.vesselId, m.monthMs, lo[0], lo[1]]), 'prev');
+      const from = holder ? [holder.value.startMs, holder.value.startId] : [m.monthMs, ''];
+      return monthsStore.getAll(IDBKeyRange.bound([m.vesselId, m.monthMs, ...from], [m.vesselId, m.monthMs, hi[0], hi[1]]));
+    })),
     Promise.all([...idKeys].map(async (k) => [k, (await idsStore.get(k)) ?? {}] as const)),
   ]);
 
@@ -318,13 +344,60 @@ export async function addToLog(
     puts.push(blocksStore.put(block).then(() => onStored?.(n)));
   }
   [...months.values()].forEach((m, i) => {
-    const stored = monthBuckets[i];
-    const rows = stored ? stored.rows.concat(m.rows) : m.rows;
-    rows.sort(compareRows);
-    puts.push(monthsStore.put({ vesselId: m.vesselId, monthMs: m.monthMs, rows }));
+    for (const part of placeRows(m.vesselId, m.monthMs, monthBuckets[i]!, m.rows)) puts.push(monthsStore.put(part));
   });
   for (const [key, bucket] of ids) puts.push(idsStore.put(bucket, key));
   await Promise.all(puts);
+}
+
+/** Compares a row with a part's start, as IndexedDB orders [number, string] keys. */
+function compareToStart(r: MonthRow, p: MonthBucket): number {
+  return r[0] - p.startMs || (r[1] < p.startId ? -1 : r[1] > p.startId ? 1 : 0);
+}
+
+/**
+ * Puts `rows` (ascending) into the month's `parts` (the stored parts they fall in, ascending) and
+ * returns every part to write: each row to the part with the greatest start at or below it; past
+ * the newest row of a part already MONTH_PART_TARGET long, a new part starting at the row (how
+ * saves in time order go); a part left over MONTH_PART_MAX split into parts of MONTH_PART_TARGET.
+ */
+export function placeRows(vesselId: string, monthMs: number, stored: readonly MonthBucket[], rows: readonly MonthRow[]): MonthBucket[] {
+  const parts = stored.length > 0 ? stored.slice() : [{ vesselId, monthMs, startMs: monthMs, startId: '', rows: [] }];
+  const changed = new Set<MonthBucket>();
+  let at = 0;
+  for (const r of rows) {
+    while (at + 1 < parts.length && compareToStart(r, parts[at + 1]!) >= 0) at += 1;
+    let part = parts[at]!;
+    const last = part.rows[part.rows.length - 1];
+    if (last !== undefined && compareRows(r, last) > 0) {
+      if (part.rows.length >= MONTH_PART_TARGET && at === parts.length - 1) {
+        // Nothing loaded sorts above this row, and a stored part above it starts above it too.
+        part = { vesselId, monthMs, startMs: r[0], startId: r[1], rows: [] };
+        parts.push(part);
+        at += 1;
+      }
+      part.rows.push(r);
+    } else {
+      let k = part.rows.length;
+      while (k > 0 && compareRows(part.rows[k - 1]!, r) > 0) k -= 1;
+      part.rows.splice(k, 0, r);
+    }
+    changed.add(part);
+  }
+  const out: MonthBucket[] = [];
+  for (const part of changed) {
+    if (part.rows.length <= MONTH_PART_MAX) {
+      out.push(part);
+      continue;
+    }
+    const all = part.rows;
+    out.push({ ...part, rows: all.slice(0, MONTH_PART_TARGET) });
+    for (let k = MONTH_PART_TARGET; k < all.length; k += MONTH_PART_TARGET) {
+      const run = all.slice(k, k + MONTH_PART_TARGET);
+      out.push({ vesselId, monthMs, startMs: run[0]![0], startId: run[0]![1], rows: run });
+    }
+  }
+  return out;
 }
 
 /**
@@ -394,8 +467,8 @@ export async function* blockPages(tx: LogTx<IDBTransactionMode>): AsyncGenerator
 
 /** How many checks the log holds (counts rows of every month bucket; a vessel's alone when given). */
 export async function countChecks(tx: LogTx<IDBTransactionMode>, vesselId?: string): Promise<number> {
-  const store = tx.objectStore('logMonths');
-  const buckets = await store.getAll(vesselId === undefined ? undefined : IDBKeyRange.bound([vesselId, -Infinity], [vesselId, Infinity]));
+  const store = tx.objectStore('logMonthParts');
+  const buckets = await store.getAll(vesselId === undefined ? undefined : monthPartRange(vesselId, -Infinity, Infinity));
   let n = 0;
   for (const b of buckets) n += b.rows.length;
   return n;
@@ -437,7 +510,7 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
   const highMonth = Number.isFinite(highMs) ? monthOf(highMs) : Infinity;
   const direction = newest ? 'prev' : 'next';
   const taken: MonthRow[] = [];
-  const store = tx.objectStore('logMonths');
+  const store = tx.objectStore('logMonthParts');
   const take = (buckets: MonthBucket[]): void => {
     const rows: MonthRow[] = [];
     for (const b of buckets) for (const r of b.rows) if (inWindow(r)) rows.push(r);
@@ -446,7 +519,7 @@ export async function pageRows(tx: LogTx<IDBTransactionMode>, q: LogQuery): Prom
     for (const r of rows) taken.push(r);
   };
   if (q.vesselId !== null) {
-    let cursor = await store.openCursor(IDBKeyRange.bound([q.vesselId, lowMonth], [q.vesselId, highMonth]), direction);
+    let cursor = await store.openCursor(monthPartRange(q.vesselId, lowMonth, highMonth), direction);
     while (cursor && taken.length <= q.limit) {
       take([cursor.value]);
       cursor = await cursor.continue();

@@ -8,6 +8,7 @@ import {
   blockFor,
   firstSeqsOf,
   monthOf,
+  monthPartRange,
   seqIndex,
   type LogBlock,
   type LogQuery,
@@ -61,7 +62,7 @@ export async function visitRows(
   if (q.fromMs > q.toMs) return true;
   const lowMonth = Number.isFinite(q.fromMs) ? monthOf(q.fromMs) : -Infinity;
   const highMonth = Number.isFinite(q.toMs) ? monthOf(q.toMs) : Infinity;
-  const store = tx.objectStore('logMonths');
+  const store = tx.objectStore('logMonthParts');
   const each = (buckets: MonthBucket[]) => {
     for (const b of buckets) {
       for (const r of b.rows) {
@@ -72,7 +73,7 @@ export async function visitRows(
     options.onMonth?.();
   };
   if (q.vesselId !== null) {
-    let cursor = await store.openCursor(IDBKeyRange.bound([q.vesselId, lowMonth], [q.vesselId, highMonth]), 'prev');
+    let cursor = await store.openCursor(monthPartRange(q.vesselId, lowMonth, highMonth), 'prev');
     while (cursor) {
       if (options.signal?.aborted) return false;
       each([cursor.value]);

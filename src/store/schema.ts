@@ -4,7 +4,7 @@
 // finished after open by sealMigratedChecks() in db.ts.
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
-import { addToLog, type IdBucket, type LogBlock, type MonthBucket, type NewLogEntry } from './log-layout.ts';
+import { addToLog, MONTH_PART_TARGET, type IdBucket, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
 
 export const DB_NAME = 'tankside';
@@ -20,8 +20,11 @@ export const DB_NAME = 'tankside';
  * - v4: the log in few, large values (log-layout.ts says why and how): logBlocks, logMonths
  *   (index by-month) and logIds replace the one-record-per-check `checks` store, whose records
  *   move over unchanged (as their canonical JSON text) before it is deleted.
+ * - v5: month buckets split by size: logMonthParts (key [vesselId, monthMs, startMs, startId],
+ *   index by-month) replaces logMonths, each month's rows moved over in parts of at most
+ *   MONTH_PART_TARGET, so a save rewrites one part instead of a whole month.
  */
-export const DB_VERSION = 4;
+export const DB_VERSION = 5;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -48,7 +51,7 @@ export interface TanksideDB extends DBSchema {
     indexes: { 'by-tag': string };
   };
   logBlocks: { key: [string, number]; value: LogBlock };
-  logMonths: { key: [string, number]; value: MonthBucket; indexes: { 'by-month': number } };
+  logMonthParts: { key: [string, number, number, string]; value: MonthBucket; indexes: { 'by-month': number } };
   logIds: { key: string; value: IdBucket };
   settings: { key: string; value: JsonValue | DeviceKey | KnownDeviceKey };
   drafts: { key: string; value: DraftRecord };
@@ -132,7 +135,9 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
     version: 4,
     run(db, tx, next) {
       db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
-      db.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
+      // The log is moved with today's addToLog, which writes month parts (v5): the parts' store is
+      // made here, and rung 5 finds no v4 month buckets to split.
+      createMonthParts(db);
       db.createObjectStore('logIds');
       const raw = unwrap(tx) as IDBTransaction;
       const bySeq = raw.objectStore('checks').index('by-device-seq');
@@ -161,7 +166,68 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
       });
     },
   },
+  {
+    version: 5,
+    run(db, tx, next) {
+      const raw = unwrap(tx) as IDBTransaction;
+      if (!(unwrap(db) as IDBDatabase).objectStoreNames.contains('logMonths')) {
+        next();
+        return;
+      }
+      if (!(unwrap(db) as IDBDatabase).objectStoreNames.contains('logMonthParts')) createMonthParts(db);
+      const old = raw.objectStore('logMonths');
+      const parts = raw.objectStore('logMonthParts');
+      // A page of v4 buckets at a time, each split into parts as it is read: only IndexedDB
+      // requests are awaited, so the upgrade transaction stays active throughout.
+      const move = async (): Promise<void> => {
+        let range: IDBKeyRange | undefined;
+        for (;;) {
+          const page = await request<V4MonthBucket[]>(old.getAll(range, MIGRATE_MONTHS));
+          if (page.length === 0) break;
+          for (const bucket of page) for (const part of partsOfV4(bucket)) parts.put(part);
+          if (page.length < MIGRATE_MONTHS) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.vesselId, last.monthMs], true);
+        }
+        (unwrap(db) as IDBDatabase).deleteObjectStore('logMonths');
+      };
+      move().then(next, () => {
+        try {
+          raw.abort();
+        } catch {
+          // Already finished.
+        }
+      });
+    },
+  },
 ];
+
+/** A month bucket as v4 kept it: one value for the whole month. */
+interface V4MonthBucket {
+  vesselId: string;
+  monthMs: number;
+  rows: MonthRow[];
+}
+
+/** Month buckets of v4 moved per step of the v5 rung. */
+const MIGRATE_MONTHS = 200;
+
+function createMonthParts(db: IDBPDatabase<TanksideDB>): void {
+  db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+}
+
+/** A v4 month bucket as v5 parts: runs of MONTH_PART_TARGET rows (sorted again, should a hand edit have left them out of order). */
+function partsOfV4(b: V4MonthBucket): MonthBucket[] {
+  const rows = [...b.rows].sort((x, y) => x[0] - y[0] || (x[1] < y[1] ? -1 : x[1] > y[1] ? 1 : 0));
+  const out: MonthBucket[] = [];
+  for (let k = 0; k < rows.length; k += MONTH_PART_TARGET) {
+    const run = rows.slice(k, k + MONTH_PART_TARGET);
+    // The month's first part starts below every row of the month; each later one at its first row.
+    const [startMs, startId] = k === 0 ? [b.monthMs, ''] : [run[0]![0], run[0]![1]];
+    out.push({ vesselId: b.vesselId, monthMs: b.monthMs, startMs, startId, rows: run });
+  }
+  return out;
+}
 
 /** Old checks moved per step of the v4 rung. */
 const MIGRATE_PAGE = 1000;

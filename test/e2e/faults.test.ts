@@ -461,17 +461,20 @@ describe('fault matrix', () => {
       ...SCREENS.map((s) => ({ path: `#/${s.id}`, title: s.title })),
       { path: 'some/deep/path', title: 'New check' },
       { path: 'some/deep/path#/log', title: 'Log' },
-      { path: 'a/b/c/d/index.html#/settings', title: 'Settings' },
+      { path: 'a/b/c/d/index.html#/review', title: 'Review' },
     ];
     const failed: string[] = [];
     for (const t of targets) {
       // From a blank page, so a route that differs only in its hash is still a load of the shell.
       await page.goto('about:blank');
       const response = await page.goto(`${server.url}${t.path}`);
-      const heading = page.locator('main h1');
-      const shown = await heading.waitFor({ timeout: 20_000 }).then(() => heading.textContent(), () => null);
+      // The screen is up once the store is open and its chunk (from the worker's cache) has loaded.
+      const screen = page.locator('main[data-app-state="ready"]:not(:has([data-screen-state="loading"]))');
+      const up = await screen.waitFor({ state: 'attached', timeout: 20_000 }).then(() => true, () => false);
+      const shown = up ? await page.locator('header h1').textContent() : null;
+      const broken = await page.getByText(/could not be loaded/).count();
       const styled = await page.evaluate(() => getComputedStyle(document.body).margin === '0px');
-      if (shown !== t.title || !response?.fromServiceWorker() || !styled) failed.push(`${t.path}: ${shown ?? 'blank'}`);
+      if (shown !== t.title || broken > 0 || !response?.fromServiceWorker() || !styled) failed.push(`${t.path}: ${shown ?? 'blank'}${broken ? ' (not loaded)' : ''}`);
     }
     const after = await storedChecks(page);
     await ctx!.setOffline(false);

@@ -60,7 +60,7 @@ describe('storage panel and backup reminder', () => {
       const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export full backup (JSON)' }).click()]);
       expect(download.suggestedFilename()).toMatch(/^tankside-backup-/);
       await page.locator('[data-last-backup]:not([data-last-backup=""])').waitFor({ timeout: LONG_JOB_MS });
-      expect(await page.textContent('[data-last-backup]')).toMatch(/^\d{4}-\d\d-\d\d \d\d:\d\d \(exported\)$/);
+      expect(await page.textContent('[data-last-backup]')).toMatch(/^\d{4}-\d\d-\d\d \d\d:\d\d( [A-Z+\-:\d]+)? \(exported\)$/);
 
       await page.goto(`${server.url}#/log`);
       await page.locator('[data-backup-reminder="not-due"]').waitFor({ state: 'attached', timeout: LONG_JOB_MS });

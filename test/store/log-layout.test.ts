@@ -14,7 +14,11 @@ import {
   LOG_STORES,
   LogConflict,
   monthOf,
+  MONTH_PART_MAX,
+  MONTH_PART_TARGET,
   pageRows,
+  placeRows,
+  type MonthBucket,
   readRecords,
   seqIndex,
   type MonthRow,
@@ -66,16 +70,25 @@ async function expectLayoutHolds(expected: CheckRecord[]): Promise<void> {
   expect(blocks.reduce((n, b) => n + b.texts.length, 0)).toBe(expected.length);
   const tx = db.transaction(LOG_STORES);
   expect(await readRecords(tx, expected.map((r) => ({ deviceId: r.deviceId, seq: r.seq })))).toEqual(expected);
-  // Month buckets: each check once, in its vessel and month, sorted.
-  const buckets = await db.getAll('logMonths');
+  // Month parts: each check once, in its vessel and month, sorted; no part over MONTH_PART_MAX; a
+  // month's first part starting at (monthMs, ''), every row at or above its part's start and below
+  // the next part's.
+  const buckets = await db.getAll('logMonthParts');
   const rows: MonthRow[] = [];
-  for (const b of buckets) {
+  buckets.forEach((b, i) => {
     expect([...b.rows].sort(compareRows)).toEqual(b.rows);
+    expect(b.rows.length).toBeLessThanOrEqual(MONTH_PART_MAX);
+    const prev = buckets[i - 1];
+    if (!prev || prev.vesselId !== b.vesselId || prev.monthMs !== b.monthMs) expect([b.startMs, b.startId]).toEqual([b.monthMs, '']);
+    const next = buckets[i + 1];
+    const sameMonth = next && next.vesselId === b.vesselId && next.monthMs === b.monthMs;
     for (const r of b.rows) {
       expect(monthOf(r[0])).toBe(b.monthMs);
+      expect(r[0] > b.startMs || (r[0] === b.startMs && r[1] >= b.startId)).toBe(true);
+      if (sameMonth) expect(r[0] < next.startMs || (r[0] === next.startMs && r[1] < next.startId)).toBe(true);
       rows.push(r);
     }
-  }
+  });
   expect(rows.map((r) => r[1]).sort()).toEqual(expected.map((r) => r.id).sort());
   // Id buckets: each id where it is stored.
   const ids = new Map<string, unknown>();
@@ -170,6 +183,74 @@ describe('addToLog', () => {
       }),
       { numRuns: 25 },
     );
+  });
+});
+
+describe('month parts', () => {
+  const V = VESSELS[0]!;
+  const M = Date.UTC(2026, 0, 1);
+  const row = (timeMs: number, k: number): MonthRow => [timeMs, `r${String(k).padStart(6, '0')}`, DEVICES[0]!, k + 1, null, 0, 'T'];
+  const startOf = (p: MonthBucket) => [p.startMs, p.startId] as const;
+  const below = (r: MonthRow, s: readonly [number, string]) => r[0] < s[0] || (r[0] === s[0] && r[1] < s[1]);
+
+  /** The month's parts as addToLog reads them for `rows`: the one holding the lowest row, up to the highest. */
+  function partsFor(all: MonthBucket[], rows: MonthRow[]): MonthBucket[] {
+    const lo = rows[0]!;
+    const hi = rows[rows.length - 1]!;
+    let from = 0;
+    all.forEach((p, i) => { if (!below(lo, startOf(p))) from = i; });
+    return all.filter((p, i) => i >= from && !below(hi, startOf(p)));
+  }
+
+  it('rows arriving in any order and batches stay sorted, each in one part, no part over the limit (property)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: 0, max: 2_500_000_000 }), { minLength: 1, maxLength: 3000 }), fc.integer({ min: 1, max: 40 }), (times, batches) => {
+        let stored: MonthBucket[] = [];
+        const rows = times.map((t, k) => row(M + t, k));
+        const size = Math.ceil(rows.length / batches);
+        for (let i = 0; i < rows.length; i += size) {
+          const batch = rows.slice(i, i + size).sort(compareRows);
+          const written = placeRows(V, M, partsFor(stored, batch), batch);
+          const key = (p: MonthBucket) => `${p.startMs} ${p.startId}`;
+          const byKey = new Map(stored.map((p) => [key(p), p]));
+          for (const p of written) byKey.set(key(p), p);
+          stored = [...byKey.values()].sort((a, b) => a.startMs - b.startMs || (a.startId < b.startId ? -1 : 1));
+        }
+        expect(stored.flatMap((p) => p.rows)).toEqual([...rows].sort(compareRows));
+        expect(startOf(stored[0]!)).toEqual([M, '']);
+        stored.forEach((p, i) => {
+          expect(p.rows.length).toBeLessThanOrEqual(MONTH_PART_MAX);
+          const next = stored[i + 1];
+          for (const r of p.rows) {
+            expect(below(r, startOf(p))).toBe(false);
+            if (next) expect(below(r, startOf(next))).toBe(true);
+          }
+        });
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('saves in time order: each save writes one part of at most MONTH_PART_TARGET rows, however large the month', async () => {
+    const db = await getDb();
+    const n = 2 * MONTH_PART_TARGET + 7;
+    const chain = Array.from({ length: n }, (_, i) => record(0, i + 1, T0 + i * 60_000, 0));
+    const proto = Object.getPrototypeOf(db.transaction('logMonthParts').store) as { put: (...a: unknown[]) => unknown };
+    const put = proto.put;
+    const written: number[] = [];
+    proto.put = function (this: { name: string }, value: unknown, ...rest: unknown[]) {
+      if (this.name === 'logMonthParts') written.push((value as MonthBucket).rows.length);
+      return put.call(this, value, ...rest);
+    };
+    try {
+      for (const r of chain) await add([r]);
+    } finally {
+      proto.put = put;
+    }
+    expect(written).toHaveLength(n);
+    expect(Math.max(...written)).toBeLessThanOrEqual(MONTH_PART_TARGET);
+    expect((await db.getAll('logMonthParts')).map((p) => p.rows.length)).toEqual([MONTH_PART_TARGET, MONTH_PART_TARGET, 7]);
+    await expectLayoutHolds(chain);
   });
 });
 

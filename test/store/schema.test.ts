@@ -101,7 +101,7 @@ const CURRENT_SCHEMA = {
   drafts: [],
   logBlocks: [],
   logIds: [],
-  logMonths: ['by-month:"monthMs"'],
+  logMonthParts: ['by-month:"monthMs"'],
   settings: [],
   vessels: ['by-tag:"tagKey"'],
 };
@@ -149,11 +149,11 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(4);
+    expect(DB_VERSION).toBe(5);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
-  it('v1 → v4: keeps vessels, checks and settings; adds timeMs, drafts, the hash chain and the block layout', async () => {
+  it('v1 → current: keeps vessels, checks and settings; adds timeMs, drafts, the hash chain and the block layout', async () => {
     const old = await rawOpen(1, createV1);
     await rawWrite(old, [
       ['vessels', vesselV1()],
@@ -164,7 +164,7 @@ describe('upgrade ladder', () => {
 
     await openStore({ onEvent: (e) => events.push(e) });
     const db = await getDb();
-    expect(db.version).toBe(4);
+    expect(db.version).toBe(DB_VERSION);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
     expect(await getVessel(VESSEL_ID)).toEqual(vesselV1());
     expect(await getSetting('technicianName')).toBe('R. Okafor');
@@ -175,7 +175,7 @@ describe('upgrade ladder', () => {
     expect(events).toEqual([]);
   });
 
-  it('v2 → v4: keeps drafts and checks; chains the checks in time order', async () => {
+  it('v2 → current: keeps drafts and checks; chains the checks in time order', async () => {
     const old = await rawOpen(2, createV2);
     const v2Checks = V1_CHECKS.map((c) => ({ ...c, timeMs: Date.parse(c.time) }));
     await rawWrite(old, [
@@ -227,7 +227,7 @@ describe('upgrade ladder', () => {
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 4, headSeq: 4, headHash: next.hash }]);
   });
 
-  it('v3 → v4: every check moves to the block layout unchanged, byte for byte; lists, lookups and chains as before', async () => {
+  it('v3 → current: every check moves to the block layout unchanged, byte for byte; lists, lookups and chains as before', async () => {
     const old = await rawOpen(3, createV3);
     const D1 = 'd1000000-0000-4000-8000-000000000001';
     const D2 = 'd2000000-0000-4000-8000-000000000002';
@@ -261,7 +261,7 @@ describe('upgrade ladder', () => {
 
     await openStore({ onEvent: (e) => events.push(e) });
     const db = await getDb();
-    expect(db.version).toBe(4);
+    expect(db.version).toBe(DB_VERSION);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
     // Each record as v3 held it, and its stored text is its canonical JSON.
     const stored = await storedChecks();
@@ -284,14 +284,80 @@ describe('upgrade ladder', () => {
     expect(events).toEqual([]);
   });
 
-  it('a v4 database reopens untouched', async () => {
+  it('v4 → v5: each month bucket is split into parts of 500 rows; listing, counts, lookups and chains as before', async () => {
+    // 1,203 chained checks of one device: 1,200 on one vessel in January 2026 (one v4 month bucket
+    // of 1,200 rows), 3 on another in February; blocks of 100 and id buckets as v4 wrote them.
+    const D = '4a6b8c0d-1e2f-4a3b-8c4d-5e6f7a8b9c0d';
+    const V2 = '7e1d2c3b-4a59-4687-9a6b-5c4d3e2f1a0b';
+    const records: Record<string, unknown>[] = [];
+    let prevHash = GENESIS_HASH;
+    for (let i = 0; i < 1203; i += 1) {
+      const jan = i < 1200;
+      const timeMs = jan ? Date.UTC(2026, 0, 1) + i * 600_000 : Date.UTC(2026, 1, 3) + i * 1000;
+      const time = new Date(timeMs).toISOString().slice(0, 19) + 'Z';
+      const { takenAt: _t, corrects: _c, reason: _r, vesselId: _v, ...rest } = sampleCheck(VESSEL_ID);
+      const content = {
+        ...rest, id: `5b7c9d1e-0000-4000-8000-${String(i).padStart(12, '0')}`, deviceId: D, seq: i + 1, time, timeMs,
+        vesselId: jan ? VESSEL_ID : V2, vessel: { tag: jan ? 'CR-3' : 'FT-9', spec: SPEC }, corrects: null, reason: null, prevHash,
+      };
+      const hash = await computeCheckHash(content as never);
+      records.push({ ...content, hash });
+      prevHash = hash;
+    }
+    const old = await rawOpen(4, (db) => {
+      db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+      db.createObjectStore('settings');
+      db.createObjectStore('drafts');
+      db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+      db.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
+      db.createObjectStore('logIds');
+      const tx = upgradeTxOf(db);
+      tx.objectStore('vessels').put(vesselV1());
+      tx.objectStore('vessels').put({ ...vesselV1(), id: V2, tag: 'FT-9', tagKey: 'ft-9' });
+      tx.objectStore('settings').put(D, SETTING_DEVICE_ID);
+      for (let b = 0; b < records.length; b += 100) {
+        const run = records.slice(b, b + 100);
+        tx.objectStore('logBlocks').put({ deviceId: D, firstSeq: b + 1, seqs: run.map((r) => r['seq']), texts: run.map((r) => canonicalJson(r)) });
+      }
+      const rowOf = (r: Record<string, unknown>) => [r['timeMs'], r['id'], D, r['seq'], null, 0, r['technician']];
+      tx.objectStore('logMonths').put({ vesselId: VESSEL_ID, monthMs: Date.UTC(2026, 0, 1), rows: records.slice(0, 1200).map(rowOf) });
+      tx.objectStore('logMonths').put({ vesselId: V2, monthMs: Date.UTC(2026, 1, 1), rows: records.slice(1200).map(rowOf) });
+      const ids: Record<string, Record<string, { at: [string, number] }>> = {};
+      for (const r of records) (ids[(r['id'] as string).slice(-2)] ??= {})[r['id'] as string] = { at: [D, r['seq'] as number] };
+      for (const [k, bucket] of Object.entries(ids)) tx.objectStore('logIds').put(bucket, k);
+    });
+    old.close();
+    await openStore();
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect([...db.objectStoreNames]).not.toContain('logMonths');
+    const parts = await db.getAll('logMonthParts');
+    expect(parts.map((p) => [p.vesselId, p.rows.length])).toEqual([[VESSEL_ID, 500], [VESSEL_ID, 500], [VESSEL_ID, 200], [V2, 3]]);
+    expect([parts[0]!.startMs, parts[0]!.startId]).toEqual([Date.UTC(2026, 0, 1), '']);
+    expect([parts[1]!.startMs, parts[1]!.startId]).toEqual([records[500]!['timeMs'], records[500]!['id']]);
+    // Every check listed once, newest first, across the parts; one vessel's too; counts and lookups.
+    const seen: string[] = [];
+    for (let page = await listChecks({ limit: 1000 }); ; page = await listChecks({ limit: 1000, before: page.next! })) {
+      seen.push(...page.checks.map((c) => c.id));
+      if (!page.next) break;
+    }
+    expect(seen).toEqual([...records].reverse().map((r) => r['id']));
+    expect((await checksForVessel(V2)).checks.map((c) => c.seq)).toEqual([1203, 1202, 1201]);
+    expect(await getCheck(records[777]!['id'] as string)).toEqual(records[777]);
+    expect(await verifyStoredChains()).toMatchObject([{ deviceId: D, status: 'ok', count: 1203 }]);
+    // The next save goes into the last part of its month, or a new one: never the whole month again.
+    await appendCheck(sampleCheck(VESSEL_ID, { takenAt: new Date(Date.UTC(2026, 0, 30)) }));
+    expect((await db.getAll('logMonthParts')).map((p) => p.rows.length)).toEqual([500, 500, 201, 3]);
+  });
+
+  it('a database at the current version reopens untouched', async () => {
     await openStore();
     await closeStore();
-    const old = await rawOpen(4, () => {
+    const old = await rawOpen(DB_VERSION, () => {
       throw new Error('no upgrade expected');
     });
     old.close();
     await openStore();
-    expect((await getDb()).version).toBe(4);
+    expect((await getDb()).version).toBe(DB_VERSION);
   });
 });
