@@ -5,10 +5,14 @@
 // judging a fill by its liquid-full temperature rather than a fixed percentage follows from the mass
 // and volume balance above (our own rule).
 
-import { IF97, saturation, saturationTemperature } from '../steam/index.ts';
+import { IF97, saturatedLiquidVolume, saturatedVaporVolume, saturationTemperature } from '../steam/index.ts';
+import { bisectionResult } from './bisection.ts';
 
 /** Minimum of v_f(T) in IF97, K (277.14 K, found with python-iapws 1.5.2 on a 0.01 K grid): v_f rises monotonically above it. */
 const T_MAX_DENSITY_K = 277.14;
+
+/** Boundary of IF97 regions 1 and 3 on the saturation line, K (IAPWS R7-97(2012), 623.15 K). */
+const T_13_K = 623.15;
 
 export type EnvelopeEvent = 'liquid-full' | 'all-vapor' | 'relief-set-pressure' | 'mawp';
 
@@ -27,30 +31,34 @@ export interface HeatUpEnvelope {
   first: { event: EnvelopeEvent; temperatureK: number; alreadyReached: boolean } | { event: 'none' };
 }
 
-/** Solves g(T) = 0 for a g that rises with T on [lo, hi] (sign change assumed), 60 bisection steps. */
-function bisect(g: (T: number) => number, lo: number, hi: number): number {
-  for (let i = 0; i < 60; i++) {
-    const mid = 0.5 * (lo + hi);
-    if (g(mid) < 0) lo = mid;
-    else hi = mid;
-  }
-  return 0.5 * (lo + hi);
+/**
+ * Solves g(T) = 0 for a g that rises with T on [lo, hi] (sign change assumed): the result of 60
+ * bisection steps, from fewer evaluations (bisection.ts). g here is a specific-volume difference:
+ * below 623.15 K v_f and v_g come out of IF97's regions 1 and 2 within a few ulp (1e-13 of v is
+ * about 500 ulp); in region 3 they are Newton roots of Eq. (28) converged to 1e-12 in p, whose
+ * error in v grows towards Tc as the isotherm flattens (1e-9 of v covers the differences seen
+ * from 0.02 K below Tc); within 0.1 K of Tc, where the two roots merge, every step is evaluated.
+ */
+function bisect(g: (T: number) => number, lo: number, hi: number, scaleM3PerKg: number): number {
+  const noise = (T: number) => (T <= T_13_K ? 1e-13 * scaleM3PerKg : T < IF97.Tc - 0.1 ? 1e-9 * scaleM3PerKg : Infinity);
+  return bisectionResult(g, lo, hi, 60, -Infinity, noise, 1e-12);
 }
 
 /** Liquid-full temperature for mean specific volume v, K, or null if the fill never goes liquid-full. v in m³/kg, > 0. */
 export function liquidFullTemperatureK(v: number): number | null {
-  const vc = saturation(IF97.Tc).liquid.v;
-  if (v >= vc) return null;
-  if (v <= saturation(T_MAX_DENSITY_K).liquid.v) return IF97.Tt;
-  return bisect((T) => saturation(T).liquid.v - v, T_MAX_DENSITY_K, IF97.Tc);
+  // v_f rises from 277.14 K to Tc, so a v below v_f(623.15 K) is below v_c: the region 3 solve at
+  // Tc (and its table of starting values) is needed only for fills near the critical volume.
+  if (v >= saturatedLiquidVolume(T_13_K) && v >= saturatedLiquidVolume(IF97.Tc)) return null;
+  if (v <= saturatedLiquidVolume(T_MAX_DENSITY_K)) return IF97.Tt;
+  return bisect((T) => saturatedLiquidVolume(T) - v, T_MAX_DENSITY_K, IF97.Tc, v);
 }
 
 /** All-vapor temperature for mean specific volume v, K, or null if the fill never dries out. v in m³/kg, > 0. */
 export function allVaporTemperatureK(v: number): number | null {
-  const vc = saturation(IF97.Tc).vapor.v;
-  if (v <= vc) return null;
-  if (v >= saturation(IF97.Tt).vapor.v) return IF97.Tt;
-  return bisect((T) => v - saturation(T).vapor.v, IF97.Tt, IF97.Tc);
+  // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c.
+  if (v <= saturatedVaporVolume(T_13_K) && v <= saturatedVaporVolume(IF97.Tc)) return null;
+  if (v >= saturatedVaporVolume(IF97.Tt)) return IF97.Tt;
+  return bisect((T) => v - saturatedVaporVolume(T), IF97.Tt, IF97.Tc, v);
 }
 
 /** T_sat at an absolute pressure, K, or null above the critical pressure. p in Pa, ≥ 611.657 Pa. */

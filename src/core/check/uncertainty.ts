@@ -9,7 +9,7 @@
 // 3 % air by Dalton's law; both computed with python3-iapws 1.5.2 (IAPWS-IF97)). GUM expanded
 // uncertainty with rectangular limits (U = 2·√(Σa²/3), JCGM 100:2008 §4.3.7) is 1.15 × RSS, close to it.
 
-import { IF97, saturation } from '../steam/index.ts';
+import { IF97, saturatedLiquidVolume, saturatedVaporVolume } from '../steam/index.ts';
 import type { TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
 import { liquidLevelFromVolume, vesselVolume, type VesselGeometry } from './vessel-geometry.ts';
 import type { ResolvedReading } from './reading.ts';
@@ -101,9 +101,8 @@ export function inventoryBands(args: {
 }): InventoryBands {
   const { temperatureK: T, massKg: m, volumeM3: V } = args;
   const at = (t: number) => {
-    const s = saturation(t);
-    const vf = s.liquid.v;
-    const vg = s.vapor.v;
+    const vf = saturatedLiquidVolume(t);
+    const vg = saturatedVaporVolume(t);
     return { vf, vg, x: (V / m - vf) / (vg - vf), mLiq: (m * vg - V) / (vg - vf) };
   };
   const here = at(T);
@@ -150,9 +149,8 @@ function levelBand(
 ): Band<'weight' | 'temperature' | 'volume'> {
   const drawn = vesselVolume(geometry);
   const level = (T: number, m: number, V: number) => {
-    const s = saturation(T);
-    const vf = s.liquid.v;
-    const vg = s.vapor.v;
+    const vf = saturatedLiquidVolume(T);
+    const vg = saturatedVaporVolume(T);
     const liquidM3 = (vf * (m * vg - V)) / (vg - vf);
     return liquidLevelFromVolume(geometry, Math.min(Math.max(liquidM3, 0), drawn));
   };

@@ -2,6 +2,6 @@
 export { IF97, FORMULATION_ID } from './constants.ts';
 export type { PhaseState, SaturationState, SteamRegion, VesselState } from './phase-state.ts';
 export { saturationPressure, saturationTemperature } from './saturation-line.ts';
-export { saturation } from './saturation.ts';
+export { saturation, saturatedLiquidVolume, saturatedVaporVolume } from './saturation.ts';
 export { stateTP } from './state-tp.ts';
 export { stateTV } from './state-tv.ts';
