@@ -1,9 +1,25 @@
 // Generated benchmark and test data (invented, not demo data): a "tankside-backup" v1 file of
 // vessels and a hash-chained check log of one device, written with the store's own canonical JSON
 // and SHA-256 so it imports as a backup from another device would.
+import type { StoredCheckResult, VesselSpec } from '../src/core/index.ts';
 import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type VesselRecord } from '../src/store/records.ts';
 import { tagKeyOf } from '../src/store/vessels.ts';
+import { testVessel } from '../test/core/check/test-vessel.ts';
+
+/**
+ * A generated result holds only the figures the review reads (verdict, deviation, quality, liquid
+ * mass), invented; the store keeps any JSON, and this is the one place such a partial result is
+ * given the stored-result type.
+ */
+export function partialResult(figures: object): StoredCheckResult {
+  return figures as StoredCheckResult;
+}
+
+/** An invented vessel spec for generated data: the check-engine tests' vessel with its own tag and volume. */
+export function inventedSpec(tag: string, volumeM3: number, tareKg: number): VesselSpec {
+  return testVessel({ tag, description: 'Generated vessel for benchmarks and tests (invented).', geometry: { shape: 'stated-volume', volumeM3 }, tareKg });
+}
 
 export interface LogSpec {
   deviceId: string;
@@ -52,7 +68,7 @@ export function generatedVessels(prefix: number, count: number, createdMs: numbe
       tag,
       tagKey: tagKeyOf(tag),
       description: 'Generated vessel for benchmarks and tests (invented).',
-      spec: { internalVolumeM3: 1 + (i % 7) * 0.5, tareKg: 400 + (i % 5) * 50, mawpPa: 1.0e6, reliefSetPa: 0.95e6 },
+      spec: inventedSpec(tag, 1 + (i % 7) * 0.5, 400 + (i % 5) * 50),
       retired: false,
       retiredAt: null,
       createdAt: iso(createdMs),
@@ -100,11 +116,11 @@ export async function generatedChecks(spec: LogSpec, vessels: readonly VesselRec
         temperature: { text: (140 + rnd() * 20).toFixed(1).replace('.', ','), unit: 'degC' },
         pressure: { text: (3 + rnd()).toFixed(2), unit: 'bar', reference: 'gauge' },
       },
-      reading: { temperatureK: 420, pressurePa: 450_000 },
-      result: {
+      reading: { time: iso(timeMs), temperatureK: 420, pressure: { reference: 'gauge', pressurePa: 450_000 }, weight: { kind: 'not-weighed' } },
+      result: partialResult({
         saturation: { pressureDeviationPa: deviationPa, verdict: { verdict } },
         inventory: { regime: 'two-phase', quality, liquidMassKg },
-      },
+      }),
       cautions: cautions as CheckRecord['cautions'],
       appVersion: 'generated',
       formulationId: 'IAPWS-IF97 (R7-97(2012))',

@@ -4,6 +4,7 @@
 // finished after open by sealMigratedChecks() in db.ts.
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
+import { findingMaskOfText } from './facts.ts';
 import { addToLog, type IdBucket, type LogBlock, type MonthBucket, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, IsoDateTime, JsonValue, VesselRecord } from './records.ts';
 
@@ -20,8 +21,10 @@ export const DB_NAME = 'tankside';
  * - v4: the log in few, large values (log-layout.ts says why and how): logBlocks, logMonths
  *   (index by-month) and logIds replace the one-record-per-check `checks` store, whose records
  *   move over unchanged (as their canonical JSON text) before it is deleted.
+ * - v5: the month rows' signal-word mask holds the check's findings (its outcome) instead of every
+ *   caution's words; the rows are derived data, rebuilt from the stored texts; no record changes.
  */
-export const DB_VERSION = 4;
+export const DB_VERSION = 5;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -155,7 +158,55 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
       });
     },
   },
+  {
+    version: 5,
+    run(_db, tx, next) {
+      // The rows' facts are derived from the records: read every block (a page at a time, only
+      // IndexedDB requests awaited), work out each check's findings mask from its stored text,
+      // then rewrite the month buckets whose rows change. The blocks, and so every record and
+      // hash, stay byte for byte as they were.
+      const raw = unwrap(tx) as IDBTransaction;
+      const blocks = raw.objectStore('logBlocks');
+      const months = raw.objectStore('logMonths');
+      const rebuild = async (): Promise<void> => {
+        const masks = new Map<string, number>();
+        let range: IDBKeyRange | undefined;
+        for (;;) {
+          const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
+          for (const b of page) b.texts.forEach((text, i) => masks.set(`${b.deviceId}\u0000${b.seqs[i]}`, findingMaskOfText(text)));
+          if (page.length < REBUILD_PAGE) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
+        }
+        const buckets = await request<MonthBucket[]>(months.getAll());
+        const writes: Promise<unknown>[] = [];
+        for (const bucket of buckets) {
+          let changed = false;
+          for (const row of bucket.rows) {
+            const mask = masks.get(`${row[2]}\u0000${row[3]}`);
+            if (mask !== undefined && mask !== row[5]) {
+              row[5] = mask;
+              changed = true;
+            }
+          }
+          if (changed) writes.push(request(months.put(bucket)));
+        }
+        await Promise.all(writes);
+      };
+      rebuild().then(next, () => {
+        // Half-rebuilt rows must not commit: abort, and the v4 database stays as it was.
+        try {
+          raw.abort();
+        } catch {
+          // Already finished.
+        }
+      });
+    },
+  },
 ];
+
+/** Blocks read per step of the v5 rung. */
+const REBUILD_PAGE = 50;
 
 /** Old checks moved per step of the v4 rung. */
 const MIGRATE_PAGE = 1000;

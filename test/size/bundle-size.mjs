@@ -1,7 +1,10 @@
 #!/usr/bin/env node
 // Size budget for the shipped JavaScript, gzip level 9, from the build manifest:
 //  - at start: the entry chunk and everything it imports statically — what every phone parses when
-//    the app opens — at most 60 KB;
+//    the app opens — at most 68 KB (60 KB until issue 9: the check engine's findings, its 40 rules
+//    and their wording, and the region 3 starting values stored rather than solved in the first
+//    check of a fresh process, 3-5 ms there, took it from 58.1 to 66.4 KB; the rules' reasons stay
+//    out of it, in rule-reasons.ts. Screens loaded on demand, as the Review screen is, would win it back);
 //  - on demand: chunks behind a dynamic import (the supervisors' Review screen), at most 20 KB each;
 //  - the total is printed too. The service worker runs in its own scope and is printed for information.
 import { gzipSync } from 'node:zlib';
@@ -9,7 +12,7 @@ import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 
 const DIST = resolve(import.meta.dirname, '../../dist');
-const START_BUDGET_BYTES = 60 * 1024;
+const START_BUDGET_BYTES = 68 * 1024;
 const ON_DEMAND_BUDGET_BYTES = 20 * 1024;
 const MANIFEST = join(DIST, '.vite/manifest.json');
 

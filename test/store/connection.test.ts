@@ -1,4 +1,5 @@
 // The connection's life: blocked by an older tab, blocking a newer one, terminated by the browser.
+import { DB_VERSION } from '../../src/store/schema.ts';
 import 'fake-indexeddb/auto';
 import { IDBFactory, forceCloseDatabase } from 'fake-indexeddb';
 import { unwrap } from 'idb';
@@ -46,8 +47,8 @@ describe('connection', () => {
   it('blocking: a newer version opening elsewhere closes this connection and tells the app to reload', async () => {
     await openStore({ onEvent: (e) => events.push(e) });
     await addVessel({ tag: 'FT-1', spec: SPEC });
-    const newer = await rawOpen(5); // resolves only because the store closed its connection
-    expect(newer.version).toBe(5);
+    const newer = await rawOpen(DB_VERSION + 1); // resolves only because the store closed its connection
+    expect(newer.version).toBe(DB_VERSION + 1);
     expect(events).toEqual([{ type: 'closed-for-upgrade' }]);
     await expect(listVessels()).rejects.toMatchObject({ name: 'StoreError', code: 'closed-for-upgrade' });
     newer.close();

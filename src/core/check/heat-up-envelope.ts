@@ -11,6 +11,9 @@ import { bisectionResult } from './bisection.ts';
 /** Minimum of v_f(T) in IF97, K (277.14 K, found with python-iapws 1.5.2 on a 0.01 K grid): v_f rises monotonically above it. */
 const T_MAX_DENSITY_K = 277.14;
 
+/** IF97's lowest temperature, K (IAPWS R7-97(2012): 273.15 K), reported for a fill that is liquid-full (or all vapor) at any temperature. */
+const T_MIN_K = 273.15;
+
 /** Boundary of IF97 regions 1 and 3 on the saturation line, K (IAPWS R7-97(2012), 623.15 K). */
 const T_13_K = 623.15;
 
@@ -19,9 +22,9 @@ export type EnvelopeEvent = 'liquid-full' | 'all-vapor' | 'relief-set-pressure' 
 export interface HeatUpEnvelope {
   /** v = V/m, m³/kg. */
   meanSpecificVolumeM3PerKg: number;
-  /** T where v_f(T) = v, K; 273.16 if liquid-full at any temperature; null if never (v ≥ v_c). */
+  /** T where v_f(T) = v, K; 273.15 (IF97's lowest) if liquid-full at any temperature; null if never (v ≥ v_c). */
   liquidFullTemperatureK: number | null;
-  /** T where v_g(T) = v, K; 273.16 if all vapor at any temperature; null if never (v ≤ v_c). */
+  /** T where v_g(T) = v, K; 273.15 (IF97's lowest) if all vapor at any temperature; null if never (v ≤ v_c). */
   allVaporTemperatureK: number | null;
   /** T_sat(relief set pressure + atmosphere), K; null above the critical pressure. */
   reliefSetTemperatureK: number | null;
@@ -49,7 +52,7 @@ export function liquidFullTemperatureK(v: number): number | null {
   // v_f rises from 277.14 K to Tc, so a v below v_f(623.15 K) is below v_c: the region 3 solve at
   // Tc (and its table of starting values) is needed only for fills near the critical volume.
   if (v >= saturatedLiquidVolume(T_13_K) && v >= saturatedLiquidVolume(IF97.Tc)) return null;
-  if (v <= saturatedLiquidVolume(T_MAX_DENSITY_K)) return IF97.Tt;
+  if (v <= saturatedLiquidVolume(T_MAX_DENSITY_K)) return T_MIN_K;
   return bisect((T) => saturatedLiquidVolume(T) - v, T_MAX_DENSITY_K, IF97.Tc, v);
 }
 
@@ -57,18 +60,18 @@ export function liquidFullTemperatureK(v: number): number | null {
 export function allVaporTemperatureK(v: number): number | null {
   // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c.
   if (v <= saturatedVaporVolume(T_13_K) && v <= saturatedVaporVolume(IF97.Tc)) return null;
-  if (v >= saturatedVaporVolume(IF97.Tt)) return IF97.Tt;
+  if (v >= saturatedVaporVolume(IF97.Tt)) return T_MIN_K;
   return bisect((T) => v - saturatedVaporVolume(T), IF97.Tt, IF97.Tc, v);
 }
 
-/** T_sat at an absolute pressure, K, or null above the critical pressure. p in Pa, ≥ 611.657 Pa. */
+/** T_sat at an absolute pressure, K, or null above the critical pressure. p in Pa, ≥ 611.213 Pa (p_s at 273.15 K). */
 export function saturationTemperatureOrNull(absolutePressurePa: number): number | null {
   return absolutePressurePa > IF97.pc ? null : saturationTemperature(absolutePressurePa);
 }
 
 /**
- * The heat-up envelope of a fill. volumeM3 > 0, massKg > 0, startTemperatureK 273.16–647.096 K,
- * gauge pressures and atmosphere in Pa (gauge + atmosphere ≥ 611.657 Pa).
+ * The heat-up envelope of a fill. volumeM3 > 0, massKg > 0, startTemperatureK 273.15–647.096 K,
+ * gauge pressures and atmosphere in Pa (gauge + atmosphere ≥ 611.213 Pa).
  */
 export function heatUpEnvelope(args: {
   volumeM3: number;

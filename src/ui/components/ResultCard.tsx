@@ -1,5 +1,6 @@
-// A computed result: verdict, figures with their ± bands, hazards, cautions, the standing note
-// and the two pictures. The live region announces the verdict as the readings change.
+// A computed result: verdict, figures with their ± bands, hazards, the findings about the vessel
+// (then the standing hazards and notes, folded), the standing note and the two pictures. The live
+// region announces the verdict as the readings change.
 import type { ResultView } from '../state/result-view.ts';
 import { DEMO_RESULT_NOTICE } from '../state/demo-label.ts';
 import { CautionList } from './CautionList.tsx';
@@ -21,8 +22,21 @@ export function ResultCard({ view, heading = 'Result' }: { view: ResultView; hea
           <ul>{view.hazards.map((h) => <li key={h}>{h}</li>)}</ul>
         </>
       ) : null}
-      <h3>Cautions</h3>
-      <CautionList cautions={view.cautions} />
+      {view.findings ? (
+        <>
+          <h3>Findings</h3>
+          <CautionList cautions={view.findings} label="Findings" empty="No findings: this reading shows nothing wrong with the vessel. The standing hazards below still apply." />
+          <details class="standing-hazards">
+            <summary>Standing hazards and notes ({(view.standing ?? []).filter((c) => c.rule !== 'standing-note').length})</summary>
+            <CautionList cautions={view.standing ?? []} label="Standing hazards and notes" />
+          </details>
+        </>
+      ) : (
+        <>
+          <h3>Cautions</h3>
+          <CautionList cautions={view.cautions} />
+        </>
+      )}
       {view.chart || view.sketch ? (
         <div class="pictures">
           {view.chart ? <SaturationChart data={view.chart} /> : null}

@@ -1,7 +1,7 @@
 // One check from entry to log: the draft → Reading → evaluateCheck → what the screen shows, and
 // the record saved to the log. All computation is the core's.
 import { errorText, type FieldUnit } from './error-text.ts';
-import { InputError, evaluateCheck, type CheckResult, type VesselSpec } from '../../core/index.ts';
+import { InputError, evaluateCheck, type CheckResult } from '../../core/index.ts';
 import type { Reading } from '../../core/index.ts';
 import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
 import * as repo from './repo.ts';
@@ -37,7 +37,7 @@ export function evaluateDraft(
   if (!vessel) return { kind: 'incomplete', message: 'Choose a vessel to see the result.' };
   const r = readingFromDraft(d, measuredAtmospherePa);
   if (r.kind !== 'reading') return r;
-  const spec = vessel.spec as unknown as VesselSpec;
+  const spec = vessel.spec;
   try {
     const result = evaluateCheck(spec, r.reading);
     return { kind: 'result', view: resultView(result, spec, prefs), reading: r.reading, result };
@@ -76,7 +76,7 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
  */
 export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | undefined {
   try {
-    return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs);
+    return resultView(r.result, r.vessel.spec, prefs);
   } catch {
     return undefined;
   }
@@ -85,7 +85,7 @@ export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | und
 /** A one-line verdict for the log list. */
 export function verdictOfRecord(r: CheckRecord): string {
   try {
-    return verdictText(r.result as unknown as CheckResult).text;
+    return verdictText(r.result).text;
   } catch {
     return 'Result saved by another app version';
   }

@@ -63,7 +63,7 @@ const DEMO_PLANT: readonly VesselSpec[] = [
 ];
 
 export function isDemoVessel(v: VesselRecord): boolean {
-  return isDemo(v) || isDemo(v.spec as { tag?: unknown; description?: unknown });
+  return isDemo(v) || isDemo(v.spec);
 }
 
 /** Adds the demo vessels that are not in the inventory yet; returns how many were added. */

@@ -3,8 +3,8 @@ import { errorText, type FieldUnit } from './error-text.ts';
 import { inPreferredUnits } from './caution-text.ts';
 import { isDemo } from './demo-label.ts';
 import {
-  InputError, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
-  temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget, type VesselSpec,
+  InputError, MASS_UNITS, PRESSURE_UNITS, RULE_CATALOGUE, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
+  temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget,
 } from '../../core/index.ts';
 import type { MassUnit, TemperatureUnit } from '../../core/index.ts';
 import type { VesselRecord } from '../../store/index.ts';
@@ -62,13 +62,18 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   if (d.heatCapacityKJPerK.trim()) request.vesselHeatCapacityJPerK = read('heatCapacity', 'vessel heat capacity', d.heatCapacityKJPerK, (n) => n * 1000);
   if (Object.keys(errors).length) return { kind: 'input-error', errors };
   try {
-    const plan = planFill(vessel.spec as unknown as VesselSpec, request);
-    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec as { tag?: unknown; description?: unknown }) || isDemo(vessel)) };
+    const plan = planFill(vessel.spec, request);
+    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec) || isDemo(vessel)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
     return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
+}
+
+/** A caution about the plan itself (as opposed to the standing note and the plan's assumption). */
+function isPlanRule(rule: string): boolean {
+  return (RULE_CATALOGUE as Record<string, { kind: string }>)[rule]?.kind === 'plan';
 }
 
 function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
@@ -77,7 +82,7 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
   const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 5)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
   const pr = (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 5)} ${lab(PRESSURE_UNITS, u.pressure)}`;
   const pct = (x: number) => `${formatNumber(x * 100, 3)} %`;
-  const safe = p.largestSafeCharge;
+  const largest = p.largestTwoPhaseCharge;
   const figures: Figure[] = [
     { label: 'Water to charge', value: m(p.waterMassKg) },
     { label: 'Scale should read (gross)', value: m(p.expectedGrossWeightKg) },
@@ -85,7 +90,7 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
     { label: 'At the target', value: `quality ${pct(p.atTarget.quality)}, steam space ${pct(p.atTarget.vaporSpaceFraction)}` },
     { label: 'Liquid / steam at the target', value: `${m(p.atTarget.liquidMassKg)} / ${m(p.atTarget.vaporMassKg)}` },
     { label: 'Ideal-gas estimate', value: `${m(p.idealGas.waterMassKg)} (${formatNumber(p.idealGas.errorPercent, 3)} % off IF97)` },
-    { label: 'Largest safe charge', value: `${m(safe.waterMassKg)} (gross ${m(safe.expectedGrossWeightKg)}), two-phase up to ${t(safe.limitTemperatureK)}` },
+    { label: 'Largest charge still two-phase', value: `${m(largest.waterMassKg)} (gross ${m(largest.expectedGrossWeightKg)}), two-phase up to ${t(largest.limitTemperatureK)}` },
   ];
   if (p.heat) {
     figures.push({ label: 'Heat to the target', value: `${formatNumber(p.heat.totalJ / 1e6, 4)} MJ` +
@@ -93,8 +98,8 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
   }
   return {
     demo,
-    verdict: p.cautions.some((c) => c.signal === 'DANGER')
-      ? { tone: 'bad', text: 'DANGER. Do not charge this plan as it stands: see the cautions below.' }
+    verdict: p.cautions.some((c) => isPlanRule(c.rule))
+      ? { tone: 'bad', text: 'WARNING. Do not charge this plan as it stands: see the cautions below.' }
       : { tone: 'ok', text: `Charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}.` },
     figures,
     hazards: [],

@@ -1,9 +1,9 @@
 // A CheckResult (SI) in words and preferred units for the result card. Values come from the
 // engine; this module converts units for display and picks the words.
 import {
-  ACT_NOW_RULES, LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
-  temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM,
-  type CheckResult, type VesselSpec,
+  LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, findingsOfStoredResult, lengthFromM, massFromKg, pressureFromPa,
+  temperatureDifferenceFromK, temperatureFromK, thermometerLimitsK, volumeFromM3, vesselLevelSpanM,
+  type StoredCheckResult, type VesselSpec,
 } from '../../core/index.ts';
 import { saturationChartData } from './chart-data.ts';
 import { inPreferredUnits } from './caution-text.ts';
@@ -32,13 +32,14 @@ function units(u: UnitPrefs) {
 }
 
 /**
- * The headline: whether the gauge agrees with the thermometer, led by the signal word of the most
- * severe caution about the vessel as it is now (ACT_NOW_RULES). "If" hazards such as a flash on
- * release stay in the list below, so they do not turn every result red.
+ * The headline: whether the gauge agrees with the thermometer, led by the check's outcome (the
+ * worst signal word among its findings; derived from rule ids for a result saved before findings
+ * existed). Standing hazards such as a flash on release are folded below, so they do not turn
+ * every result red.
  */
-export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string } {
-  const now = r.cautions.filter((c) => (ACT_NOW_RULES as readonly string[]).includes(c.rule));
-  const lead = now.some((c) => c.signal === 'DANGER') ? 'DANGER' : now.some((c) => c.signal === 'WARNING') ? 'WARNING' : null;
+export function verdictText(r: StoredCheckResult): { tone: 'ok' | 'bad'; text: string } {
+  const { outcome } = findingsOfStoredResult(r);
+  const lead = outcome === 'none' ? null : outcome;
   const v = r.saturation.verdict;
   const words =
     r.inventory.regime === 'liquid-full'
@@ -53,7 +54,7 @@ export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string 
 }
 
 /** Everything the result card shows. */
-export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): ResultView {
+export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs): ResultView {
   const f = units(u);
   const s = r.saturation;
   const figures: Figure[] = [
@@ -113,14 +114,17 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): Resu
       sketch = { orientation, level: 0, low: 0, high: 0, caption: 'Vessel sketch: no liquid', note: 'of inside height' };
       break;
   }
-  const tolK = temperatureToleranceK(spec.instruments.temperatureSensor, r.reading.temperatureK);
+  const tolK = thermometerLimitsK(spec.instruments, r.reading.temperatureK).combined;
   const c = s.pressureBand.contributions;
+  const split = findingsOfStoredResult(r);
   return {
     demo: isDemo(spec),
     verdict: verdictText(r),
     figures,
     hazards: hazardLines(r, f),
     cautions: r.cautions.map((c) => inPreferredUnits(c, u)),
+    findings: split.findings.map((c) => inPreferredUnits(c, u)),
+    standing: split.standing.map((c) => inPreferredUnits(c, u)),
     chart: saturationChartData({
       temperatureK: r.reading.temperatureK, absolutePressurePa: s.absolutePressurePa,
       temperatureTolK: tolK, pressureTolPa: Math.hypot(c.pressureGauge, c.atmosphere),
@@ -129,7 +133,7 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs): Resu
   };
 }
 
-function hazardLines(r: CheckResult, f: ReturnType<typeof units>): string[] {
+function hazardLines(r: StoredCheckResult, f: ReturnType<typeof units>): string[] {
   const h = r.hazards;
   const out = [
     `Margin to MAWP: ${f.p(h.mawpMargin.marginPa)} (at ${formatNumber(h.mawpMargin.fractionOfLimit * 100, 3)} % of MAWP).`,
@@ -142,8 +146,12 @@ function hazardLines(r: CheckResult, f: ReturnType<typeof units>): string[] {
       (h.flash.totalFlashSteamVolumeM3 !== null ? `; all of it would make ${f.v(h.flash.totalFlashSteamVolumeM3)} of steam.` : '.'));
   }
   if (h.storedEnergy) out.push(`Stored expansion energy ${formatNumber(h.storedEnergy.expansionWorkJ / 1e6, 3)} MJ (about ${formatNumber(h.storedEnergy.tntEquivalentKg, 2)} kg TNT equivalent; an indicator, not a blast prediction).`);
-  out.push(`Sealed and cooled to ${f.t(h.cooled.temperatureK)}: ${f.p(h.cooled.absolutePressurePa)} absolute` +
-    (h.cooled.collapseRisk ? ', below atmosphere in a vessel not rated for vacuum.' : h.cooled.belowAtmosphere ? ', below atmosphere (rated for vacuum).' : '.'));
+  const cooledPa = h.cooled.absolutePressurePa;
+  const settles = 'direction' in h.cooled && h.cooled.direction === 'warming' ? 'Sealed and warmed to' : 'Sealed and cooled to';
+  out.push(cooledPa === null
+    ? `${settles} ${f.t(h.cooled.temperatureK)}: still liquid-full, above 100 MPa (beyond IF97).`
+    : `${settles} ${f.t(h.cooled.temperatureK)}: ${f.p(cooledPa)} absolute` +
+      (h.cooled.collapseRisk ? ', below atmosphere in an unprotected vessel.' : h.cooled.belowAtmosphere ? ', below atmosphere (rated for vacuum or with a vacuum breaker).' : '.'));
   const e = r.envelope;
   if (e && e.first.event !== 'none') {
     const what = { 'liquid-full': 'goes liquid-full', 'all-vapor': 'becomes all steam', 'relief-set-pressure': 'reaches the relief set pressure', mawp: 'reaches MAWP' }[e.first.event];

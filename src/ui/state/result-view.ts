@@ -11,7 +11,12 @@ export interface ResultView {
   verdict: { tone: 'ok' | 'bad'; text: string };
   figures: readonly Figure[];
   hazards: readonly string[];
+  /** Every caution (the log's list). */
   cautions: readonly Caution[];
+  /** What this reading says about the vessel now, shown first; empty when none. */
+  findings?: readonly Caution[];
+  /** Hazards of hot contents and notes on the method, shown folded below the findings. */
+  standing?: readonly Caution[];
   chart?: ChartData | undefined;
   sketch?: SketchData | undefined;
 }

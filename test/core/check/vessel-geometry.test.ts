@@ -79,7 +79,7 @@ describe('head volumes (solid geometry)', () => {
 });
 
 describe('horizontal torispherical heads', () => {
-  const heads: HeadSpec[] = [
+  const heads: Extract<HeadSpec, { kind: 'torispherical' }>[] = [
     { kind: 'torispherical' },
     { kind: 'torispherical', crownRadiusM: 0.8, knuckleRadiusM: 0.1 },
     { kind: 'torispherical', crownRadiusM: 1.0, knuckleRadiusM: 0.15 },
