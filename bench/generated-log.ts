@@ -153,3 +153,62 @@ export async function generatedBackup(spec: LogSpec): Promise<string> {
   const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
   return backupText(vessels, await generatedChecks(spec, vessels), iso(spec.startMs + spec.checks * spec.stepMs));
 }
+
+/** The kinds of reading evaluatedChecks takes in turn, each a different outcome on the generated vessels. */
+export const EVALUATED_KINDS = ['agrees', 'agrees', 'air', 'below-saturation', 'at-mawp', 'agrees'] as const;
+
+/**
+ * A log whose results are the check engine's own (evaluateCheck over invented readings on invented
+ * vessels), hash-chained like generatedChecks: checks that agree (outcome none), with air
+ * (WARNING), below saturation (CAUTION) and at MAWP (WARNING), in a fixed rotation.
+ */
+export async function evaluatedChecks(spec: LogSpec, vessels: readonly VesselRecord[]): Promise<CheckRecord[]> {
+  const { evaluateCheck, saturationPressure, saturationTemperature, vesselVolume } = await import('../src/core/index.ts');
+  const out: CheckRecord[] = [];
+  let prevHash = GENESIS_HASH;
+  for (let i = 0; i < spec.checks; i += 1) {
+    const vessel = vessels[i % vessels.length]!;
+    const timeMs = Math.floor((spec.startMs + i * spec.stepMs) / 1000) * 1000;
+    const kind = EVALUATED_KINDS[i % EVALUATED_KINDS.length]!;
+    // At MAWP the thermometer reads the gauge's saturation temperature, so only the limit is found.
+    const T = kind === 'at-mawp' ? saturationTemperature(0.995e6 + 101325) : 394.15 + (i % 7);
+    const pSat = saturationPressure(T);
+    const absolute = kind === 'air' ? pSat + 60e3 : kind === 'below-saturation' ? pSat - 60e3 : pSat;
+    // A third of the vessel liquid at the reading (v_f ≈ 1.06e-3 m³/kg at 121 °C): two-phase, not near liquid-full.
+    const netKg = (vesselVolume(vessel.spec.geometry) / 1.06e-3) * (kind === 'at-mawp' ? 0.1 : 0.33);
+    const reading = { time: iso(timeMs), temperatureK: T, pressure: { reference: 'absolute' as const, pressurePa: absolute }, weight: { kind: 'net' as const, netKg } };
+    const result = evaluateCheck(vessel.spec, reading);
+    const unsigned: Omit<CheckRecord, 'hash'> = {
+      id: fakeUuid(spec.seed, i),
+      deviceId: spec.deviceId,
+      seq: i + 1,
+      time: iso(timeMs),
+      timeMs,
+      technician: spec.technicians[i % spec.technicians.length]!,
+      note: kind,
+      vesselId: vessel.id,
+      vessel: { tag: vessel.tag, spec: vessel.spec },
+      inputs: { temperature: { text: (T - 273.15).toFixed(2), unit: 'degC' }, pressure: { text: (absolute / 1000).toFixed(1), unit: 'kPa', reference: 'absolute' } },
+      reading,
+      // The result as the app saves it: plain JSON.
+      result: JSON.parse(JSON.stringify(result)) as typeof result,
+      cautions: result.cautions.map(({ signal, message, rule }) => ({ signal, message, rule })),
+      appVersion: 'generated',
+      formulationId: result.formulationId,
+      corrects: null,
+      reason: null,
+      prevHash,
+    };
+    const hash = await computeCheckHash(unsigned);
+    out.push({ ...unsigned, hash });
+    prevHash = hash;
+  }
+  return out;
+}
+
+/** A backup file of evaluatedChecks over generated vessels. */
+export async function evaluatedBackup(spec: LogSpec): Promise<{ text: string; checks: CheckRecord[] }> {
+  const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
+  const checks = await evaluatedChecks(spec, vessels);
+  return { text: backupText(vessels, checks, iso(spec.startMs + spec.checks * spec.stepMs)), checks };
+}

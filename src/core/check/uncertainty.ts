@@ -138,7 +138,7 @@ export interface InventoryBands {
  * First-order propagation through x = (V/m − v_f)/(v_g − v_f) and m_liq = (m·v_g − V)/(v_g − v_f)
  * (the mass and volume balances): analytic partial derivatives in m and V, a central difference of the
  * saturation values in T. Limits are ± (same as the instruments'). Valid for a two-phase state:
- * temperatureK 273.16–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
+ * temperatureK 273.15–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
  */
 export function inventoryBands(args: {
   geometry?: VesselGeometry;
@@ -206,7 +206,7 @@ function clamp01(x: number): number {
  * dh/dV_liq: that is infinite at the bottom and top of a horizontal shell and at a head's apex,
  * while the level itself stays finite. V_liq is held to 0 … V of the drawn geometry (a level cannot
  * leave the vessel). The volume limit enters through the mass balance (how much of the contents is
- * liquid); the shape is taken as drawn. T is kept to 273.16 K … Tc − 1e-6 K and m above 0; a
+ * liquid); the shape is taken as drawn. T is kept to 273.15 K … Tc − 1e-6 K and m above 0; a
  * difference shortened by those limits is scaled back to the full limit.
  */
 function levelBand(
