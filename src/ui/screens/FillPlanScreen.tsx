@@ -1,4 +1,4 @@
-// Fill plan: how much water to charge for a target condition, and the largest safe charge.
+// Fill plan: how much water to charge for a target condition, and the largest charge that stays two-phase.
 import { useMemo } from 'preact/hooks';
 import { TEMPERATURE_UNITS, type TemperatureUnit } from '../../core/index.ts';
 import { VesselPicker } from '../components/VesselPicker.tsx';

@@ -61,6 +61,7 @@ export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs)
     { label: 'Absolute pressure', value: f.p(s.absolutePressurePa) },
     { label: 'Saturation pressure at the temperature', value: f.p(s.saturationPressurePa) },
     { label: 'Pressure minus saturation', value: f.pBand(s.pressureDeviationPa, s.pressureBand.plusMinus) },
+    { label: 'Band parts (±, root-sum-square)', value: bandParts(s.pressureBand.contributions, f) },
     { label: 'Saturation temperature at the pressure', value: f.t(s.saturationTemperatureK) },
     { label: 'Temperature minus saturation', value: f.dt(s.temperatureDeviationK, s.temperatureBandK.plusMinus) },
     { label: 'Atmosphere used', value: `${f.p(r.reading.atmospherePa)} (${r.reading.atmosphereSource === 'measured' ? 'barometer reading' : "vessel's site value"})` },
@@ -127,10 +128,20 @@ export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs)
     standing: split.standing.map((c) => inPreferredUnits(c, u)),
     chart: saturationChartData({
       temperatureK: r.reading.temperatureK, absolutePressurePa: s.absolutePressurePa,
-      temperatureTolK: tolK, pressureTolPa: Math.hypot(c.pressureGauge, c.atmosphere),
+      temperatureTolK: tolK, pressureTolPa: Math.hypot(c.pressureGauge, c.atmosphere, 'pressureGaugeIndicator' in c ? c.pressureGaugeIndicator : 0, 'pressureGaugeDrift' in c ? c.pressureGaugeDrift : 0),
     }, u),
     sketch,
   };
+}
+
+/** Each instrument's part of the saturation band (a part that is 0 left out; a result saved before indicator and drift parts existed has only the first three). */
+function bandParts(c: Partial<Record<string, number>>, f: ReturnType<typeof units>): string {
+  const names: [string, string][] = [
+    ['pressureGauge', 'gauge class'], ['pressureGaugeIndicator', 'gauge indicator'], ['pressureGaugeDrift', 'gauge drift'],
+    ['atmosphere', 'atmosphere'], ['temperatureSensor', 'thermometer element'], ['temperatureIndicator', 'thermometer indicator'],
+    ['temperatureDrift', 'thermometer drift'],
+  ];
+  return names.filter(([key]) => (c[key] ?? 0) > 0).map(([key, name]) => `${name} ${f.p(c[key]!)}`).join('; ') || 'none';
 }
 
 function hazardLines(r: StoredCheckResult, f: ReturnType<typeof units>): string[] {
