@@ -5,8 +5,12 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 
 const rootDir = import.meta.dirname;
+// The plant's CouchDB is normally reached at /db/ on the app's own origin (deploy/nginx-tankside.conf),
+// so connect-src stays 'self'. A plant that serves it elsewhere names that origin at build time:
+// TANKSIDE_SYNC_ORIGIN=https://couch.plant.example npm run build (added to connect-src only).
+const SYNC_ORIGIN = syncOrigin(process.env.TANKSIDE_SYNC_ORIGIN);
 const CONTENT_SECURITY_POLICY = [
-  "default-src 'self'", "script-src 'self'", "style-src 'self'", "img-src 'self' data:", "connect-src 'self'",
+  "default-src 'self'", "script-src 'self'", "style-src 'self'", "img-src 'self' data:", `connect-src 'self'${SYNC_ORIGIN ? ` ${SYNC_ORIGIN}` : ''}`,
   "manifest-src 'self'", "worker-src 'self'", "object-src 'none'", "base-uri 'self'", "form-action 'self'",
 ].join('; ');
 const packageVersion = (JSON.parse(readFileSync(resolve(rootDir, 'package.json'), 'utf8')) as { version: string }).version;
@@ -74,6 +78,21 @@ export default defineConfig({
     testTimeout: 60_000,
   },
 });
+
+/** The origin TANKSIDE_SYNC_ORIGIN names, or null when unset. @throws naming the setting and the form expected */
+function syncOrigin(value: string | undefined): string | null {
+  if (value === undefined || value === '') return null;
+  let url: URL | null = null;
+  try {
+    url = new URL(value);
+  } catch {
+    url = null;
+  }
+  if (!url || (url.protocol !== 'https:' && url.protocol !== 'http:') || url.origin !== value.replace(/\/$/, '')) {
+    throw new Error(`TANKSIDE_SYNC_ORIGIN: "${value}" is not an origin; expected scheme, host and optional port only, e.g. https://couch.plant.example`);
+  }
+  return url.origin;
+}
 
 function readManifest(): string {
   return readFileSync(resolve(rootDir, 'manifest.webmanifest'), 'utf8');

@@ -1,7 +1,7 @@
 // Generated benchmark and test data (invented, not demo data): a "tankside-backup" v1 file of
 // vessels and a hash-chained check log of one device, written with the store's own canonical JSON
 // and SHA-256 so it imports as a backup from another device would.
-import type { StoredCheckResult, VesselSpec } from '../src/core/index.ts';
+import type { CheckResult, StoredCheckResult, VesselSpec } from '../src/core/index.ts';
 import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type VesselRecord } from '../src/store/records.ts';
 import { tagKeyOf } from '../src/store/vessels.ts';
@@ -14,6 +14,11 @@ import { testVessel } from '../test/core/check/test-vessel.ts';
  */
 export function partialResult(figures: object): StoredCheckResult {
   return figures as StoredCheckResult;
+}
+
+/** The same for a check about to be saved (appendCheck takes today's CheckResult). */
+export function partialNewResult(figures: object): CheckResult {
+  return figures as CheckResult;
 }
 
 /** An invented vessel spec for generated data: the check-engine tests' vessel with its own tag and volume. */

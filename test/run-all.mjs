@@ -6,6 +6,7 @@ import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 
 const CHROMIUM = '/usr/bin/chromium';
 const DEBIAN_PYTHON = '/usr/bin/python3';
+const NGINX = '/usr/sbin/nginx';
 
 function run(label, cmd, args) {
   console.log(`\n== ${label}: ${cmd} ${args.join(' ')}`);
@@ -19,6 +20,7 @@ function run(label, cmd, args) {
 function missingSystemPackages() {
   const missing = [];
   if (!existsSync(CHROMIUM)) missing.push('chromium');
+  if (!existsSync(NGINX)) missing.push('nginx');
   const py = spawnSync(DEBIAN_PYTHON, ['-c', 'import iapws, scipy'], { stdio: 'ignore' });
   if (py.status !== 0) missing.push('python3-iapws', 'python3-scipy');
   return missing;
@@ -35,7 +37,8 @@ if (missing.length > 0) {
   console.error(
     `The tests need these Debian packages, which are missing: ${missing.join(', ')}.\n` +
       `Install them with:  sudo apt-get install -y ${missing.join(' ')}\n` +
-      `(chromium drives the browser tests; python3-iapws, run by ${DEBIAN_PYTHON}, is the reference library.)`,
+      `(chromium drives the browser tests; python3-iapws, run by ${DEBIAN_PYTHON}, is the reference library; nginx serves the\n` +
+      ` deploy/ site file in front of the CouchDB stand-in in test/sync/nginx-site.test.ts.)`,
   );
   process.exit(1);
 }

@@ -4,3 +4,8 @@ export type { InputProblem } from './errors.ts';
 export * from './units/index.ts';
 export * from './steam/index.ts';
 export * from './check/index.ts';
+export * from './statistics/index.ts';
+export * from './instrument/index.ts';
+export * from './cycle/index.ts';
+export * from './periodic-tests/index.ts';
+export type { Graded, GradedOutcome } from './graded-result.ts';

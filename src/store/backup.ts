@@ -195,7 +195,8 @@ const CHECK_KEYS = [
 const CHAIN_KEYS = ['deviceId', 'count', 'headSeq', 'headHash'] as const;
 const TOP_KEYS = ['format', 'formatVersion', 'exportedAt', 'vessels', 'checks', 'chains'] as const;
 
-function validateVessel(field: string, value: unknown): VesselRecord {
+/** One vessel record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateVessel(field: string, value: unknown): VesselRecord {
   const v = requireObject(field, value);
   requireKeys(field, v, VESSEL_KEYS);
   within(() => {
@@ -215,7 +216,8 @@ function validateVessel(field: string, value: unknown): VesselRecord {
   return v as unknown as VesselRecord;
 }
 
-function validateCheck(field: string, value: unknown): CheckRecord {
+/** One check record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateCheck(field: string, value: unknown): CheckRecord {
   const c = requireObject(field, value);
   requireKeys(field, c, CHECK_KEYS);
   within(() => {
@@ -582,15 +584,35 @@ export async function importBackup(text: string, options: LongWorkOptions = {}):
       options.onProgress?.(done, total);
     },
   });
+  const report = await mergeRecords(doc, texts, hashes, { ...options, progressBase: doc.checks.length, progressTotal: total });
+  options.onProgress?.(total, total);
+  return report;
+}
+
+/**
+ * The merge of importBackup for a validated document whose checks' canonical texts and content
+ * hashes are given (index for index): plans against the store's current state, then writes in
+ * one strict transaction, planning again if another tab took a seq meanwhile. Also the merge of
+ * records pulled from the plant server (sync-log.ts), so both apply the same checks.
+ * @throws StoreError('cancelled' | 'quota-exceeded' | 'write-failed') with nothing written
+ */
+export async function mergeRecords(
+  doc: BackupDocument,
+  texts: string[],
+  hashes: string[],
+  options: LongWorkOptions & { progressBase?: number; progressTotal?: number } = {},
+): Promise<ImportReport> {
+  const db = await getDb();
+  const base = options.progressBase ?? 0;
+  const total = options.progressTotal ?? doc.checks.length + doc.vessels.length;
   for (let attempt = 0; ; attempt += 1) {
     throwIfAborted(options.signal);
     const plan = await planMerge(db, doc, texts, hashes);
     throwIfAborted(options.signal);
     try {
-      // Done so far: every check hashed, plus every record the plan does not write.
+      // Done so far: what came before, plus every record the plan does not write.
       const skipped = doc.vessels.length - plan.vesselWrites.length + doc.checks.length - plan.checkAdds.length;
-      await writePlan(db, plan, options, doc.checks.length + skipped, total);
-      options.onProgress?.(total, total);
+      await writePlan(db, plan, options, base + skipped, total);
       return plan.report;
     } catch (error) {
       // Another tab saved a check with a seq the plan gave out: plan again from the new state.

@@ -1,10 +1,35 @@
-// The store's second public surface: the long jobs a supervisor runs — backup export and
-// import-and-merge, CSV export, chain verification over the stored log. The app loads it on demand
-// (the Review screen and the Settings download), so a technician's phone does not parse the backup
-// validator at start. Same rules as src/store/index.ts: the rest of the app never sees IndexedDB.
+// The store's second public surface: the long jobs — backup export and import-and-merge, CSV
+// export, chain verification over the stored log, and what plant sync (src/sync) needs of the
+// store (sync-log.ts). The app loads it on demand (the Review screen, the Settings download, the
+// sync client), so a technician's phone does not parse the backup validator at start. Same rules
+// as src/store/index.ts: the rest of the app never sees IndexedDB.
 export { verifyStoredChains } from './verify.ts';
 export { exportBackup, exportBackupParts, importBackup, parseBackup, BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS } from './backup.ts';
 export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './backup.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
 export { tallyChecks } from './tally.ts';
 export type { CheckTally } from './tally.ts';
+export {
+  ownChainHead,
+  ownRecords,
+  mergePulledRecords,
+  linksAround,
+  getSyncState,
+  updateSyncState,
+  applyVesselVersions,
+  vesselEditsToPublish,
+  recordPublished,
+} from './sync-log.ts';
+export type {
+  LastSync,
+  LinkProblem,
+  OwnRecord,
+  PlantConflict,
+  PlantReport,
+  PulledRecord,
+  PulledVersion,
+  PullMergeReport,
+  SyncState,
+  VesselEdit,
+  VesselVersion,
+} from './sync-log.ts';

@@ -1,0 +1,99 @@
+// The documents Tankside keeps on the plant server (deploy/README.md has the whole layout), and
+// the checks a receiving device makes on each envelope before the store checks the record itself.
+//
+// tankside-checks: one document per record of a device's chain,
+//   _id "<deviceId>:<seq, 10 digits>", { type, deviceId, seq, id, hash, text }, text the record's
+//   canonical JSON exactly as stored and hashed (never re-serialised). `type` is the record's kind
+//   ("check" today; later kinds of record carry a `kind` member and pass the same rules). Seq 0,
+//   "<deviceId>:0000000000", is reserved for the device's public key record (type "device-key").
+// tankside-plant: one document per version of a vessel definition and author,
+//   _id "vessel:<vesselId>:<version, 6 digits>:<author>", { type: "vessel", vesselId, version, author, text }.
+import type { OwnRecord, VesselVersion } from '../store/transfer.ts';
+
+export const CHECKS_DB = 'tankside-checks';
+export const PLANT_DB = 'tankside-plant';
+
+/** A record of a device's chain as the server holds it. */
+export interface RecordDoc {
+  _id: string;
+  _rev?: string;
+  type: string;
+  deviceId: string;
+  seq: number;
+  id?: string;
+  hash?: string;
+  text: string;
+}
+
+/** A vessel version as the server holds it. */
+export interface VesselDoc {
+  _id: string;
+  _rev?: string;
+  type: 'vessel';
+  vesselId: string;
+  version: number;
+  author: string;
+  text: string;
+}
+
+export function recordDocId(deviceId: string, seq: number): string {
+  return `${deviceId}:${String(seq).padStart(10, '0')}`;
+}
+
+export function vesselDocId(vesselId: string, version: number, author: string): string {
+  return `vessel:${vesselId}:${String(version).padStart(6, '0')}:${author}`;
+}
+
+/** The document for one of this device's records. */
+export function recordDoc(deviceId: string, r: OwnRecord): RecordDoc {
+  return { _id: recordDocId(deviceId, r.seq), type: 'check', deviceId, seq: r.seq, id: r.id, hash: r.hash, text: r.text };
+}
+
+/** The document for this device's public key record (seq 0), written once at enrolment. */
+export function deviceKeyDoc(deviceId: string, text: string): RecordDoc {
+  return { _id: recordDocId(deviceId, 0), type: 'device-key', deviceId, seq: 0, text };
+}
+
+export function vesselDoc(entry: VesselVersion, text: string): VesselDoc {
+  return { _id: vesselDocId(entry.vesselId, entry.version, entry.author), type: 'vessel', vesselId: entry.vesselId, version: entry.version, author: entry.author, text };
+}
+
+/**
+ * Why a pulled record document cannot be taken (null when its envelope is sound): the server's
+ * rules should have refused it, so one that gets here was written past them (by an administrator,
+ * or by a server without the rules) and is reported, not stored.
+ */
+export function envelopeProblem(doc: RecordDoc): string | null {
+  if (typeof doc.text !== 'string') return 'no text';
+  if (typeof doc.deviceId !== 'string' || !Number.isSafeInteger(doc.seq)) return 'no deviceId or seq';
+  if (doc._id !== recordDocId(doc.deviceId, doc.seq)) return `_id is not ${recordDocId(doc.deviceId, doc.seq)}`;
+  let record: Record<string, unknown>;
+  try {
+    record = JSON.parse(doc.text) as Record<string, unknown>;
+  } catch {
+    return 'text is not JSON';
+  }
+  if (typeof record !== 'object' || record === null) return 'text is not a JSON object';
+  if (record['deviceId'] !== doc.deviceId || record['seq'] !== doc.seq) return 'deviceId or seq differ from the text';
+  if (doc.seq === 0) return doc.type === 'device-key' ? null : 'seq 0 is not a device-key record';
+  if (record['id'] !== doc.id || record['hash'] !== doc.hash) return 'id or hash differ from the text';
+  const kind = record['kind'] === undefined ? 'check' : record['kind'];
+  if (kind !== doc.type) return `type ${doc.type} differs from the record's kind ${String(kind)}`;
+  return null;
+}
+
+/** As envelopeProblem, for a vessel version. */
+export function vesselEnvelopeProblem(doc: VesselDoc): string | null {
+  if (typeof doc.text !== 'string') return 'no text';
+  if (doc._id !== vesselDocId(doc.vesselId, doc.version, doc.author)) return `_id is not ${vesselDocId(doc.vesselId, doc.version, doc.author)}`;
+  let entry: Record<string, unknown>;
+  try {
+    entry = JSON.parse(doc.text) as Record<string, unknown>;
+  } catch {
+    return 'text is not JSON';
+  }
+  if (entry?.['vesselId'] !== doc.vesselId || entry['version'] !== doc.version || entry['author'] !== doc.author) {
+    return 'vesselId, version or author differ from the text';
+  }
+  return null;
+}

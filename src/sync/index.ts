@@ -1,0 +1,176 @@
+// Plant-wide sync with Apache CouchDB: the one entry of src/sync, loaded on demand by the app
+// (like the store's long jobs). Talks to CouchDB and to the store's public surfaces, nothing else.
+// README.md beside this file has the design and the words.
+import { getSyncState, updateSyncState, type LastSync, type SyncState } from '../store/transfer.ts';
+import { formatIsoWithOffset } from '../store/index.ts';
+import { Couch, DEFAULT_RETRY, type FetchLike, type RetryPolicy } from './couch.ts';
+import { SyncError } from './errors.ts';
+import { publishVesselEdits, type PublishResult } from './plant.ts';
+import { pullChecks, pullPlant, refusedSummary, type ChecksPullResult, type PullProgress } from './pull.ts';
+import { pushOwnChain, type PushProgress, type PushResult } from './push.ts';
+
+export { SyncError } from './errors.ts';
+export type { SyncErrorKind } from './errors.ts';
+export { DEFAULT_RETRY } from './couch.ts';
+export type { FetchLike, RetryPolicy } from './couch.ts';
+export { CHECKS_DB, PLANT_DB, recordDocId, vesselDocId } from './documents.ts';
+export type { PushResult } from './push.ts';
+export type { ChecksPullResult } from './pull.ts';
+export type { PublishResult } from './plant.ts';
+
+/** Which part of a sync is running. */
+export type SyncStep = 'sign-in' | 'push' | 'publish' | 'pull-plant' | 'pull-checks';
+
+export interface SyncProgress {
+  step: SyncStep;
+  /** Records done in this step. */
+  done: number;
+  /** Records in this step, when known. */
+  total: number | null;
+}
+
+export interface SyncOptions {
+  /** The platform's fetch (the browser's, or Node's in tests). */
+  fetch: FetchLike;
+  signal?: AbortSignal;
+  onProgress?: (p: SyncProgress) => void;
+  retry?: RetryPolicy;
+  /** The person's name for vessel versions a supervisor publishes. */
+  authorName?: string;
+  /**
+   * This device's public key record (canonical JSON), to be written once at seq 0 before its
+   * chain. The hook for per-device signing: pass it at enrolment once the store signs chains.
+   */
+  deviceKeyText?: string | null;
+  /** Changes per pull request (default PULL_BATCH, 2,000). */
+  pullBatch?: number;
+}
+
+/** What one sync did. */
+export interface SyncReport {
+  push: PushResult;
+  /** A supervisor's vessel edits sent as new versions; null on a technician's device. */
+  publish: PublishResult | null;
+  plant: Awaited<ReturnType<typeof pullPlant>>;
+  /** A supervisor's pull of every device's records; null on a technician's device. */
+  checks: ChecksPullResult | null;
+  /** Plain words for the status line. */
+  message: string;
+}
+
+/** The enrolment an administrator gives a device (deploy/couch-account.mjs prints it). */
+export interface Enrolment {
+  server: string;
+  account: string;
+  password: string;
+  role: 'technician' | 'supervisor';
+}
+
+/**
+ * Saves the server, account and role this device syncs with (checked field by field; nothing is
+ * saved when one is wrong). The account must be this device's id: the server's rules accept a
+ * device's records only under its own name.
+ * @throws StoreError('invalid-record') naming the field
+ */
+export async function enrol(enrolment: Enrolment): Promise<SyncState> {
+  return updateSyncState({ server: enrolment.server, account: enrolment.account, password: enrolment.password, role: enrolment.role });
+}
+
+/**
+ * One sync: sign in, push this device's new records, (supervisor) publish vessel edits, pull the
+ * plant inventory, (supervisor) pull every device's records. Saves the outcome as lastSync.
+ * @throws SyncError with a plain-worded message (kind: offline, credentials, refused,
+ *   chain-differs, server, cancelled, not-enrolled); StoreError from a local write
+ */
+export async function syncNow(options: SyncOptions): Promise<SyncReport> {
+  const state = await getSyncState();
+  if (!state.server || !state.account || !state.password || !state.role) {
+    throw new SyncError('not-enrolled', 'This device is not enrolled for plant sync yet: enter the server, account and password the administrator gave.');
+  }
+  const couch = new Couch({
+    server: state.server,
+    account: state.account,
+    password: state.password,
+    fetch: options.fetch,
+    retry: options.retry ?? DEFAULT_RETRY,
+    signal: options.signal,
+  });
+  const progress = (step: SyncStep) => (p: PushProgress | PullProgress) =>
+    options.onProgress?.({ step, done: p.done, total: 'total' in p ? p.total : p.pending === null ? null : p.done + p.pending });
+  const supervisor = state.role === 'supervisor';
+  let pushed = 0;
+  let pulled = 0;
+  try {
+    options.onProgress?.({ step: 'sign-in', done: 0, total: null });
+    await couch.signIn();
+    const push = await pushOwnChain(couch, { signal: options.signal, onProgress: progress('push'), deviceKeyText: options.deviceKeyText });
+    pushed = push.pushed;
+    const publish = supervisor ? await publishVesselEdits(couch, state.account, options.authorName ?? '') : null;
+    const plant = await pullPlant(couch, { signal: options.signal, onProgress: progress('pull-plant') });
+    const checks = supervisor ? await pullChecks(couch, { signal: options.signal, onProgress: progress('pull-checks'), batch: options.pullBatch }) : null;
+    pulled = checks?.added.length ?? 0;
+    const report: SyncReport = { push, publish, plant, checks, message: summary(push, plant, checks) };
+    await saveOutcome({ outcome: 'ok', pushed, pulled, message: report.message });
+    return report;
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const outcome = error instanceof SyncError && error.kind === 'cancelled' ? 'cancelled' : 'failed';
+    await saveOutcome({ outcome, pushed, pulled, message }).catch(() => {});
+    throw error;
+  }
+}
+
+function summary(push: PushResult, plant: SyncReport['plant'], checks: ChecksPullResult | null): string {
+  const parts = [
+    push.localHead === 0
+      ? 'No checks saved on this device yet'
+      : `${push.pushed} check${push.pushed === 1 ? '' : 's'} sent; all ${push.localHead} of this device's are on the server`,
+  ];
+  if (plant.applied.length > 0) parts.push(`${plant.applied.length} vessel definition${plant.applied.length === 1 ? '' : 's'} updated`);
+  if (plant.conflicts.length > 0) parts.push(`${plant.conflicts.length} vessel definition${plant.conflicts.length === 1 ? '' : 's'} need a supervisor (two edits of one version, or an edit here)`);
+  if (checks) {
+    parts.push(`${checks.added.length} check${checks.added.length === 1 ? '' : 's'} received`);
+    if (checks.gaps.length > 0) parts.push(`${checks.gaps.length} gap${checks.gaps.length === 1 ? '' : 's'} in other devices' chains`);
+  }
+  const refused = refusedSummary([...plant.refused, ...(checks?.refused ?? [])]);
+  if (refused) parts.push(refused);
+  return `${parts.join('; ')}.`;
+}
+
+async function saveOutcome(last: Omit<LastSync, 'at'>): Promise<void> {
+  await updateSyncState({ lastSync: { at: formatIsoWithOffset(new Date()), ...last } });
+}
+
+/**
+ * Runs syncs one at a time: a request while one runs asks for one more run after it (saves made
+ * during a push go up in the next), never two at once. For the app's triggers: launch, `online`,
+ * and each save while online.
+ */
+export class SyncRunner {
+  private running: Promise<void> | null = null;
+  private again = false;
+
+  constructor(private readonly run: () => Promise<unknown>, private readonly onError: (error: unknown) => void = () => {}) {}
+
+  /** Asks for a sync; resolves when no run is pending any more. */
+  request(): Promise<void> {
+    if (this.running) {
+      this.again = true;
+      return this.running;
+    }
+    const loop = async () => {
+      do {
+        this.again = false;
+        try {
+          await this.run();
+        } catch (error) {
+          this.onError(error);
+        }
+      } while (this.again);
+    };
+    this.running = loop().finally(() => {
+      this.running = null;
+    });
+    return this.running;
+  }
+}
