@@ -112,7 +112,9 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
     atmosphere: atmosphereCheck(vessel, r),
   };
   const { findings, standing, cautions } = sortedCautions(raiseCheckCautions(vessel, figures));
-  return requireFiniteData({ ...figures, findings, standing, outcome: outcomeOf(findings), cautions });
+  // `cautions` holds the very objects of `findings` and `standing`, so it is not walked again.
+  const checked = requireFiniteData({ ...figures, findings, standing });
+  return { ...checked, outcome: outcomeOf(findings), cautions };
 }
 
 function atmosphereCheck(vessel: VesselSpec, r: ResolvedReading): AtmosphereCheck {

@@ -47,20 +47,36 @@ function bisect(g: (T: number) => number, lo: number, hi: number, scaleM3PerKg: 
   return bisectionResult(g, lo, hi, 60, -Infinity, noise, 1e-12);
 }
 
+/**
+ * v_f and v_g at the fixed temperatures the envelope compares against (623.15 K, Tc, the density
+ * maximum, the triple point), each solved once: the same doubles every time, and the region 3
+ * solve at Tc is the dearest evaluation of a check.
+ */
+const fixedVolumes: { phase: 'liquid' | 'vapor'; T: number; v: number }[] = [];
+function fixedVolume(phase: 'liquid' | 'vapor', T: number): number {
+  for (const f of fixedVolumes) if (f.T === T && f.phase === phase) return f.v;
+  const v = phase === 'liquid' ? saturatedLiquidVolume(T) : saturatedVaporVolume(T);
+  fixedVolumes.push({ phase, T, v });
+  return v;
+}
+
 /** Liquid-full temperature for mean specific volume v, K, or null if the fill never goes liquid-full. v in m³/kg, > 0. */
 export function liquidFullTemperatureK(v: number): number | null {
   // v_f rises from 277.14 K to Tc, so a v below v_f(623.15 K) is below v_c: the region 3 solve at
   // Tc (and its table of starting values) is needed only for fills near the critical volume.
-  if (v >= saturatedLiquidVolume(T_13_K) && v >= saturatedLiquidVolume(IF97.Tc)) return null;
-  if (v <= saturatedLiquidVolume(T_MAX_DENSITY_K)) return T_MIN_K;
+  if (v >= fixedVolume('liquid', T_13_K) && v >= fixedVolume('liquid', IF97.Tc)) return null;
+  if (v <= fixedVolume('liquid', T_MAX_DENSITY_K)) return T_MIN_K;
   return bisect((T) => saturatedLiquidVolume(T) - v, T_MAX_DENSITY_K, IF97.Tc, v);
 }
 
 /** All-vapor temperature for mean specific volume v, K, or null if the fill never dries out. v in m³/kg, > 0. */
 export function allVaporTemperatureK(v: number): number | null {
-  // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c.
-  if (v <= saturatedVaporVolume(T_13_K) && v <= saturatedVaporVolume(IF97.Tc)) return null;
-  if (v >= saturatedVaporVolume(IF97.Tt)) return T_MIN_K;
+  // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c; and v_f rises to
+  // the same v_c, so a v below v_f(623.15 K) (every fill more than about half liquid when cold) is
+  // below it: only fills between those two need the region 3 solve at Tc.
+  if (v < fixedVolume('liquid', T_13_K)) return null;
+  if (v <= fixedVolume('vapor', T_13_K) && v <= fixedVolume('vapor', IF97.Tc)) return null;
+  if (v >= fixedVolume('vapor', IF97.Tt)) return T_MIN_K;
   return bisect((T) => v - saturatedVaporVolume(T), IF97.Tt, IF97.Tc, v);
 }
 

@@ -33,10 +33,12 @@ export interface Band<K extends string> {
 
 /** Combines independent ± contributions (all ≥ 0, same unit). */
 export function combineBand<K extends string>(contributions: Record<K, number>): Band<K> {
-  const parts = (Object.keys(contributions) as K[]).map((key) => Math.abs(contributions[key]));
+  const parts: number[] = [];
+  for (const key in contributions) parts.push(Math.abs(contributions[key]));
   // Math.hypot scales before squaring, so tiny or huge parts neither underflow nor overflow.
   const plusMinus = Math.hypot(...parts);
-  const worstCase = parts.reduce((a, b) => a + b, 0);
+  let worstCase = 0;
+  for (const p of parts) worstCase += p;
   return { method: COMBINATION_METHOD, plusMinus, worstCase, contributions };
 }
 
@@ -48,9 +50,10 @@ export function combineBand<K extends string>(contributions: Record<K, number>):
  */
 export function combineBandWithAdded<K extends string, A extends string>(first: Record<K, number>, added: Record<A, number>): Band<K | A> {
   const all = { ...first, ...added } as Record<K | A, number>;
-  const band = combineBand(all);
-  if (Object.values<number>(added).some((x) => x !== 0)) return band;
-  return { ...band, plusMinus: combineBand(first).plusMinus };
+  for (const key in added) if (added[key] !== 0) return combineBand(all);
+  const band = combineBand(first);
+  // The zeros add nothing to the worst case either.
+  return { method: band.method, plusMinus: band.plusMinus, worstCase: band.worstCase, contributions: all };
 }
 
 /**
