@@ -36,6 +36,50 @@ function fromResult(path: string): (r: CheckRecord) => Cell {
   return (r) => scalar(at(r.result, keys));
 }
 
+/**
+ * Decimals that show a ± band to one or two significant digits (two when it starts with 1 or 2):
+ * the screen's rule (src/ui/state/format.ts decimalsForBand; a test keeps the two equal), kept
+ * here because the store takes nothing but types from the rest of the app.
+ */
+function decimalsForBand(band: number): number {
+  const [mantissa, exponent] = Math.abs(band).toExponential(1).split('e') as [string, string];
+  return Math.min(12, Math.max(0, (Number(mantissa) < 3 ? 2 : 1) - 1 - Number(exponent)));
+}
+
+/** `value` × `scale` rounded to the place its band resolves, as the screen shows it; 4 significant digits without a band. */
+export function roundedAsShown(value: number | null, band: number | null, scale = 1, offset = 0): number | null {
+  if (value === null || !Number.isFinite(value)) return null;
+  const v = value * scale + offset;
+  if (band === null || !Number.isFinite(band) || band === 0) return Number(v.toPrecision(4));
+  return Number(v.toFixed(decimalsForBand(band * scale))) || 0;
+}
+
+function num(value: unknown): number | null {
+  return typeof value === 'number' && Number.isFinite(value) ? value : null;
+}
+
+/** A rounded column: the record's value at `path` (SI) shown as on screen, with the band found by `band`. */
+function shownFromResult(path: string, band: (r: CheckRecord) => number | null, scale = 1, offset = 0): (r: CheckRecord) => Cell {
+  const keys = path.split('.');
+  return (r) => roundedAsShown(num(at(r.result, keys)), band(r), scale, offset);
+}
+
+const bandAt = (path: string) => {
+  const keys = path.split('.');
+  return (r: CheckRecord) => num(at(r.result, keys));
+};
+/** The thermometer's ± limit, K: its contribution to the pressure band over the saturation slope. */
+const temperatureBandK = (r: CheckRecord): number | null => {
+  const c = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'temperatureSensor']));
+  const slope = num(at(r.result, ['saturation', 'saturationSlopePaPerK']));
+  return c !== null && slope !== null && slope > 0 ? c / slope : null;
+};
+/** The gauge and atmosphere limits on the absolute pressure, Pa. */
+const absoluteBandPa = (r: CheckRecord): number | null => {
+  const g = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'pressureGauge']));
+  const a = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'atmosphere']));
+  return g === null ? null : Math.hypot(g, a ?? 0);
+};
 function highestSignal(r: CheckRecord): Cell {
   return worstSignalOfMask(signalMaskOf(r.cautions));
 }
@@ -51,19 +95,26 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'verdict', cell: fromResult('saturation.verdict.verdict') },
   { header: 'highest signal word (standing note left out)', cell: highestSignal },
   { header: 'temperature (K)', cell: fromReading('temperatureK') },
+  { header: 'temperature (°C, as shown)', cell: (r) => roundedAsShown(num(at(r.reading, ['temperatureK'])), temperatureBandK(r), 1, -273.15) },
   { header: 'pressure as entered (Pa)', cell: fromReading('pressure.pressurePa') },
   { header: 'pressure reference', cell: fromReading('pressure.reference') },
   { header: 'absolute pressure (Pa)', cell: fromResult('reading.absolutePressurePa') },
+  { header: 'absolute pressure (kPa, as shown)', cell: shownFromResult('reading.absolutePressurePa', absoluteBandPa, 1e-3) },
   { header: 'atmosphere (Pa)', cell: fromResult('reading.atmospherePa') },
   { header: 'saturation pressure at temperature (Pa)', cell: fromResult('saturation.saturationPressurePa') },
+  { header: 'saturation pressure at temperature (kPa, as shown)', cell: shownFromResult('saturation.saturationPressurePa', bandAt('saturation.pressureBand.contributions.temperatureSensor'), 1e-3) },
   { header: 'pressure deviation from saturation (Pa)', cell: fromResult('saturation.pressureDeviationPa') },
+  { header: 'pressure deviation from saturation (kPa, as shown)', cell: shownFromResult('saturation.pressureDeviationPa', bandAt('saturation.pressureBand.plusMinus'), 1e-3) },
   { header: 'pressure band plus/minus (Pa)', cell: fromResult('saturation.pressureBand.plusMinus') },
   { header: 'net mass (kg)', cell: fromResult('reading.netMassKg') },
   { header: 'regime', cell: fromResult('inventory.regime') },
   { header: 'quality (kg/kg)', cell: fromResult('inventory.quality') },
+  { header: 'quality (%, as shown)', cell: shownFromResult('inventory.quality', bandAt('inventoryBands.quality.plusMinus'), 100) },
   { header: 'liquid mass (kg)', cell: fromResult('inventory.liquidMassKg') },
-  { header: 'vapor mass (kg)', cell: fromResult('inventory.vaporMassKg') },
+  { header: 'liquid mass (kg, as shown)', cell: shownFromResult('inventory.liquidMassKg', bandAt('inventoryBands.liquidMassKg.plusMinus')) },
+  { header: 'vapour mass (kg)', cell: fromResult('inventory.vaporMassKg') },
   { header: 'liquid level (m)', cell: fromResult('inventory.liquidLevel.levelM') },
+  { header: 'liquid level (m, as shown)', cell: shownFromResult('inventory.liquidLevel.levelM', bandAt('inventoryBands.liquidLevelM.plusMinus')) },
   {
     header: 'inputs as typed',
     cell: (r) =>
@@ -111,9 +162,15 @@ function csvRow(r: CheckRecord): string {
   return row;
 }
 
-/** CSV text (header + one row per record) for records already in hand. */
+/**
+ * The UTF-8 byte-order mark the file starts with: without it some spreadsheets read the file as
+ * their local 8-bit code page and garble "°" and "−" (common practice).
+ */
+export const CSV_BOM = '\uFEFF';
+
+/** CSV text (byte-order mark, header, one row per record) for records already in hand. */
 export function csvFromChecks(records: Iterable<CheckRecord>): string {
-  const rows = [CSV_COLUMNS.map((c) => csvCell(c.header)).join(',')];
+  const rows = [CSV_BOM + CSV_COLUMNS.map((c) => csvCell(c.header)).join(',')];
   for (const r of records) rows.push(csvRow(r));
   return rows.join('\r\n') + '\r\n';
 }

@@ -1,19 +1,27 @@
-// The app shell: title, the screen menu, the update prompt, and the current screen.
+// The app shell: the tab bar (five destinations within the thumb's reach at the bottom; the rest on
+// More), the update prompt, storage errors, the current screen's heading and the screen. Only the
+// shell and the Check screen are in the start-up chunk; every other screen loads on demand.
 import { useEffect, useRef } from 'preact/hooks';
-import { SCREENS, hrefFor, useRoute, type Route } from './router.ts';
+import { SCREENS, useRoute, type Route } from './router.ts';
 import { UpdateBanner } from './components/UpdateBanner.tsx';
-import { useSaveError } from './state/app-state.ts';
-import { VesselsScreen } from './screens/VesselsScreen.tsx';
+import { TabBar } from './components/TabBar.tsx';
+import { lazyScreen } from './components/LazyScreen.tsx';
+import { useAppReady, useSaveError } from './state/app-state.ts';
 import { CheckScreen } from './screens/CheckScreen.tsx';
-import { FillPlanScreen } from './screens/FillPlanScreen.tsx';
-import { LogScreen } from './screens/LogScreen.tsx';
-import { ConvertScreen } from './screens/ConvertScreen.tsx';
-import { SettingsScreen } from './screens/SettingsScreen.tsx';
-import { ReviewRoute } from './components/ReviewRoute.tsx';
+
+const VesselsScreen = lazyScreen('Vessels', () => import('./screens/VesselsScreen.tsx').then((m) => m.VesselsScreen));
+const FillPlanScreen = lazyScreen('Fill plan', () => import('./screens/FillPlanScreen.tsx').then((m) => m.FillPlanScreen));
+const LogScreen = lazyScreen('Log', () => import('./screens/LogScreen.tsx').then((m) => m.LogScreen));
+const ConvertScreen = lazyScreen('Convert', () => import('./screens/ConvertScreen.tsx').then((m) => m.ConvertScreen));
+const SettingsScreen = lazyScreen('Settings', () => import('./screens/SettingsScreen.tsx').then((m) => m.SettingsScreen));
+const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').then((m) => m.MoreScreen));
+const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
+const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 
 export function App() {
   const route = useRoute();
   const saveError = useSaveError();
+  const ready = useAppReady();
   const heading = useRef<HTMLHeadingElement>(null);
   const title = SCREENS.find((s) => s.id === route.screen)?.title ?? '';
   useEffect(() => {
@@ -23,21 +31,14 @@ export function App() {
   return (
     <>
       <UpdateBanner />
+      <TabBar current={route.screen} />
       <header class="top">
-        <div class="top-title">
-          <strong>Tankside</strong>
-          <small>closed-vessel steam checks</small>
-        </div>
-        <nav class="nav" aria-label="Screens">
-          {SCREENS.map((s) => (
-            <a key={s.id} href={hrefFor(s.id)} aria-current={s.id === route.screen ? 'page' : undefined}>{s.label}</a>
-          ))}
-        </nav>
-      </header>
-      <main>
-        {saveError ? <p class="panel field-error" role="alert">{saveError}</p> : null}
         <h1 ref={heading} tabIndex={-1}>{title}</h1>
-        <Screen route={route} />
+        <span class="top-brand">Tankside</span>
+      </header>
+      <main data-app-state={ready}>
+        {saveError ? <p class="panel field-error" role="alert">{saveError}</p> : null}
+        {ready === 'opening' ? <p class="panel" aria-busy="true">Opening this device's records…</p> : <Screen route={route} />}
       </main>
       <footer class="app-footer"><span class="app-version">Tankside {__APP_VERSION__}</span> · works offline · no data leaves this device</footer>
     </>
@@ -46,12 +47,14 @@ export function App() {
 
 function Screen({ route }: { route: Route }) {
   switch (route.screen) {
+    case 'check': return <CheckScreen param={route.param} />;
     case 'vessels': return <VesselsScreen param={route.param} />;
-    case 'check': return <CheckScreen />;
     case 'fill': return <FillPlanScreen />;
     case 'log': return <LogScreen param={route.param} />;
-    case 'review': return <ReviewRoute />;
+    case 'review': return <ReviewScreen />;
     case 'convert': return <ConvertScreen />;
     case 'settings': return <SettingsScreen />;
+    case 'more': return <MoreScreen />;
+    case 'labels': return <LabelsScreen />;
   }
 }

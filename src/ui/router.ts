@@ -1,20 +1,47 @@
 // Hash routes (#/check, #/log/<id>, ...): the service worker serves one shell for every path,
 // and a hash never leaves the page, so routes work offline and in an installed app alike.
+//
+// Every destination is one entry of SCREENS. At most five sit in the tab bar (the thumb's row);
+// every other one is listed on the More screen under its group, one tap further. A new
+// destination (a cycle log, an instrument register, a plant overview, a sync screen ...) is one
+// more entry with `place: 'more'` and a group: neither the bar nor the More screen changes.
 import { useEffect, useState } from 'preact/hooks';
 
-export type ScreenId = 'vessels' | 'check' | 'fill' | 'log' | 'review' | 'convert' | 'settings';
+export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'settings';
+
+/** Groups of the More screen, in the order it lists them. */
+export const MORE_GROUPS = ['Plan and review', 'Plant records', 'This device'] as const;
+export type MoreGroup = (typeof MORE_GROUPS)[number];
+
+export interface ScreenEntry {
+  id: ScreenId;
+  /** The tab or list label. */
+  label: string;
+  /** The heading and the document title. */
+  title: string;
+  place: 'bar' | 'more';
+  /** Where the More screen lists it (entries of the bar have none). */
+  group?: MoreGroup;
+  /** One line under its name on the More screen. */
+  summary?: string;
+}
+
+export const SCREENS: readonly ScreenEntry[] = [
+  { id: 'check', label: 'Check', title: 'New check', place: 'bar' },
+  { id: 'vessels', label: 'Vessels', title: 'Vessels', place: 'bar' },
+  { id: 'log', label: 'Log', title: 'Log', place: 'bar' },
+  { id: 'convert', label: 'Convert', title: 'Convert', place: 'bar' },
+  { id: 'more', label: 'More', title: 'More', place: 'bar' },
+  { id: 'fill', label: 'Fill plan', title: 'Fill plan', place: 'more', group: 'Plan and review', summary: 'How much water to charge for a target condition.' },
+  { id: 'review', label: 'Review', title: 'Review', place: 'more', group: 'Plan and review', summary: 'Filter, count, chart and print the log; export and import.' },
+  { id: 'labels', label: 'Vessel labels', title: 'Vessel labels', place: 'more', group: 'Plant records', summary: 'Print a sheet of QR labels that open each vessel\'s new check.' },
+  { id: 'settings', label: 'Settings', title: 'Settings', place: 'more', group: 'This device', summary: 'Your name, units, site atmosphere, storage and backup.' },
+];
+
+/** The tab bar's entries, in order (at most five: a test holds the bar to one row of them). */
+export const BAR_SCREENS: readonly ScreenEntry[] = SCREENS.filter((s) => s.place === 'bar');
 
 export interface Route { screen: ScreenId; param?: string }
-
-export const SCREENS: readonly { id: ScreenId; label: string; title: string }[] = [
-  { id: 'vessels', label: 'Vessels', title: 'Vessels' },
-  { id: 'check', label: 'Check', title: 'New check' },
-  { id: 'fill', label: 'Fill', title: 'Fill plan' },
-  { id: 'log', label: 'Log', title: 'Log' },
-  { id: 'review', label: 'Review', title: 'Review' },
-  { id: 'convert', label: 'Convert', title: 'Convert' },
-  { id: 'settings', label: 'Settings', title: 'Settings' },
-];
 
 export function parseRoute(hash: string): Route {
   const [screen, ...rest] = hash.replace(/^#\/?/, '').split('/');
@@ -30,6 +57,11 @@ export function hrefFor(screen: ScreenId, param?: string): string {
 
 export function navigate(screen: ScreenId, param?: string): void {
   window.location.hash = hrefFor(screen, param);
+}
+
+/** The tab that is current for a route: its own, or More for a screen listed there. */
+export function tabOf(screen: ScreenId): ScreenId {
+  return SCREENS.find((s) => s.id === screen)?.place === 'more' ? 'more' : screen;
 }
 
 /** The current route, following hash changes. */

@@ -7,7 +7,8 @@ import { extname, join, normalize, resolve } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 export const ROOT = resolve(import.meta.dirname, '../..');
-export const DIST = join(ROOT, 'dist');
+// TANKSIDE_DIST serves another build (for example an older one, to see a new test fail on it).
+export const DIST = process.env.TANKSIDE_DIST ?? join(ROOT, 'dist');
 export const SCREENS_DIR = join(ROOT, 'test-results/screens');
 
 const MIME: Record<string, string> = {
@@ -64,13 +65,20 @@ export function tempProfile(): { dir: string; remove(): void } {
   return { dir, remove: () => rmSync(dir, { recursive: true, force: true }) };
 }
 
-/** A phone-sized persistent Chromium profile (service workers and storage survive a relaunch). */
-export async function launch(profileDir: string, colorScheme: 'light' | 'dark' = 'light'): Promise<BrowserContext> {
+/** The phone sizes the field screens are held to: a common phone and a small one. */
+export const PHONE = { width: 390, height: 844 } as const;
+export const SMALL_PHONE = { width: 320, height: 700 } as const;
+
+/**
+ * A phone-sized persistent Chromium profile (service workers and storage survive a relaunch).
+ * `extraArgs`: more Chromium switches (the label test's fake camera).
+ */
+export async function launch(profileDir: string, colorScheme: 'light' | 'dark' = 'light', extraArgs: readonly string[] = []): Promise<BrowserContext> {
   return chromium.launchPersistentContext(profileDir, {
     executablePath: '/usr/bin/chromium',
     headless: true,
-    args: ['--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
-    viewport: { width: 360, height: 780 },
+    args: ['--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', ...extraArgs],
+    viewport: { width: PHONE.width, height: PHONE.height },
     deviceScaleFactor: 1,
     colorScheme,
     locale: 'en-GB',
@@ -101,16 +109,22 @@ export async function axeViolations(page: Page): Promise<{ id: string; help: str
   return violations.map((v) => ({ id: v.id, help: v.help, targets: v.nodes.map((n) => JSON.stringify(n.target)).join(' ') }));
 }
 
-/** A full-page screenshot; with TANKSIDE_SLICES=1 also phone-screen-high slices for close reading. */
+/**
+ * A screenshot of what the phone shows (`name.png`, the viewport as the person sees it, the tab
+ * bar in its place) and of the whole page (`name-full.png`); with TANKSIDE_SLICES=1 also
+ * screen-high slices of the whole page for close reading.
+ */
 export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENS_DIR, { recursive: true });
-  await page.screenshot({ path: join(SCREENS_DIR, `${name}.png`), fullPage: true });
+  await page.screenshot({ path: join(SCREENS_DIR, `${name}.png`) });
+  await page.screenshot({ path: join(SCREENS_DIR, `${name}-full.png`), fullPage: true });
   if (!process.env.TANKSIDE_SLICES) return;
   const dir = join(SCREENS_DIR, 'slices');
   mkdirSync(dir, { recursive: true });
   const { width, height } = await page.evaluate(() => ({ width: document.documentElement.clientWidth, height: document.documentElement.scrollHeight }));
-  for (let y = 0, i = 1; y < height; y += 780, i++) {
-    await page.screenshot({ path: join(dir, `${name}-${i}.png`), fullPage: true, clip: { x: 0, y, width, height: Math.min(780, height - y) } });
+  const screen = await page.evaluate(() => window.innerHeight);
+  for (let y = 0, i = 1; y < height; y += screen, i++) {
+    await page.screenshot({ path: join(dir, `${name}-${i}.png`), fullPage: true, clip: { x: 0, y, width, height: Math.min(screen, height - y) } });
   }
 }
 
@@ -130,15 +144,20 @@ export async function pickVessel(page: Page, selector: string, tag: string): Pro
   await page.selectOption(selector, value);
 }
 
-/** Interactive elements smaller than 48 px in either direction (inline text links excepted). */
+/** Interactive elements smaller than 48 px tall or wide (a link inside a sentence: at least 48 px tall). */
 export async function smallTargets(page: Page): Promise<string[]> {
   return page.evaluate(() => {
     const out: string[] = [];
-    for (const el of document.querySelectorAll<HTMLElement>('button, select, input, textarea, a.button, nav a, .switch label, label.row')) {
+    for (const el of document.querySelectorAll<HTMLElement>('button, select, input, textarea, a.button, nav a, .switch label, label.row, summary')) {
       if (el instanceof HTMLInputElement && (el.type === 'radio' || el.type === 'checkbox')) continue;
       const r = el.getBoundingClientRect();
       if (r.width === 0 && r.height === 0) continue;
       if (r.height < 47.5 || r.width < 47.5) out.push(`${el.tagName.toLowerCase()}#${el.id || el.textContent?.trim().slice(0, 20)} ${Math.round(r.width)}x${Math.round(r.height)}`);
+    }
+    for (const el of document.querySelectorAll<HTMLElement>('main a:not(.button)')) {
+      const r = el.getBoundingClientRect();
+      if (r.width === 0 && r.height === 0) continue;
+      if (r.height < 47.5) out.push(`link "${el.textContent?.trim().slice(0, 20)}" ${Math.round(r.width)}x${Math.round(r.height)}`);
     }
     return out;
   });

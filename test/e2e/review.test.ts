@@ -88,7 +88,7 @@ describe('review across two profiles', () => {
     expect(await page.textContent('[data-chain="ok"]')).toContain('40 records');
 
     // Keyboard only: Tab reaches every control of the screen, in reading order.
-    await page.focus('main h1');
+    await page.focus('header h1');
     const reached: string[] = [];
     for (let i = 0; i < 40; i += 1) {
       await page.keyboard.press('Tab');

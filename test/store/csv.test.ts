@@ -4,7 +4,8 @@ import fc from 'fast-check';
 import { SPEC, sampleCheck, useFreshDatabase, loose } from './fixtures.ts';
 import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
 import { exportCsv } from '../../src/store/transfer.ts';
-import { csvCell, csvFromChecks, CSV_COLUMNS } from '../../src/store/csv.ts';
+import { csvCell, csvFromChecks, CSV_BOM, CSV_COLUMNS, roundedAsShown } from '../../src/store/csv.ts';
+import { formatToBand, setDecimalSeparator } from '../../src/ui/state/format.ts';
 import { editStored } from './log-access.ts';
 
 useFreshDatabase();
@@ -107,7 +108,7 @@ describe('CSV export', () => {
     const controller = new AbortController();
     controller.abort();
     await expect(exportCsv({ signal: controller.signal })).rejects.toMatchObject({ code: 'cancelled' });
-    expect(csvFromChecks([])).toBe(CSV_COLUMNS.map((c) => csvCell(c.header)).join(',') + '\r\n');
+    expect(csvFromChecks([])).toBe(CSV_BOM + CSV_COLUMNS.map((c) => csvCell(c.header)).join(',') + '\r\n');
   });
 });
 
@@ -147,3 +148,42 @@ describe('CSV of a hand-edited store', () => {
     expect(parse(await exportCsv()).data.map((r) => r['check id'])).toEqual(saved.filter((_, i) => i !== 1).map((r) => r.id));
   });
 });
+
+describe('the CSV\'s rounded columns', () => {
+  it('round each figure exactly as the screen does (the store keeps its own copy of the rule)', () => {
+    setDecimalSeparator('.');
+    fc.assert(fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: 1e-6, max: 1e5, noNaN: true }), (v, band) => {
+      expect(roundedAsShown(v, band)).toBe(Number(formatToBand(v, band).replace('\u2212', '-')));
+    }));
+  });
+
+  it('a spreadsheet-grade parser (papaparse) reads the degree sign in the header and the numbers back', () => {
+    const record = {
+      id: 'c1', vesselId: 'v1', deviceId: 'd1', seq: 1, time: '2026-12-01T10:00:00+00:00', timeMs: 0, technician: 'R. Okafor', note: 'invented test data',
+      corrects: null, reason: null, appVersion: '0', formulationId: 'IAPWS-IF97', hash: 'h', prevHash: 'p',
+      vessel: { tag: 'FT-204', description: '', spec: {} }, inputs: {},
+      reading: { temperatureK: 396.54999999999995, pressure: { reference: 'gauge', pressurePa: 120_000 } },
+      result: {
+        reading: { absolutePressurePa: 221_325.000000001, atmospherePa: 101_325, netMassKg: 500 },
+        saturation: {
+          saturationPressurePa: 219_004.123, pressureDeviationPa: 2_320.877, saturationSlopePaPerK: 5_000,
+          pressureBand: { plusMinus: 4_100, contributions: { pressureGauge: 4_000, atmosphere: 0, temperatureSensor: 900 } },
+        },
+        inventory: { regime: 'two-phase', quality: 0.0123456, liquidMassKg: 493.8271, vaporMassKg: 6.1729 },
+        inventoryBands: { quality: { plusMinus: 0.00123 }, liquidMassKg: { plusMinus: 2.4 } },
+      },
+      cautions: [],
+    } as unknown as CheckRecord;
+    const text = csvFromChecks([record]);
+    const row = Papa.parse<Record<string, unknown>>(text, { header: true, dynamicTyping: true, skipEmptyLines: true }).data[0]!;
+    // 396.55 K − 273.15 = 123.4 °C; the thermometer's ±0.18 K (900 Pa over 5000 Pa/K) is shown to hundredths, 123.40.
+    expect(row['temperature (°C, as shown)']).toBe(123.4);
+    expect(row['temperature (K)']).toBe(396.54999999999995);
+    expect(row['absolute pressure (kPa, as shown)']).toBe(221); // ±4 kPa: whole kPa
+    expect(row['pressure deviation from saturation (kPa, as shown)']).toBe(2); // ±4.1 kPa
+    expect(row['quality (%, as shown)']).toBe(1.23);
+    expect(row['liquid mass (kg, as shown)']).toBe(493.8);
+    expect(row['vapour mass (kg)']).toBe(6.1729);
+  });
+});
+

@@ -23,12 +23,23 @@ describe('errorText restates an SI range in the unit the person typed in', () =>
     expect(errorText(e, { kind: 'length', unit: 'ft' })).toMatch(/^inner diameter: 0\.1\d* ft is outside the valid range, 0\.164042\d* to 65\.6168\d* ft\.$/);
   });
 
-  it('keeps the core words when the unit kinds do not match, the thrower wrote its own message, or it is not an InputError', () => {
+  it('keeps the core words when the unit kinds do not match or it is not an InputError', () => {
     const kelvin = new InputError('temperature', 'out-of-range', 700, { min: 273.16, max: 647.096, unit: 'K' });
     expect(errorText(kelvin, { kind: 'pressure', unit: 'psi' })).toBe(kelvin.message);
-    const custom = new InputError('pressure (gauge)', 'out-of-range', -2e5, { min: -101325, max: 2e7, unit: 'Pa' }, 'pressure (gauge): a vacuum beyond the atmosphere.');
-    expect(errorText(custom, { kind: 'pressure', unit: 'psi' })).toBe('pressure (gauge): a vacuum beyond the atmosphere.');
     expect(errorText(new Error('plain'), { kind: 'mass', unit: 'lb' })).toBe('plain');
+  });
+
+  it('restates a message the core wrote with SI figures too: a gauge vacuum beyond the atmosphere, in psi, quoting the typed text', () => {
+    const custom = new InputError('pressure (gauge)', 'out-of-range', -2e5, { min: -100713.343, max: 21962675, unit: 'Pa' }, 'pressure (gauge): a vacuum of 200000 Pa is beyond the atmosphere.');
+    // −100 713.343 Pa / 6894.757 Pa per psi = −14.6072 psi (NIST SP 811 (2008) B.8).
+    expect(errorText(custom, { kind: 'pressure', unit: 'psi' }, '-29')).toBe(
+      'pressure (gauge): "-29" psi is a vacuum beyond the atmosphere; the absolute pressure would be at or below zero. Valid range: \u221214.6072 to 3185.42 psi gauge.');
+  });
+
+  it('a gross weight at or below the tare, in lb (0.453 592 37 kg exactly, NIST SP 811 (2008) B.8)', () => {
+    const e = new InputError('gross weight', 'inconsistent', 300, { min: 453.59237, max: 1e7, unit: 'kg' }, 'gross weight: 300 kg is at or below the tare (453.59237 kg).');
+    expect(errorText(e, { kind: 'mass', unit: 'lb' }, '661,4')).toBe(
+      'gross weight: "661,4" lb is at or below the tare (1000 lb); the vessel would hold no water. Enter a weight above the tare.');
   });
 
   it('an engine refusal of a reading typed in °C comes back in °C', () => {

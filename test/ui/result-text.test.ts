@@ -33,7 +33,13 @@ describe('resultView', () => {
     expect(v.sketch?.orientation).toBe('vertical');
     expect(v.sketch!.low).toBeLessThanOrEqual(v.sketch!.level);
     expect(v.sketch!.high).toBeGreaterThanOrEqual(v.sketch!.level);
-    expect(v.hazards.some((h) => h.startsWith('Margin to MAWP'))).toBe(true);
+    expect(v.figures.some((h) => h.label === 'Margin to MAWP')).toBe(true);
+    expect(v.outcome).toBe('none');
+    expect(v.groups.map((g) => g.id)).toEqual(['saturation', 'contents', 'heating', 'hazards']);
+    // Each caution once across the findings and the groups' notes (the standing note is shown on its own).
+    const shown = [...v.findings, ...v.groups.flatMap((g) => g.notes)].map((c) => c.rule);
+    expect(new Set(shown).size).toBe(shown.length);
+    expect(shown.sort()).toEqual(v.cautions.map((c) => c.rule).sort());
     expect(v.cautions.some((c) => c.rule === 'standing-note')).toBe(true);
   });
 
@@ -92,11 +98,15 @@ describe('resultView: the liquid level and its band come from the engine', () =>
 });
 
 describe('formatWithBand', () => {
-  it('rounds the value to the band, the band to two significant digits', () => {
+  // Two significant digits in the band when it starts with 1 or 2, one otherwise: at most two is
+  // JCGM 100:2008 (GUM) 7.2.6 (from memory), the split at 3 is common practice.
+  it('rounds the value to the band, the band to one or two significant digits', () => {
     expect(formatWithBand(1.8058, 21)).toBe('2 ± 21');
     expect(formatWithBand(0.259, 0.0131)).toBe('0.259 ± 0.013');
-    expect(formatWithBand(790.04, 5.5)).toBe('790.0 ± 5.5');
+    expect(formatWithBand(790.04, 5.5)).toBe('790 ± 6');
+    expect(formatWithBand(790.04, 0.36)).toBe('790.0 ± 0.4');
     expect(formatWithBand(-0.136, 1.62)).toBe('\u22120.1 ± 1.6');
+    expect(formatWithBand(12.34, 0.96)).toBe('12.3 ± 1.0'); // 0.96 rounds up to 1.0, which starts with 1
   });
 });
 

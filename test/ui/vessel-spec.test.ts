@@ -21,10 +21,20 @@ describe('vessel form', () => {
     expect(r.spec.instruments.temperatureSensor).toEqual({ kind: 'iec-60751', sensorClass: 'B' });
   });
 
+  it('opens a stored spec in its own instrument units, and one saved without them in the person\'s', () => {
+    const r = specFromForm(filled);
+    if (!r.ok) throw new Error('spec');
+    expect(r.spec.readingUnits).toEqual({ pressure: 'kPa', temperature: 'degC', mass: 'kg' });
+    expect(formFromSpec(r.spec, UNIT_PRESETS.US).pressureUnit).toBe('kPa');
+    const { readingUnits: _none, ...older } = r.spec;
+    expect(formFromSpec(older, UNIT_PRESETS.US).pressureUnit).toBe('psi');
+  });
+
   it('shows a stored spec in US customary units and reads it back', () => {
     const r = specFromForm(filled);
     if (!r.ok) throw new Error('spec');
-    const us = formFromSpec(r.spec, UNIT_PRESETS.US);
+    const { readingUnits: _none, ...older } = r.spec;
+    const us = formFromSpec(older, UNIT_PRESETS.US);
     expect(Number(us.mawp)).toBeCloseTo(72.5189, 3); // 500 kPa / 6.894757 kPa per psi
     expect(Number(us.tare)).toBeCloseTo(1763.698, 2); // 800 kg / 0.45359237
     const back = specFromForm(us);
@@ -50,13 +60,14 @@ describe('vessel form', () => {
   });
 
   it('takes the diameter, straight length and elevation in the chosen length unit and stores metres (ft = 0.3048 m, in = 0.0254 m exactly: NIST SP 811 (2008) B.8)', () => {
-    const r = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6,5' });
+    const ft = { diameterUnit: 'ft', straightLengthUnit: 'ft', elevationUnit: 'ft' } as const;
+    const r = specFromForm({ ...filled, ...ft, diameterM: '4', straightLengthM: '6,5' });
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
     expect(r.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 4 * 0.3048, straightLengthM: 6.5 * 0.3048, head: { kind: 'semi-ellipsoidal-2-1' } });
-    const mm = specFromForm({ ...filled, lengthUnit: 'mm', diameterM: '1200', straightLengthM: '2000' });
+    const mm = specFromForm({ ...filled, diameterUnit: 'mm', straightLengthUnit: 'mm', diameterM: '1200', straightLengthM: '2000' });
     if (!mm.ok) throw new Error(JSON.stringify(mm.errors));
     expect(mm.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } });
-    const elevFt = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6', atmosphereMode: 'elevation', elevationM: '1000' });
+    const elevFt = specFromForm({ ...filled, ...ft, diameterM: '4', straightLengthM: '6', atmosphereMode: 'elevation', elevationM: '1000' });
     const elevM = specFromForm({ ...filled, atmosphereMode: 'elevation', elevationM: '304,8' });
     if (!elevFt.ok || !elevM.ok) throw new Error('elevation');
     expect(elevFt.spec.siteAtmospherePa).toBeCloseTo(elevM.spec.siteAtmospherePa, 9);
@@ -66,10 +77,10 @@ describe('vessel form', () => {
   });
 
   it('an elevation beyond the standard atmosphere formula is refused with its range in the unit typed (ft = 0.3048 m exactly, NIST SP 811 (2008) B.8)', () => {
-    const r = specFromForm({ ...filled, lengthUnit: 'ft', diameterM: '4', straightLengthM: '6', atmosphereMode: 'elevation', elevationM: '40000' });
+    const r = specFromForm({ ...filled, elevationUnit: 'ft', atmosphereMode: 'elevation', elevationM: '40000' });
     if (r.ok) throw new Error('expected a refusal');
     // Valid range −500 m … 11 000 m = −1640.42 ft … 36 089.2 ft.
-    expect(r.errors.elevationM).toMatch(/40000 ft is outside the valid range, \u22121640\.42 to 36089\.2 ft\.$/);
+    expect(r.errors.elevationM).toMatch(/"40000" ft is outside the valid range, \u22121640\.42 to 36089\.2 ft\.$/);
   });
 
   it('shows stored metres in the preferred length unit (US customary: ft) and reads them back', () => {

@@ -48,11 +48,11 @@ export function raiseCheckCautions(vessel: VesselSpec, result: CheckFigures): Ca
     const range = joined(hydraulicWords(h.band.lowAbsolutePa, atm), say` to `, hydraulicWords(h.band.highAbsolutePa, atm));
     if (inv.withinWeighingBand) {
       out.push(caution('liquid-full-within-band', joined(
-        say`By weight the vessel is liquid-full at ${celsius(T)}, but within the weight, volume and temperature limits it could still hold a little vapor space. `,
+        say`By weight the vessel is liquid-full at ${celsius(T)}, but within the weight, volume and temperature limits it could still hold a little vapour space. `,
         say`Treat it as liquid-full: this fill would be at `, range, say` (MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Stop heating and check the weight.`)));
     } else {
       out.push(caution('liquid-full-now', joined(
-        say`The vessel is liquid-full at ${celsius(T)}: no vapor space is left, and within the limits this fill would be at `, range,
+        say`The vessel is liquid-full at ${celsius(T)}: no vapour space is left, and within the limits this fill would be at `, range,
         say` (MAWP ${kilopascal(vessel.mawpGaugePa)} gauge). Pressure rises by several bar per kelvin of further heating and no longer follows saturation. Stop heating and check the weight.`)));
     }
   } else if (inv.regime === 'two-phase' && inv.liquidFullWithinBand) {
@@ -135,7 +135,7 @@ export function raiseCheckCautions(vessel: VesselSpec, result: CheckFigures): Ca
   } else if (v.verdict === 'pressure-below-saturation') {
     out.push(caution('pressure-below-saturation', joined(
       say`Pressure is ${kilopascal(-sat.pressureDeviationPa)} below saturation for ${celsius(T)}: suspect a gauge or thermometer fault, `,
-      say`a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapor' : ''}.`)));
+      say`a wrong atmospheric pressure, or a vessel not at equilibrium${v.superheatPossible ? '; with no liquid present it can be superheated vapour' : ''}.`)));
   } else {
     out.push(caution('saturation-check-limits', joined(
       say`Pressure and temperature agree with saturated steam within ±${kelvinDifference(sat.temperatureBandK.plusMinus, 2)} (root-sum-square of the instrument limits). `,
@@ -159,16 +159,16 @@ export function raiseCheckCautions(vessel: VesselSpec, result: CheckFigures): Ca
   if (inv.regime === 'superheated') {
     if (Math.abs(inv.differenceFromReadingPa) > inv.differenceBandPa) {
       out.push(caution('superheated-pressure-mismatch',
-        say`By weight there is no liquid: this mass of vapor would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
+        say`By weight there is no liquid: this mass of vapour would be at ${kilopascal(inv.absolutePressurePa)} absolute, not the ${kilopascal(r.absolutePressurePa)} read. Check the tare, the weight and the volume.`));
     }
   }
   if (inv.regime === 'two-phase') {
     const q = result.inventoryBands?.quality;
     if (q?.undetermined) {
-      const why = { 'near-critical-point': 'near the critical point, where liquid and vapor become alike', 'weight-tolerance-exceeds-contents': 'the weight tolerance is as large as the contents', 'band-spans-regime': 'the tolerances together span the whole two-phase range' }[q.undetermined.reason];
+      const why = { 'near-critical-point': 'near the critical point, where liquid and vapour become alike', 'weight-tolerance-exceeds-contents': 'the weight tolerance is as large as the contents', 'band-spans-regime': 'the tolerances together span the whole two-phase range' }[q.undetermined.reason];
       out.push(caution('quality-undetermined', `Within the tolerances the quality could be anywhere from 0 to 100 % (${why}): the weighing says little about the split of liquid and steam here.`));
     }
-    out.push(caution('bulk-quality-not-dryness', 'Quality here is the bulk vapor mass fraction of the vessel contents, not the dryness of supply steam (EN 285 dryness value).'));
+    out.push(caution('bulk-quality-not-dryness', 'Quality here is the bulk vapour mass fraction of the vessel contents, not the dryness of supply steam (EN 285 dryness value).'));
   }
 
   raiseStandingHazards(vessel, result, gaugeBandPa, out);

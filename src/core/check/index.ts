@@ -8,7 +8,7 @@ export type {
 export { findingsOfStoredResult, isCurrentResult } from './stored-result.ts';
 export type { CheckResultV1, StoredCheckResult } from './stored-result.ts';
 export { DEFAULT_RELIEF_SET_TOLERANCE_PERCENT, isSteamHeated, validateVessel, VESSEL_HEATINGS, VESSEL_LIMITS, VESSEL_SERVICES } from './vessel-spec.ts';
-export type { InstrumentAccuracy, TareTolerance, TemperatureSensorTolerance, VesselHeating, VesselService, VesselSpec } from './vessel-spec.ts';
+export type { InstrumentAccuracy, ReadingUnits, TareTolerance, TemperatureSensorTolerance, VesselHeating, VesselService, VesselSpec } from './vessel-spec.ts';
 export { resolveReading, READING_LIMITS } from './reading.ts';
 export type { Reading, ResolvedReading } from './reading.ts';
 export {

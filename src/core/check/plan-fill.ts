@@ -71,7 +71,7 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
       break;
     }
     case 'vapor-space-fraction': {
-      const phi = requireInRange('vapor-space fraction', requested.fraction, 0, 1, '1');
+      const phi = requireInRange('vapour-space fraction', requested.fraction, 0, 1, '1');
       target = { kind: 'vapor-space-fraction', fraction: phi + 0 };
       m = ((1 - phi) * V) / vf + (phi * V) / vg;
       mIdeal = ((1 - phi) * V) / vf + (phi * V) / vIdeal;
@@ -84,7 +84,7 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
       break;
     default:
       throw new InputError('fill target', 'empty', String((requested as { kind?: unknown } | undefined)?.kind ?? ''), undefined,
-        'fill target: give a quality, a vapor-space fraction, or dry saturated.');
+        'fill target: give a quality, a vapour-space fraction, or dry saturated.');
   }
   const x = vg > vf ? Math.min(1, Math.max(0, (V / m - vf) / (vg - vf))) : 1;
   const vaporMassKg = x * m;

@@ -3,6 +3,16 @@
 
 import { InputError, requireInRange } from '../errors.ts';
 import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
+import { isMassUnit, type MassUnit } from '../units/mass.ts';
+import { isPressureUnit, type PressureUnit } from '../units/pressure.ts';
+import { isTemperatureUnit, type TemperatureUnit } from '../units/temperature.ts';
+
+/** The units the vessel's own instruments show: its gauge's dial, its thermometer, its scale. */
+export interface ReadingUnits {
+  pressure: PressureUnit;
+  temperature: TemperatureUnit;
+  mass: MassUnit;
+}
 
 /** Temperature sensor tolerance: an IEC 60751 platinum RTD class, or a stated ± limit. */
 export type TemperatureSensorTolerance =
@@ -68,6 +78,11 @@ export interface VesselSpec {
   service?: VesselService;
   /** How the vessel is heated; absent: not stated. */
   heating?: VesselHeating;
+  /**
+   * The units its instruments read in, so a check starts in them; the engine computes in SI and
+   * does not use them. Absent on vessels saved before they existed.
+   */
+  readingUnits?: ReadingUnits;
 }
 
 /** Vessel services the hazards know (the brief's list of closed vessels). */
@@ -152,6 +167,11 @@ export function validateVessel(spec: VesselSpec): void {
   inRange('weight tolerance', ins.weightToleranceKg, L.weightToleranceKg);
   inRange('volume tolerance', ins.volumeTolerancePercent, L.volumeTolerancePercent);
   inRange('barometer tolerance', ins.barometerTolerancePa, L.barometerTolerancePa);
+  const u = spec.readingUnits;
+  if (u !== undefined && (typeof u !== 'object' || u === null || !isPressureUnit(u.pressure) || !isTemperatureUnit(u.temperature) || !isMassUnit(u.mass))) {
+    throw new InputError('instrument units', 'out-of-range', JSON.stringify(u), undefined,
+      'instrument units: the gauge, thermometer and scale units must each be one of the app\'s units.');
+  }
   // Fields added after the first release are optional, so vessels stored before them still validate.
   optionalInRange('pressure gauge indicator', ins.pressureGauge.indicatorPercentOfSpan, L.gaugeIndicatorPercent);
   optionalInRange('pressure gauge drift', ins.pressureGauge.driftPercentOfSpan, L.gaugeDriftPercent);

@@ -1,5 +1,5 @@
 // Site atmosphere: 1 standard atmosphere, a barometer reading, or the site elevation.
-import { LENGTH_UNITS, PRESSURE_UNITS, type LengthUnit, type PressureUnit } from '../../core/index.ts';
+import { LENGTH_UNITS, PRESSURE_UNITS, type LengthUnit, type PressureUnit } from '../../core/basics.ts';
 import { Choice } from './Choice.tsx';
 import { NumberField } from './NumberField.tsx';
 import { AtmosphereLine } from './AtmosphereLine.tsx';
@@ -26,7 +26,7 @@ export function AtmosphereSettings() {
   return (
     <section class="panel" aria-labelledby="set-atm">
       <h2 id="set-atm">Site atmosphere</h2>
-      <p class="hint">Used by Convert and as the starting value for new vessels (each vessel keeps its own). A barometer reading taken today also applies to every check until you change it.</p>
+      <p class="hint">The starting value for new vessels (each vessel keeps its own), and offered by Convert. A barometer reading taken today also applies to every check until you change it.</p>
       <Choice name="set-atm-mode" legend="Take atmospheric pressure from" value={a.mode} options={MODES} onChange={setMode} />
       {a.mode === 'barometer' ? (
         <NumberField id="set-baro" label="Barometer reading (absolute)" value={a.text}

@@ -10,6 +10,7 @@ import { viewOfRecord } from '../state/check-session.ts';
 import { useSettings } from '../state/app-state.ts';
 import { unitsInForce } from '../state/settings-model.ts';
 import { unitLabel } from '../state/unit-labels.ts';
+import { shortTime } from '../state/format.ts';
 import { DEMO_RESULT_NOTICE, isDemo } from '../state/demo-label.ts';
 
 const INPUT_NAMES: Record<string, string> = { temperature: 'Temperature', pressure: 'Pressure', grossWeight: 'Gross weight' };
@@ -29,7 +30,7 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
         <h2 id="rec-h">Check of {r.vessel.tag}{demo ? <> <span class="demo-tag">DEMO DATA</span></> : null}</h2>
         {demo ? <p class="demo-notice" role="note">{DEMO_RESULT_NOTICE}</p> : null}
         <Figures figures={[
-          { label: 'Taken', value: r.time },
+          { label: 'Taken', value: `${shortTime(r.time)} (${r.time})` },
           { label: 'Technician', value: r.technician },
           ...(r.note ? [{ label: 'Note', value: r.note }] : []),
           ...(r.corrects ? [{ label: 'Corrects', value: `${r.corrects} (${r.reason ?? ''})` }] : []),
@@ -37,7 +38,7 @@ export function CheckRecordView({ record: r }: { record: CheckRecord }) {
         <h3>Inputs as typed</h3>
         <Figures figures={inputs} />
       </section>
-      {view ? <ResultCard view={{ ...view, demo: view.demo || demo, cautions: r.cautions }} heading="Result as saved" /> : (
+      {view ? <ResultCard view={{ ...view, demo: view.demo || demo }} heading="Result as saved" /> : (
         <section class="panel" aria-labelledby="rec-old">
           <h2 id="rec-old">Result as saved</h2>
           <p>This record was saved by app version {r.appVersion}, whose result layout this version cannot show. Its cautions:</p>

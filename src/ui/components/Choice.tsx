@@ -1,4 +1,7 @@
-// A small radio group drawn as large side-by-side buttons (gauge / absolute, SI / US ...).
+// A small radio group drawn as large side-by-side buttons (gauge / absolute, SI / US ...), each a
+// full 48 px target with its radio at full size. Re-renders only when its own props change.
+import { pure } from './pure.ts';
+
 interface Props<T extends string> {
   name: string;
   legend: string;
@@ -7,7 +10,7 @@ interface Props<T extends string> {
   onChange: (value: T) => void;
 }
 
-export function Choice<T extends string>({ name, legend, value, options, onChange }: Props<T>) {
+function ChoiceView<T extends string>({ name, legend, value, options, onChange }: Props<T>) {
   return (
     <fieldset>
       <legend>{legend}</legend>
@@ -22,3 +25,5 @@ export function Choice<T extends string>({ name, legend, value, options, onChang
     </fieldset>
   );
 }
+
+export const Choice = pure(ChoiceView) as <T extends string>(props: Props<T>) => ReturnType<typeof ChoiceView>;

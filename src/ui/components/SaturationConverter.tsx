@@ -1,6 +1,6 @@
 // Temperature ↔ saturation pressure, both directions, in the preferred units.
 import { useState } from 'preact/hooks';
-import { PRESSURE_UNITS, TEMPERATURE_UNITS, type PressureUnit, type TemperatureUnit } from '../../core/index.ts';
+import { PRESSURE_UNITS, TEMPERATURE_UNITS, type PressureUnit, type TemperatureUnit } from '../../core/basics.ts';
 import { NumberField } from './NumberField.tsx';
 import { Choice } from './Choice.tsx';
 import { useSettings } from '../state/app-state.ts';

@@ -3,7 +3,7 @@ import { useState } from 'preact/hooks';
 import { TextField } from './TextField.tsx';
 import type { CheckDraft } from '../state/check-draft.ts';
 import type { Evaluation } from '../state/check-session.ts';
-import { saveCheck } from '../state/check-session.ts';
+import { loadEngine } from '../state/engine.ts';
 import type { VesselRecord } from '../state/repo.ts';
 import { storageMessage } from '../state/repo.ts';
 import { hrefFor } from '../router.ts';
@@ -13,7 +13,7 @@ import { updateSettings, useSettings } from '../state/app-state.ts';
 interface Props {
   draft: CheckDraft;
   onChange: (next: CheckDraft) => void;
-  evaluation: Evaluation;
+  evaluation: Evaluation | undefined;
   vessel: VesselRecord | undefined;
   onSaved: () => void;
 }
@@ -22,17 +22,17 @@ export function SaveCheckForm({ draft, onChange, evaluation, vessel, onSaved }: 
   const [status, setStatus] = useState<{ text: string; id?: string; error?: boolean }>({ text: '' });
   const [busy, setBusy] = useState(false);
   const settings = useSettings();
-  const ready = evaluation.kind === 'result' && vessel !== undefined;
+  const ready = evaluation?.kind === 'result' && vessel !== undefined;
   const save = async (ev: Event) => {
     ev.preventDefault();
-    if (evaluation.kind !== 'result' || !vessel) return;
+    if (evaluation?.kind !== 'result' || !vessel) return;
     if (draft.technician.trim() === '') {
       setStatus({ text: 'Not saved: technician: enter your name.', error: true });
       return;
     }
     setBusy(true);
     try {
-      const record = await saveCheck(draft, vessel, evaluation);
+      const record = await (await loadEngine()).saveCheck(draft, vessel, evaluation);
       onSaved();
       // The first name typed becomes the default for later checks.
       if (!settings.technician) void updateSettings({ technician: draft.technician.trim() });
@@ -49,7 +49,7 @@ export function SaveCheckForm({ draft, onChange, evaluation, vessel, onSaved }: 
       <TextField id="chk-tech" label="Technician" value={draft.technician} onInput={(technician) => onChange({ ...draft, technician })} />
       <TextField id="chk-note" label="Note (optional)" multiline value={draft.note} onInput={(note) => onChange({ ...draft, note })} />
       <button type="submit" class="primary" disabled={!ready || busy}>Save check</button>
-      <p aria-live="polite" class={status.error ? 'field-error' : ''}>
+      <p aria-live="polite" class={status.error ? 'field-error' : ''} data-save-state={status.id ? 'saved' : status.error ? 'failed' : busy ? 'saving' : 'idle'}>
         {status.text} {status.id ? <a href={hrefFor('log', status.id)}>Open the record</a> : null}
       </p>
     </form>

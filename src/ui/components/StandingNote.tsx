@@ -1,5 +1,5 @@
 // Shown with every result: the app informs, it does not decide. The wording is the core's.
-import { STANDING_NOTE } from '../../core/index.ts';
+import { STANDING_NOTE } from '../../core/basics.ts';
 
 export function StandingNote() {
   return <p class="standing-note"><span class="signal signal-NOTICE">NOTICE</span> {STANDING_NOTE.message}</p>;

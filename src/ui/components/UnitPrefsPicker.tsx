@@ -1,5 +1,5 @@
 // One unit picker per quantity, for "per quantity" preferred units.
-import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/basics.ts';
 import { updateSettings, useSettings } from '../state/app-state.ts';
 import { unitsInForce, type UnitPrefs } from '../state/settings-model.ts';
 

@@ -1,5 +1,6 @@
 // Add or edit one vessel; retire it (it keeps its history and drops out of new checks).
 import { useState } from 'preact/hooks';
+import { discardDraft, useDraft } from '../state/drafts.ts';
 import { VesselFields } from './VesselFields.tsx';
 import { VesselHistory } from './VesselHistory.tsx';
 import { navigate } from '../router.ts';
@@ -9,14 +10,17 @@ import { refreshVessels, useSettings } from '../state/app-state.ts';
 import { atmosphereDefaults, unitsInForce } from '../state/settings-model.ts';
 import { emptyVesselForm, type FormField, type VesselForm } from '../state/vessel-form.ts';
 import { formFromSpec, specFromForm } from '../state/vessel-spec.ts';
-import { isDemoVessel } from '../state/demo-plant.ts';
+import { isDemoVessel } from '../state/demo-label.ts';
 import { shortTime } from '../state/format.ts';
 
 export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) {
   const settings = useSettings();
   const prefs = unitsInForce(settings);
-  const [form, setForm] = useState<VesselForm>(() =>
-    vessel ? formFromSpec(vessel.spec, prefs) : emptyVesselForm(prefs, atmosphereDefaults(settings, prefs)));
+  // Kept as a draft like the check form: a reload, a closed tab or an update keeps what was typed.
+  const draftKey = `vessel:${vessel ? vessel.id : 'new'}`;
+  const draft = useDraft<VesselForm>(draftKey, vessel ? formFromSpec(vessel.spec, prefs) : emptyVesselForm(prefs, atmosphereDefaults(settings, prefs)));
+  const form = draft.value;
+  const setForm = draft.set;
   const [errors, setErrors] = useState<Partial<Record<FormField, string>>>({});
   const [status, setStatus] = useState('');
   const [confirmRetire, setConfirmRetire] = useState(false);
@@ -34,6 +38,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
     try {
       if (vessel) await repo.updateVessel(vessel.id, built.spec.tag, built.spec.description, built.spec);
       else await repo.addVessel(built.spec.tag, built.spec.description, built.spec);
+      await discardDraft(draftKey);
       await refreshVessels();
       navigate('vessels');
     } catch (e) {
@@ -55,15 +60,16 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
 
   return (
     <>
-    <form onSubmit={(ev) => void save(ev)} noValidate>
+    <form onSubmit={(ev) => void save(ev)} noValidate data-draft={draft.loaded ? 'loaded' : 'loading'}>
       <h2>{vessel ? `Vessel ${vessel.tag}` : 'New vessel'}</h2>
       {vessel && isDemoVessel(vessel) ? <p><span class="demo-tag">DEMO DATA</span> An invented vessel for trying the app.</p> : null}
       {vessel?.retired ? <p>Retired {vessel.retiredAt ? shortTime(vessel.retiredAt) : ''}. Its checks stay in the log.</p> : null}
-      <VesselFields form={form} set={set} errors={errors} />
+      <VesselFields form={form} set={set} errors={errors} prefs={prefs} />
       <p aria-live="polite" class={status ? 'field-error' : ''}>{status}</p>
       <div class="row">
         {vessel?.retired ? null : <button type="submit" class="primary">Save vessel</button>}
-        <button type="button" onClick={() => navigate('vessels')}>Back to the list</button>
+        <button type="button" onClick={() => navigate('vessels')}>Back (entry kept)</button>
+        <button type="button" onClick={() => { draft.reset(); setStatus(''); }}>Start over</button>
         {vessel && !vessel.retired ? (
           <button type="button" class="danger" onClick={() => void retire()}>
             {confirmRetire ? 'Tap again to retire' : 'Retire vessel'}

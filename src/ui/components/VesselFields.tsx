@@ -1,80 +1,110 @@
-// The vessel editor's inputs, in four groups: identity and shape, weight, pressure, temperature
-// and atmosphere. Units picked once per group apply to every field of that quantity.
-import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
-import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+// The vessel editor's inputs in four sections — shape, limits, instruments, site — with the common
+// defaults filled in and the tolerances folded, so the usual vessel fits on two phone screens. Each
+// length field has its own unit; pressures, temperatures and weights are in the units of the
+// vessel's gauge, thermometer and scale, chosen once in Instruments. The inner volume and the outline
+// follow the dimensions as they are typed; the site shows its elevation and pressure each with the other.
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/basics.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
 import { TextField } from './TextField.tsx';
 import { NumberField } from './NumberField.tsx';
-import { Choice } from './Choice.tsx';
 import { SelectField } from './SelectField.tsx';
-import { HEADS, SENSORS, SHAPES, formLengthUnit, type FormField, type VesselForm } from '../state/vessel-form.ts';
+import { ShapeSketch } from './ShapeSketch.tsx';
+import { HEADS, SENSORS, SHAPES, lengthUnitChange, lengthUnitOf, type FormField, type LengthField, type VesselForm } from '../state/vessel-form.ts';
+import { shapePreview, siteCounterpart } from '../state/vessel-preview.ts';
+import type { UnitPrefs } from '../state/settings-model.ts';
+import { unitLabel } from '../state/unit-labels.ts';
 
 interface Props {
   form: VesselForm;
   set: (change: Partial<VesselForm>) => void;
   errors: Partial<Record<FormField, string>>;
+  prefs: UnitPrefs;
 }
 
-const VACUUM = [{ id: 'yes', label: 'Full vacuum' }, { id: 'no', label: 'Not rated' }] as const;
-const ATM = [{ id: 'elevation', label: 'Elevation' }, { id: 'pressure', label: 'Pressure' }] as const;
+const ATM = [{ id: 'elevation', label: 'Its elevation' }, { id: 'pressure', label: 'Its atmospheric pressure' }] as const;
 
-export function VesselFields({ form: f, set, errors: e }: Props) {
-  const pu = PRESSURE_UNITS.find((u) => u.id === f.pressureUnit)?.label ?? f.pressureUnit;
-  const lu = formLengthUnit(f);
-  const ll = LENGTH_UNITS.find((u) => u.id === lu)?.label ?? lu;
-  const tu = TEMPERATURE_UNITS.find((u) => u.id === f.temperatureUnit)?.label ?? f.temperatureUnit;
+export function VesselFields({ form: f, set, errors: e, prefs }: Props) {
+  const pu = unitLabel(f.pressureUnit), tu = unitLabel(f.temperatureUnit), mu = unitLabel(f.massUnit);
+  const du = f.temperatureUnit === 'degC' ? 'K' : tu;
   const num = (field: FormField, label: string, hint?: string) => (
     <NumberField id={`v-${field}`} label={label} value={f[field]} onInput={(text) => set({ [field]: text })} error={e[field]} hint={hint} />
   );
+  const length = (field: LengthField, label: string, hint?: string) => (
+    <NumberField id={`v-${field}`} label={label} value={f[field]} onInput={(text) => set({ [field]: text })} error={e[field]} hint={hint}
+      unit={lengthUnitOf(f, field)} units={LENGTH_UNITS} onUnit={(u) => set(lengthUnitChange(field, u as LengthUnit))} />
+  );
+  const preview = shapePreview(f, prefs);
+  const counterpart = siteCounterpart(f);
   return (
     <>
-      <fieldset>
-        <legend>Identity and shape</legend>
-        <TextField id="v-tag" label="Tag (as written on the vessel)" value={f.tag} onInput={(tag) => set({ tag })} error={e.tag} />
-        <TextField id="v-desc" label="Description" value={f.description} onInput={(description) => set({ description })} error={e.description} />
-        <SelectField id="v-shape" label="Shape" value={f.shape} options={SHAPES} onChange={(shape) => set({ shape })} />
+      <fieldset class="editor-section">
+        <legend>Shape</legend>
+        <div class="pair">
+          <TextField id="v-tag" label="Tag (as on the vessel)" value={f.tag} onInput={(tag) => set({ tag })} error={e.tag} />
+          <TextField id="v-desc" label="Description" value={f.description} onInput={(description) => set({ description })} error={e.description} />
+        </div>
+        <div class="pair">
+          <SelectField id="v-shape" label="Shape" value={f.shape} options={SHAPES} onChange={(shape) => set({ shape })} />
+          {f.shape === 'stated-volume' ? null : <SelectField id="v-head" label="Heads (both ends)" value={f.head} options={HEADS} onChange={(head) => set({ head })} />}
+        </div>
         {f.shape === 'stated-volume' ? (
           <NumberField id="v-volume" label="Internal volume" value={f.volume} onInput={(volume) => set({ volume })}
             unit={f.volumeUnit} units={VOLUME_UNITS} onUnit={(u) => set({ volumeUnit: u as VolumeUnit })} error={e.volume} />
         ) : (
           <>
-            <NumberField id="v-diameterM" label="Inner diameter" value={f.diameterM} onInput={(diameterM) => set({ diameterM })}
-              unit={lu} units={LENGTH_UNITS} onUnit={(u) => set({ lengthUnit: u as LengthUnit })} error={e.diameterM} />
-            {num('straightLengthM', `Straight length between tangent lines (${ll})`)}
-            <SelectField id="v-head" label="Heads (both ends)" value={f.head} options={HEADS} onChange={(head) => set({ head })} />
+            {length('diameterM', 'Inner diameter')}
+            {length('straightLengthM', 'Straight length between tangent lines')}
           </>
         )}
-        {num('volumeTolPercent', 'Volume tolerance ± (%)')}
+        <div class="shape-preview" aria-live="polite">
+          <p data-volume>Inner volume: <strong>{preview.volumeText}</strong></p>
+          {preview.outline ? <ShapeSketch outline={preview.outline} caption={`Outline to the dimensions typed: ${preview.volumeText}`} /> : null}
+        </div>
       </fieldset>
-      <fieldset>
-        <legend>Weight</legend>
-        <NumberField id="v-tare" label="Tare (empty weight on the scale)" value={f.tare} onInput={(tare) => set({ tare })}
-          unit={f.massUnit} units={MASS_UNITS} onUnit={(u) => set({ massUnit: u as MassUnit })} error={e.tare} />
-        {num('weightTol', `Weight reading tolerance ± (${f.massUnit})`)}
+      <fieldset class="editor-section">
+        <legend>Limits (from the nameplate)</legend>
+        <div class="pair">
+          {num('mawp', `MAWP (gauge, ${pu})`)}
+          {num('relief', `Relief set (gauge, ${pu})`)}
+        </div>
+        {num('designTemperature', `Design temperature (${tu})`)}
+        <div class="field">
+          <label class="row">
+            <input type="checkbox" class="check" id="v-vacuum" checked={f.vacuumRated === 'yes'} onChange={(ev) => set({ vacuumRated: ev.currentTarget.checked ? 'yes' : 'no' })} />
+            Rated for full vacuum
+          </label>
+        </div>
       </fieldset>
-      <fieldset>
-        <legend>Pressure</legend>
-        <NumberField id="v-mawp" label="MAWP (gauge)" value={f.mawp} onInput={(mawp) => set({ mawp })}
-          unit={f.pressureUnit} units={PRESSURE_UNITS} onUnit={(u) => set({ pressureUnit: u as PressureUnit })} error={e.mawp} />
-        {num('relief', `Relief set pressure (gauge, ${pu})`)}
-        {num('gaugeSpan', `Pressure gauge span (${pu})`)}
-        {num('gaugeAccuracyPercent', 'Pressure gauge accuracy ± (% of span)')}
-        <Choice name="v-vacuum" legend="Vacuum rating" value={f.vacuumRated} options={VACUUM} onChange={(vacuumRated) => set({ vacuumRated })} />
+      <fieldset class="editor-section">
+        <legend>Instruments</legend>
+        <div class="pair">
+          <SelectField id="v-pressure-unit" label="Gauge reads in" value={f.pressureUnit} options={PRESSURE_UNITS} onChange={(u) => set({ pressureUnit: u as PressureUnit })} />
+          {num('gaugeSpan', `Gauge span (${pu})`)}
+        </div>
+        <div class="pair">
+          <SelectField id="v-temperature-unit" label="Thermometer reads in" value={f.temperatureUnit} options={TEMPERATURE_UNITS} onChange={(u) => set({ temperatureUnit: u as TemperatureUnit })} />
+          <SelectField id="v-sensor" label="Sensor" value={f.sensor} options={SENSORS} onChange={(sensor) => set({ sensor })} />
+        </div>
+        {f.sensor === 'stated' ? num('sensorTol', `Sensor tolerance ± (${du})`) : null}
+        <div class="pair">
+          <SelectField id="v-mass-unit" label="Scale reads in" value={f.massUnit} options={MASS_UNITS} onChange={(u) => set({ massUnit: u as MassUnit })} />
+          {num('tare', `Tare, empty (${mu})`)}
+        </div>
+        {num('weightTol', `Scale reading tolerance ± (${mu})`)}
+        <details class="result-folded">
+          <summary>Accuracy and volume tolerance (usual values filled in)</summary>
+          {num('gaugeAccuracyPercent', 'Gauge accuracy ± (% of span)')}
+          {num('volumeTolPercent', 'Volume tolerance ± (%)')}
+        </details>
       </fieldset>
-      <fieldset>
-        <legend>Temperature</legend>
-        <NumberField id="v-design" label="Design temperature" value={f.designTemperature} onInput={(designTemperature) => set({ designTemperature })}
-          unit={f.temperatureUnit} units={TEMPERATURE_UNITS} onUnit={(u) => set({ temperatureUnit: u as TemperatureUnit })} error={e.designTemperature} />
-        {num('ambientTemperature', `Ambient temperature around the vessel (${tu})`)}
-        <SelectField id="v-sensor" label="Temperature sensor" value={f.sensor} options={SENSORS} onChange={(sensor) => set({ sensor })} />
-        {f.sensor === 'stated' ? num('sensorTol', `Sensor tolerance ± (${tu} difference)`) : null}
-      </fieldset>
-      <fieldset>
-        <legend>Site atmosphere</legend>
-        <Choice name="v-atm" legend="Give the site's atmospheric pressure as" value={f.atmosphereMode} options={ATM}
-          onChange={(atmosphereMode) => set({ atmosphereMode })} />
+      <fieldset class="editor-section">
+        <legend>Site</legend>
+        <SelectField id="v-atm" label="Give the site as" value={f.atmosphereMode} options={ATM} onChange={(atmosphereMode) => set({ atmosphereMode })} />
         {f.atmosphereMode === 'elevation'
-          ? num('elevationM', `Elevation above sea level (${ll})`, 'US Standard Atmosphere 1976.')
-          : <>{num('atmosphere', `Atmospheric pressure (absolute, ${pu})`)}{num('barometerTol', `Barometer tolerance ± (${pu})`)}</>}
+          ? length('elevationM', 'Elevation above sea level')
+          : <div class="pair">{num('atmosphere', `Atmosphere (absolute, ${pu})`)}{num('barometerTol', `Its tolerance ± (${pu})`)}</div>}
+        {counterpart ? <p class="hint" data-site-counterpart>{counterpart}</p> : null}
+        {num('ambientTemperature', `Ambient temperature around the vessel (${tu})`)}
       </fieldset>
     </>
   );

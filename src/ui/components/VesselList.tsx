@@ -1,7 +1,7 @@
 // Vessels as large tappable rows; a retired or demo vessel says so.
 import type { VesselRecord } from '../state/repo.ts';
 import { hrefFor } from '../router.ts';
-import { isDemoVessel } from '../state/demo-plant.ts';
+import { isDemoVessel } from '../state/demo-label.ts';
 
 export function VesselList({ vessels, empty }: { vessels: readonly VesselRecord[]; empty: string }) {
   if (vessels.length === 0) return <p>{empty}</p>;

@@ -1,7 +1,7 @@
 // Choose the vessel for a check or a fill plan (retired vessels take no new checks).
 import type { VesselRecord } from '../state/repo.ts';
 import { hrefFor } from '../router.ts';
-import { isDemoVessel } from '../state/demo-plant.ts';
+import { isDemoVessel } from '../state/demo-label.ts';
 
 interface Props { vessels: readonly VesselRecord[]; value: string; onChange: (id: string) => void; id?: string }
 

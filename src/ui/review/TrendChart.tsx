@@ -3,16 +3,16 @@
 import type { TrendGeometry } from './trend-data.ts';
 
 export function TrendChart({ geometry, title }: { geometry: TrendGeometry; title: string }) {
-  const { width, height, plot, xTicks, panels } = geometry;
+  const { width, height, plot, xTicks, xCaption, panels } = geometry;
   return (
     <svg class="picture trend-chart" viewBox={`0 0 ${width} ${height}`} role="img" aria-labelledby="trend-title trend-desc">
       <title id="trend-title">{title}</title>
       <desc id="trend-desc">
         {panels.map((p) => `${p.spec.title}: ${p.count} checks with a value`).join('; ')}. Marks show checks with findings, by outcome.
       </desc>
-      {panels.map((p) => (
+      {panels.map((p, index) => (
         <g key={p.spec.key} transform={`translate(0 ${p.offsetY})`}>
-          <text class="svg-text trend-heading" x={plot.left} y={13}>{p.spec.title} ({p.spec.unit})</text>
+          <text class="svg-text trend-heading" x={plot.left} y={13}>{p.spec.title} ({p.spec.unit}){index === 0 && xCaption ? ` · ${xCaption}` : ''}</text>
           <path class="svg-axis" d={`M${plot.left} ${plot.top}V${plot.bottom}H${plot.right}`} />
           {p.yTicks.map((t) => (
             <g key={t.label}>

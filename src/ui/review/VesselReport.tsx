@@ -35,7 +35,8 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
         <h2 id="report-title">Vessel report: {vessel.tag}</h2>
         <button type="button" class="primary no-print" onClick={() => window.print()}>Print or save as PDF</button>
       </div>
-      <p>{vessel.description || 'No description.'} Period: <strong>{period}</strong>.</p>
+      <p class="report-description">{vessel.description || 'No description.'}</p>
+      <p class="report-period">Period: <strong>{period}</strong></p>
       <dl class="figures review-figures">
         <dt>Checks</dt><dd>{summary.checks}{data.capped ? ` (the newest ${TREND_MAX_POINTS} shown)` : ''}</dd>
         <dt>Gauge agreed with saturation</dt><dd>{summary.consistent}</dd>

@@ -3,6 +3,7 @@
 // A check is judged by its outcome, the worst signal word among its findings, not by every caution:
 // standing hazards (flash on release, scald …) are on every hot check.
 import { OUTCOME_IDS, SIGNAL_ORDER, outcomeOfRecord, verdictOfResult, type CheckRecord, type Signal, type StoredOutcome } from '../../store/index.ts';
+import { shortTime } from '../state/format.ts';
 
 export type { Signal };
 export type Outcome = StoredOutcome;
@@ -70,8 +71,7 @@ export function verdictLabel(id: VerdictId, form: 'label' | 'short' = 'label'): 
   return VERDICTS.find((v) => v.id === id)?.[form] ?? id;
 }
 
-/** A stored time as "2026-12-01 14:05 +01:00" (the offset the technician's device stamped). */
+/** A stored time as "2026-12-01 14:05 UTC+01:00" (the offset the technician's device stamped), as every screen shows it. */
 export function stampText(iso: string): string {
-  const offset = iso.endsWith('Z') ? 'UTC' : iso.slice(-6);
-  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} ${offset}`;
+  return shortTime(iso);
 }

@@ -110,6 +110,8 @@ export interface TrendGeometry {
   panelHeight: number;
   plot: { left: number; right: number; top: number; bottom: number };
   xTicks: Tick[];
+  /** What the time axis counts in: the date and zone of an hour axis, the zone of a date axis. */
+  xCaption: string;
   panels: PanelGeometry[];
 }
 
@@ -132,9 +134,54 @@ export function niceTicks(min: number, max: number, count = 4): number[] {
   return ticks;
 }
 
-function dayLabel(ms: number): string {
-  const d = new Date(ms);
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+const pad2 = (n: number) => String(n).padStart(2, '0');
+const dayLabel = (d: Date) => `${d.getFullYear()}-${pad2(d.getMonth() + 1)}-${pad2(d.getDate())}`;
+const HOUR_MS = 3_600_000;
+const DAY_MS = 24 * HOUR_MS;
+
+/** This device's zone as "UTC+01:00" ("UTC" at zero), for the time axis caption. */
+function zoneLabel(ms: number): string {
+  const east = -new Date(ms).getTimezoneOffset();
+  if (east === 0) return 'UTC';
+  const a = Math.abs(east);
+  return `UTC${east < 0 ? '\u2212' : '+'}${pad2(Math.floor(a / 60))}:${pad2(a % 60)}`;
+}
+
+/**
+ * Time-axis ticks that suit the span, in this device's local time: within two days, whole hours
+ * (the date once, in the caption); within about four months, whole days; beyond, month starts.
+ * Never the same label twice, at most `count` of them.
+ */
+export function timeTicks(t0: number, t1: number, count = 4): { ticks: { ms: number; label: string }[]; caption: string } {
+  const zone = zoneLabel(t0);
+  const first = new Date(t0), last = new Date(t1);
+  const span = Math.max(0, t1 - t0);
+  const ticks: { ms: number; label: string }[] = [];
+  if (span < 2 * DAY_MS) {
+    const step = [1, 2, 3, 4, 6, 12, 24].map((h) => h * HOUR_MS).find((s) => span / s <= count) ?? DAY_MS;
+    const start = new Date(first); start.setMinutes(0, 0, 0);
+    for (let ms = start.getTime(); ms <= t1; ms += step) if (ms >= t0) ticks.push({ ms, label: `${pad2(new Date(ms).getHours())}:00` });
+    if (ticks.length === 0) ticks.push({ ms: t0, label: `${pad2(first.getHours())}:${pad2(first.getMinutes())}` });
+    const days = dayLabel(first) === dayLabel(last) ? dayLabel(first) : `${dayLabel(first)} to ${dayLabel(last)}`;
+    return { ticks, caption: `${days}, time ${zone}` };
+  }
+  if (span < 120 * DAY_MS) {
+    const step = [1, 2, 7, 14, 30].map((d) => d * DAY_MS).find((s) => span / s <= count - 1) ?? 30 * DAY_MS;
+    const start = new Date(first); start.setHours(0, 0, 0, 0);
+    for (let ms = start.getTime(); ms <= t1; ms += step) if (ms >= t0 - DAY_MS / 2) ticks.push({ ms: Math.max(ms, t0), label: dayLabel(new Date(ms)) });
+    return { ticks: dedupe(ticks).slice(0, count), caption: `date (${zone})` };
+  }
+  const months = (last.getFullYear() - first.getFullYear()) * 12 + last.getMonth() - first.getMonth();
+  const stepMonths = [1, 2, 3, 6, 12, 24, 60].find((m) => months / m <= count - 1) ?? 120;
+  for (let m = 0; m <= months; m += stepMonths) {
+    const d = new Date(first.getFullYear(), first.getMonth() + m, 1);
+    if (d.getTime() >= t0 - 15 * DAY_MS) ticks.push({ ms: Math.max(d.getTime(), t0), label: `${d.getFullYear()}-${pad2(d.getMonth() + 1)}` });
+  }
+  return { ticks: dedupe(ticks).slice(0, count), caption: `month (${zone})` };
+}
+
+function dedupe(ticks: { ms: number; label: string }[]): { ms: number; label: string }[] {
+  return ticks.filter((t, i) => ticks.findIndex((u) => u.label === t.label) === i);
 }
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
@@ -146,9 +193,10 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
   const t1 = points.length ? points[points.length - 1]!.timeMs : 1;
   const span = t1 > t0 ? t1 - t0 : 1;
   const xOf = (ms: number) => round1(plot.left + ((ms - t0) / span) * (plot.right - plot.left));
-  const xAt = t1 > t0 ? [t0, t0 + span / 2, t1] : [t0];
-  const anchors = ['start', 'middle', 'end'] as const;
-  const xTicks: Tick[] = points.length === 0 ? [] : xAt.map((ms, i) => ({ at: xOf(ms), label: dayLabel(ms), anchor: xAt.length === 1 ? 'start' : anchors[i]! }));
+  const time = timeTicks(t0, t1);
+  // A label near either end hangs inward, so none is cut at the plot's edges.
+  const anchorAt = (x: number): Tick['anchor'] => (x - plot.left < 30 ? 'start' : plot.right - x < 30 ? 'end' : 'middle');
+  const xTicks: Tick[] = points.length === 0 ? [] : time.ticks.map((t) => ({ at: xOf(t.ms), label: t.label, anchor: anchorAt(xOf(t.ms)) }));
   const panels = TREND_SERIES.map((spec, index): PanelGeometry => {
     const values = points.map((p) => (p[spec.key] === null ? null : p[spec.key]! * spec.scale));
     const present = values.filter((v): v is number => v !== null);
@@ -180,5 +228,5 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
       offsetY: index * panelHeight,
     };
   });
-  return { width, height: panelHeight * panels.length, panelHeight, plot, xTicks, panels };
+  return { width, height: panelHeight * panels.length, panelHeight, plot, xTicks, xCaption: points.length ? time.caption : '', panels };
 }

@@ -5,7 +5,8 @@ import type { CheckRecord } from '../state/repo.ts';
 import { hrefFor } from '../router.ts';
 import { shortTime } from '../state/format.ts';
 import { CheckRecordView } from '../components/CheckRecordView.tsx';
-import { verdictOfRecord } from '../state/check-session.ts';
+import { outcomeOfRecord, verdictOfRecord } from '../state/check-session.ts';
+import { outcomeLabel } from '../state/outcome.ts';
 import { isDemo } from '../state/demo-label.ts';
 
 export function LogScreen({ param }: { param?: string | undefined }) {
@@ -28,7 +29,7 @@ function LogList() {
           <a class="button list-button" href={hrefFor('log', c.id)}>
             <strong>{c.vessel.tag} · {shortTime(c.time)}</strong>
             {isDemo(c.vessel) || isDemo(c.vessel.spec) ? <><span class="demo-tag">DEMO DATA</span> </> : null}
-            {verdictOfRecord(c)} · {c.technician}
+            <span class={`signal signal-${outcomeOfRecord(c)}`}>{outcomeLabel(outcomeOfRecord(c))}</span> {verdictOfRecord(c)} · {c.technician}
           </a>
         </li>
       ))}

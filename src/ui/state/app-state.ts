@@ -10,12 +10,25 @@ import { setDecimalSeparator } from './format.ts';
 const settingsState = shared<AppSettings>(DEFAULT_SETTINGS);
 const vesselsState = shared<readonly VesselRecord[]>([]);
 const saveErrorState = shared<string>('');
+/** 'opening' until the store is open and settings and vessels are read; the shell renders before. */
+const readyState = shared<'opening' | 'ready' | 'failed'>('opening');
 
-/** Loads what every screen needs; call once before the first render. */
+/** Loads what every screen needs; the shell is already on screen while it runs. */
 export async function loadAppState(): Promise<void> {
   const [settings, vessels] = await Promise.all([repo.loadSettings(), repo.listVessels()]);
   applySettings({ ...DEFAULT_SETTINGS, ...settings });
   vesselsState.set(vessels);
+  readyState.set('ready');
+}
+
+/** Marks the store unusable (the screens then say nothing can be saved). */
+export function reportStoreFailed(): void {
+  readyState.set('failed');
+}
+
+/** Whether the store is open and the shared state loaded. */
+export function useAppReady(): 'opening' | 'ready' | 'failed' {
+  return useShared(readyState);
 }
 
 export function useSettings(): AppSettings {

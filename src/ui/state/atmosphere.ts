@@ -8,7 +8,7 @@ import {
   lengthToM,
   LENGTH_UNITS,
   pressureToPa,
-} from '../../core/index.ts';
+} from '../../core/basics.ts';
 import type { SiteAtmosphere } from './settings-model.ts';
 
 export type AtmosphereResult =

@@ -1,6 +1,6 @@
 // The check entry as typed → the engine's Reading (SI). Each field's parse error names the field.
 import { readNumber } from './format.ts';
-import { massToKg, pressureToPa, temperatureToK } from '../../core/index.ts';
+import { massToKg, pressureToPa, temperatureToK } from '../../core/basics.ts';
 import type { Reading } from '../../core/check/reading.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { messageOf } from './atmosphere.ts';

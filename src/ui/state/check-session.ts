@@ -1,21 +1,30 @@
 // One check from entry to log: the draft → Reading → evaluateCheck → what the screen shows, and
 // the record saved to the log. All computation is the core's.
 import { errorText, type FieldUnit } from './error-text.ts';
-import { InputError, evaluateCheck, type CheckResult } from '../../core/index.ts';
+import { InputError, evaluateCheck, isMassUnit, isPressureUnit, isTemperatureUnit, pressureFromPa, type CheckResult, type VesselSpec } from '../../core/index.ts';
+import { gaugeSpanError } from './gauge-span.ts';
 import type { Reading } from '../../core/index.ts';
-import type { CheckRecord, TypedInput, VesselRecord } from '../../store/index.ts';
+import type { CheckRecord, StoredCaution, TypedInput, VesselRecord } from '../../store/index.ts';
+import { splitOutcome, type Outcome } from './outcome.ts';
 import * as repo from './repo.ts';
 import type { CheckDraft } from './check-draft.ts';
 import { readingFromDraft, type ReadingField } from './check-reading.ts';
 import { messageOf } from './atmosphere.ts';
-import { resultView, verdictText } from './result-text.ts';
-import type { ResultView } from './result-view.ts';
+import { keyFiguresOf, resultView, verdictText, type TypedUnits } from './result-text.ts';
+import { isDemo } from './demo-label.ts';
+import type { Figure, ResultView } from './result-view.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
 export type Evaluation =
   | { kind: 'incomplete'; message: string }
   | { kind: 'input-error'; errors: Partial<Record<ReadingField, string>>; general?: string }
-  | { kind: 'result'; view: ResultView; reading: Reading; result: CheckResult };
+  | {
+    kind: 'result'; reading: Reading; result: CheckResult;
+    /** What the outcome strip shows: cheap, computed with every keystroke. */
+    strip: { outcome: Outcome; verdict: string; figures: readonly Figure[]; demo: boolean };
+    /** The full result, worked out on first use (when the keys pause) and kept. */
+    view: () => ResultView;
+  };
 
 const ENGINE_FIELDS: Record<string, ReadingField> = {
   temperature: 'temperature', pressure: 'pressure', 'pressure (gauge)': 'pressure', 'pressure (absolute)': 'pressure',
@@ -30,6 +39,10 @@ function typedUnit(d: CheckDraft, field: ReadingField): FieldUnit {
   }
 }
 
+function typedText(d: CheckDraft, field: ReadingField): string {
+  return field === 'gross' ? d.gross.text : d[field].text;
+}
+
 /** Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any. */
 export function evaluateDraft(
   d: CheckDraft, vessel: VesselRecord | undefined, measuredAtmospherePa: number | undefined, prefs: UnitPrefs,
@@ -38,13 +51,42 @@ export function evaluateDraft(
   const r = readingFromDraft(d, measuredAtmospherePa);
   if (r.kind !== 'reading') return r;
   const spec = vessel.spec;
+  const span = gaugeSpanError(pressureFromPa(r.reading.pressure.pressurePa, d.pressure.unit), d.pressure.text, d.pressure.unit,
+    d.pressure.kind, spec, measuredAtmospherePa ?? spec.siteAtmospherePa);
+  if (span) return { kind: 'input-error', errors: { pressure: span } };
   try {
     const result = evaluateCheck(spec, r.reading);
-    return { kind: 'result', view: resultView(result, spec, prefs), reading: r.reading, result };
+    const typed = { pressure: d.pressure.unit, temperature: d.temperature.unit, mass: d.gross.unit };
+    let view: ResultView | undefined;
+    const strip = { outcome: splitOutcome(result).outcome, verdict: verdictText(result).short, figures: keyFiguresOf(result, prefs, typed), demo: isDemo(spec) };
+    return { kind: 'result', reading: r.reading, result, strip, view: () => (view ??= resultView(result, spec, prefs, typed)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
-    if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field)) } };
+    if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field), typedText(d, field)) } };
     return { kind: 'input-error', errors: {}, general: `No result: ${messageOf(e)}` };
+  }
+}
+
+/** An invented vessel and reading (test data, never shown) for warming the engine. */
+const WARM_SPEC: VesselSpec = {
+  tag: 'WARM-UP', description: 'invented, never shown', designTemperatureK: 473.15, vacuumRated: false, siteAtmospherePa: 101_325,
+  ambientTemperatureK: 293.15, tareKg: 500, mawpGaugePa: 500e3, reliefSetGaugePa: 450e3,
+  geometry: { shape: 'horizontal-cylinder', innerDiameterM: 1, straightLengthM: 2, head: { kind: 'torispherical' } },
+  instruments: {
+    pressureGauge: { spanPa: 1e6, accuracyPercentOfSpan: 1 }, temperatureSensor: { kind: 'iec-60751', sensorClass: 'B' },
+    weightToleranceKg: 1, volumeTolerancePercent: 2, barometerTolerancePa: 0,
+  },
+};
+
+/**
+ * Runs the engine and the result view once on invented data: the first call in a page builds the
+ * steam engine's tables and compiles the hot paths, so doing it while the page is idle makes the
+ * person's first result fit in a frame.
+ */
+export function warmUp(prefs: UnitPrefs): void {
+  for (const [T, p] of [[400, 150e3], [430, 560e3]] as const) {
+    const result = evaluateCheck(WARM_SPEC, { time: '2026-01-01T00:00:00Z', temperatureK: T, pressure: { reference: 'absolute', pressurePa: p }, weight: { kind: 'gross', grossKg: 900 } });
+    resultView(result, WARM_SPEC, prefs);
   }
 }
 
@@ -76,7 +118,16 @@ export function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<Evalua
  */
 export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | undefined {
   try {
-    return resultView(r.result, r.vessel.spec, prefs);
+    const unit = <U extends string>(name: string, ok: (u: unknown) => u is U): U | undefined => {
+      const u = r.inputs[name]?.unit;
+      return ok(u) ? u : undefined;
+    };
+    const typed: TypedUnits = {};
+    const p = unit('pressure', isPressureUnit), t = unit('temperature', isTemperatureUnit), m = unit('grossWeight', isMassUnit);
+    if (p) typed.pressure = p;
+    if (t) typed.temperature = t;
+    if (m) typed.mass = m;
+    return resultView(r.result, r.vessel.spec, prefs, typed);
   } catch {
     return undefined;
   }
@@ -85,8 +136,16 @@ export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | und
 /** A one-line verdict for the log list. */
 export function verdictOfRecord(r: CheckRecord): string {
   try {
-    return verdictText(r.result).text;
+    return verdictText(r.result).short;
   } catch {
     return 'Result saved by another app version';
   }
+}
+
+/** A saved check's outcome: the engine's when stored, otherwise derived from its cautions' rules. */
+export function outcomeOfRecord(r: CheckRecord): Outcome {
+  const own = r.result as { outcome?: unknown; findings?: unknown };
+  return splitOutcome(typeof own.outcome === 'string' && Array.isArray(own.findings)
+    ? { cautions: r.cautions, findings: own.findings as StoredCaution[], outcome: own.outcome }
+    : { cautions: r.cautions }).outcome;
 }

@@ -55,7 +55,7 @@ export function saturationFromTemperature(
     const T = temperatureToK(readNumber(text, 'temperature'), tUnit);
     return saturationAnswer(T, saturationPressure(T), tUnit, pUnit, atmospherePa);
   } catch (e) {
-    return { ok: false, error: errorText(e, { kind: 'temperature', unit: tUnit }) };
+    return { ok: false, error: errorText(e, { kind: 'temperature', unit: tUnit }, text) };
   }
 }
 
@@ -69,7 +69,7 @@ export function saturationFromPressure(
     const p = kind === 'absolute' ? entered : absoluteFromGauge(entered, atmospherePa);
     return saturationAnswer(saturationTemperature(p), p, tUnit, pUnit, atmospherePa);
   } catch (e) {
-    return { ok: false, error: errorText(e, { kind: 'pressure', unit: pUnit }) };
+    return { ok: false, error: errorText(e, { kind: 'pressure', unit: pUnit }, text) };
   }
 }
 

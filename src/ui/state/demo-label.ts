@@ -12,6 +12,11 @@ export function isDemo(v: { tag?: unknown; description?: unknown } | null | unde
     || (typeof v.description === 'string' && v.description.startsWith(DEMO_DESCRIPTION_PREFIX));
 }
 
+/** True for a demo vessel record (its own tag and description, or its spec's). */
+export function isDemoVessel(v: { tag?: unknown; description?: unknown; spec?: unknown }): boolean {
+  return isDemo(v) || isDemo(v.spec as { tag?: unknown; description?: unknown } | undefined);
+}
+
 /** The description without its "DEMO DATA:" prefix (the label is shown on its own). */
 export function plainDescription(description: string): string {
   return description.startsWith(DEMO_DESCRIPTION_PREFIX) ? description.slice(DEMO_DESCRIPTION_PREFIX.length).trimStart() : description;

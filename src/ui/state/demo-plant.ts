@@ -4,15 +4,15 @@ import * as repo from './repo.ts';
 import type { VesselRecord } from './repo.ts';
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
 
-import { isDemo } from './demo-label.ts';
 
-export { DEMO_TAG_PREFIX } from './demo-label.ts';
+export { DEMO_TAG_PREFIX, isDemoVessel } from './demo-label.ts';
 
 const COMMON = {
   designTemperatureK: 473.15,
   vacuumRated: false,
   siteAtmospherePa: 101_325,
   ambientTemperatureK: 293.15,
+  readingUnits: { pressure: 'kPa', temperature: 'degC', mass: 'kg' },
 } as const;
 
 const DEMO_PLANT: readonly VesselSpec[] = [
@@ -44,6 +44,8 @@ const DEMO_PLANT: readonly VesselSpec[] = [
     description: 'DEMO DATA: invented condensate receiver, horizontal, 2:1 heads',
     geometry: { shape: 'horizontal-cylinder', innerDiameterM: 0.8, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } },
     tareKg: 600, mawpGaugePa: 350e3, reliefSetGaugePa: 345e3,
+    // An invented receiver whose gauge, thermometer and scale read US customary units.
+    readingUnits: { pressure: 'psi', temperature: 'degF', mass: 'lb' },
     instruments: {
       pressureGauge: { spanPa: 600e3, accuracyPercentOfSpan: 1.6 }, temperatureSensor: { kind: 'stated', toleranceK: 1 },
       weightToleranceKg: 3, volumeTolerancePercent: 3, barometerTolerancePa: 0,
@@ -62,9 +64,6 @@ const DEMO_PLANT: readonly VesselSpec[] = [
   },
 ];
 
-export function isDemoVessel(v: VesselRecord): boolean {
-  return isDemo(v) || isDemo(v.spec);
-}
 
 /** Adds the demo vessels that are not in the inventory yet; returns how many were added. */
 export async function loadDemoPlant(existing: readonly VesselRecord[]): Promise<number> {

@@ -1,7 +1,7 @@
 // Entries in progress are saved as the person types (debounced), so a reload, a closed tab or an
 // accepted update never loses them. flushDrafts() writes whatever is pending and resolves when
 // the store has committed it; the update flow calls it before reloading.
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import * as repo from './repo.ts';
 import { reportSaveError } from './app-state.ts';
 
@@ -11,7 +11,13 @@ const pending = new Map<string, unknown>();
 let timer: number | undefined;
 let inFlight: Promise<void> = Promise.resolve();
 
+/** Says on the page whether every draft is stored: browser tests wait on it (`data-draft-state`). */
+function markDrafts(state: 'pending' | 'saved'): void {
+  if (typeof document !== 'undefined') document.documentElement.dataset.draftState = state;
+}
+
 function schedule(): void {
+  markDrafts('pending');
   if (timer !== undefined) window.clearTimeout(timer);
   timer = window.setTimeout(() => void flushDrafts().catch(() => undefined), SAVE_DELAY_MS);
 }
@@ -25,6 +31,7 @@ export function flushDrafts(): Promise<void> {
   inFlight = inFlight.catch(() => undefined).then(async () => {
     try {
       for (const [key, value] of batch) await repo.saveDraft(key, value);
+      if (pending.size === 0) markDrafts('saved');
     } catch (e) {
       for (const [key, value] of batch) if (!pending.has(key)) pending.set(key, value);
       reportSaveError(`Entry in progress not saved: ${repo.storageMessage(e)}`);
@@ -53,7 +60,9 @@ if (typeof document !== 'undefined') {
  * A value kept in a draft: starts from `initial`, is replaced by the stored draft once loaded,
  * and every change is saved. `loaded` is false until the stored draft was read.
  */
-export function useDraft<T extends object>(key: string, initial: T): { value: T; set: (next: T) => void; loaded: boolean; reset: () => void } {
+export function useDraft<T extends object>(key: string, initial: T): {
+  value: T; set: (next: T) => void; update: (change: (current: T) => T) => void; loaded: boolean; reset: () => void;
+} {
   const [value, setValue] = useState<T>(initial);
   const [loaded, setLoaded] = useState(false);
   const initialRef = useRef(initial);
@@ -71,9 +80,20 @@ export function useDraft<T extends object>(key: string, initial: T): { value: T;
     pending.set(key, next);
     schedule();
   };
+  // Stable across renders, so components handed it re-render only when their own props change.
+  const update = useMemo(() => (change: (current: T) => T) => {
+    setValue((current) => {
+      const next = change(current);
+      if (next !== current) {
+        pending.set(key, next);
+        schedule();
+      }
+      return next;
+    });
+  }, [key]);
   const reset = () => {
     setValue(initialRef.current);
     void discardDraft(key);
   };
-  return { value, set, loaded, reset };
+  return { value, set, update, loaded, reset };
 }

@@ -11,6 +11,7 @@ import type { VesselRecord } from '../../store/index.ts';
 import { formatNumber, readNumber } from './format.ts';
 import { messageOf } from './atmosphere.ts';
 import type { Figure, ResultView } from './result-view.ts';
+import { splitOutcome } from './outcome.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
 export type FillField = 'target' | 'targetValue' | 'start' | 'margin' | 'power' | 'heatCapacity';
@@ -37,7 +38,7 @@ export type FillEvaluation =
   | { kind: 'plan'; plan: FillPlan; view: ResultView };
 
 const ENGINE_FIELDS: Record<string, FillField> = {
-  'target temperature': 'target', 'start temperature': 'start', quality: 'targetValue', 'vapor-space fraction': 'targetValue',
+  'target temperature': 'target', 'start temperature': 'start', quality: 'targetValue', 'vapour-space fraction': 'targetValue',
   'liquid-full margin': 'margin', 'heater power': 'power', 'vessel heat capacity': 'heatCapacity',
 };
 
@@ -67,7 +68,7 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
-    return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
+    return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn, field === 'target' ? d.target : field === 'start' ? d.start : undefined) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
 }
 
@@ -78,31 +79,47 @@ function isPlanRule(rule: string): boolean {
 
 function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
   const lab = (list: readonly { id: string; label: string }[], id: string) => list.find((x) => x.id === id)?.label ?? id;
-  const m = (kg: number) => `${formatNumber(massFromKg(kg, u.mass as MassUnit), 5)} ${lab(MASS_UNITS, u.mass)}`;
-  const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 5)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
-  const pr = (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 5)} ${lab(PRESSURE_UNITS, u.pressure)}`;
+  // A plan has no instrument band: masses to the kilogram's tenth at most, four significant digits.
+  const m = (kg: number) => `${formatNumber(massFromKg(kg, u.mass as MassUnit), 4)} ${lab(MASS_UNITS, u.mass)}`;
+  const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 4)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
+  const pr = (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 4)} ${lab(PRESSURE_UNITS, u.pressure)}`;
   const pct = (x: number) => `${formatNumber(x * 100, 3)} %`;
-  const largest = p.largestTwoPhaseCharge;
-  const figures: Figure[] = [
-    { label: 'Water to charge', value: m(p.waterMassKg) },
-    { label: 'Scale should read (gross)', value: m(p.expectedGrossWeightKg) },
-    { label: 'Pressure at the target', value: `${pr(p.targetSaturationPressurePa)} absolute, ${pr(p.targetGaugePressurePa)} gauge` },
-    { label: 'At the target', value: `quality ${pct(p.atTarget.quality)}, steam space ${pct(p.atTarget.vaporSpaceFraction)}` },
-    { label: 'Liquid / steam at the target', value: `${m(p.atTarget.liquidMassKg)} / ${m(p.atTarget.vaporMassKg)}` },
-    { label: 'Ideal-gas estimate', value: `${m(p.idealGas.waterMassKg)} (${formatNumber(p.idealGas.errorPercent, 3)} % off IF97)` },
-    { label: 'Largest charge still two-phase', value: `${m(largest.waterMassKg)} (gross ${m(largest.expectedGrossWeightKg)}), two-phase up to ${t(largest.limitTemperatureK)}` },
+  const most = p.largestTwoPhaseCharge;
+  const main: Figure[] = [
+    { label: 'Charge this much water', value: m(p.waterMassKg) },
+    { label: 'Then the scale reads (gross)', value: m(p.expectedGrossWeightKg) },
+    { label: 'At the target the gauge reads', value: `${pr(p.targetGaugePressurePa)} gauge (${pr(p.targetSaturationPressurePa)} absolute)` },
+    { label: 'At the target', value: `steam is ${pct(p.atTarget.quality)} of the contents by mass and fills ${pct(p.atTarget.vaporSpaceFraction)} of the space` },
+    { label: 'Most water it can take', value: `${m(most.waterMassKg)} (scale ${m(most.expectedGrossWeightKg)}): more would fill it with water before ${t(most.limitTemperatureK)}` },
+  ];
+  const details: Figure[] = [
+    { label: 'Water and steam at the target', value: `${m(p.atTarget.liquidMassKg)} water, ${m(p.atTarget.vaporMassKg)} steam` },
+    { label: 'With steam taken as an ideal gas', value: `${m(p.idealGas.waterMassKg)}, ${formatNumber(Math.abs(p.idealGas.errorPercent), 2)} % ${p.idealGas.errorPercent < 0 ? 'less' : 'more'} than the steam tables (IAPWS-IF97) give: why the tables are used` },
   ];
   if (p.heat) {
-    figures.push({ label: 'Heat to the target', value: `${formatNumber(p.heat.totalJ / 1e6, 4)} MJ` +
-      (p.heat.heatUpTimeS !== null ? `, about ${formatNumber(p.heat.heatUpTimeS / 60, 3)} min` : '') });
+    details.push({ label: 'Heat to reach the target', value: `${formatNumber(p.heat.totalJ / 1e6, 3)} MJ` +
+      (p.heat.heatUpTimeS !== null ? `, about ${formatNumber(p.heat.heatUpTimeS / 60, 2)} min at the heater power given` : '') });
   }
+  // The plan's own rules (charge too large, does not fit, target over a limit) are WARNING: they
+  // describe a plan not yet charged (issue 9).
+  const against = p.cautions.some((c) => isPlanRule(c.rule));
+  const cautions = p.cautions.map((c) => inPreferredUnits(c, u));
+  const split = splitOutcome({ cautions });
+  const verdict = against
+    ? { tone: 'bad' as const, text: 'WARNING. Do not charge this plan as it stands: see the cautions below.', short: 'Do not charge this plan' }
+    : { tone: 'plan' as const, text: `Plan: charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}. Check it against the vessel's procedure before charging.`, short: `Charge ${m(p.waterMassKg)}` };
   return {
     demo,
-    verdict: p.cautions.some((c) => isPlanRule(c.rule))
-      ? { tone: 'bad', text: 'WARNING. Do not charge this plan as it stands: see the cautions below.' }
-      : { tone: 'ok', text: `Charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}.` },
-    figures,
+    outcome: split.outcome,
+    verdict,
+    keyFigures: main.slice(0, 2),
+    findings: split.findings,
+    groups: [
+      { id: 'contents', title: 'The plan', figures: main, notes: [], folded: false },
+      { id: 'hazards', title: 'Details of the plan', figures: details, notes: split.others, folded: true },
+    ],
+    figures: [...main, ...details],
     hazards: [],
-    cautions: p.cautions.map((c) => inPreferredUnits(c, u)),
+    cautions,
   };
 }

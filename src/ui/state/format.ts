@@ -1,6 +1,6 @@
 // Reading and showing numbers at the UI's edge, with the person's decimal separator. The parsing
 // and formatting rules are the core's; this module only supplies the separator setting.
-import { formatNumber as coreFormat, parseDecimal, type DecimalSeparator } from '../../core/index.ts';
+import { formatNumber as coreFormat, parseDecimal, type DecimalSeparator } from '../../core/basics.ts';
 
 let separator: DecimalSeparator = '.';
 
@@ -30,19 +30,46 @@ export function formatFixed(value: number, decimals: number): string {
 }
 
 /**
- * A value with its ± band, e.g. "412.3 ± 1.2": the band to two significant digits and the value
- * to the same last decimal place, so no digit is shown that the band makes meaningless.
+ * Decimals that show a ± band to one or two significant digits: two when its leading digit is 1
+ * or 2, one otherwise. Uncertainties to at most two significant digits is JCGM 100:2008 (GUM)
+ * 7.2.6 (from memory); one digit from a leading 3 up is common practice. 0 for a zero or
+ * non-finite band (the value is then shown to its own place by the caller).
+ */
+export function decimalsForBand(band: number): number {
+  const b = Math.abs(band);
+  if (!Number.isFinite(b) || b === 0) return 0;
+  // The exponential form gives the leading digit and the power of ten without log10's rounding.
+  const [mantissa, exponent] = b.toExponential(1).split('e') as [string, string];
+  const significant = Number(mantissa) < 3 ? 2 : 1;
+  return Math.min(12, Math.max(0, significant - 1 - Number(exponent)));
+}
+
+/**
+ * A value with its ± band, e.g. "412.3 ± 1.2": the band to one or two significant digits and the
+ * value to the same last decimal place, so no digit is shown that the band makes meaningless.
  */
 export function formatWithBand(value: number, band: number, significant = 4): string {
   const b = Math.abs(band);
   if (!Number.isFinite(b) || b === 0) return `${formatNumber(value, significant)} ± 0`;
-  const decimals = Math.min(12, Math.max(0, 1 - Math.floor(Math.log10(b))));
+  const decimals = decimalsForBand(b);
   return `${formatFixed(value, decimals)} ± ${formatFixed(b, decimals)}`;
 }
 
-/** A stored ISO 8601 time shown briefly, e.g. "2026-12-01 14:05". */
+/** A value rounded to the place its ± band resolves, without the band ("412.3"). */
+export function formatToBand(value: number, band: number, significant = 4): string {
+  const b = Math.abs(band);
+  if (!Number.isFinite(b) || b === 0) return formatNumber(value, significant);
+  return formatFixed(value, decimalsForBand(b));
+}
+
+/**
+ * A stored ISO 8601 time with its zone, e.g. "2026-12-01 14:05 UTC+01:00" ("UTC" for a zero
+ * offset): the wall clock the technician's device had, and which zone that clock was in.
+ */
 export function shortTime(iso: string): string {
-  return iso.slice(0, 16).replace('T', ' ');
+  const zone = /(Z|[+-]\d{2}:\d{2})$/.exec(iso)?.[1];
+  const offset = zone === undefined ? '' : zone === 'Z' || zone === '+00:00' || zone === '-00:00' ? ' UTC' : ` UTC${zone.replace('-', '\u2212')}`;
+  return `${iso.slice(0, 10)} ${iso.slice(11, 16)}${offset}`;
 }
 
 /** A number to put back into an input: up to 6 significant digits, no trailing zeros. */

@@ -1,7 +1,7 @@
 // The app's own settings (stored through the store's settings functions as one record).
 import { formatEditable, localeDecimalSeparator, readNumber } from './format.ts';
-import { isLengthUnit, lengthFromM, lengthToM, pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/index.ts';
-import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
+import { isLengthUnit, lengthFromM, lengthToM, pressureFromPa, pressureToPa, type DecimalSeparator } from '../../core/basics.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
 
 export type UnitSystem = 'SI' | 'US' | 'custom';
 

@@ -1,5 +1,5 @@
 // Display labels for stored unit ids (records keep the id; people read the symbol).
-import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/index.ts';
+import { LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../core/basics.ts';
 
 const ALL: readonly { id: string; label: string }[] = [...PRESSURE_UNITS, ...TEMPERATURE_UNITS, ...MASS_UNITS, ...VOLUME_UNITS, ...LENGTH_UNITS];
 

@@ -1,6 +1,6 @@
 // The vessel editor's fields exactly as typed, with the units chosen beside them.
-import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/index.ts';
-import { isLengthUnit } from '../../core/index.ts';
+import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
+import { isLengthUnit } from '../../core/basics.ts';
 import type { HeadKind, SensorChoice, Shape } from './vessel-spec.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
@@ -12,8 +12,12 @@ export interface VesselForm {
   // is in `lengthUnit` (metres when a draft predates it, see formLengthUnit).
   diameterM: string;
   straightLengthM: string;
-  /** Unit of the diameter, straight length and elevation. */
+  /** The length unit of a draft saved before each length had its own (then every length was in it). */
   lengthUnit: LengthUnit;
+  /** Each length field's own unit: picking mm for the diameter changes nothing else. */
+  diameterUnit?: LengthUnit;
+  straightLengthUnit?: LengthUnit;
+  elevationUnit?: LengthUnit;
   head: HeadKind;
   volume: string;
   volumeUnit: VolumeUnit;
@@ -38,13 +42,15 @@ export interface VesselForm {
   barometerTol: string;
 }
 
-export type FormField = keyof VesselForm;
+/** The typed fields (the per-field length units are not typed text). */
+export type FormField = Exclude<keyof VesselForm, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit'>;
 
 /** A new vessel's form: common values filled in where the trade has a usual default. */
 export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: string; pressureText?: string }): VesselForm {
   const us = u.temperature === 'degF' || u.temperature === 'degR';
   return {
-    tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', lengthUnit: u.length, head: 'semi-ellipsoidal-2-1',
+    tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', lengthUnit: u.length,
+    diameterUnit: u.length, straightLengthUnit: u.length, elevationUnit: u.length, head: 'semi-ellipsoidal-2-1',
     volume: '', volumeUnit: u.volume, volumeTolPercent: '2',
     tare: '', massUnit: u.mass, weightTol: '',
     pressureUnit: u.pressure, mawp: '', relief: '', vacuumRated: 'no', gaugeSpan: '', gaugeAccuracyPercent: '1',
@@ -52,13 +58,29 @@ export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: str
     sensor: 'B', sensorTol: '',
     atmosphereMode: siteAtmosphere.elevationM !== undefined ? 'elevation' : 'pressure',
     elevationM: siteAtmosphere.elevationM ?? '', atmosphere: siteAtmosphere.pressureText ?? '',
-    barometerTol: '',
+    barometerTol: '0',
   };
 }
 
 /** The form's length unit; a draft saved before the field existed was typed in metres. */
 export function formLengthUnit(f: VesselForm): LengthUnit {
   return isLengthUnit(f.lengthUnit) ? f.lengthUnit : 'm';
+}
+
+export type LengthField = 'diameterM' | 'straightLengthM' | 'elevationM';
+const UNIT_OF: Record<LengthField, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit'> = {
+  diameterM: 'diameterUnit', straightLengthM: 'straightLengthUnit', elevationM: 'elevationUnit',
+};
+
+/** The unit one length field is typed in: its own, else the form's older shared one. */
+export function lengthUnitOf(f: VesselForm, field: LengthField): LengthUnit {
+  const own = f[UNIT_OF[field]];
+  return isLengthUnit(own) ? own : formLengthUnit(f);
+}
+
+/** The change that sets one length field's unit (and only that one). */
+export function lengthUnitChange(field: LengthField, unit: LengthUnit): Partial<VesselForm> {
+  return { [UNIT_OF[field]]: unit };
 }
 
 export const SHAPES: readonly { id: Shape; label: string }[] = [

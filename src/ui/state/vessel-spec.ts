@@ -10,7 +10,7 @@ import type { HeadSpec, VesselGeometry } from '../../core/check/vessel-geometry.
 import { validateVessel, type VesselSpec } from '../../core/check/vessel-spec.ts';
 import { formatEditable, readNumber } from './format.ts';
 import type { UnitPrefs } from './settings-model.ts';
-import { formLengthUnit, type FormField, type VesselForm } from './vessel-form.ts';
+import { lengthUnitOf, type FormField, type VesselForm } from './vessel-form.ts';
 import { messageOf } from './atmosphere.ts';
 
 export type { VesselSpec } from '../../core/check/vessel-spec.ts';
@@ -35,7 +35,7 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
     case 'tare': case 'weightTol': return { kind: 'mass', unit: f.massUnit };
     case 'mawp': case 'relief': case 'atmosphere': case 'gaugeSpan': case 'barometerTol': return { kind: 'pressure', unit: f.pressureUnit };
     case 'designTemperature': case 'ambientTemperature': return { kind: 'temperature', unit: f.temperatureUnit };
-    case 'diameterM': case 'straightLengthM': case 'elevationM': return { kind: 'length', unit: formLengthUnit(f) };
+    case 'diameterM': case 'straightLengthM': case 'elevationM': return { kind: 'length', unit: lengthUnitOf(f, field) };
     default: return undefined;
   }
 }
@@ -44,13 +44,12 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
 export function specFromForm(f: VesselForm): SpecResult {
   const errors: Partial<Record<FormField, string>> = {};
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
-    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field)); return NaN; }
+    try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field), f[field]); return NaN; }
   };
-  const lengthUnit = formLengthUnit(f);
-  const len = (n: number) => lengthToM(n, lengthUnit);
+  const len = (field: 'diameterM' | 'straightLengthM' | 'elevationM') => (n: number) => lengthToM(n, lengthUnitOf(f, field));
   const geometry: VesselGeometry = f.shape === 'stated-volume'
     ? { shape: 'stated-volume', volumeM3: read('volume', 'internal volume', (v) => volumeToM3(v, f.volumeUnit)) }
-    : { shape: f.shape, innerDiameterM: read('diameterM', 'inner diameter', len), straightLengthM: read('straightLengthM', 'straight length', len), head: { kind: f.head } };
+    : { shape: f.shape, innerDiameterM: read('diameterM', 'inner diameter', len('diameterM')), straightLengthM: read('straightLengthM', 'straight length', len('straightLengthM')), head: { kind: f.head } };
   const pa = (n: number) => pressureToPa(n, f.pressureUnit);
   const spec: VesselSpec = {
     tag: f.tag.trim(),
@@ -62,7 +61,7 @@ export function specFromForm(f: VesselForm): SpecResult {
     reliefSetGaugePa: read('relief', 'relief set pressure', pa),
     vacuumRated: f.vacuumRated === 'yes',
     siteAtmospherePa: f.atmosphereMode === 'elevation'
-      ? read('elevationM', 'elevation', (n) => atmosphereFromElevation(len(n)))
+      ? read('elevationM', 'site elevation', (n) => atmosphereFromElevation(len('elevationM')(n)))
       : read('atmosphere', 'site atmospheric pressure', pa),
     ambientTemperatureK: read('ambientTemperature', 'ambient temperature', (n) => temperatureToK(n, f.temperatureUnit)),
     instruments: {
@@ -74,13 +73,15 @@ export function specFromForm(f: VesselForm): SpecResult {
       volumeTolerancePercent: read('volumeTolPercent', 'volume tolerance'),
       barometerTolerancePa: f.atmosphereMode === 'elevation' ? 0 : read('barometerTol', 'barometer tolerance', pa),
     },
+    // The vessel's instruments read in the units its form was filled in.
+    readingUnits: { pressure: f.pressureUnit, temperature: f.temperatureUnit, mass: f.massUnit },
   };
   if (Object.keys(errors).length) return { ok: false, errors };
   try {
     validateVessel(spec);
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] ?? 'tag' : 'tag';
-    return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field)) } };
+    return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field), f[field]) } };
   }
   return { ok: true, spec };
 }
@@ -89,8 +90,11 @@ export function specFromForm(f: VesselForm): SpecResult {
 export function formFromSpec(stored: object, u: UnitPrefs): VesselForm {
   const s = stored as VesselSpec;
   const g = s.geometry;
+  const own = s.readingUnits;
+  // The vessel's own instrument units when it has them, else the person's.
+  const pu = own?.pressure ?? u.pressure, tu = own?.temperature ?? u.temperature, mu = own?.mass ?? u.mass;
   const n = (x: number) => formatEditable(x);
-  const p = (x: number) => n(pressureFromPa(x, u.pressure));
+  const p = (x: number) => n(pressureFromPa(x, pu));
   const ins = s.instruments;
   const sensor = ins.temperatureSensor;
   return {
@@ -98,19 +102,19 @@ export function formFromSpec(stored: object, u: UnitPrefs): VesselForm {
     shape: g.shape,
     diameterM: g.shape === 'stated-volume' ? '' : n(lengthFromM(g.innerDiameterM, u.length)),
     straightLengthM: g.shape === 'stated-volume' ? '' : n(lengthFromM(g.straightLengthM, u.length)),
-    lengthUnit: u.length,
+    lengthUnit: u.length, diameterUnit: u.length, straightLengthUnit: u.length, elevationUnit: u.length,
     head: g.shape === 'stated-volume' ? 'semi-ellipsoidal-2-1' : g.head.kind,
     volume: g.shape === 'stated-volume' ? n(volumeFromM3(g.volumeM3, u.volume)) : '',
     volumeUnit: u.volume, volumeTolPercent: n(ins.volumeTolerancePercent),
-    tare: n(massFromKg(s.tareKg, u.mass)), massUnit: u.mass, weightTol: n(massFromKg(ins.weightToleranceKg, u.mass)),
-    pressureUnit: u.pressure, mawp: p(s.mawpGaugePa), relief: p(s.reliefSetGaugePa),
+    tare: n(massFromKg(s.tareKg, mu)), massUnit: mu, weightTol: n(massFromKg(ins.weightToleranceKg, mu)),
+    pressureUnit: pu, mawp: p(s.mawpGaugePa), relief: p(s.reliefSetGaugePa),
     vacuumRated: s.vacuumRated ? 'yes' : 'no',
     gaugeSpan: p(ins.pressureGauge.spanPa), gaugeAccuracyPercent: n(ins.pressureGauge.accuracyPercentOfSpan),
-    temperatureUnit: u.temperature,
-    designTemperature: n(temperatureFromK(s.designTemperatureK, u.temperature)),
-    ambientTemperature: n(temperatureFromK(s.ambientTemperatureK, u.temperature)),
+    temperatureUnit: tu,
+    designTemperature: n(temperatureFromK(s.designTemperatureK, tu)),
+    ambientTemperature: n(temperatureFromK(s.ambientTemperatureK, tu)),
     sensor: sensor.kind === 'stated' ? 'stated' : sensor.sensorClass,
-    sensorTol: sensor.kind === 'stated' ? n(temperatureDifferenceFromK(sensor.toleranceK, u.temperature)) : '',
+    sensorTol: sensor.kind === 'stated' ? n(temperatureDifferenceFromK(sensor.toleranceK, tu)) : '',
     atmosphereMode: 'pressure', elevationM: '', atmosphere: p(s.siteAtmospherePa),
     barometerTol: p(ins.barometerTolerancePa),
   };

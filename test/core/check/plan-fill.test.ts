@@ -71,7 +71,7 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
       [{ targetTemperatureK: 650 }, 'target temperature'],
       [{ startTemperatureK: 400 }, 'start temperature'],
       [{ target: { kind: 'quality', quality: 1.2 } }, 'quality'],
-      [{ target: { kind: 'vapor-space-fraction', fraction: -0.1 } }, 'vapor-space fraction'],
+      [{ target: { kind: 'vapor-space-fraction', fraction: -0.1 } }, 'vapour-space fraction'],
       [{ heaterPowerW: 0 }, 'heater power'],
       [{ vesselHeatCapacityJPerK: -1 }, 'vessel heat capacity'],
       [{ liquidFullMarginK: -1 }, 'liquid-full margin'],

@@ -1,0 +1,9 @@
+// The core's light entry: units and their conversions, reading and formatting typed numbers,
+// input errors, and the standing note — what the start-up screens need, without the steam tables
+// or the check engine. Everything here is also exported by index.ts; the app's start-up code
+// imports this file so the engine stays in a chunk of its own, loaded right after first paint.
+export { InputError, requireInRange } from './errors.ts';
+export type { InputProblem } from './errors.ts';
+export * from './units/index.ts';
+export { STANDING_NOTE } from './check/cautions.ts';
+export type { SignalWord } from './check/cautions.ts';
