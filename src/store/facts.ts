@@ -40,6 +40,11 @@ export const STANDING_RULE_IDS: ReadonlySet<string> = new Set([
   'freezing', 'boil-over-on-opening', 'quality-undetermined',
 ]);
 
+/** Whether a rule id never decides a check's outcome (STANDING_RULE_IDS). */
+export function isStandingRuleId(rule: string): boolean {
+  return STANDING_RULE_IDS.has(rule);
+}
+
 function field(value: unknown, key: string): unknown {
   return typeof value === 'object' && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>)[key] : undefined;
 }

@@ -35,7 +35,7 @@ export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from '.
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
 export type { CheckFilter, ListOptions } from './checks.ts';
 export {
-  OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
+  OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';
 export type { Signal, StoredOutcome, StoredVerdict } from './facts.ts';
 

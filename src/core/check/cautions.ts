@@ -72,7 +72,7 @@ export interface RuleEntry {
 /**
  * Every rule: its signal word and its kind; why it carries that word is in rule-reasons.ts
  * (RULE_REASONS, one entry per rule, kept apart so the reasons are not shipped in the app's
- * start-up JavaScript), and the thresholds live beside the code that raises each rule
+ * JavaScript), and the thresholds live beside the code that raises each rule
  * (check-rules.ts). A rule added later (an instrument past its calibration date, for one) is one
  * more entry here, one in RULE_REASONS and one more test in test/core/check/rules.test.ts.
  */

@@ -1,7 +1,7 @@
 // Why each rule carries its signal word: the source, or "common practice" / "from memory" where
 // that is all there is (ISO 3864-2 / ANSI Z535.4 meanings at the top of cautions.ts). Kept apart
 // from RULE_CATALOGUE so these reasons, which the tests and the docs read, are not shipped in the
-// app's start-up JavaScript; the type makes every rule, retired ones too, have its reason.
+// app's JavaScript (the engine's chunk); the type makes every rule, retired ones too, have its reason.
 import type { CautionRule, RETIRED_RULES } from './cautions.ts';
 
 export const RULE_REASONS = {

@@ -1,10 +1,12 @@
 // The one adapter between the check engine's result and the screens' outcome. Every result since
 // the engine's second pass (issue 9) carries `findings`, `standing` and `outcome`, used as they are;
 // for a record saved before, they are derived from the cautions' rule ids with the engine's own
-// classification (isStandingRule, outcomeOfStoredCautions): findings are what this reading says
-// about the vessel now; standing hazards of hot contents and notes about the method never drive
-// the outcome.
-import { isStandingRule, outcomeOfStoredCautions, type Outcome } from '../../core/index.ts';
+// classification (the store's copy of the engine's STANDING_RULES, held equal to it by
+// test/store/facts.test.ts; taken from the store because the start-up script holds the store but
+// not the engine, which loads on demand): findings are what this reading says about the vessel
+// now; standing hazards of hot contents and notes about the method never drive the outcome.
+import type { Outcome, SignalWord } from '../../core/index.ts';
+import { isStandingRuleId } from '../../store/index.ts';
 
 export type { Outcome };
 
@@ -14,12 +16,14 @@ const ORDER: Record<string, number> = { DANGER: 0, WARNING: 1, CAUTION: 2, NOTIC
 
 /** True for a rule that never drives the outcome (the engine's standing hazards, method notes and standing note). */
 export function isStandingOrNote(rule: string): boolean {
-  return isStandingRule(rule);
+  return isStandingRuleId(rule);
 }
 
-/** The worst signal word among `findings`, 'none' when there are none (the engine's rule, for cautions read back as plain records). */
+/** The worst signal word among `findings`, 'none' when there are none. */
 export function worstOf(findings: readonly { signal: string }[]): Outcome {
-  return outcomeOfStoredCautions(findings.map((f) => ({ signal: f.signal, rule: '' })));
+  let best: Outcome = 'none';
+  for (const f of findings) if (f.signal in ORDER && (best === 'none' || ORDER[f.signal]! < ORDER[best]!)) best = f.signal as SignalWord;
+  return best;
 }
 
 export interface OutcomeSplit<C extends CautionLike> {
