@@ -2,10 +2,31 @@
 // vessels and a hash-chained check log of one device, written with the store's own canonical JSON
 // and SHA-256 (and, when asked, signed with a key made for it, as the store's signing.ts signs) so
 // it imports as a backup from another device would.
+import type { CheckResult, StoredCheckResult, VesselSpec } from '../src/core/index.ts';
 import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
 import { GENESIS_HASH, type CheckRecord, type PublicJwk, type VesselRecord } from '../src/store/records.ts';
 import { base64url, chainHeadMessage, SIGNATURE_PARAMS, SIGNING_ALGORITHM } from '../src/store/signing.ts';
 import { tagKeyOf } from '../src/store/vessels.ts';
+import { testVessel } from '../test/core/check/test-vessel.ts';
+
+/**
+ * A generated result holds only the figures the review reads (verdict, deviation, quality, liquid
+ * mass), invented; the store keeps any JSON, and this is the one place such a partial result is
+ * given the stored-result type.
+ */
+export function partialResult(figures: object): StoredCheckResult {
+  return figures as StoredCheckResult;
+}
+
+/** The same for a check about to be saved (appendCheck takes today's CheckResult). */
+export function partialNewResult(figures: object): CheckResult {
+  return figures as CheckResult;
+}
+
+/** An invented vessel spec for generated data: the check-engine tests' vessel with its own tag and volume. */
+export function inventedSpec(tag: string, volumeM3: number, tareKg: number): VesselSpec {
+  return testVessel({ tag, description: 'Generated vessel for benchmarks and tests (invented).', geometry: { shape: 'stated-volume', volumeM3 }, tareKg });
+}
 
 export interface LogSpec {
   deviceId: string;
@@ -76,7 +97,7 @@ export function generatedVessels(prefix: number, count: number, createdMs: numbe
       tag,
       tagKey: tagKeyOf(tag),
       description: 'Generated vessel for benchmarks and tests (invented).',
-      spec: { internalVolumeM3: 1 + (i % 7) * 0.5, tareKg: 400 + (i % 5) * 50, mawpPa: 1.0e6, reliefSetPa: 0.95e6 },
+      spec: inventedSpec(tag, 1 + (i % 7) * 0.5, 400 + (i % 5) * 50),
       retired: false,
       retiredAt: null,
       createdAt: iso(createdMs),
@@ -124,11 +145,11 @@ export async function generatedChecks(spec: LogSpec, vessels: readonly VesselRec
         temperature: { text: (140 + rnd() * 20).toFixed(1).replace('.', ','), unit: 'degC' },
         pressure: { text: (3 + rnd()).toFixed(2), unit: 'bar', reference: 'gauge' },
       },
-      reading: { temperatureK: 420, pressurePa: 450_000 },
-      result: {
+      reading: { time: iso(timeMs), temperatureK: 420, pressure: { reference: 'gauge', pressurePa: 450_000 }, weight: { kind: 'not-weighed' } },
+      result: partialResult({
         saturation: { pressureDeviationPa: deviationPa, verdict: { verdict } },
         inventory: { regime: 'two-phase', quality, liquidMassKg },
-      },
+      }),
       cautions: cautions as CheckRecord['cautions'],
       appVersion: 'generated',
       formulationId: 'IAPWS-IF97 (R7-97(2012))',
@@ -163,4 +184,63 @@ export async function generatedBackup(spec: LogSpec): Promise<string> {
   const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
   const checks = await generatedChecks(spec, vessels);
   return backupText(vessels, checks, iso(spec.startMs + spec.checks * spec.stepMs), spec.signed ? await signGenerated(checks) : undefined);
+}
+
+/** The kinds of reading evaluatedChecks takes in turn, each a different outcome on the generated vessels. */
+export const EVALUATED_KINDS = ['agrees', 'agrees', 'air', 'below-saturation', 'at-mawp', 'agrees'] as const;
+
+/**
+ * A log whose results are the check engine's own (evaluateCheck over invented readings on invented
+ * vessels), hash-chained like generatedChecks: checks that agree (outcome none), with air
+ * (WARNING), below saturation (CAUTION) and at MAWP (WARNING), in a fixed rotation.
+ */
+export async function evaluatedChecks(spec: LogSpec, vessels: readonly VesselRecord[]): Promise<CheckRecord[]> {
+  const { evaluateCheck, saturationPressure, saturationTemperature, vesselVolume } = await import('../src/core/index.ts');
+  const out: CheckRecord[] = [];
+  let prevHash = GENESIS_HASH;
+  for (let i = 0; i < spec.checks; i += 1) {
+    const vessel = vessels[i % vessels.length]!;
+    const timeMs = Math.floor((spec.startMs + i * spec.stepMs) / 1000) * 1000;
+    const kind = EVALUATED_KINDS[i % EVALUATED_KINDS.length]!;
+    // At MAWP the thermometer reads the gauge's saturation temperature, so only the limit is found.
+    const T = kind === 'at-mawp' ? saturationTemperature(0.995e6 + 101325) : 394.15 + (i % 7);
+    const pSat = saturationPressure(T);
+    const absolute = kind === 'air' ? pSat + 60e3 : kind === 'below-saturation' ? pSat - 60e3 : pSat;
+    // A third of the vessel liquid at the reading (v_f ≈ 1.06e-3 m³/kg at 121 °C): two-phase, not near liquid-full.
+    const netKg = (vesselVolume(vessel.spec.geometry) / 1.06e-3) * (kind === 'at-mawp' ? 0.1 : 0.33);
+    const reading = { time: iso(timeMs), temperatureK: T, pressure: { reference: 'absolute' as const, pressurePa: absolute }, weight: { kind: 'net' as const, netKg } };
+    const result = evaluateCheck(vessel.spec, reading);
+    const unsigned: Omit<CheckRecord, 'hash'> = {
+      id: fakeUuid(spec.seed, i),
+      deviceId: spec.deviceId,
+      seq: i + 1,
+      time: iso(timeMs),
+      timeMs,
+      technician: spec.technicians[i % spec.technicians.length]!,
+      note: kind,
+      vesselId: vessel.id,
+      vessel: { tag: vessel.tag, spec: vessel.spec },
+      inputs: { temperature: { text: (T - 273.15).toFixed(2), unit: 'degC' }, pressure: { text: (absolute / 1000).toFixed(1), unit: 'kPa', reference: 'absolute' } },
+      reading,
+      // The result as the app saves it: plain JSON.
+      result: JSON.parse(JSON.stringify(result)) as typeof result,
+      cautions: result.cautions.map(({ signal, message, rule }) => ({ signal, message, rule })),
+      appVersion: 'generated',
+      formulationId: result.formulationId,
+      corrects: null,
+      reason: null,
+      prevHash,
+    };
+    const hash = await computeCheckHash(unsigned);
+    out.push({ ...unsigned, hash });
+    prevHash = hash;
+  }
+  return out;
+}
+
+/** A backup file of evaluatedChecks over generated vessels. */
+export async function evaluatedBackup(spec: LogSpec): Promise<{ text: string; checks: CheckRecord[] }> {
+  const vessels = generatedVessels(parseInt(spec.vesselPrefix, 16), spec.vessels, spec.startMs);
+  const checks = await evaluatedChecks(spec, vessels);
+  return { text: backupText(vessels, checks, iso(spec.startMs + spec.checks * spec.stepMs)), checks };
 }

@@ -2,6 +2,7 @@
 // a save into a vessel's month that already holds many checks, with the month split into parts
 // (schema v5), beside what v4 did for the same save: read and write back the whole month's value.
 import { addVessel, appendCheck, closeStore, openStore } from '../src/store/index.ts';
+import { benchCheck } from './bench-check.ts';
 import { importBackup } from '../src/store/transfer.ts';
 import { getDb } from '../src/store/connection.ts';
 
@@ -30,11 +31,7 @@ export async function measure(backup: string, vesselId: string, monthMs: number,
   const db = await getDb();
   const parts = (await db.getAll('logMonthParts')).filter((p) => p.vesselId === vesselId).map((p) => p.rows.length);
   const save = await each(n, (i) => appendCheck({
-    vesselId, technician: 'Bench', note: `save ${i}`, takenAt: new Date(monthMs + 20 * 86_400_000 + i * 1000),
-    inputs: { temperature: { text: '151,8', unit: 'degC' }, pressure: { text: '400', unit: 'kPa', reference: 'gauge' } },
-    reading: { temperatureK: 424.95, pressurePa: 501_325 }, result: { saturation: { verdict: { verdict: 'consistent' } } },
-    cautions: [{ signal: 'NOTICE', message: 'Does not replace the inspection regime or local codes.', rule: 'standing-note' }],
-    appVersion: 'bench', formulationId: 'IAPWS-IF97 (R7-97(2012))',
+    ...benchCheck(vesselId, { note: `save ${i}`, appVersion: 'bench', takenAt: new Date(monthMs + 20 * 86_400_000 + i * 1000) }),
   }));
   // What v4 added to every save into this month: its one value read and written back whole.
   const all = (await db.getAll('logMonthParts')).filter((p) => p.vesselId === vesselId).flatMap((p) => p.rows);

@@ -5,9 +5,11 @@
 import { canonicalJson, computeCheckHash } from '../src/store/integrity.ts';
 import { addToLog, LOG_STORES } from '../src/store/log-layout.ts';
 import { getDb } from '../src/store/connection.ts';
-import { GENESIS_HASH, type CheckRecord, type JsonObject, type StoredCaution, type TypedInput, type VesselRecord } from '../src/store/records.ts';
+import { GENESIS_HASH, type CheckRecord, type StoredCaution, type TypedInput, type VesselRecord } from '../src/store/records.ts';
 import { formatIsoWithOffset } from '../src/store/time.ts';
 import { cloneJson } from '../src/store/validate.ts';
+import type { Reading } from '../src/core/index.ts';
+import { inventedSpec, partialResult } from './generated-log.ts';
 
 /** A UUID-shaped id from two numbers (deterministic, so runs compare). */
 export function benchId(group: number, n: number): string {
@@ -25,7 +27,7 @@ export function benchVessels(count: number): VesselRecord[] {
       tag: `BV-${String(i + 1).padStart(3, '0')}`,
       tagKey: `bv-${String(i + 1).padStart(3, '0')}`,
       description: `bench vessel ${i + 1}`,
-      spec: cloneJson({ volumeM3: 1 + (i % 7) * 0.5, tareKg: 800 + i, mawpPa: 1.0e6, reliefSetPa: 0.95e6, shape: { kind: 'vertical-cylinder', diameterM: 1.2, heightM: 2.1 } }),
+      spec: cloneJson(inventedSpec(`BV-${String(i + 1).padStart(3, '0')}`, 1 + (i % 7) * 0.5, 800 + i)),
       retired: false,
       retiredAt: null,
       createdAt: at,
@@ -54,8 +56,8 @@ function content(deviceId: string, device: number, i: number, vessels: VesselRec
       pressure: { text: '3,9', unit: 'bar', reference: 'gauge' },
       grossWeight: { text: String(2400 + (i % 90)), unit: 'kg' },
     }),
-    reading: cloneJson<JsonObject>({ temperatureK: t, pressure: { reference: 'gauge', pressurePa: 390000 + (i % 997) }, weight: { kind: 'gross', grossKg: 2400 + (i % 90) } }),
-    result: cloneJson<JsonObject>({
+    reading: cloneJson<Reading>({ time: formatIsoWithOffset(new Date(timeMs), 60), temperatureK: t, pressure: { reference: 'gauge', pressurePa: 390000 + (i % 997) }, weight: { kind: 'gross', grossKg: 2400 + (i % 90) } }),
+    result: partialResult({
       reading: { absolutePressurePa: 491325 + (i % 997), gaugePressurePa: 390000 + (i % 997), atmospherePa: 101325, netMassKg: 1250.5 + (i % 13) },
       saturation: { saturationPressurePa: 500120.25, pressureDeviationPa: -1204.75 + (i % 997), pressureBand: { plusMinus: 9000 }, verdict: { verdict: 'consistent' } },
       inventory: { regime: 'two-phase', quality: 1.25e-7 * ((i % 97) + 1), liquidMassKg: 1249.875, vaporMassKg: 0.625, liquidLevel: { levelM: 0.8125 } },

@@ -1,6 +1,8 @@
 // The script signing.bench-run.ts bundles and runs in a page served from 127.0.0.1 (IndexedDB needs
 // an origin): the cost of a chain-head signature, of verifying one, and of a whole save with it.
 import { addVessel, appendCheck, closeStore, openStore } from '../src/store/index.ts';
+import { benchCheck } from './bench-check.ts';
+import { inventedSpec } from './generated-log.ts';
 import { getDb } from '../src/store/connection.ts';
 import { deviceSigningKey, signChainHead } from '../src/store/signing.ts';
 import { verifyChainHead } from '../src/store/signatures.ts';
@@ -38,13 +40,9 @@ export async function measure(n: number): Promise<Record<string, { median: numbe
   const sign = await each(n, (i) => signChainHead(key, DEVICE, i + 1, HASH));
   const signature = await signChainHead(key, DEVICE, 1, HASH);
   const verify = await each(n, () => verifyChainHead(key.publicKey, DEVICE, { id: '', seq: 1, hash: HASH, signature }));
-  const vessel = await addVessel({ tag: 'BENCH-1', description: 'benchmark vessel (invented)', spec: { internalVolumeM3: 2, tareKg: 500 } });
+  const vessel = await addVessel({ tag: 'BENCH-1', description: 'benchmark vessel (invented)', spec: inventedSpec('BENCH-1', 2, 500) });
   const save = await each(Math.min(n, 200), (i) => appendCheck({
-    vesselId: vessel.id, technician: 'Bench', note: `save ${i}`,
-    inputs: { temperature: { text: '151,8', unit: 'degC' }, pressure: { text: '400', unit: 'kPa', reference: 'gauge' } },
-    reading: { temperatureK: 424.95, pressurePa: 501_325 }, result: { saturation: { verdict: { verdict: 'consistent' } } },
-    cautions: [{ signal: 'NOTICE', message: 'Does not replace the inspection regime or local codes.', rule: 'standing-note' }],
-    appVersion: 'bench', formulationId: 'IAPWS-IF97 (R7-97(2012))',
+    ...benchCheck(vessel.id, { note: `save ${i}`, appVersion: 'bench' }),
   }));
   await closeStore();
   return { sign, verify, save };

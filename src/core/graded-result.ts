@@ -3,13 +3,13 @@
 // note last), `outcome` the worst signal word among the findings alone, and `cautions` the union,
 // most severe first with the standing note last, for readers that know only one list.
 //
-// The check engine's own outcome helpers are being written beside this (src/core/check); until they
-// land, this module computes the same thing for the new rooms and exports nothing under their names.
+// The outcome is the check engine's own (outcomeOf, cautions.ts): this module keeps the names the
+// cycle and periodic-test rooms use (worstSignal, GradedOutcome) and delegates to it.
 
-import type { Caution, CautionWording, SignalWord } from './check/cautions.ts';
+import { outcomeOf, type Caution, type CautionWording, type Outcome, type SignalWord } from './check/cautions.ts';
 
-/** Worst signal word among the findings, or 'none'. The same values as the check engine's outcome. */
-export type GradedOutcome = SignalWord | 'none';
+/** Worst signal word among the findings, or 'none': the check engine's Outcome. */
+export type GradedOutcome = Outcome;
 
 /** The four lists every graded result carries. */
 export interface Graded {
@@ -21,11 +21,9 @@ export interface Graded {
 
 const ORDER: Record<SignalWord, number> = { DANGER: 0, WARNING: 1, CAUTION: 2, NOTICE: 3 };
 
-/** Worst signal word among the findings; 'none' when there are none. */
+/** Worst signal word among the findings; 'none' when there are none (outcomeOf). */
 export function worstSignal(findings: readonly { signal: SignalWord }[]): GradedOutcome {
-  let worst: GradedOutcome = 'none';
-  for (const f of findings) if (worst === 'none' || ORDER[f.signal] < ORDER[worst]) worst = f.signal;
-  return worst;
+  return outcomeOf(findings);
 }
 
 /**

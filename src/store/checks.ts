@@ -3,7 +3,7 @@
 import type { IDBPDatabase, StoreNames } from 'idb';
 import { getDb, setAfterOpen } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
-import { SIGNAL_ORDER, VERDICT_IDS, type Signal, type StoredVerdict } from './facts.ts';
+import { OUTCOME_IDS, outcomeOfMask, SIGNAL_ORDER, VERDICT_IDS, type Signal, type StoredOutcome, type StoredVerdict } from './facts.ts';
 import { canonicalJson, computeCheckHash } from './integrity.ts';
 import {
   addToLog,
@@ -117,8 +117,10 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
   const technician = requireText('technician', typeof input.technician === 'string' ? input.technician.trim() : input.technician, 1, TEXT_LIMITS.technician);
   const note = requireText('note', input.note ?? '', 0, TEXT_LIMITS.note);
   const inputs = cloneJson(requireInputs('inputs', input.inputs));
-  const reading = cloneJson(requireJsonObject('reading', input.reading));
-  const result = cloneJson(requireJson('result', input.result));
+  requireJsonObject('reading', input.reading);
+  requireJson('result', input.result);
+  const reading = cloneJson(input.reading);
+  const result = cloneJson(input.result);
   const cautions = cloneJson(requireCautions('cautions', input.cautions));
   const appVersion = requireText('appVersion', input.appVersion, 1, TEXT_LIMITS.version);
   const formulationId = requireText('formulationId', input.formulationId, 1, TEXT_LIMITS.version);
@@ -262,7 +264,9 @@ export interface CheckFilter {
   to?: Date;
   /** The stored saturation verdict; 'none' for records without one. */
   verdict?: StoredVerdict | 'none';
-  /** Records carrying a caution with this signal word (the standing note left out). */
+  /** Checks with this outcome: the most severe signal word among their findings, or 'none'. */
+  outcome?: StoredOutcome;
+  /** Checks with a finding of this signal word (schema v4 held every caution's words here; since v5, the findings'). */
   signal?: Signal;
   /** Part of the technician's name, any case. */
   technician?: string;
@@ -292,6 +296,11 @@ export function windowOf(filter: CheckFilter): LogWindow {
       throw invalid('verdict', `expected one of ${VERDICT_IDS.join(', ')} or none`);
     }
     tests.push(want === 'none' ? (r) => r[4] === null : (r) => r[4] === want);
+  }
+  if (filter.outcome !== undefined) {
+    const want = filter.outcome;
+    if (!OUTCOME_IDS.includes(want)) throw invalid('outcome', `expected one of ${OUTCOME_IDS.join(', ')}`);
+    tests.push((r) => outcomeOfMask(r[5]) === want);
   }
   if (filter.signal !== undefined) {
     const bit = 1 << SIGNAL_ORDER.indexOf(filter.signal);

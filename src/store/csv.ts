@@ -3,26 +3,26 @@
 import type { IDBPTransaction } from 'idb';
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
-import { signalMaskOf, worstSignalOfMask } from './facts.ts';
+import { outcomeOfRecord, signalMaskOf, worstSignalOfMask } from './facts.ts';
 import { blockPages, compareRows, countChecks, LOG_STORES, pageRows, readRecords, type MonthRow } from './log-layout.ts';
-import type { CheckCursor, CheckRecord, JsonValue, LongWorkOptions } from './records.ts';
+import type { CheckCursor, CheckRecord, LongWorkOptions } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { requireUuid } from './validate.ts';
 
 type Cell = string | number | boolean | null;
 
-/** Reads a value at a path (keys) inside plain JSON, or undefined. */
-function at(value: JsonValue | undefined, path: readonly string[]): JsonValue | undefined {
-  let v: JsonValue | undefined = value;
+/** Reads a value at a path (keys) inside plain JSON, or undefined (a stored record may be older or damaged: nothing is assumed of its shape). */
+function at(value: unknown, path: readonly string[]): unknown {
+  let v: unknown = value;
   for (const key of path) {
     if (v === null || typeof v !== 'object' || Array.isArray(v) || !Object.hasOwn(v, key)) return undefined;
-    v = v[key];
+    v = (v as Record<string, unknown>)[key];
   }
   return v;
 }
 
 /** A scalar from the record's JSON, or null (empty cell) for anything else or nothing. */
-function scalar(value: JsonValue | undefined): Cell {
+function scalar(value: unknown): Cell {
   return typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' ? value : null;
 }
 
@@ -54,7 +54,7 @@ export function roundedAsShown(value: number | null, band: number | null, scale 
   return Number(v.toFixed(decimalsForBand(band * scale))) || 0;
 }
 
-function num(value: JsonValue | undefined): number | null {
+function num(value: unknown): number | null {
   return typeof value === 'number' && Number.isFinite(value) ? value : null;
 }
 
@@ -133,6 +133,8 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'app version', cell: (r) => r.appVersion },
   { header: 'formulation', cell: (r) => r.formulationId },
   { header: 'hash (SHA-256)', cell: (r) => r.hash },
+  // Added after the first release, at the end so every earlier column keeps its place.
+  { header: 'outcome (worst signal word among the findings; none when none)', cell: (r) => outcomeOfRecord(r) },
 ];
 
 /**

@@ -34,8 +34,10 @@ export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from '.
 // Checks (append-only)
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
 export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';
-export { SIGNAL_ORDER, VERDICT_IDS, signalMaskOf, verdictOfResult, worstSignalOfMask } from './facts.ts';
-export type { Signal, StoredVerdict } from './facts.ts';
+export {
+  OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
+} from './facts.ts';
+export type { Signal, StoredOutcome, StoredVerdict } from './facts.ts';
 
 // Settings, drafts, device, persistence
 export {

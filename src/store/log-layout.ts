@@ -1,4 +1,4 @@
-// How the check log sits in IndexedDB (schema v4); this file and log-walks.ts are the only code
+// How the check log sits in IndexedDB (schema v4, rows' facts as of v5); this file and log-walks.ts are the only code
 // that reads or writes it.
 //
 // Why not one IndexedDB record per check: in Chromium every stored value and every index entry
@@ -53,8 +53,9 @@ export interface LogBlock {
 
 /**
  * One check in a month bucket: where it sorts and is stored, and the facts filters and totals use
- * (facts.ts): its saturation verdict (null: none), the signal words among its cautions as a
- * SIGNAL_ORDER bit mask (standing note left out), and the technician.
+ * (facts.ts): its saturation verdict (null: none), the signal words among its findings as a
+ * SIGNAL_ORDER bit mask (its outcome is the most severe; 0 is outcome none; since schema v5, before
+ * which it held every caution's words), and the technician.
  */
 export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number, verdict: StoredVerdict | null, signals: number, technician: string];
 

@@ -1,5 +1,9 @@
 // The shapes the store saves. Everything here is plain JSON (no Date, no undefined inside arrays,
-// no class instances) so a record hashes, exports and imports without conversion.
+// no class instances) so a record hashes, exports and imports without conversion. The check
+// engine's types name what a vessel spec, a reading and a result hold (versioned: a result saved by
+// an older release is a CheckResultV1), so the code that reads a stored one has its type at once;
+// the store itself checks only that they are plain JSON.
+import type { CheckResult, Reading, StoredCheckResult, VesselSpec } from '../core/index.ts';
 
 /** Any JSON value. Numbers must be finite. */
 export type JsonValue = null | boolean | number | string | JsonValue[] | { [key: string]: JsonValue };
@@ -7,11 +11,10 @@ export type JsonValue = null | boolean | number | string | JsonValue[] | { [key:
 export type JsonObject = { [key: string]: JsonValue };
 
 /**
- * The check engine's VesselSpec (SI), stored exactly as the engine takes it. Kept structural and
- * loose here so the store does not depend on the engine's evolving shape; the store never reads
- * inside it.
+ * The check engine's VesselSpec (SI), stored exactly as the engine takes it; a spec saved before a
+ * field was added simply lacks it (every later field is optional). The store never reads inside it.
  */
-export type VesselSpecData = JsonObject;
+export type VesselSpecData = VesselSpec;
 
 /** ISO 8601 date-time with an explicit UTC offset, e.g. "2026-12-01T22:05:00+01:00" (or "...Z"). */
 export type IsoDateTime = string;
@@ -40,14 +43,14 @@ export interface VesselRecord {
 export interface NewVessel {
   tag: string;
   description?: string;
-  spec: object;
+  spec: VesselSpec;
 }
 
 /** What the UI may change on a vessel (retire with retireVessel). */
 export interface VesselPatch {
   tag?: string;
   description?: string;
-  spec?: object;
+  spec?: VesselSpec;
 }
 
 /** One input field as the technician typed it, before any conversion. */
@@ -77,9 +80,9 @@ export interface NewCheck {
   /** Per field (e.g. "temperature", "pressure", "grossWeight"), the text and unit as typed. */
   inputs: Record<string, TypedInput>;
   /** The SI reading passed to evaluateCheck (K, Pa, kg ...), stored as-is (checked to be plain JSON). */
-  reading: object;
+  reading: Reading;
   /** evaluateCheck's result, stored as-is (checked to be plain JSON). */
-  result: object;
+  result: CheckResult;
   cautions: readonly StoredCaution[];
   appVersion: string;
   formulationId: string;
@@ -110,8 +113,10 @@ export interface CheckRecord {
   /** The vessel as it was when the check was saved. */
   vessel: { tag: string; spec: VesselSpecData };
   inputs: Record<string, TypedInput>;
-  reading: JsonObject;
-  result: JsonValue;
+  /** The reading as evaluateCheck took it. */
+  reading: Reading;
+  /** The result as the engine of `appVersion` returned it: today's CheckResult, or an older version's (findingsOfStoredResult reads either). */
+  result: StoredCheckResult;
   cautions: StoredCaution[];
   appVersion: string;
   formulationId: string;

@@ -4,6 +4,7 @@
 // finished after open by sealMigratedChecks() in db.ts.
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
+import { findingMaskOfText } from './facts.ts';
 import { addToLog, MONTH_PART_TARGET, type IdBucket, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
 
@@ -20,11 +21,13 @@ export const DB_NAME = 'tankside';
  * - v4: the log in few, large values (log-layout.ts says why and how): logBlocks, logMonths
  *   (index by-month) and logIds replace the one-record-per-check `checks` store, whose records
  *   move over unchanged (as their canonical JSON text) before it is deleted.
- * - v5: month buckets split by size: logMonthParts (key [vesselId, monthMs, startMs, startId],
+ * - v5: the month rows' signal-word mask holds the check's findings (its outcome) instead of every
+ *   caution's words; the rows are derived data, rebuilt from the stored texts; no record changes.
+ * - v6: month buckets split by size: logMonthParts (key [vesselId, monthMs, startMs, startId],
  *   index by-month) replaces logMonths, each month's rows moved over in parts of at most
  *   MONTH_PART_TARGET, so a save rewrites one part instead of a whole month.
  */
-export const DB_VERSION = 5;
+export const DB_VERSION = 6;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -135,8 +138,8 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
     version: 4,
     run(db, tx, next) {
       db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
-      // The log is moved with today's addToLog, which writes month parts (v5): the parts' store is
-      // made here, and rung 5 finds no v4 month buckets to split.
+      // The log is moved with today's addToLog, which writes month parts (v6) with today's facts
+      // (v5): the parts' store is made here, and rungs 5 and 6 find no v4 month buckets to change.
       createMonthParts(db);
       db.createObjectStore('logIds');
       const raw = unwrap(tx) as IDBTransaction;
@@ -168,6 +171,56 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
   },
   {
     version: 5,
+    run(db, tx, next) {
+      // The rows' facts are derived from the records: read every block (a page at a time, only
+      // IndexedDB requests awaited), work out each check's findings mask from its stored text,
+      // then rewrite the month buckets whose rows change. The blocks, and so every record and
+      // hash, stay byte for byte as they were.
+      const raw = unwrap(tx) as IDBTransaction;
+      if (!(unwrap(db) as IDBDatabase).objectStoreNames.contains('logMonths')) {
+        // Moved just now by rung 4 into month parts, with today's facts: nothing to rebuild.
+        next();
+        return;
+      }
+      const blocks = raw.objectStore('logBlocks');
+      const months = raw.objectStore('logMonths');
+      const rebuild = async (): Promise<void> => {
+        const masks = new Map<string, number>();
+        let range: IDBKeyRange | undefined;
+        for (;;) {
+          const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
+          for (const b of page) b.texts.forEach((text, i) => masks.set(`${b.deviceId}\u0000${b.seqs[i]}`, findingMaskOfText(text)));
+          if (page.length < REBUILD_PAGE) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
+        }
+        const buckets = await request<V4MonthBucket[]>(months.getAll());
+        const writes: Promise<unknown>[] = [];
+        for (const bucket of buckets) {
+          let changed = false;
+          for (const row of bucket.rows) {
+            const mask = masks.get(`${row[2]}\u0000${row[3]}`);
+            if (mask !== undefined && mask !== row[5]) {
+              row[5] = mask;
+              changed = true;
+            }
+          }
+          if (changed) writes.push(request(months.put(bucket)));
+        }
+        await Promise.all(writes);
+      };
+      rebuild().then(next, () => {
+        // Half-rebuilt rows must not commit: abort, and the v4 database stays as it was.
+        try {
+          raw.abort();
+        } catch {
+          // Already finished.
+        }
+      });
+    },
+  },
+  {
+    version: 6,
     run(db, tx, next) {
       const raw = unwrap(tx) as IDBTransaction;
       if (!(unwrap(db) as IDBDatabase).objectStoreNames.contains('logMonths')) {
@@ -202,21 +255,21 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
   },
 ];
 
-/** A month bucket as v4 kept it: one value for the whole month. */
+/** A month bucket as v4 and v5 kept it: one value for the whole month. */
 interface V4MonthBucket {
   vesselId: string;
   monthMs: number;
   rows: MonthRow[];
 }
 
-/** Month buckets of v4 moved per step of the v5 rung. */
+/** Month buckets of v5 moved per step of the v6 rung. */
 const MIGRATE_MONTHS = 200;
 
 function createMonthParts(db: IDBPDatabase<TanksideDB>): void {
   db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
 }
 
-/** A v4 month bucket as v5 parts: runs of MONTH_PART_TARGET rows (sorted again, should a hand edit have left them out of order). */
+/** A v5 month bucket as v6 parts: runs of MONTH_PART_TARGET rows (sorted again, should a hand edit have left them out of order). */
 function partsOfV4(b: V4MonthBucket): MonthBucket[] {
   const rows = [...b.rows].sort((x, y) => x[0] - y[0] || (x[1] < y[1] ? -1 : x[1] > y[1] ? 1 : 0));
   const out: MonthBucket[] = [];
@@ -228,6 +281,9 @@ function partsOfV4(b: V4MonthBucket): MonthBucket[] {
   }
   return out;
 }
+
+/** Blocks read per step of the v5 rung. */
+const REBUILD_PAGE = 50;
 
 /** Old checks moved per step of the v4 rung. */
 const MIGRATE_PAGE = 1000;

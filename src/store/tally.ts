@@ -2,7 +2,7 @@
 // On the long-jobs surface (transfer.ts), so it loads with the Review screen, not at start-up.
 import { windowOf, type CheckFilter } from './checks.ts';
 import { getDb } from './connection.ts';
-import { SIGNAL_ORDER, VERDICT_IDS, worstSignalOfMask, type Signal, type StoredVerdict } from './facts.ts';
+import { OUTCOME_IDS, outcomeOfMask, VERDICT_IDS, type StoredOutcome, type StoredVerdict } from './facts.ts';
 import { LOG_STORES } from './log-layout.ts';
 import { visitRows } from './log-walks.ts';
 
@@ -10,8 +10,8 @@ import { visitRows } from './log-walks.ts';
 export interface CheckTally {
   checks: number;
   byVerdict: Record<StoredVerdict | 'none', number>;
-  /** By the most severe signal word of each check; 'none' when it had only the standing note. */
-  byWorstSignal: Record<Signal | 'none', number>;
+  /** By outcome: the most severe signal word among each check's findings; 'none' when it has none. */
+  byOutcome: Record<StoredOutcome, number>;
   vessels: number;
   technicians: number;
   devices: number;
@@ -32,7 +32,7 @@ export async function tallyChecks(
   const tally: CheckTally = {
     checks: 0,
     byVerdict: Object.fromEntries([...VERDICT_IDS, 'none'].map((v) => [v, 0])) as CheckTally['byVerdict'],
-    byWorstSignal: Object.fromEntries([...SIGNAL_ORDER, 'none'].map((s) => [s, 0])) as CheckTally['byWorstSignal'],
+    byOutcome: Object.fromEntries(OUTCOME_IDS.map((s) => [s, 0])) as CheckTally['byOutcome'],
     vessels: 0,
     technicians: 0,
     devices: 0,
@@ -45,7 +45,7 @@ export async function tallyChecks(
   const finished = await visitRows((await getDb()).transaction(LOG_STORES), w, (r, vesselId) => {
     tally.checks += 1;
     tally.byVerdict[r[4] ?? 'none'] += 1;
-    tally.byWorstSignal[worstSignalOfMask(r[5]) ?? 'none'] += 1;
+    tally.byOutcome[outcomeOfMask(r[5])] += 1;
     vessels.add(vesselId);
     technicians.add(r[6]);
     devices.add(r[2]);

@@ -39,7 +39,8 @@ async function putVessel(record: VesselRecord, what: string): Promise<VesselReco
 export async function addVessel(input: NewVessel): Promise<VesselRecord> {
   const tag = requireTag(input.tag);
   const description = requireText('description', input.description ?? '', 0, DESCRIPTION_MAX);
-  const spec = cloneJson(requireJsonObject('spec', input.spec));
+  requireJsonObject('spec', input.spec);
+  const spec = cloneJson(input.spec);
   const now = formatIsoWithOffset(new Date(), undefined, true);
   const record: VesselRecord = {
     id: crypto.randomUUID(),
@@ -64,7 +65,8 @@ export async function updateVessel(id: string, patch: VesselPatch): Promise<Vess
   const tag = patch.tag === undefined ? existing.tag : requireTag(patch.tag);
   const description =
     patch.description === undefined ? existing.description : requireText('description', patch.description, 0, DESCRIPTION_MAX);
-  const spec = patch.spec === undefined ? existing.spec : cloneJson(requireJsonObject('spec', patch.spec));
+  if (patch.spec !== undefined) requireJsonObject('spec', patch.spec);
+  const spec = patch.spec === undefined ? existing.spec : cloneJson(patch.spec);
   const record: VesselRecord = {
     ...existing,
     tag,

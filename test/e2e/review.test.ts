@@ -96,7 +96,7 @@ describe('review across two profiles', () => {
         return el?.id || el?.textContent?.trim().slice(0, 24) || el?.tagName || '';
       }));
     }
-    const order = ['rf-vessel', 'rf-month', 'rf-from', 'rf-to', 'rf-verdict', 'rf-signal', 'rf-tech', 'rf-device', 'Clear filter', 'rl-order', 'Trend and report for GEN', 'Verify chains', 'Download CSV', 'Download JSON backup', 'rt-file'];
+    const order = ['rf-vessel', 'rf-month', 'rf-from', 'rf-to', 'rf-verdict', 'rf-outcome', 'rf-tech', 'rf-device', 'Clear filter', 'rl-order', 'Trend and report for GEN', 'Verify chains', 'Download CSV', 'Download JSON backup', 'rt-file'];
     const positions = order.map((name) => reached.findIndex((r) => r.startsWith(name)));
     expect(positions.every((p) => p >= 0), `${order.filter((_, i) => positions[i]! < 0)} not reached in ${reached}`).toBe(true);
     expect([...positions].sort((a, b) => a - b)).toEqual(positions);

@@ -1,17 +1,17 @@
-// A device upgrading in the real browser, from schema v3 (one IndexedDB record per check; v4 put the
-// log in blocks) and from v4 (one value per vessel and month; v5 splits it into parts): the old
-// database is written with raw IndexedDB exactly as that version created it, then the app opens
-// it. Every check must arrive unchanged: the review counts them, the chains verify, and the JSON
-// backup's check lines are the records' canonical JSON, in device and seq order. The logs are
-// generated test data (bench/generated-log.ts), not demo data.
+// Devices upgrading in the real browser: from schema v3 (one IndexedDB record per check) to the log
+// in blocks, from v4 (every caution's signal words in the month rows) to v5 (the findings'), and
+// from one value per vessel and month to v6's parts of at most 500 rows. The old database is written with raw IndexedDB exactly as that version created it, then the app
+// opens it. Every check must arrive unchanged: the review counts them (by outcome, after v5), the
+// chains verify, and the JSON backup's check lines are the records' canonical JSON, in device and
+// seq order. The logs are generated test data (bench/generated-log.ts and below), not demo data.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { DIST, launch, startServer, tempProfile, type StaticServer, verifyChainsOnScreen } from './harness.ts';
-import { generatedBackup } from '../../bench/generated-log.ts';
 import { factsOfRecord } from '../../src/store/facts.ts';
 import { DB_VERSION } from '../../src/store/schema.ts';
-import { canonicalJson } from '../../src/store/integrity.ts';
-import type { CheckRecord } from '../../src/store/records.ts';
+import { fakeUuid, generatedBackup, generatedVessels, partialResult } from '../../bench/generated-log.ts';
+import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
+import { GENESIS_HASH, type CheckRecord } from '../../src/store/records.ts';
 
 const LOG = {
   deviceId: '7c2d4e6f-8a9b-4c0d-9e1f-2a3b4c5d6e7f', vesselPrefix: '5eed0003', vessels: 3, checks: 250,
@@ -83,6 +83,54 @@ describe('upgrade from schema v3 in Chromium', () => {
     }
   });
 
+  it('v4 → v5 in Chromium: a release-0.1.0 log keeps every record byte for byte, and its totals now count outcomes', async () => {
+    const { vessels, blocks, months, ids, records, want } = await v4Layout();
+    const ctx = await launch(tempProfileV4.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.goto(`${server.url}not-the-app`);
+      await page.evaluate(async ({ vessels, blocks, months, ids }) => {
+        const db = await new Promise<IDBDatabase>((ok, no) => {
+          const r = indexedDB.open('tankside', 4);
+          r.onupgradeneeded = () => {
+            const d = r.result;
+            d.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+            d.createObjectStore('settings');
+            d.createObjectStore('drafts');
+            d.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+            d.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
+            d.createObjectStore('logIds');
+          };
+          r.onsuccess = () => ok(r.result);
+          r.onerror = () => no(r.error);
+        });
+        await new Promise<void>((ok, no) => {
+          const tx = db.transaction(['vessels', 'logBlocks', 'logMonths', 'logIds'], 'readwrite');
+          for (const v of vessels) tx.objectStore('vessels').put(v);
+          for (const b of blocks) tx.objectStore('logBlocks').put(b);
+          for (const m of months) tx.objectStore('logMonths').put(m);
+          for (const [key, bucket] of ids) tx.objectStore('logIds').put(bucket, key);
+          tx.oncomplete = () => ok();
+          tx.onerror = () => no(tx.error);
+        });
+        db.close();
+      }, { vessels, blocks, months, ids });
+
+      await page.goto(`${server.url}#/review`);
+      await page.locator('[data-review-state="ready"]').waitFor();
+      const complete = page.locator('.review-totals[data-complete="yes"]');
+      await complete.locator('[data-total="checks"]', { hasText: new RegExp(`^${records.length}$`) }).waitFor();
+      expect(await page.evaluate(async () => (await indexedDB.databases()).find((d) => d.name === 'tankside')?.version)).toBe(DB_VERSION);
+      for (const [outcome, n] of Object.entries(want)) expect(await complete.locator(`[data-total="outcome-${outcome}"]`).textContent(), outcome).toBe(String(n));
+      expect((await verifyChainsOnScreen(page)).lines.map((l) => l.chain)).toEqual(['ok']);
+      expect(await page.textContent('[data-chain="ok"]')).toContain(`${records.length} records`);
+      const [dl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download JSON backup' }).click()]);
+      const exported = readFileSync((await dl.path())!, 'utf8').split('\n').filter((l) => l.startsWith('{"appVersion"')).map((l) => l.replace(/,$/, ''));
+      expect(exported).toEqual(records.map((r) => canonicalJson(r)));
+    } finally {
+      await ctx.close();
+    }
+  });
   it('splits a v4 month bucket of 1,200 checks into parts: counted, listed, verified, exported byte for byte', async () => {
     // One vessel checked every 30 minutes for 25 days: one v4 month bucket of 1,200 rows.
     const backup = await generatedBackup({ ...LOG, deviceId: '2b3c4d5e-6f70-4812-a3b4-c5d6e7f80912', vesselPrefix: '5eed0004', vessels: 1, checks: 1200, startMs: Date.parse('2026-10-01T00:00:00Z'), stepMs: 1_800_000, seed: 6 });
@@ -160,3 +208,68 @@ describe('upgrade from schema v3 in Chromium', () => {
     }
   });
 });
+
+const tempProfileV4 = tempProfile();
+afterAll(() => tempProfileV4.remove());
+
+/**
+ * A v4 database's contents, by hand: checks as release 0.1.0 saved them (its rule ids and words:
+ * agreeing ones whose worst word is WARNING only through standing hazards, ones with air, ones at
+ * MAWP), blocks of 100 canonical texts, month rows holding every caution's words, and id buckets.
+ */
+async function v4Layout() {
+  const DEVICE = '4c4c4c4c-0000-4000-8000-000000000004';
+  const vessels = generatedVessels(0x5eed0004, 2, Date.parse('2026-09-01T06:00:00Z'));
+  const standing = [
+    { signal: 'WARNING', message: 'Liquid released to atmosphere flashes: 3.9 % turns to steam, about 62 times the liquid volume.', rule: 'flash-on-release' },
+    { signal: 'WARNING', message: 'Cooled to 20.0 °C the vessel falls to −99.0 kPa gauge and it is not rated for vacuum.', rule: 'vacuum-on-cooling' },
+    { signal: 'CAUTION', message: 'Contents at 121.0 °C: contact scalds within seconds.', rule: 'scald' },
+    { signal: 'NOTICE', message: 'Advisory figures only.', rule: 'standing-note' },
+  ] as const;
+  const kinds = [
+    { verdict: 'consistent', extra: [{ signal: 'NOTICE', message: 'Pressure and temperature agree with saturated steam within ±0.92 K.', rule: 'saturation-check-limits' }], outcome: 'none' },
+    { verdict: 'pressure-above-saturation', extra: [{ signal: 'WARNING', message: 'Pressure is 40.0 kPa above saturation for 121.0 °C.', rule: 'noncondensable-gas' }], outcome: 'WARNING' },
+    { verdict: 'consistent', extra: [{ signal: 'DANGER', message: 'Gauge pressure 995.0 kPa is at the MAWP (1000.0 kPa gauge).', rule: 'pressure-at-mawp' }], outcome: 'DANGER' },
+  ] as const;
+  const t0 = Date.parse('2026-09-29T06:00:00Z');
+  const records: CheckRecord[] = [];
+  const want = { DANGER: 0, WARNING: 0, CAUTION: 0, NOTICE: 0, none: 0 };
+  let prevHash = GENESIS_HASH;
+  for (let seq = 1; seq <= 240; seq += 1) {
+    const k = kinds[seq % 3]!;
+    const v = vessels[seq % 2]!;
+    const timeMs = t0 + seq * 3 * 3_600_000;
+    const unsigned = {
+      id: fakeUuid(0x4c4c4c4c, seq), deviceId: DEVICE, seq, time: new Date(timeMs).toISOString().replace('.000Z', 'Z'), timeMs,
+      technician: 'Gen Six', note: `v4 ${seq}`, vesselId: v.id, vessel: { tag: v.tag, spec: v.spec },
+      inputs: { temperature: { text: '121,0', unit: 'degC' } },
+      reading: { time: new Date(timeMs).toISOString().replace('.000Z', 'Z'), temperatureK: 394.15, pressure: { reference: 'gauge' as const, pressurePa: 104e3 }, weight: { kind: 'not-weighed' as const } },
+      // A release-0.1.0 result, cut to the part the review reads.
+      result: partialResult({ saturation: { verdict: { verdict: k.verdict } } }),
+      cautions: [...k.extra, ...standing].map((c) => ({ ...c })),
+      appVersion: '0.1.0', formulationId: 'IAPWS-IF97 (R7-97(2012))', corrects: null, reason: null, prevHash,
+    };
+    const record: CheckRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
+    records.push(record);
+    want[k.outcome] += 1;
+    prevHash = record.hash;
+  }
+  const texts = records.map((r) => canonicalJson(r));
+  const blocks = [0, 100, 200].map((start) => ({ deviceId: DEVICE, firstSeq: start + 1, seqs: records.slice(start, start + 100).map((r) => r.seq), texts: texts.slice(start, start + 100) }));
+  const monthOf = (ms: number) => { const d = new Date(ms); return Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), 1); };
+  const words = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'];
+  const byMonth = new Map<string, { vesselId: string; monthMs: number; rows: unknown[][] }>();
+  for (const r of records) {
+    const key = `${r.vesselId} ${monthOf(r.timeMs)}`;
+    if (!byMonth.has(key)) byMonth.set(key, { vesselId: r.vesselId, monthMs: monthOf(r.timeMs), rows: [] });
+    const mask = r.cautions.reduce((m, c) => (c.rule === 'standing-note' ? m : m | (1 << words.indexOf(c.signal))), 0);
+    byMonth.get(key)!.rows.push([r.timeMs, r.id, DEVICE, r.seq, (r.result as { saturation: { verdict: { verdict: string } } }).saturation.verdict.verdict, mask, r.technician]);
+  }
+  const idBuckets = new Map<string, Record<string, { at: [string, number] }>>();
+  for (const r of records) {
+    const key = r.id.slice(-2);
+    if (!idBuckets.has(key)) idBuckets.set(key, {});
+    idBuckets.get(key)![r.id] = { at: [DEVICE, r.seq] };
+  }
+  return { vessels, blocks, months: [...byMonth.values()], ids: [...idBuckets], records, want };
+}

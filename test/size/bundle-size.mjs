@@ -2,7 +2,11 @@
 // Size budget for the shipped JavaScript, gzip level 9, from the build manifest:
 //  - at start: the entry chunk and everything it imports statically — what every phone parses when
 //    the app opens — at most 45 KB (issue 11: the Check screen and what it needs first);
-//  - on demand: chunks behind a dynamic import (every screen but Check, the engine, the long jobs), at most 20 KB each;
+//  - on demand: chunks behind a dynamic import (every screen but Check, the engine, the long jobs), at most 20 KB each,
+//    but the check engine's chunk (`core-*.js`), at most 25 KB: issue 9's findings (40 rules and
+//    their wording, the edge states, the stored region 3 starting values) took it from 15.4 to
+//    24.3 KB; it loads when the page is first idle after the first screen, and the rules' reasons
+//    stay out of it (rule-reasons.ts);
 //  - the total is printed too. The service worker runs in its own scope and is printed for information.
 import { gzipSync } from 'node:zlib';
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
@@ -11,6 +15,8 @@ import { join, resolve } from 'node:path';
 const DIST = resolve(import.meta.dirname, '../../dist');
 const START_BUDGET_BYTES = 45 * 1024;
 const ON_DEMAND_BUDGET_BYTES = 20 * 1024;
+const ENGINE_CHUNK_BUDGET_BYTES = 25 * 1024;
+const budgetOf = (file) => (/^assets\/core-[\w-]+\.js$/.test(file) ? ENGINE_CHUNK_BUDGET_BYTES : ON_DEMAND_BUDGET_BYTES);
 const MANIFEST = join(DIST, '.vite/manifest.json');
 
 if (!existsSync(MANIFEST)) {
@@ -41,9 +47,9 @@ console.log('On demand:');
 for (const f of onDemand.sort()) {
   const s = gz(f);
   lazyTotal += s;
-  const over = s > ON_DEMAND_BUDGET_BYTES;
+  const over = s > budgetOf(f);
   failed ||= over;
-  console.log(`  ${f}: ${kb(s)} gzip${over ? `  OVER the ${kb(ON_DEMAND_BUDGET_BYTES)} budget` : ''}`);
+  console.log(`  ${f}: ${kb(s)} gzip${over ? `  OVER the ${kb(budgetOf(f))} budget` : ''}`);
 }
 if (existsSync(join(DIST, 'sw.js'))) console.log(`  (service worker sw.js: ${kb(gz('sw.js'))} gzip, not counted)`);
 console.log(`Shipped page JavaScript at start: ${kb(startTotal)} gzip (budget ${kb(START_BUDGET_BYTES)}); ` +

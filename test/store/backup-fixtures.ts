@@ -6,7 +6,7 @@ import { addVessel, appendCheck, closeStore, openStore, retireVessel, type Check
 import { exportBackup } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { resetPersistenceMemo } from '../../src/store/settings.ts';
-import { SPEC, sampleCheck } from './fixtures.ts';
+import { SPEC, sampleCheck, loose } from './fixtures.ts';
 import { storedChecks } from './log-access.ts';
 
 /** Points the store at `factory` (closing the previous connection). */
@@ -27,7 +27,7 @@ export async function dump(): Promise<{ vessels: VesselRecord[]; checks: CheckRe
 /** Fills the current device with `n` checks over two vessels (one retired) and one correction. */
 export async function seedDevice(n: number, tagPrefix = 'FT'): Promise<void> {
   const a = await addVessel({ tag: `${tagPrefix}-1`, description: 'flash tank', spec: SPEC });
-  const b = await addVessel({ tag: `${tagPrefix}-2`, spec: { ...SPEC, volumeM3: 4 } });
+  const b = await addVessel({ tag: `${tagPrefix}-2`, spec: loose.spec({ ...SPEC, volumeM3: 4 }) });
   const t0 = Date.parse('2026-11-30T06:00:00Z');
   let first: CheckRecord | null = null;
   for (let i = 0; i < n; i += 1) {
@@ -35,7 +35,7 @@ export async function seedDevice(n: number, tagPrefix = 'FT'): Promise<void> {
       sampleCheck(i % 3 ? a.id : b.id, {
         takenAt: new Date(t0 + i * 3_600_000),
         note: i === 1 ? '=HYPERLINK("x") left by a test' : `shift ${i}`,
-        reading: { temperatureK: 420 + i / 10, pressurePa: 450000 + i * 1000, grossMassKg: 2400 + i },
+        reading: loose.reading({ temperatureK: 420 + i / 10, pressurePa: 450000 + i * 1000, grossMassKg: 2400 + i }),
       }),
     );
     first ??= c;

@@ -3,7 +3,7 @@
 // appendCheck would have saved them, since saving a thousand through appendCheck is slow).
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import { SPEC, useFreshDatabase } from './fixtures.ts';
+import { SPEC, useFreshDatabase, loose } from './fixtures.ts';
 import { dump } from './backup-fixtures.ts';
 import { addVessel, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, exportCsv, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
@@ -46,8 +46,8 @@ async function makeChain(
       vesselId: vesselIds[seq % vesselIds.length]!,
       vessel: { tag, spec: SPEC },
       inputs: { temperature: { text: '151,8', unit: 'degC' } },
-      reading: { temperatureK: 424.95 + seq / 1000 },
-      result: { saturation: { verdict: { verdict: 'consistent' } } },
+      reading: loose.reading({ temperatureK: 424.95 + seq / 1000 }),
+      result: loose.stored({ saturation: { verdict: { verdict: 'consistent' } } }),
       cautions: [],
       appVersion: '0.1.0',
       formulationId: 'IAPWS-IF97 (R7-97(2012))',

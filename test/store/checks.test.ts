@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { SPEC, failWritesOverQuota, sampleCheck, useFreshDatabase } from './fixtures.ts';
+import { SPEC, failWritesOverQuota, sampleCheck, useFreshDatabase, loose } from './fixtures.ts';
 import { GENESIS_HASH, addVessel, appendCheck, loadDraft, saveDraft, checksForVessel, computeCheckHash, correctionsOf, deviceId, getCheck, listChecks, persistenceState, type CheckRecord } from '../../src/store/index.ts';
 import { verifyStoredChains } from '../../src/store/transfer.ts';
 import { getDb } from '../../src/store/connection.ts';
@@ -134,7 +134,7 @@ describe('appendCheck', () => {
     const cases: [Partial<Parameters<typeof sampleCheck>[1]>, string][] = [
       [{ technician: ' ' }, 'technician'],
       [{ note: 'x'.repeat(4001) }, 'note'],
-      [{ reading: { temperatureK: Number.POSITIVE_INFINITY } }, 'reading.temperatureK'],
+      [{ reading: loose.reading({ temperatureK: Number.POSITIVE_INFINITY }) }, 'reading.temperatureK'],
       [{ inputs: { pressure: { text: '4', unit: 'bar', reference: 'vacuum' as 'gauge' } } }, 'inputs.pressure.reference'],
       [{ cautions: [{ signal: 'DANGEROUS' as 'DANGER', message: 'm', rule: 'r' }] }, 'cautions[0].signal'],
       [{ appVersion: '' }, 'appVersion'],
@@ -176,7 +176,7 @@ describe('appendCheck', () => {
 async function appendCheckShape(vesselId: string, device: string): Promise<CheckRecord> {
   const unsigned = {
     id: crypto.randomUUID(), deviceId: device, seq: 1, time: '2026-12-01T20:00:00+00:00', timeMs: Date.parse('2026-12-01T20:00:00Z'),
-    technician: 'Other tab', note: '', vesselId, vessel: { tag: 'FT-204', spec: SPEC }, inputs: {}, reading: {}, result: {},
+    technician: 'Other tab', note: '', vesselId, vessel: { tag: 'FT-204', spec: SPEC }, inputs: {}, reading: loose.reading({}), result: loose.stored({}),
     cautions: [], appVersion: '0.1.0', formulationId: 'IAPWS-IF97 (R7-97(2012))', corrects: null, reason: null, prevHash: GENESIS_HASH,
   };
   return { ...unsigned, hash: await computeCheckHash(unsigned) };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import fc from 'fast-check';
-import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
+import { SPEC, sampleCheck, useFreshDatabase, loose } from './fixtures.ts';
 import { addVessel, appendCheck, type CheckRecord } from '../../src/store/index.ts';
 import { exportCsv } from '../../src/store/transfer.ts';
 import { csvCell, csvFromChecks, CSV_BOM, CSV_COLUMNS, roundedAsShown } from '../../src/store/csv.ts';
@@ -32,8 +32,8 @@ describe('CSV export', () => {
         await appendCheck(
           sampleCheck(v.id, {
             takenAt: new Date(Date.parse('2026-12-01T06:00:00Z') + i * 3_600_000),
-            reading: { temperatureK: 424.95 + i, pressure: { reference: 'gauge', pressurePa: 400000 + i }, weight: { kind: 'gross', grossKg: 2450 } },
-            result: result(i),
+            reading: loose.reading({ temperatureK: 424.95 + i, pressure: { reference: 'gauge', pressurePa: 400000 + i }, weight: { kind: 'gross', grossKg: 2450 } }),
+            result: loose.result(result(i)),
           }),
         ),
       );
@@ -132,7 +132,7 @@ describe('CSV of a hand-edited store', () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     const t0 = Date.parse('2026-11-30T06:00:00Z');
     const saved: CheckRecord[] = [];
-    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: result(i) })));
+    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: loose.result(result(i)) })));
     const stranger = '99999999-0000-4000-8000-000000000099';
     await editStored(saved[2]!.id, (r) => ({ ...r, id: stranger }));
     const ids = parse(await exportCsv()).data.map((r) => r['check id']);
@@ -143,7 +143,7 @@ describe('CSV of a hand-edited store', () => {
     const v = await addVessel({ tag: 'FT-204', spec: SPEC });
     const t0 = Date.parse('2026-11-30T06:00:00Z');
     const saved: CheckRecord[] = [];
-    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: result(i) })));
+    for (let i = 0; i < 5; i += 1) saved.push(await appendCheck(sampleCheck(v.id, { takenAt: new Date(t0 + i * 60_000), result: loose.result(result(i)) })));
     await editStored(saved[1]!.id, () => null);
     expect(parse(await exportCsv()).data.map((r) => r['check id'])).toEqual(saved.filter((_, i) => i !== 1).map((r) => r.id));
   });

@@ -3,6 +3,7 @@
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach } from 'vitest';
+import type { CheckResult, Reading, StoredCheckResult, VesselSpec } from '../../src/core/index.ts';
 import { closeStore, openStore, type NewCheck, type OpenStoreOptions, type StoreEvent } from '../../src/store/index.ts';
 import { resetPersistenceMemo } from '../../src/store/settings.ts';
 
@@ -21,8 +22,20 @@ export function useFreshDatabase(options: OpenStoreOptions = {}): void {
   });
 }
 
+/**
+ * The store keeps a spec, a reading and a result as they come (it checks only that they are plain
+ * JSON), so its tests use small invented stand-ins rather than the engine's full shapes; these
+ * give them the record types' names.
+ */
+export const loose = {
+  spec: (x: object) => x as VesselSpec,
+  reading: (x: object) => x as Reading,
+  result: (x: object) => x as CheckResult,
+  stored: (x: object) => x as StoredCheckResult,
+};
+
 /** A vessel spec of the loose JSON kind the store keeps (test data). */
-export const SPEC = { volumeM3: 2.5, tareKg: 1200, mawpPa: 1.0e6, reliefSetPa: 0.95e6 };
+export const SPEC = loose.spec({ volumeM3: 2.5, tareKg: 1200, mawpPa: 1.0e6, reliefSetPa: 0.95e6 });
 
 /** A check for `vesselId`; fields may be overridden. */
 export function sampleCheck(vesselId: string, overrides: Partial<NewCheck> = {}): NewCheck {
@@ -36,8 +49,8 @@ export function sampleCheck(vesselId: string, overrides: Partial<NewCheck> = {})
       pressure: { text: '4,0', unit: 'bar', reference: 'gauge' },
       grossWeight: { text: '2450', unit: 'kg' },
     },
-    reading: { temperatureK: 424.95, pressurePa: 501325, grossMassKg: 2450 },
-    result: { verdict: 'consistent', quality: 0.0123, liquidMassKg: 1243.2 },
+    reading: loose.reading({ temperatureK: 424.95, pressurePa: 501325, grossMassKg: 2450 }),
+    result: loose.result({ verdict: 'consistent', quality: 0.0123, liquidMassKg: 1243.2 }),
     cautions: [{ signal: 'CAUTION', message: 'Test caution text.', rule: 'test-rule' }],
     appVersion: '0.1.0',
     formulationId: 'IAPWS-IF97 (R7-97(2012))',

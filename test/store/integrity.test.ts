@@ -1,3 +1,4 @@
+import { loose } from './fixtures.ts';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
@@ -145,10 +146,10 @@ async function chain(deviceId: string, n: number): Promise<CheckRecord[]> {
       technician: 'R. Okafor',
       note: `n${seq}`,
       vesselId: '6f0c8a52-3c1d-4e8a-9b2f-0d7e5a1c4b93',
-      vessel: { tag: 'CR-3', spec: { volumeM3: 1.8 } },
+      vessel: { tag: 'CR-3', spec: loose.spec({ volumeM3: 1.8 }) },
       inputs: { temperature: { text: '150', unit: 'degC' } },
-      reading: { temperatureK: 423.15 },
-      result: { verdict: 'consistent' },
+      reading: loose.reading({ temperatureK: 423.15 }),
+      result: loose.stored({ verdict: 'consistent' }),
       cautions: [],
       appVersion: '0.1.0',
       formulationId: 'IAPWS-IF97 (R7-97(2012))',

@@ -3,7 +3,7 @@
 // records; the layout never looks inside a record beyond its id, device, seq, vessel and time.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { useFreshDatabase } from './fixtures.ts';
+import { useFreshDatabase, loose } from './fixtures.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { canonicalJson, chainFieldsOfText, contentOfText, hashedContent } from '../../src/store/integrity.ts';
 import {
@@ -37,7 +37,7 @@ function record(deviceIndex: number, seq: number, timeMs: number, vesselIndex: n
   return {
     id: `${device.slice(0, 8)}-2222-4000-8000-${String(seq).padStart(12, '0')}`,
     deviceId: device, seq, time: new Date(timeMs).toISOString(), timeMs, technician: 'T. Test', note: '',
-    vesselId: VESSELS[vesselIndex]!, vessel: { tag: 'X-1', spec: {} }, inputs: {}, reading: {}, result: {}, cautions: [],
+    vesselId: VESSELS[vesselIndex]!, vessel: { tag: 'X-1', spec: loose.spec({}) }, inputs: {}, reading: loose.reading({}), result: loose.stored({}), cautions: [],
     appVersion: '0', formulationId: 'test', corrects, reason: corrects ? 'test' : null, prevHash: '0'.repeat(64), hash: 'f'.repeat(64),
   };
 }

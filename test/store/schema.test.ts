@@ -5,7 +5,9 @@ import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { appendCheck, checksForVessel, closeStore, correctionsOf, getCheck, getSetting, getVessel, listChecks, loadDraft, openStore, saveDraft, GENESIS_HASH, type StoreEvent } from '../../src/store/index.ts';
-import { verifyStoredChains } from '../../src/store/transfer.ts';
+import Papa from 'papaparse';
+import { exportCsv, tallyChecks, verifyStoredChains } from '../../src/store/transfer.ts';
+import { outcomeOfMask, queryChecks } from '../../src/store/index.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
 import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
@@ -149,7 +151,7 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(5);
+    expect(DB_VERSION).toBe(6);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
@@ -284,7 +286,7 @@ describe('upgrade ladder', () => {
     expect(events).toEqual([]);
   });
 
-  it('v4 → v5: each month bucket is split into parts of 500 rows; listing, counts, lookups and chains as before', async () => {
+  it('v4 → v6: each month bucket is split into parts of 500 rows (the v5 rebuild of its rows on the way); listing, counts, lookups and chains as before', async () => {
     // 1,203 chained checks of one device: 1,200 on one vessel in January 2026 (one v4 month bucket
     // of 1,200 rows), 3 on another in February; blocks of 100 and id buckets as v4 wrote them.
     const D = '4a6b8c0d-1e2f-4a3b-8c4d-5e6f7a8b9c0d';
@@ -350,7 +352,7 @@ describe('upgrade ladder', () => {
     expect((await db.getAll('logMonthParts')).map((p) => p.rows.length)).toEqual([500, 500, 201, 3]);
   });
 
-  it('a database at the current version reopens untouched', async () => {
+  it('a current database reopens untouched', async () => {
     await openStore();
     await closeStore();
     const old = await rawOpen(DB_VERSION, () => {
@@ -360,4 +362,98 @@ describe('upgrade ladder', () => {
     await openStore();
     expect((await getDb()).version).toBe(DB_VERSION);
   });
+
+  it('v4 → v5: month rows hold each check\'s findings (its outcome), rebuilt from the stored texts; every record stays byte for byte; v4 logs list, filter, export and verify', async () => {
+    const old = await rawOpen(4, createV4);
+    const DEVICE = 'd4000000-0000-4000-8000-000000000004';
+    // Checks as release 0.1.0 saved them (its cautions and rule ids, invented readings): an agreeing
+    // check whose worst word is WARNING only through standing hazards, one with air, one at MAWP.
+    const standing = [
+      { signal: 'WARNING', message: 'Liquid released to atmosphere flashes: 3.9 % turns to steam.', rule: 'flash-on-release' },
+      { signal: 'WARNING', message: 'Cooled to 20.0 °C the vessel falls to −99.0 kPa gauge.', rule: 'vacuum-on-cooling' },
+      { signal: 'CAUTION', message: 'Contents at 121.0 °C: contact scalds within seconds.', rule: 'scald' },
+      { signal: 'NOTICE', message: 'Quality here is the bulk vapor mass fraction.', rule: 'bulk-quality-not-dryness' },
+      { signal: 'NOTICE', message: 'Advisory figures only.', rule: 'standing-note' },
+    ];
+    const kinds = [
+      { verdict: 'consistent', extra: [{ signal: 'NOTICE', message: 'Pressure and temperature agree within ±0.9 K.', rule: 'saturation-check-limits' }], outcome: 'none' },
+      { verdict: 'pressure-above-saturation', extra: [{ signal: 'WARNING', message: 'Pressure is 40.0 kPa above saturation.', rule: 'noncondensable-gas' }], outcome: 'WARNING' },
+      { verdict: 'consistent', extra: [{ signal: 'DANGER', message: 'Gauge pressure 995.0 kPa is at the MAWP.', rule: 'pressure-at-mawp' }], outcome: 'DANGER' },
+    ] as const;
+    const t0 = Date.parse('2026-10-31T22:00:00Z'); // crosses a month
+    const records: Record<string, unknown>[] = [];
+    let prevHash = GENESIS_HASH;
+    for (let seq = 1; seq <= 150; seq += 1) {
+      const k = kinds[seq % 3]!;
+      const { vesselId: _v, takenAt: _t, corrects: _c, reason: _r, ...rest } = sampleCheck(VESSEL_ID);
+      const unsigned = {
+        ...rest, id: `d4000000-0000-4000-8000-${String(seq).padStart(12, '0')}`, deviceId: DEVICE, seq,
+        time: new Date(t0 + seq * 600_000).toISOString().replace('.000Z', 'Z'), timeMs: t0 + seq * 600_000,
+        vesselId: VESSEL_ID, vessel: { tag: 'CR-3', spec: SPEC }, note: `v4 ${seq}`, corrects: null, reason: null, prevHash,
+        result: { saturation: { verdict: { verdict: k.verdict } } },
+        cautions: [...k.extra, ...standing],
+      };
+      const hash = await computeCheckHash(unsigned as never);
+      records.push({ ...unsigned, hash });
+      prevHash = hash;
+    }
+    // The v4 layout by hand: blocks of 100, month rows with every caution's words, the id buckets.
+    const texts = records.map((r) => canonicalJson(r));
+    const blocks = [0, 100].map((start) => ({ deviceId: DEVICE, firstSeq: start + 1, seqs: records.slice(start, start + 100).map((r) => r['seq']), texts: texts.slice(start, start + 100) }));
+    const monthOf = (ms: number) => { const d = new Date(ms); return Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), 1); };
+    const everyWord = (r: Record<string, unknown>) => (r['cautions'] as { signal: string; rule: string }[]).reduce((m, c) => c.rule === 'standing-note' ? m : m | (1 << ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'].indexOf(c.signal)), 0);
+    const months = new Map<number, unknown[][]>();
+    for (const r of records) {
+      const m = monthOf(r['timeMs'] as number);
+      if (!months.has(m)) months.set(m, []);
+      months.get(m)!.push([r['timeMs'], r['id'], DEVICE, r['seq'], (r['result'] as { saturation: { verdict: { verdict: string } } }).saturation.verdict.verdict, everyWord(r), r['technician']]);
+    }
+    const ids: Record<string, Record<string, { at: [string, number] }>> = {};
+    for (const r of records) ((ids[(r['id'] as string).slice(-2)] ??= {})[r['id'] as string] = { at: [DEVICE, r['seq'] as number] });
+    await rawWrite(old, [
+      ['vessels', vesselV1()],
+      ['settings', DEVICE, SETTING_DEVICE_ID],
+      ...blocks.map((b): [string, unknown] => ['logBlocks', b]),
+      ...[...months].map(([monthMs, rows]): [string, unknown] => ['logMonths', { vesselId: VESSEL_ID, monthMs, rows }]),
+      ...Object.entries(ids).map(([key, bucket]): [string, unknown, IDBValidKey] => ['logIds', bucket, key]),
+    ]);
+    // Before: every row's mask says WARNING at least (flash on release), so the old totals could not tell the checks apart.
+    for (const rows of months.values()) for (const row of rows) expect((row[5] as number) & 0b10).toBe(0b10);
+    old.close();
+
+    await openStore({ onEvent: (e) => events.push(e) });
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    // Records byte for byte: the blocks hold exactly the texts v4 held.
+    expect(await db.getAll('logBlocks')).toEqual(blocks);
+    // The rows now hold the findings: agreeing checks none, air WARNING, at MAWP DANGER (the word it was saved with).
+    const want = new Map(records.map((r, i) => [r['id'], kinds[(i + 1) % 3]!.outcome]));
+    for (const bucket of await db.getAll('logMonthParts')) {
+      for (const row of bucket.rows) expect(outcomeOfMask(row[5])).toBe(want.get(row[1]));
+    }
+    // List, filter and count by outcome; export; verify.
+    const totals = await tallyChecks();
+    expect(totals?.byOutcome).toEqual({ DANGER: 50, WARNING: 50, CAUTION: 0, NOTICE: 0, none: 50 });
+    const none = await queryChecks({ outcome: 'none', limit: 1000 });
+    expect(none.checks).toHaveLength(50);
+    for (const c of none.checks) expect(c.cautions.some((x) => x.rule === 'saturation-check-limits')).toBe(true);
+    expect((await queryChecks({ outcome: 'DANGER', limit: 1000 })).checks.every((c) => c.cautions[0]!.rule === 'pressure-at-mawp')).toBe(true);
+    const csv = Papa.parse<Record<string, string>>(await exportCsv(), { header: true, skipEmptyLines: true }).data;
+    expect(csv).toHaveLength(150);
+    const byId = new Map(csv.map((row) => [row['check id'], row]));
+    for (const r of records) expect(byId.get(r['id'] as string)!['outcome (worst signal word among the findings; none when none)']).toBe(want.get(r['id']));
+    expect(await verifyStoredChains()).toMatchObject([{ deviceId: DEVICE, status: 'ok', count: 150, headSeq: 150 }]);
+    expect(events).toEqual([]);
+  });
 });
+
+/** Schema v4 exactly as it shipped (a fresh v4 install). */
+function createV4(db: IDBDatabase): void {
+  db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+  db.createObjectStore('settings');
+  db.createObjectStore('drafts');
+  db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+  db.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
+  db.createObjectStore('logIds');
+}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
+import { SPEC, sampleCheck, useFreshDatabase, loose } from './fixtures.ts';
 import {
   StoreError,
   addVessel,
@@ -28,7 +28,7 @@ describe('vessels', () => {
 
   it('stores the spec as given, detached from the caller', async () => {
     const spec = { ...SPEC, instruments: { gauge: { accuracyPa: 5000 } } };
-    const v = await addVessel({ tag: 'AC-1', spec });
+    const v = await addVessel({ tag: 'AC-1', spec: loose.spec(spec) });
     spec.instruments.gauge.accuracyPa = 1;
     expect((await getVessel(v.id))!.spec).toEqual({ ...SPEC, instruments: { gauge: { accuracyPa: 5000 } } });
   });
@@ -63,7 +63,7 @@ describe('vessels', () => {
   it('refuses bad input naming the field and range', async () => {
     await expect(addVessel({ tag: '   ', spec: SPEC })).rejects.toMatchObject({ code: 'invalid-record', field: 'tag' });
     await expect(addVessel({ tag: 'x'.repeat(65), spec: SPEC })).rejects.toThrow(/tag: 65 characters; allowed 1 to 64/);
-    await expect(addVessel({ tag: 'A', spec: { volumeM3: Number.NaN } })).rejects.toMatchObject({ field: 'spec.volumeM3' });
+    await expect(addVessel({ tag: 'A', spec: loose.spec({ volumeM3: Number.NaN }) })).rejects.toMatchObject({ field: 'spec.volumeM3' });
     await expect(addVessel({ tag: 'A', spec: [] as never })).rejects.toMatchObject({ field: 'spec' });
     await expect(updateVessel(crypto.randomUUID(), { tag: 'B' })).rejects.toMatchObject({ code: 'not-found' });
     await expect(updateVessel('not-a-uuid', {})).rejects.toBeInstanceOf(StoreError);

@@ -6,7 +6,7 @@
 // version are shown, never merged. The design these follow is issue 15 and
 // ../shared/reference/plant-sync.md; the chain rules are BACKUP-FORMAT.md's (SHA-256, FIPS 180-4).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { fakeUuid } from '../../bench/generated-log.ts';
+import { fakeUuid, inventedSpec, partialNewResult } from '../../bench/generated-log.ts';
 import { makeDevice, seedChain, type Device } from './devices.ts';
 import { StandIn } from './stand-in.ts';
 
@@ -19,7 +19,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-const SPEC = { internalVolumeM3: 2.5, tareKg: 1200, mawpPa: 1.0e6, reliefSetPa: 0.95e6 }; // invented test vessel
+const SPEC = inventedSpec('TEST-SPEC', 2.5, 1200); // invented test vessel
 
 async function saveCheck(d: Device, vesselId: string, note: string): Promise<void> {
   await d.store.appendCheck({
@@ -27,8 +27,8 @@ async function saveCheck(d: Device, vesselId: string, note: string): Promise<voi
     technician: 'Test Technician',
     note,
     inputs: { temperature: { text: '151,8', unit: 'degC' } },
-    reading: { temperatureK: 424.95 },
-    result: { verdict: 'consistent' },
+    reading: { time: '2026-12-01T10:00:00+01:00', temperatureK: 424.95, pressure: { reference: 'gauge', pressurePa: 4e5 }, weight: { kind: 'not-weighed' } },
+    result: partialNewResult({ verdict: 'consistent' }), // a stand-in result: the store keeps any JSON
     cautions: [],
     appVersion: 'test',
     formulationId: 'IAPWS-IF97 (R7-97(2012))',

@@ -68,7 +68,8 @@ describe('range messages', () => {
     const text = (errorText as unknown as (...a: unknown[]) => string)(error, { kind: 'pressure', unit: 'kPa' }, '-50');
     expect(text).toContain('"-50" kPa');
     expect(text).not.toMatch(/\bPa\b/);
-    expect(text).toMatch(/0\.611657 to 22 ?064 kPa/);
+    // p_s(273.15 K) = 611.213 Pa, the lowest pressure on IF97's saturation line, up to the critical pressure.
+    expect(text).toMatch(/0\.611213 to 22 ?064 kPa/);
     // Any negative figure the message writes itself uses the minus sign U+2212.
     expect(text.replace('"-50"', '')).not.toMatch(/-\d/);
   });
@@ -94,7 +95,7 @@ describe('trend ticks that suit the span', () => {
     const base = Date.parse('2026-12-01T06:00:00Z');
     const points: TrendPoint[] = [0, 4, 8, 12].map((h, i) => ({
       id: `c${i}`, timeMs: base + h * 3_600_000, quality: 0.01 * (i + 1), liquidMassKg: 100 + i, pressureDeviationPa: 100 * i,
-      worstSignal: null, verdict: 'consistent', technician: 'T', time: new Date(base + h * 3_600_000).toISOString(),
+      outcome: 'none', verdict: 'consistent', technician: 'T', time: new Date(base + h * 3_600_000).toISOString(),
     }));
     const labels = trendGeometry(points).xTicks.map((t) => t.label);
     const dated = labels.filter((l) => /\d{4}-\d{2}-\d{2}/.test(l));

@@ -1,47 +1,28 @@
 // From one reading on one vessel to a verdict, an inventory with ± bands, the heat-up envelope,
-// the hazard figures and the cautions that apply. Pure, SI, plain serialisable data out.
+// the hazard figures, and the cautions that apply: the findings about the vessel now (which give
+// the outcome) apart from the standing hazards. Pure, SI, plain serialisable data out.
 
 import { InputError } from '../errors.ts';
 import { FORMULATION_ID, saturation } from '../steam/index.ts';
-
-/** Largest v = V/m the steam engine's stateTV accepts, m³/kg (its documented range). */
-const MAX_SPECIFIC_VOLUME_M3_PER_KG = 1e9;
-import { cautionsForCheck, type Caution } from './cautions.ts';
-import { heatUpEnvelope, type HeatUpEnvelope } from './heat-up-envelope.ts';
-import { cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type CooledState, type FlashOnRelease, type PressureMargin } from './hazards.ts';
-import { idealGasComparison, type IdealGasComparison } from './ideal-gas.ts';
-import { contentsState, inventoryOf, type Inventory } from './inventory.ts';
+import { elevationFromAtmosphere } from '../units/atmosphere.ts';
+import type { AtmosphereCheck, CheckResult, Hazards } from './check-result.ts';
+import { raiseCheckCautions, type CheckFigures } from './check-rules.ts';
+import { outcomeOf, sortedCautions } from './cautions.ts';
+import { heatUpEnvelope } from './heat-up-envelope.ts';
+import { cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type FlashOnRelease } from './hazards.ts';
+import { idealGasComparison } from './ideal-gas.ts';
+import { contentsState, inventoryOf } from './inventory.ts';
 import { resolveReading, type Reading, type ResolvedReading } from './reading.ts';
 import { checkSaturation, type SaturationCheck } from './saturation-consistency.ts';
-import { inventoryBands, netMassToleranceKg, pressureTolerancesPa, temperatureToleranceK, type InventoryBands } from './uncertainty.ts';
+import { gaugeLimitsPa, inventoryBands, netMassToleranceKg, pressureTolerancesPa, SITE_ATMOSPHERE_TOLERANCE_PA, thermometerLimitsK } from './uncertainty.ts';
 import { requireFiniteData } from './finite-data.ts';
 import { vesselVolume } from './vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from './vessel-spec.ts';
 
-export interface Hazards {
-  /** Flash of the liquid if released to atmosphere; null when there is no liquid (superheated, or beyond IF97). */
-  flash: FlashOnRelease | null;
-  /** Isentropic expansion work of the whole contents down to atmosphere: an indicator of stored energy, not a blast prediction. */
-  storedEnergy: { expansionWorkJ: number; tntEquivalentKg: number } | null;
-  mawpMargin: PressureMargin;
-  reliefSetMargin: PressureMargin;
-  cooled: CooledState;
-}
+export type { CheckResult, Hazards } from './check-result.ts';
 
-export interface CheckResult {
-  formulationId: typeof FORMULATION_ID;
-  reading: ResolvedReading;
-  internalVolumeM3: number;
-  saturation: SaturationCheck;
-  inventory: Inventory | { regime: 'not-weighed' };
-  /** ± bands on quality, liquid mass and liquid level, two-phase only. */
-  inventoryBands: InventoryBands | null;
-  /** Heat-up envelope of this fill; null when not weighed. */
-  envelope: HeatUpEnvelope | null;
-  hazards: Hazards;
-  idealGas: IdealGasComparison;
-  cautions: Caution[];
-}
+/** Largest v = V/m the steam engine's stateTV accepts, m³/kg (its documented range). */
+const MAX_SPECIFIC_VOLUME_M3_PER_KG = 1e9;
 
 /**
  * Evaluates one reading on one vessel (all SI: K, Pa, kg, m³). Validates both first; throws
@@ -62,6 +43,8 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
   const T = r.temperatureK;
   const sat = saturation(T);
   const pTol = pressureTolerancesPa(vessel, r, reading.pressure.reference);
+  const temperatureLimitK = thermometerLimitsK(vessel.instruments, T).combined;
+  const massToleranceKg = reading.weight.kind === 'not-weighed' ? 0 : netMassToleranceKg(vessel, reading.weight.kind);
 
   const inventory: CheckResult['inventory'] =
     r.netMassKg === null
@@ -74,9 +57,11 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
           atmospherePa: r.atmospherePa,
           mawpGaugePa: vessel.mawpGaugePa,
           measuredAbsolutePressurePa: r.absolutePressurePa,
-          measuredPressureBandPa: Math.hypot(pTol.pressureGauge, pTol.atmosphere),
-          massRelativeTolerance: reading.weight.kind === 'not-weighed' ? 0 : netMassToleranceKg(vessel, reading.weight.kind) / r.netMassKg,
+          // The gauge's own limits combined first: with no indicator or drift that is its class alone, exactly.
+          measuredPressureBandPa: Math.hypot(gaugeLimitsPa(vessel.instruments).combined, pTol.atmosphere),
+          massRelativeTolerance: massToleranceKg / r.netMassKg,
           volumeRelativeTolerance: vessel.instruments.volumeTolerancePercent / 100,
+          temperatureToleranceK: temperatureLimitK,
         });
   const liquidPresent = inventory.regime === 'not-weighed' ? null : inventory.regime !== 'superheated';
   const saturationCheck = checkSaturation(vessel, r, reading.pressure.reference, liquidPresent);
@@ -88,11 +73,12 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
           temperatureK: T,
           massKg: inventory.netMassKg,
           volumeM3: V,
-          massToleranceKg: netMassToleranceKg(vessel, reading.weight.kind),
-          temperatureToleranceK: temperatureToleranceK(vessel.instruments.temperatureSensor, T),
+          massToleranceKg,
+          temperatureToleranceK: temperatureLimitK,
           volumeToleranceM3: (vessel.instruments.volumeTolerancePercent / 100) * V,
         })
       : null;
+  if (inventory.regime === 'two-phase' && bands) inventory.liquidFullWithinBand = bands.quality.low <= 0;
 
   const envelope =
     r.netMassKg === null
@@ -112,7 +98,8 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
       ? idealGasComparison(T, inventory.absolutePressurePa, inventory.meanSpecificVolumeM3PerKg)
       : idealGasComparison(T, sat.p, sat.vapor.v);
 
-  const partial: Omit<CheckResult, 'cautions'> = {
+  const figures: CheckFigures = {
+    resultVersion: 2,
     formulationId: FORMULATION_ID,
     reading: r,
     internalVolumeM3: V,
@@ -122,8 +109,34 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
     envelope,
     hazards,
     idealGas: vapor,
+    atmosphere: atmosphereCheck(vessel, r),
   };
-  return requireFiniteData({ ...partial, cautions: cautionsForCheck(vessel, partial) });
+  const { findings, standing, cautions } = sortedCautions(raiseCheckCautions(vessel, figures));
+  // `cautions` holds the very objects of `findings` and `standing`, so it is not walked again.
+  const checked = requireFiniteData({ ...figures, findings, standing });
+  return { ...checked, outcome: outcomeOf(findings), cautions };
+}
+
+function atmosphereCheck(vessel: VesselSpec, r: ResolvedReading): AtmosphereCheck {
+  const sitePa = vessel.siteAtmospherePa;
+  const measuredPa = r.atmosphereSource === 'measured' ? r.atmospherePa : null;
+  return {
+    sitePa,
+    siteElevationM: impliedElevationM(sitePa),
+    measuredPa,
+    differencePa: measuredPa === null ? null : measuredPa - sitePa,
+    weatherBandPa: SITE_ATMOSPHERE_TOLERANCE_PA,
+  };
+}
+
+/** The US Standard Atmosphere 1976 elevation of a pressure, m, or null outside its troposphere (−500 to 11 000 m; a stored 108 kPa is below it). */
+function impliedElevationM(atmospherePa: number): number | null {
+  try {
+    return elevationFromAtmosphere(atmospherePa);
+  } catch (e) {
+    if (e instanceof InputError) return null;
+    throw e;
+  }
 }
 
 function hazardsOf(
@@ -174,9 +187,11 @@ function hazardsOf(
     ambientTemperatureK: vessel.ambientTemperatureK,
     meanSpecificVolumeM3PerKg: inventory.regime === 'not-weighed' ? null : V / inventory.netMassKg,
     noncondensablePartialPressurePa: gas,
+    liquidFullNow: inventory.regime === 'liquid-full',
     temperatureK: T,
     atmospherePa: r.atmospherePa,
     vacuumRated: vessel.vacuumRated,
+    vacuumBreaker: vessel.vacuumBreaker ?? false,
   });
   return {
     flash,

@@ -6,8 +6,26 @@ import { InputError } from '../errors.ts';
 
 /** Returns data unchanged if it is plain and every number is finite; otherwise throws InputError naming the path. */
 export function requireFiniteData<T>(data: T): T {
-  walk(data, 'result');
+  // Every result passes, so the check itself runs without building a path string per leaf
+  // (16.5 µs of a 60 µs check did); only a failure walks again to name the path.
+  if (!isFinitePlain(data)) walk(data, 'result');
   return data;
+}
+
+/** Whether a value is plain data with finite numbers only (the same rules as walk, no paths). */
+function isFinitePlain(value: unknown): boolean {
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return true;
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (!isFinitePlain(value[i])) return false;
+    return true;
+  }
+  if (typeof value === 'object' && Object.getPrototypeOf(value) === Object.prototype) {
+    // Plain objects inherit nothing enumerable, so for…in visits exactly the own enumerable keys.
+    for (const key in value as Record<string, unknown>) if (!isFinitePlain((value as Record<string, unknown>)[key])) return false;
+    return true;
+  }
+  return false;
 }
 
 function walk(value: unknown, path: string): void {

@@ -8,8 +8,8 @@
 // Margins: MAWP is the maximum gauge pressure at the top of the vessel, the basis of the relief
 // setting (ASME BPVC Section VIII Div. 1 definition).
 
-import { saturation, saturationPressure, saturationTemperature, stateTP } from '../steam/index.ts';
-import { contentsState, IF97_MAX_PRESSURE_PA } from './inventory.ts';
+import { IF97, saturation, saturationPressure, saturationTemperature, stateTP } from '../steam/index.ts';
+import { contentsState } from './inventory.ts';
 
 /** Energy of TNT used for equivalence, J/kg (4.184 MJ/kg, the conventional figure; common practice). */
 export const TNT_ENERGY_J_PER_KG = 4.184e6;
@@ -87,53 +87,87 @@ export function pressureMargin(gaugePressurePa: number, limitGaugePa: number): P
 }
 
 export interface CooledState {
-  /** Temperature the contents cool to, K (ambient, but not below 273.16 K where IF97 water ends). */
+  /**
+   * Temperature the sealed contents settle at, K: the vessel's ambient, but not below 273.15 K,
+   * where IF97's water ends (`freezes` then says the ambient is colder).
+   */
   temperatureK: number;
-  absolutePressurePa: number;
-  gaugePressurePa: number;
-  /** Part of that pressure from non-condensable gas carried over from the reading, Pa. */
+  /** Settling to ambient cools the contents, warms them (an ambient above the reading), or neither. */
+  direction: 'cooling' | 'warming' | 'none';
+  /** The contents at that temperature; 'assumed-two-phase' when not weighed (water assumed present). */
+  contents: 'two-phase' | 'liquid-full' | 'superheated' | 'assumed-two-phase' | 'beyond-formulation';
+  /** Pressure there, Pa absolute; null when liquid-full beyond IF97's 100 MPa (no figure is shown for it). */
+  absolutePressurePa: number | null;
+  /** The same as gauge, Pa; null with it. */
+  gaugePressurePa: number | null;
+  /** Part of that pressure from non-condensable gas carried over from the reading, Pa (none when the vessel is liquid-full now: no gas space). */
   noncondensablePartialPressurePa: number;
   belowAtmosphere: boolean;
-  /** Liquid-full even when cold beyond IF97's 100 MPa: the pressure fields then hold that limit, a lower bound. */
+  /** Liquid-full at that temperature beyond IF97's 100 MPa. */
   aboveFormulationLimit: boolean;
+  /** The ambient is below 0 °C: the water would freeze; the figures are for 273.15 K. */
+  freezes: boolean;
   vacuumRated: boolean;
-  /** Below atmosphere in a vessel not rated for vacuum: it can collapse if sealed as it cools. */
+  /** A vacuum breaker is fitted. */
+  vacuumBreaker: boolean;
+  /** Below atmosphere in a vessel neither rated for vacuum nor fitted with a vacuum breaker: it can collapse if sealed as it cools. */
   collapseRisk: boolean;
 }
 
+/** IF97's lowest temperature, K (IAPWS R7-97(2012)). */
+const T_MIN_K = 273.15;
+
 /**
- * Pressure after the sealed contents cool to ambient. v: mean specific volume, m³/kg, or null when
- * not weighed (water is then assumed present, so the vapor space sits at p_sat). Non-condensable
- * gas at partial pressure p_gas (Pa) at T (K) is carried down as an ideal gas at constant volume.
+ * Pressure after the sealed contents settle at ambient, cooling or warming. v: mean specific
+ * volume, m³/kg, or null when not weighed (water is then assumed present, so the vapor space sits
+ * at p_sat). Non-condensable gas at partial pressure p_gas (Pa) at T (K) is carried to ambient as
+ * an ideal gas at constant volume; a vessel liquid-full now has no gas space, so none. A liquid-full
+ * fill that goes two-phase on cooling sits at p_sat(ambient); one still full is at its hydraulic
+ * pressure there (warming a full vessel raises it steeply).
  */
 export function cooledState(args: {
   ambientTemperatureK: number;
   meanSpecificVolumeM3PerKg: number | null;
   noncondensablePartialPressurePa: number;
+  /** The contents are liquid-full at the reading. */
+  liquidFullNow: boolean;
   temperatureK: number;
   atmospherePa: number;
   vacuumRated: boolean;
+  vacuumBreaker: boolean;
 }): CooledState {
-  const Tc = Math.max(273.16, args.ambientTemperatureK);
-  let waterPa = saturationPressure(Tc);
-  let aboveFormulationLimit = false;
+  const Tc = Math.max(T_MIN_K, args.ambientTemperatureK);
+  let waterPa: number | null = saturationPressure(Tc);
+  let contents: CooledState['contents'] = 'assumed-two-phase';
   if (args.meanSpecificVolumeM3PerKg !== null) {
-    const found = contentsState(Tc, args.meanSpecificVolumeM3PerKg);
-    aboveFormulationLimit = found.kind !== 'state';
-    waterPa = found.kind === 'state' ? found.state.p : IF97_MAX_PRESSURE_PA;
+    const v = args.meanSpecificVolumeM3PerKg;
+    const found = contentsState(Tc, v);
+    if (found.kind !== 'state') {
+      contents = 'beyond-formulation';
+      waterPa = null;
+    } else {
+      const st = found.state;
+      waterPa = st.p;
+      contents = st.phase === 'two-phase' ? 'two-phase'
+        : st.phase === 'compressed-liquid' || (st.phase === 'supercritical' && v < 1 / IF97.rhoc) ? 'liquid-full' : 'superheated';
+    }
   }
-  const gasPa = args.noncondensablePartialPressurePa * (Tc / args.temperatureK);
-  const absolutePressurePa = waterPa + gasPa;
-  const gaugePressurePa = absolutePressurePa - args.atmospherePa;
-  const belowAtmosphere = gaugePressurePa < 0;
+  const gasPa = args.liquidFullNow ? 0 : args.noncondensablePartialPressurePa * (Tc / args.temperatureK);
+  const absolutePressurePa = waterPa === null ? null : waterPa + gasPa;
+  const gaugePressurePa = absolutePressurePa === null ? null : absolutePressurePa - args.atmospherePa;
+  const belowAtmosphere = gaugePressurePa !== null && gaugePressurePa < 0;
   return {
     temperatureK: Tc,
+    direction: Tc < args.temperatureK ? 'cooling' : Tc > args.temperatureK ? 'warming' : 'none',
+    contents,
     absolutePressurePa,
     gaugePressurePa,
     noncondensablePartialPressurePa: gasPa,
     belowAtmosphere,
-    aboveFormulationLimit,
+    aboveFormulationLimit: contents === 'beyond-formulation',
+    freezes: args.ambientTemperatureK < T_MIN_K,
     vacuumRated: args.vacuumRated,
-    collapseRisk: belowAtmosphere && !args.vacuumRated,
+    vacuumBreaker: args.vacuumBreaker,
+    collapseRisk: belowAtmosphere && !args.vacuumRated && !args.vacuumBreaker,
   };
 }

@@ -5,19 +5,26 @@
 // judging a fill by its liquid-full temperature rather than a fixed percentage follows from the mass
 // and volume balance above (our own rule).
 
-import { IF97, saturation, saturationTemperature } from '../steam/index.ts';
+import { IF97, saturatedLiquidVolume, saturatedVaporVolume, saturationTemperature } from '../steam/index.ts';
+import { bisectionResult } from './bisection.ts';
 
 /** Minimum of v_f(T) in IF97, K (277.14 K, found with python-iapws 1.5.2 on a 0.01 K grid): v_f rises monotonically above it. */
 const T_MAX_DENSITY_K = 277.14;
+
+/** IF97's lowest temperature, K (IAPWS R7-97(2012): 273.15 K), reported for a fill that is liquid-full (or all vapor) at any temperature. */
+const T_MIN_K = 273.15;
+
+/** Boundary of IF97 regions 1 and 3 on the saturation line, K (IAPWS R7-97(2012), 623.15 K). */
+const T_13_K = 623.15;
 
 export type EnvelopeEvent = 'liquid-full' | 'all-vapor' | 'relief-set-pressure' | 'mawp';
 
 export interface HeatUpEnvelope {
   /** v = V/m, m³/kg. */
   meanSpecificVolumeM3PerKg: number;
-  /** T where v_f(T) = v, K; 273.16 if liquid-full at any temperature; null if never (v ≥ v_c). */
+  /** T where v_f(T) = v, K; 273.15 (IF97's lowest) if liquid-full at any temperature; null if never (v ≥ v_c). */
   liquidFullTemperatureK: number | null;
-  /** T where v_g(T) = v, K; 273.16 if all vapor at any temperature; null if never (v ≤ v_c). */
+  /** T where v_g(T) = v, K; 273.15 (IF97's lowest) if all vapor at any temperature; null if never (v ≤ v_c). */
   allVaporTemperatureK: number | null;
   /** T_sat(relief set pressure + atmosphere), K; null above the critical pressure. */
   reliefSetTemperatureK: number | null;
@@ -27,40 +34,60 @@ export interface HeatUpEnvelope {
   first: { event: EnvelopeEvent; temperatureK: number; alreadyReached: boolean } | { event: 'none' };
 }
 
-/** Solves g(T) = 0 for a g that rises with T on [lo, hi] (sign change assumed), 60 bisection steps. */
-function bisect(g: (T: number) => number, lo: number, hi: number): number {
-  for (let i = 0; i < 60; i++) {
-    const mid = 0.5 * (lo + hi);
-    if (g(mid) < 0) lo = mid;
-    else hi = mid;
-  }
-  return 0.5 * (lo + hi);
+/**
+ * Solves g(T) = 0 for a g that rises with T on [lo, hi] (sign change assumed): the result of 60
+ * bisection steps, from fewer evaluations (bisection.ts). g here is a specific-volume difference:
+ * below 623.15 K v_f and v_g come out of IF97's regions 1 and 2 within a few ulp (1e-13 of v is
+ * about 500 ulp); in region 3 they are Newton roots of Eq. (28) converged to 1e-12 in p, whose
+ * error in v grows towards Tc as the isotherm flattens (1e-9 of v covers the differences seen
+ * from 0.02 K below Tc); within 0.1 K of Tc, where the two roots merge, every step is evaluated.
+ */
+function bisect(g: (T: number) => number, lo: number, hi: number, scaleM3PerKg: number): number {
+  const noise = (T: number) => (T <= T_13_K ? 1e-13 * scaleM3PerKg : T < IF97.Tc - 0.1 ? 1e-9 * scaleM3PerKg : Infinity);
+  return bisectionResult(g, lo, hi, 60, -Infinity, noise, 1e-12);
+}
+
+/**
+ * v_f and v_g at the fixed temperatures the envelope compares against (623.15 K, Tc, the density
+ * maximum, the triple point), each solved once: the same doubles every time, and the region 3
+ * solve at Tc is the dearest evaluation of a check.
+ */
+const fixedVolumes: { phase: 'liquid' | 'vapor'; T: number; v: number }[] = [];
+function fixedVolume(phase: 'liquid' | 'vapor', T: number): number {
+  for (const f of fixedVolumes) if (f.T === T && f.phase === phase) return f.v;
+  const v = phase === 'liquid' ? saturatedLiquidVolume(T) : saturatedVaporVolume(T);
+  fixedVolumes.push({ phase, T, v });
+  return v;
 }
 
 /** Liquid-full temperature for mean specific volume v, K, or null if the fill never goes liquid-full. v in m³/kg, > 0. */
 export function liquidFullTemperatureK(v: number): number | null {
-  const vc = saturation(IF97.Tc).liquid.v;
-  if (v >= vc) return null;
-  if (v <= saturation(T_MAX_DENSITY_K).liquid.v) return IF97.Tt;
-  return bisect((T) => saturation(T).liquid.v - v, T_MAX_DENSITY_K, IF97.Tc);
+  // v_f rises from 277.14 K to Tc, so a v below v_f(623.15 K) is below v_c: the region 3 solve at
+  // Tc (and its table of starting values) is needed only for fills near the critical volume.
+  if (v >= fixedVolume('liquid', T_13_K) && v >= fixedVolume('liquid', IF97.Tc)) return null;
+  if (v <= fixedVolume('liquid', T_MAX_DENSITY_K)) return T_MIN_K;
+  return bisect((T) => saturatedLiquidVolume(T) - v, T_MAX_DENSITY_K, IF97.Tc, v);
 }
 
 /** All-vapor temperature for mean specific volume v, K, or null if the fill never dries out. v in m³/kg, > 0. */
 export function allVaporTemperatureK(v: number): number | null {
-  const vc = saturation(IF97.Tc).vapor.v;
-  if (v <= vc) return null;
-  if (v >= saturation(IF97.Tt).vapor.v) return IF97.Tt;
-  return bisect((T) => v - saturation(T).vapor.v, IF97.Tt, IF97.Tc);
+  // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c; and v_f rises to
+  // the same v_c, so a v below v_f(623.15 K) (every fill more than about half liquid when cold) is
+  // below it: only fills between those two need the region 3 solve at Tc.
+  if (v < fixedVolume('liquid', T_13_K)) return null;
+  if (v <= fixedVolume('vapor', T_13_K) && v <= fixedVolume('vapor', IF97.Tc)) return null;
+  if (v >= fixedVolume('vapor', IF97.Tt)) return T_MIN_K;
+  return bisect((T) => v - saturatedVaporVolume(T), IF97.Tt, IF97.Tc, v);
 }
 
-/** T_sat at an absolute pressure, K, or null above the critical pressure. p in Pa, ≥ 611.657 Pa. */
+/** T_sat at an absolute pressure, K, or null above the critical pressure. p in Pa, ≥ 611.213 Pa (p_s at 273.15 K). */
 export function saturationTemperatureOrNull(absolutePressurePa: number): number | null {
   return absolutePressurePa > IF97.pc ? null : saturationTemperature(absolutePressurePa);
 }
 
 /**
- * The heat-up envelope of a fill. volumeM3 > 0, massKg > 0, startTemperatureK 273.16–647.096 K,
- * gauge pressures and atmosphere in Pa (gauge + atmosphere ≥ 611.657 Pa).
+ * The heat-up envelope of a fill. volumeM3 > 0, massKg > 0, startTemperatureK 273.15–647.096 K,
+ * gauge pressures and atmosphere in Pa (gauge + atmosphere ≥ 611.213 Pa).
  */
 export function heatUpEnvelope(args: {
   volumeM3: number;

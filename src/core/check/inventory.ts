@@ -4,7 +4,7 @@
 // Uses the measured T, not T_sat(p): with air present the two disagree and T governs the water.
 
 import { InputError } from '../errors.ts';
-import { IF97, stateTV, type VesselState } from '../steam/index.ts';
+import { IF97, saturation, stateTP, stateTV, type VesselState } from '../steam/index.ts';
 import { liquidLevelFromVolume, vesselLevelSpanM, type VesselGeometry } from './vessel-geometry.ts';
 
 /** IF97's upper pressure limit for the liquid, Pa (IAPWS R7-97(2012), region 1). */
@@ -30,15 +30,20 @@ export type Inventory =
       /** Specific volumes of saturated liquid and vapor at T, m³/kg. */
       liquidSpecificVolumeM3PerKg: number;
       vaporSpecificVolumeM3PerKg: number;
+      /** Within the weight, temperature and volume limits the contents could be liquid-full (the quality band reaches 0); set with the bands. */
+      liquidFullWithinBand: boolean;
     }
   | {
       regime: 'liquid-full';
       netMassKg: number;
       meanSpecificVolumeM3PerKg: number;
       /** The hydraulic pressure this fill reaches at T (rigid vessel). */
-      hydraulic:
-        | { withinFormulation: true; absolutePressurePa: number; gaugePressurePa: number; exceedsMawp: boolean }
-        | { withinFormulation: false; /** Above IF97's limit, Pa. */ aboveAbsolutePressurePa: number; exceedsMawp: true };
+      hydraulic: Hydraulic;
+      /**
+       * Within the weight, volume and temperature limits the contents could also be two-phase
+       * (the band on v = V/m reaches v_f(T)): "liquid-full within the weighing band", not certain.
+       */
+      withinWeighingBand: boolean;
     }
   | {
       regime: 'superheated';
@@ -56,6 +61,37 @@ export type Inventory =
       differenceBandPa: number;
     };
 
+/** Whether the hydraulic pressure of a liquid-full fill is above the MAWP: for every fill within the limits, for some, or for none. */
+export type MawpVerdict = 'certain' | 'possible' | 'no';
+
+/**
+ * The hydraulic pressure of a liquid-full fill, and its band. A liquid's pressure at fixed
+ * volume is steep in v (±0.5 kg on 208 kg moved one example from 0.66 to 9.34 MPa), so the band
+ * is the pressure at the two ends of the band on v, not a ± about the nominal.
+ */
+export type Hydraulic =
+  | { withinFormulation: true; absolutePressurePa: number; gaugePressurePa: number; exceedsMawp: MawpVerdict; band: HydraulicBand }
+  | { withinFormulation: false; /** The nominal fill is above IF97's limit, Pa. */ aboveAbsolutePressurePa: number; exceedsMawp: Exclude<MawpVerdict, 'no'>; band: HydraulicBand };
+
+export interface HydraulicBand {
+  /**
+   * Relative half-width of the band on v = V/m: the net mass, volume and (as an equivalent volume
+   * change, α·ΔT with α the liquid's thermal expansion) temperature limits, root-sum-square.
+   */
+  specificVolumeRelative: number;
+  /** Pressure at the high-v end, Pa absolute: the lowest the fill can be; p_sat(T) when that end is two-phase; null when even it is beyond IF97's 100 MPa. */
+  lowAbsolutePa: number | null;
+  /** Pressure at the low-v end, Pa absolute; null beyond IF97's 100 MPa ("beyond the formulation"). */
+  highAbsolutePa: number | null;
+  /**
+   * Net masses that would make the MAWP verdict certain at this temperature and volume: above
+   * exceedsMawpAboveKg every fill within the limits is over the MAWP; below withinMawpBelowKg none
+   * is. null where no such mass exists within IF97 (a MAWP above its 100 MPa, or at or below
+   * p_sat(T), where any liquid-full fill is over it).
+   */
+  massWindow: { exceedsMawpAboveKg: number | null; withinMawpBelowKg: number | null };
+}
+
 /** The regime of v at T, with compressed liquid above IF97's 100 MPa reported rather than thrown. */
 export type ContentsState = { kind: 'state'; state: VesselState } | { kind: 'beyond-100-MPa' };
 
@@ -72,7 +108,7 @@ export function contentsState(temperatureK: number, specificVolumeM3PerKg: numbe
 }
 
 /**
- * Inventory of a closed vessel. temperatureK 273.16–647.096 K; netMassKg > 0; volumeM3 > 0;
+ * Inventory of a closed vessel. temperatureK 273.15–647.096 K; netMassKg > 0; volumeM3 > 0;
  * mawpGaugePa and atmospherePa in Pa; measuredAbsolutePressurePa in Pa. Throws InputError only
  * if v = V/m is outside the steam engine's range.
  */
@@ -89,16 +125,25 @@ export function inventoryOf(args: {
   /** ± relative limits of the net mass and of the volume (fractions); 0 if unknown. */
   massRelativeTolerance?: number;
   volumeRelativeTolerance?: number;
+  /** ± limit of the temperature, K; 0 if unknown. */
+  temperatureToleranceK?: number;
 }): Inventory {
   const { geometry, volumeM3: V, netMassKg: m, temperatureK: T, atmospherePa } = args;
   const v = V / m;
   const found = contentsState(T, v);
   if (found.kind === 'beyond-100-MPa') {
+    const band = hydraulicBand(args, v);
     return {
       regime: 'liquid-full',
       netMassKg: m,
       meanSpecificVolumeM3PerKg: v,
-      hydraulic: { withinFormulation: false, aboveAbsolutePressurePa: IF97_MAX_PRESSURE_PA, exceedsMawp: true },
+      hydraulic: {
+        withinFormulation: false,
+        aboveAbsolutePressurePa: IF97_MAX_PRESSURE_PA,
+        exceedsMawp: band.lowAbsolutePa === null || band.lowAbsolutePa - atmospherePa > args.mawpGaugePa ? 'certain' : 'possible',
+        band,
+      },
+      withinWeighingBand: band.lowAbsolutePa !== null && band.lowAbsolutePa <= saturationPressureOf(T),
     };
   }
   const s = found.state;
@@ -126,17 +171,23 @@ export function inventoryOf(args: {
       liquidLevel,
       liquidSpecificVolumeM3PerKg: s.liquid.v,
       vaporSpecificVolumeM3PerKg: s.vapor.v,
+      liquidFullWithinBand: false,
     };
   }
   // A supercritical answer below T_c means a dense single phase; v decides which side it behaves like.
   const liquidLike = s.phase === 'compressed-liquid' || (s.phase === 'supercritical' && v < 1 / IF97.rhoc);
   if (liquidLike) {
     const gauge = s.p - atmospherePa;
+    const band = hydraulicBand(args, v);
+    const mawp = args.mawpGaugePa;
+    const exceedsMawp: MawpVerdict = band.lowAbsolutePa === null || band.lowAbsolutePa - atmospherePa > mawp ? 'certain'
+      : band.highAbsolutePa !== null && band.highAbsolutePa - atmospherePa <= mawp ? 'no' : 'possible';
     return {
       regime: 'liquid-full',
       netMassKg: m,
       meanSpecificVolumeM3PerKg: v,
-      hydraulic: { withinFormulation: true, absolutePressurePa: s.p, gaugePressurePa: gauge, exceedsMawp: gauge > args.mawpGaugePa },
+      hydraulic: { withinFormulation: true, absolutePressurePa: s.p, gaugePressurePa: gauge, exceedsMawp, band },
+      withinWeighingBand: band.lowAbsolutePa !== null && band.lowAbsolutePa <= saturationPressureOf(T),
     };
   }
   return {
@@ -152,4 +203,60 @@ export function inventoryOf(args: {
       s.p * (args.volumeRelativeTolerance ?? 0),
     ),
   };
+}
+
+type InventoryArgs = Parameters<typeof inventoryOf>[0];
+
+function saturationPressureOf(T: number): number {
+  return saturation(T).p;
+}
+
+/** The pressure at (T, v) if liquid-full, Pa absolute; p_sat(T) if (T, v) is two-phase; null above IF97's 100 MPa. */
+function liquidPressureAt(T: number, v: number): number | null {
+  const found = contentsState(T, v);
+  return found.kind === 'state' ? found.state.p : null;
+}
+
+/**
+ * The band of a liquid-full fill's hydraulic pressure and the mass window of a certain MAWP verdict
+ * (see HydraulicBand). α = (1/v)(∂v/∂T)_p by a central difference at the fill's own pressure (or at
+ * 100 MPa beyond IF97), so a temperature limit counts as the volume change it stands for.
+ */
+function hydraulicBand(args: InventoryArgs, v: number): HydraulicBand {
+  const T = args.temperatureK;
+  const m = args.netMassKg;
+  const V = args.volumeM3;
+  const dT = args.temperatureToleranceK ?? 0;
+  const p = liquidPressureAt(T, v) ?? IF97_MAX_PRESSURE_PA;
+  const h = 0.05;
+  const lo = Math.max(273.15, T - h);
+  const hi = Math.min(IF97.Tc, T + h);
+  // At the fill's own pressure, kept a hair above saturation at the upper temperature so both ends are liquid.
+  const pAt = Math.min(Math.max(p, saturationPressureOf(hi) * (1 + 1e-6)), IF97_MAX_PRESSURE_PA);
+  const alpha = (stateTP(hi, pAt).v - stateTP(lo, pAt).v) / ((hi - lo) * v);
+  const massRel = args.massRelativeTolerance ?? 0;
+  const volumeRel = args.volumeRelativeTolerance ?? 0;
+  const delta = Math.hypot(massRel, volumeRel, Math.abs(alpha) * dT);
+  const lowAbsolutePa = liquidPressureAt(T, v * (1 + delta));
+  const highAbsolutePa = liquidPressureAt(T, v * (1 - delta));
+  // The mass window: the fill whose band end just reaches the MAWP, at this T and V.
+  const pMawp = args.mawpGaugePa + args.atmospherePa;
+  const pSat = saturationPressureOf(T);
+  const massTol = massRel * m;
+  let exceedsMawpAboveKg: number | null = null;
+  let withinMawpBelowKg: number | null = null;
+  if (pMawp <= IF97_MAX_PRESSURE_PA) {
+    const vMawp = pMawp <= pSat ? saturation(T).liquid.v : stateTP(T, pMawp).v;
+    // δ depends on m through the mass limit; two passes settle it (the mass limit is absolute).
+    const rel = (mass: number) => Math.hypot(massTol / mass, volumeRel, Math.abs(alpha) * dT);
+    let above = V / vMawp;
+    let below = V / vMawp;
+    for (let k = 0; k < 3; k++) {
+      above = (V * (1 + rel(above))) / vMawp;
+      below = (V * (1 - rel(below))) / vMawp;
+    }
+    exceedsMawpAboveKg = above;
+    withinMawpBelowKg = pMawp <= pSat ? null : below;
+  }
+  return { specificVolumeRelative: delta, lowAbsolutePa, highAbsolutePa, massWindow: { exceedsMawpAboveKg, withinMawpBelowKg } };
 }

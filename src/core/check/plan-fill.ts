@@ -1,76 +1,23 @@
 // How much water to charge: for a target temperature and a target quality (or vapor-space
 // fraction, or just enough for dry saturated steam), the mass, the gross weight to expect, the
-// ideal-gas estimate and its error, the heat and heat-up time, and the largest safe charge.
+// ideal-gas estimate and its error, the heat and heat-up time, and the largest charge that stays
+// two-phase up to the relief set pressure's saturation temperature plus a margin.
 
 import { InputError, requireInRange } from '../errors.ts';
 import { FORMULATION_ID, IF97, saturation } from '../steam/index.ts';
-import { cautionsForPlan, type Caution } from './cautions.ts';
+import type { ChargeState, FillPlan, FillRequest, FillTarget } from './check-result.ts';
+import { raisePlanCautions } from './check-rules.ts';
+import { withStandingNote } from './cautions.ts';
 import { requireFiniteData } from './finite-data.ts';
 import { heatUpEnvelope, saturationTemperatureOrNull, type HeatUpEnvelope } from './heat-up-envelope.ts';
 import { contentsState } from './inventory.ts';
 import { VESSEL_LIMITS, validateVessel, type VesselSpec } from './vessel-spec.ts';
 import { vesselVolume } from './vessel-geometry.ts';
 
-/** What the charge should give at the target temperature. */
-export type FillTarget =
-  | { kind: 'quality'; /** Bulk quality, 0–1. */ quality: number }
-  | { kind: 'vapor-space-fraction'; /** Vapor volume / internal volume, 0–1. */ fraction: number }
-  | { kind: 'dry-saturated' };
+export type { ChargeState, FillPlan, FillRequest, FillTarget } from './check-result.ts';
 
-export interface FillRequest {
-  /** K, 273.16–647.096. */
-  targetTemperatureK: number;
-  target: FillTarget;
-  /** Temperature the sealed charge starts from, K, 273.16 up to the target. */
-  startTemperatureK: number;
-  /** Heat capacity of the vessel itself, J/K (0 to 1e9); omitted counts as 0. */
-  vesselHeatCapacityJPerK?: number;
-  /** Heater power reaching the contents, W (above 0 to 1e8); omitted gives no heat-up time. */
-  heaterPowerW?: number;
-  /** The largest safe charge must stay two-phase up to T_sat(relief set pressure) + this, K (0–100). */
-  liquidFullMarginK: number;
-  /** Atmosphere for gauge ↔ absolute, Pa (30–110 kPa); omitted uses the vessel's site value. */
-  atmospherePa?: number;
-}
-
-/** Contents of the sealed charge at one temperature. */
-export type ChargeState =
-  | { regime: 'two-phase'; temperatureK: number; absolutePressurePa: number; quality: number; vaporSpaceFraction: number }
-  | { regime: 'liquid-full'; temperatureK: number }
-  | { regime: 'superheated'; temperatureK: number; absolutePressurePa: number };
-
-export interface FillPlan {
-  formulationId: typeof FORMULATION_ID;
-  internalVolumeM3: number;
-  target: FillTarget;
-  targetTemperatureK: number;
-  startTemperatureK: number;
-  atmospherePa: number;
-  /** Water to charge, kg. */
-  waterMassKg: number;
-  /** Tare + charge: what the scale should read, kg. */
-  expectedGrossWeightKg: number;
-  /** p_sat(target), absolute and gauge, Pa. */
-  targetSaturationPressurePa: number;
-  targetGaugePressurePa: number;
-  /** At the target: quality, vapor-space fraction, liquid and vapor mass. */
-  atTarget: { quality: number; vaporSpaceFraction: number; liquidMassKg: number; vaporMassKg: number };
-  /** The same charge with the vapor as an ideal gas (v_g → R·T/p): mass, kg, and its error against IF97, %. */
-  idealGas: { waterMassKg: number; errorPercent: number };
-  /** Heat from start to target, J (internal-energy difference of the charge + vessel heat capacity × ΔT); time in s or null without a heater power. */
-  heat: { contentsJ: number; vesselJ: number; totalJ: number; heatUpTimeS: number | null } | null;
-  startState: ChargeState;
-  /** Largest charge still two-phase up to T_sat(relief) + margin (capped at the critical point). */
-  largestSafeCharge: {
-    limitTemperatureK: number;
-    waterMassKg: number;
-    expectedGrossWeightKg: number;
-    /** Liquid volume of that charge at the start temperature / internal volume. */
-    fillFractionAtStart: number;
-  };
-  envelope: HeatUpEnvelope;
-  cautions: Caution[];
-}
+/** IF97's lowest temperature, K (IAPWS R7-97(2012)): a charge may start at 0.00 °C. */
+const T_MIN_K = 273.15;
 
 function chargeState(T: number, v: number, V: number): ChargeState {
   const found = contentsState(T, v);
@@ -90,10 +37,10 @@ function chargeState(T: number, v: number, V: number): ChargeState {
  */
 export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
   validateVessel(vessel);
-  const T2 = requireInRange('target temperature', request.targetTemperatureK, IF97.Tt, IF97.Tc, 'K');
-  const T1 = requireInRange('start temperature', request.startTemperatureK, IF97.Tt, IF97.Tc, 'K');
+  const T2 = requireInRange('target temperature', request.targetTemperatureK, T_MIN_K, IF97.Tc, 'K');
+  const T1 = requireInRange('start temperature', request.startTemperatureK, T_MIN_K, IF97.Tc, 'K');
   if (T1 > T2) {
-    throw new InputError('start temperature', 'inconsistent', T1, { min: IF97.Tt, max: T2, unit: 'K' },
+    throw new InputError('start temperature', 'inconsistent', T1, { min: T_MIN_K, max: T2, unit: 'K' },
       `start temperature: ${T1} K is above the target temperature (${T2} K); it must be at most the target.`);
   }
   const C = request.vesselHeatCapacityJPerK === undefined ? 0 : requireInRange('vessel heat capacity', request.vesselHeatCapacityJPerK, 0, 1e9, 'J/K');
@@ -156,7 +103,7 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
 
   const reliefT = saturationTemperatureOrNull(vessel.reliefSetGaugePa + atm);
   const limitTemperatureK = Math.min(IF97.Tc, (reliefT ?? IF97.Tc) + margin);
-  const safeMass = V / saturation(limitTemperatureK).liquid.v;
+  const twoPhaseMass = V / saturation(limitTemperatureK).liquid.v;
 
   const partial: Omit<FillPlan, 'cautions'> = {
     formulationId: FORMULATION_ID,
@@ -173,11 +120,11 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
     idealGas: { waterMassKg: mIdeal, errorPercent: ((mIdeal - m) / m) * 100 },
     heat,
     startState,
-    largestSafeCharge: {
+    largestTwoPhaseCharge: {
       limitTemperatureK,
-      waterMassKg: safeMass,
-      expectedGrossWeightKg: vessel.tareKg + safeMass,
-      fillFractionAtStart: (safeMass * saturation(T1).liquid.v) / V,
+      waterMassKg: twoPhaseMass,
+      expectedGrossWeightKg: vessel.tareKg + twoPhaseMass,
+      fillFractionAtStart: (twoPhaseMass * saturation(T1).liquid.v) / V,
     },
     envelope: heatUpEnvelope({
       volumeM3: V,
@@ -188,5 +135,5 @@ export function planFill(vessel: VesselSpec, request: FillRequest): FillPlan {
       atmospherePa: atm,
     }),
   };
-  return requireFiniteData({ ...partial, cautions: cautionsForPlan(vessel, partial) });
+  return requireFiniteData({ ...partial, cautions: withStandingNote(raisePlanCautions(vessel, partial)) });
 }

@@ -2,6 +2,7 @@
 // measured or site atmosphere, gross → net with the tare.
 
 import { InputError, requireInRange } from '../errors.ts';
+import { SATURATION_PRESSURE_MIN } from '../steam/index.ts';
 import { VESSEL_LIMITS, type VesselSpec } from './vessel-spec.ts';
 
 /** What the technician read on one vessel at one time. */
@@ -31,12 +32,14 @@ export interface ResolvedReading {
 }
 
 /**
- * IF97 bounds the check relies on (IAPWS R7-97(2012): triple point 273.16 K, 611.657 Pa;
- * critical point 647.096 K, 22.064 MPa). The issue's range 0.01 to 373.946 °C is exactly this.
+ * IF97 bounds the check relies on (IAPWS R7-97(2012): regions 1 and 4 start at 273.15 K, so a
+ * typed 0.00 °C is inside them; the triple point is 273.16 K, 611.657 Pa; critical point
+ * 647.096 K, 22.064 MPa).
  */
 export const READING_LIMITS = {
-  temperatureK: { min: 273.16, max: 647.096, unit: 'K' },
-  absolutePressurePa: { min: 611.657, max: 22.064e6, unit: 'Pa' },
+  temperatureK: { min: 273.15, max: 647.096, unit: 'K' },
+  /** From p_s(273.15 K) = 611.213 Pa, the lowest pressure on IF97's saturation line, to the critical pressure. */
+  absolutePressurePa: { min: SATURATION_PRESSURE_MIN, max: 22.064e6, unit: 'Pa' },
   weightKg: { min: 0, max: 1e7, unit: 'kg' },
 } as const;
 
@@ -44,8 +47,8 @@ const ISO_8601_WITH_OFFSET = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|
 
 /**
  * Validates a reading against its (already valid) vessel and resolves it. Throws InputError naming
- * the field: time (ISO 8601 with offset), temperature (273.16–647.096 K), atmospheric pressure
- * (30–110 kPa), pressure (absolute 611.657 Pa–22.064 MPa; a gauge vacuum may not exceed the
+ * the field: time (ISO 8601 with offset), temperature (273.15–647.096 K), atmospheric pressure
+ * (30–110 kPa), pressure (absolute 611.213 Pa–22.064 MPa; a gauge vacuum may not exceed the
  * atmosphere), gross weight (above the tare), net weight (above 0).
  */
 export function resolveReading(vessel: VesselSpec, reading: Reading): ResolvedReading {

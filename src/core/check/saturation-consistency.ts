@@ -7,8 +7,11 @@
 
 import { IF97, saturationPressure, saturationTemperature } from '../steam/index.ts';
 import type { ResolvedReading } from './reading.ts';
-import { combineBand, pressureTolerancesPa, temperatureToleranceK, type Band } from './uncertainty.ts';
+import { combineBandWithAdded, pressureTolerancesPa, thermometerLimitsK, type Band } from './uncertainty.ts';
 import type { VesselSpec } from './vessel-spec.ts';
+
+/** IF97's lowest temperature, K (IAPWS R7-97(2012) Eq. (30) holds from 273.15 K). */
+const T_MIN_K = 273.15;
 
 /** Verdict of the saturation check. */
 export type SaturationVerdict =
@@ -43,17 +46,28 @@ export interface SaturationCheck {
   temperatureDeviationK: number;
   /** dp_sat/dT at the measured temperature, Pa/K. */
   saturationSlopePaPerK: number;
-  /** Band on p_abs − p_sat(T), Pa. */
-  pressureBand: Band<'pressureGauge' | 'atmosphere' | 'temperatureSensor'>;
+  /** Band on p_abs − p_sat(T), Pa, with each instrument's part (gauge class, indicator and drift; atmosphere; thermometer element, indicator and drift, as pressure). */
+  pressureBand: Band<PressureBandPart>;
   /** The same band as temperature, K (pressure band ÷ slope). */
   temperatureBandK: { plusMinus: number; worstCase: number };
+  /**
+   * Mole fraction of non-condensable gas the band can hide at this reading: a gas partial pressure
+   * up to the band passes as "consistent", so (band ÷ p_abs) by Dalton's law. Agreement means less
+   * gas than this, not none.
+   */
+  airDetectionLimit: number;
   verdict: SaturationVerdict;
 }
 
-/** Slope of the saturation line, Pa/K, by a central difference kept inside 273.16–647.096 K (no 0/0 at the critical point). */
+/** The parts of the saturation check's pressure band. */
+export type PressureBandPart =
+  | 'pressureGauge' | 'atmosphere' | 'temperatureSensor'
+  | 'pressureGaugeIndicator' | 'pressureGaugeDrift' | 'temperatureIndicator' | 'temperatureDrift';
+
+/** Slope of the saturation line, Pa/K, by a central difference kept inside 273.15–647.096 K (no 0/0 at the critical point). */
 export function saturationSlopePaPerK(temperatureK: number): number {
   const dT = 0.005;
-  const lo = Math.max(IF97.Tt, temperatureK - dT);
+  const lo = Math.max(T_MIN_K, temperatureK - dT);
   const hi = Math.min(IF97.Tc, temperatureK + dT);
   return (saturationPressure(hi) - saturationPressure(lo)) / (hi - lo);
 }
@@ -74,12 +88,16 @@ export function checkSaturation(
   const tSat = saturationTemperature(p);
   const slope = saturationSlopePaPerK(T);
   const pTol = pressureTolerancesPa(vessel, reading, pressureReference);
-  const tTol = temperatureToleranceK(vessel.instruments.temperatureSensor, T);
-  const pressureBand = combineBand({
-    pressureGauge: pTol.pressureGauge,
-    atmosphere: pTol.atmosphere,
-    temperatureSensor: slope * tTol,
-  });
+  const tTol = thermometerLimitsK(vessel.instruments, T);
+  const pressureBand: Band<PressureBandPart> = combineBandWithAdded(
+    { pressureGauge: pTol.pressureGauge, atmosphere: pTol.atmosphere, temperatureSensor: slope * tTol.element },
+    {
+      pressureGaugeIndicator: pTol.pressureGaugeIndicator,
+      pressureGaugeDrift: pTol.pressureGaugeDrift,
+      temperatureIndicator: slope * tTol.indicator,
+      temperatureDrift: slope * tTol.drift,
+    },
+  );
   // Floor at rounding level so a reading exactly at saturation stays consistent at zero tolerance
   // after gauge ↔ absolute arithmetic.
   const floor = 1e-9 * p;
@@ -102,6 +120,7 @@ export function checkSaturation(
     saturationSlopePaPerK: slope,
     pressureBand: { ...pressureBand, plusMinus: U },
     temperatureBandK: { plusMinus: U / slope, worstCase: pressureBand.worstCase / slope },
+    airDetectionLimit: U / p,
     verdict,
   };
 }

@@ -9,13 +9,16 @@
 // 3 % air by Dalton's law; both computed with python3-iapws 1.5.2 (IAPWS-IF97)). GUM expanded
 // uncertainty with rectangular limits (U = 2·√(Σa²/3), JCGM 100:2008 §4.3.7) is 1.15 × RSS, close to it.
 
-import { IF97, saturation } from '../steam/index.ts';
-import type { TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
+import { IF97, saturatedLiquidVolume, saturatedVaporVolume } from '../steam/index.ts';
+import type { InstrumentAccuracy, TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
 import { liquidLevelFromVolume, vesselVolume, type VesselGeometry } from './vessel-geometry.ts';
 import type { ResolvedReading } from './reading.ts';
 
 /** Weather swing of station pressure around a stored site value, Pa (sea-level pressure usually 970–1040 hPa, about −3 to +4 kPa from standard: University of Wisconsin meteorology course page, http://meteor.wisc.edu/~hopkins/online/cod/cod05t.htm ; ±3 kPa is our choice from that range). */
 export const SITE_ATMOSPHERE_TOLERANCE_PA = 3000;
+
+/** IF97's lowest temperature, K (273.15 K: IAPWS R7-97(2012) region 1 and the saturation line start there). */
+const T_MIN_K = 273.15;
 
 /** The combination rule the verdicts use. */
 export const COMBINATION_METHOD = 'root-sum-square' as const;
@@ -30,11 +33,27 @@ export interface Band<K extends string> {
 
 /** Combines independent ± contributions (all ≥ 0, same unit). */
 export function combineBand<K extends string>(contributions: Record<K, number>): Band<K> {
-  const parts = (Object.keys(contributions) as K[]).map((key) => Math.abs(contributions[key]));
+  const parts: number[] = [];
+  for (const key in contributions) parts.push(Math.abs(contributions[key]));
   // Math.hypot scales before squaring, so tiny or huge parts neither underflow nor overflow.
   const plusMinus = Math.hypot(...parts);
-  const worstCase = parts.reduce((a, b) => a + b, 0);
+  let worstCase = 0;
+  for (const p of parts) worstCase += p;
   return { method: COMBINATION_METHOD, plusMinus, worstCase, contributions };
+}
+
+/**
+ * combineBand over `first` and `added` together, where `added` holds parts introduced after a
+ * band was first published (instrument indicator and drift): while they are all 0 the ± is the
+ * RSS of `first` alone, the same double as before they existed (V8's Math.hypot can land an ulp
+ * away when zeros join its arguments).
+ */
+export function combineBandWithAdded<K extends string, A extends string>(first: Record<K, number>, added: Record<A, number>): Band<K | A> {
+  const all = { ...first, ...added } as Record<K | A, number>;
+  for (const key in added) if (added[key] !== 0) return combineBand(all);
+  const band = combineBand(first);
+  // The zeros add nothing to the worst case either.
+  return { method: band.method, plusMinus: band.plusMinus, worstCase: band.worstCase, contributions: all };
 }
 
 /**
@@ -57,29 +76,63 @@ export function temperatureToleranceK(sensor: TemperatureSensorTolerance, temper
   }
 }
 
-/** ± limits on the absolute pressure, Pa: the gauge (class × span) and, for a gauge reading, the atmosphere. */
+/** The thermometer's ± limits at T, K: the element's class or stated limit, the indicator's and the drift's; combined root-sum-square. */
+export function thermometerLimitsK(instruments: InstrumentAccuracy, temperatureK: number): { element: number; indicator: number; drift: number; combined: number } {
+  const element = temperatureToleranceK(instruments.temperatureSensor, temperatureK);
+  const indicator = instruments.temperatureIndicatorToleranceK ?? 0;
+  const drift = instruments.temperatureDriftToleranceK ?? 0;
+  return { element, indicator, drift, combined: Math.hypot(element, indicator, drift) };
+}
+
+/** The pressure gauge's own ± limits, Pa: class, indicator and drift (each % of span). */
+export function gaugeLimitsPa(instruments: InstrumentAccuracy): { pressureGauge: number; pressureGaugeIndicator: number; pressureGaugeDrift: number; combined: number } {
+  const g = instruments.pressureGauge;
+  const pressureGauge = (g.accuracyPercentOfSpan / 100) * g.spanPa;
+  const pressureGaugeIndicator = ((g.indicatorPercentOfSpan ?? 0) / 100) * g.spanPa;
+  const pressureGaugeDrift = ((g.driftPercentOfSpan ?? 0) / 100) * g.spanPa;
+  return { pressureGauge, pressureGaugeIndicator, pressureGaugeDrift, combined: Math.hypot(pressureGauge, pressureGaugeIndicator, pressureGaugeDrift) };
+}
+
+/** ± limits on the absolute pressure, Pa: the gauge (class, indicator, drift, each × span) and, for a gauge reading, the atmosphere. */
 export function pressureTolerancesPa(
   vessel: VesselSpec,
   reading: ResolvedReading,
   reference: 'gauge' | 'absolute',
-): { pressureGauge: number; atmosphere: number } {
-  const g = vessel.instruments.pressureGauge;
-  const pressureGauge = (g.accuracyPercentOfSpan / 100) * g.spanPa;
-  if (reference === 'absolute') return { pressureGauge, atmosphere: 0 };
+): { pressureGauge: number; pressureGaugeIndicator: number; pressureGaugeDrift: number; atmosphere: number } {
+  const { pressureGauge, pressureGaugeIndicator, pressureGaugeDrift } = gaugeLimitsPa(vessel.instruments);
+  if (reference === 'absolute') return { pressureGauge, pressureGaugeIndicator, pressureGaugeDrift, atmosphere: 0 };
   const atmosphere = reading.atmosphereSource === 'measured' ? vessel.instruments.barometerTolerancePa : SITE_ATMOSPHERE_TOLERANCE_PA;
-  return { pressureGauge, atmosphere };
+  return { pressureGauge, pressureGaugeIndicator, pressureGaugeDrift, atmosphere };
 }
 
-/** ± limit of the net mass, kg: one weight reading for a net weight; gross and tare (RSS) for a gross weight. */
+/**
+ * ± limit of the net mass, kg: one weight reading for a net weight. For a gross weight, the gross
+ * reading and the tare combined root-sum-square: a tare weighed like the gross is another
+ * independent reading (√2 × the weight tolerance); a stated (nameplate or historic) tare brings
+ * its own limit.
+ */
 export function netMassToleranceKg(vessel: VesselSpec, weightKind: 'gross' | 'net'): number {
   const a = vessel.instruments.weightToleranceKg;
-  return weightKind === 'gross' ? Math.SQRT2 * a : a;
+  if (weightKind === 'net') return a;
+  const tare = vessel.instruments.tare;
+  return tare?.kind === 'stated' ? Math.hypot(a, tare.toleranceKg) : Math.SQRT2 * a;
 }
+
+/** A band with its ends clipped to what the quantity can be (quality 0…1, liquid mass 0…net mass). */
+export type ClippedBand<K extends string> = Band<K> & { low: number; high: number };
+
+/**
+ * Why a quality band says nothing: near the critical point v_g − v_f vanishes and the band grows
+ * without limit; a weight tolerance at or above the contents swamps them; otherwise the limits
+ * together span the whole two-phase range.
+ */
+export type UndeterminedReason = 'near-critical-point' | 'weight-tolerance-exceeds-contents' | 'band-spans-regime';
 
 /** Quality, liquid mass and liquid level with ± bands propagated from the net mass, temperature and volume limits. */
 export interface InventoryBands {
-  quality: Band<'weight' | 'temperature' | 'volume'>;
-  liquidMassKg: Band<'weight' | 'temperature' | 'volume'>;
+  /** Quality band; `undetermined` when its clipped ends reach both 0 and 1 (the whole regime). */
+  quality: ClippedBand<'weight' | 'temperature' | 'volume'> & { undetermined: { reason: UndeterminedReason } | null };
+  liquidMassKg: ClippedBand<'weight' | 'temperature' | 'volume'>;
   /** Liquid level, m; null for a stated volume (no geometry, no level). */
   liquidLevelM: Band<'weight' | 'temperature' | 'volume'> | null;
 }
@@ -88,7 +141,7 @@ export interface InventoryBands {
  * First-order propagation through x = (V/m − v_f)/(v_g − v_f) and m_liq = (m·v_g − V)/(v_g − v_f)
  * (the mass and volume balances): analytic partial derivatives in m and V, a central difference of the
  * saturation values in T. Limits are ± (same as the instruments'). Valid for a two-phase state:
- * temperatureK 273.16–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
+ * temperatureK 273.15–647.096 K, massKg > 0, volumeM3 > 0, tolerances ≥ 0.
  */
 export function inventoryBands(args: {
   geometry?: VesselGeometry;
@@ -101,9 +154,8 @@ export function inventoryBands(args: {
 }): InventoryBands {
   const { temperatureK: T, massKg: m, volumeM3: V } = args;
   const at = (t: number) => {
-    const s = saturation(t);
-    const vf = s.liquid.v;
-    const vg = s.vapor.v;
+    const vf = saturatedLiquidVolume(t);
+    const vg = saturatedVaporVolume(t);
     return { vf, vg, x: (V / m - vf) / (vg - vf), mLiq: (m * vg - V) / (vg - vf) };
   };
   const here = at(T);
@@ -112,25 +164,41 @@ export function inventoryBands(args: {
   const dT = 0.01;
   const top = IF97.Tc - 1e-6;
   let hi = Math.min(top, T + dT);
-  let lo = Math.max(IF97.Tt, T - dT);
+  let lo = Math.max(T_MIN_K, T - dT);
   if (hi <= lo) lo = hi - dT;
   if (hi <= lo) hi = lo + dT;
   const a = at(lo);
   const b = at(hi);
   const dxdT = (b.x - a.x) / (hi - lo);
   const dmLiqdT = (b.mLiq - a.mLiq) / (hi - lo);
-  const quality = combineBand({
+  const qualityBand = combineBand({
     weight: ((V / (m * m)) / vfg) * args.massToleranceKg,
     temperature: Math.abs(dxdT) * args.temperatureToleranceK,
     volume: (1 / (m * vfg)) * args.volumeToleranceM3,
   });
-  const liquidMassKg = combineBand({
+  const liquidBand = combineBand({
     weight: (here.vg / vfg) * args.massToleranceKg,
     temperature: Math.abs(dmLiqdT) * args.temperatureToleranceK,
     volume: (1 / vfg) * args.volumeToleranceM3,
   });
+  const x = here.x;
+  const low = clamp01(x - qualityBand.plusMinus);
+  const high = clamp01(x + qualityBand.plusMinus);
+  const undetermined: InventoryBands['quality']['undetermined'] = low > 0 || high < 1 ? null : {
+    reason: IF97.Tc - T < 1 ? 'near-critical-point' : args.massToleranceKg >= m ? 'weight-tolerance-exceeds-contents' : 'band-spans-regime',
+  };
+  const quality = { ...qualityBand, low, high, undetermined };
+  const liquidMassKg = {
+    ...liquidBand,
+    low: Math.min(m, Math.max(0, here.mLiq - liquidBand.plusMinus)),
+    high: Math.min(m, Math.max(0, here.mLiq + liquidBand.plusMinus)),
+  };
   const liquidLevelM = args.geometry === undefined || args.geometry.shape === 'stated-volume' ? null : levelBand(args.geometry, args);
   return { quality, liquidMassKg, liquidLevelM };
+}
+
+function clamp01(x: number): number {
+  return x < 0 ? 0 : x > 1 ? 1 : x;
 }
 
 /**
@@ -141,7 +209,7 @@ export function inventoryBands(args: {
  * dh/dV_liq: that is infinite at the bottom and top of a horizontal shell and at a head's apex,
  * while the level itself stays finite. V_liq is held to 0 … V of the drawn geometry (a level cannot
  * leave the vessel). The volume limit enters through the mass balance (how much of the contents is
- * liquid); the shape is taken as drawn. T is kept to 273.16 K … Tc − 1e-6 K and m above 0; a
+ * liquid); the shape is taken as drawn. T is kept to 273.15 K … Tc − 1e-6 K and m above 0; a
  * difference shortened by those limits is scaled back to the full limit.
  */
 function levelBand(
@@ -150,9 +218,8 @@ function levelBand(
 ): Band<'weight' | 'temperature' | 'volume'> {
   const drawn = vesselVolume(geometry);
   const level = (T: number, m: number, V: number) => {
-    const s = saturation(T);
-    const vf = s.liquid.v;
-    const vg = s.vapor.v;
+    const vf = saturatedLiquidVolume(T);
+    const vg = saturatedVaporVolume(T);
     const liquidM3 = (vf * (m * vg - V)) / (vg - vf);
     return liquidLevelFromVolume(geometry, Math.min(Math.max(liquidM3, 0), drawn));
   };
@@ -164,7 +231,7 @@ function levelBand(
   const dV = args.volumeToleranceM3;
   return combineBand({
     weight: across(dm, Math.max(m - dm, m * 1e-9), m + dm, (x) => level(T, x, V)),
-    temperature: across(dT, Math.max(IF97.Tt, T - dT), Math.min(IF97.Tc - 1e-6, T + dT), (x) => level(x, m, V)),
+    temperature: across(dT, Math.max(T_MIN_K, T - dT), Math.min(IF97.Tc - 1e-6, T + dT), (x) => level(x, m, V)),
     volume: across(dV, Math.max(V - dV, V * 1e-9), V + dV, (x) => level(T, m, x)),
   });
 }

@@ -8,6 +8,8 @@
 // torispherical knuckle term is re-derived in the comments.
 
 import { InputError } from '../errors.ts';
+import { bisectionResult } from './bisection.ts';
+import { gaussLegendre } from './quadrature.ts';
 
 /** One head shape. A torispherical head without radii is the standard ASME F&D head. */
 export type HeadSpec =
@@ -50,29 +52,60 @@ interface Torus {
   z1: number; // crown–knuckle tangent, measured from the apex
 }
 
+// Hot paths below multiply instead of using `**`: in V8 `x ** 3` costs about 55 ns against 1 ns
+// for x*x*x (measured in the check engine's level solve), and the level bisection evaluates these
+// forms dozens of times per check. The products give the same doubles here (the engine fixture,
+// test/core/check/engine-outputs.test.ts, holds every result byte-identical).
 function torus(D: number, head: Extract<HeadSpec, { kind: 'torispherical' }>): Torus {
   const R = D / 2;
   const L = head.crownRadiusM ?? STANDARD_FD_CROWN_FRACTION * D;
   const r = head.knuckleRadiusM ?? STANDARD_FD_KNUCKLE_FRACTION * D;
   // (L − r)² = (R − r)² + (L − h_d)²: the knuckle centre circle lies on the crown sphere shrunk by r.
-  const depth = L - Math.sqrt((L - r) ** 2 - (R - r) ** 2);
+  const Lr = L - r;
+  const Rr = R - r;
+  const depth = L - Math.sqrt(Lr * Lr - Rr * Rr);
   // L = r = R is a hemisphere made entirely of knuckle: no crown, tangent at the apex.
   const z1 = L - r > 0 ? L - ((L - depth) * L) / (L - r) : 0;
   return { R, L, r, depth, z1 };
 }
 
-/** Axial depth of one head, m (0 for flat). D inner diameter, m. */
-export function headDepthM(head: HeadSpec, D: number): number {
+/**
+ * One head resolved for its diameter, once: the level solve evaluates the head's volume dozens of
+ * times per check, and rebuilding the torispherical shape (square roots and all) inside each
+ * evaluation cost more than the evaluation itself.
+ */
+interface HeadShape {
+  head: HeadSpec;
+  D: number;
+  /** Cylinder radius, m. */
+  R: number;
+  /** Axial depth, m. */
+  depth: number;
+  /** Semi-axis along the vessel axis of an ellipsoidal or hemispherical head, m (0 otherwise). */
+  a: number;
+  /** Torispherical radii; null for the other kinds. */
+  t: Torus | null;
+}
+
+function headShape(head: HeadSpec, D: number): HeadShape {
+  const R = D / 2;
   switch (head.kind) {
     case 'flat':
-      return 0;
+      return { head, D, R, depth: 0, a: 0, t: null };
     case 'semi-ellipsoidal-2-1':
-      return D / 4;
+      return { head, D, R, depth: D / 4, a: R / 2, t: null };
     case 'hemispherical':
-      return D / 2;
-    case 'torispherical':
-      return torus(D, head).depth;
+      return { head, D, R, depth: D / 2, a: R, t: null };
+    case 'torispherical': {
+      const t = torus(D, head);
+      return { head, D, R, depth: t.depth, a: 0, t };
+    }
   }
+}
+
+/** Axial depth of one head, m (0 for flat). D inner diameter, m. */
+export function headDepthM(head: HeadSpec, D: number): number {
+  return headShape(head, D).depth;
 }
 
 /**
@@ -80,36 +113,39 @@ export function headDepthM(head: HeadSpec, D: number): number {
  * Clamped: h ≤ 0 gives 0, h ≥ depth gives the full head.
  */
 export function bottomHeadVolumeM3(head: HeadSpec, D: number, h: number): number {
-  const R = D / 2;
-  switch (head.kind) {
-    case 'flat':
-      return 0;
-    case 'semi-ellipsoidal-2-1':
-    case 'hemispherical': {
-      const a = head.kind === 'hemispherical' ? R : R / 2;
-      const y = clamp(h, 0, a);
-      return (Math.PI * R * R * y * y * (3 * a - y)) / (3 * a * a);
-    }
-    case 'torispherical': {
-      const t = torus(D, head);
-      const y = clamp(h, 0, t.depth);
-      const cap = (z: number) => (Math.PI * z * z * (3 * t.L - z)) / 3;
-      if (y <= t.z1) return cap(y);
-      // Knuckle slice radius ρ(z) = c + √(r² − u²), u = h_d − z. ∫πρ² dz from z1 to y equals
-      // π[(c² + r²)Δ + 2c(F(u1) − F(u2)) − (u1³ − u2³)/3] with F(u) = ∫√(r² − u²) du.
-      const c = t.R - t.r;
-      const u1 = t.depth - t.z1;
-      const u2 = t.depth - y;
-      const F = (u: number) => 0.5 * (u * Math.sqrt(Math.max(0, t.r * t.r - u * u)) + t.r * t.r * Math.asin(clamp(u / t.r, -1, 1)));
-      const knuckle = Math.PI * ((c * c + t.r * t.r) * (u1 - u2) + 2 * c * (F(u1) - F(u2)) - (u1 ** 3 - u2 ** 3) / 3);
-      return cap(t.z1) + knuckle;
-    }
+  return bottomVolume(headShape(head, D), h);
+}
+
+function bottomVolume(shape: HeadShape, h: number): number {
+  const R = shape.R;
+  const t = shape.t;
+  if (t === null) {
+    if (shape.head.kind === 'flat') return 0;
+    const a = shape.a;
+    const y = clamp(h, 0, a);
+    return (Math.PI * R * R * y * y * (3 * a - y)) / (3 * a * a);
   }
+  const y = clamp(h, 0, t.depth);
+  if (y <= t.z1) return crownCap(t, y);
+  // Knuckle slice radius ρ(z) = c + √(r² − u²), u = h_d − z. ∫πρ² dz from z1 to y equals
+  // π[(c² + r²)Δ + 2c(F(u1) − F(u2)) − (u1³ − u2³)/3] with F(u) = ∫√(r² − u²) du.
+  const c = t.R - t.r;
+  const u1 = t.depth - t.z1;
+  const u2 = t.depth - y;
+  const F = (u: number) => 0.5 * (u * Math.sqrt(Math.max(0, t.r * t.r - u * u)) + t.r * t.r * Math.asin(clamp(u / t.r, -1, 1)));
+  const knuckle = Math.PI * ((c * c + t.r * t.r) * (u1 - u2) + 2 * c * (F(u1) - F(u2)) - (u1 * u1 * u1 - u2 * u2 * u2) / 3);
+  return crownCap(t, t.z1) + knuckle;
+}
+
+/** The crown's spherical cap of depth z, m³. */
+function crownCap(t: Torus, z: number): number {
+  return (Math.PI * z * z * (3 * t.L - z)) / 3;
 }
 
 /** Full volume of one head, m³ (π·D³/24 for 2:1, π·D³/12 for hemispherical, ≈ 0.0810·D³ for standard F&D). */
 export function headVolumeM3(head: HeadSpec, D: number): number {
-  return bottomHeadVolumeM3(head, D, headDepthM(head, D));
+  const shape = headShape(head, D);
+  return bottomVolume(shape, shape.depth);
 }
 
 /** Area of a circle of radius ρ lying below the horizontal line at height y above its centre, m². */
@@ -136,57 +172,143 @@ function segmentArea(R: number, h: number): number {
 }
 
 /** Slice radius of a head at axial distance z from its apex, m. */
-function headSliceRadius(head: HeadSpec, D: number, z: number): number {
-  const R = D / 2;
-  switch (head.kind) {
-    case 'flat':
-      return R;
-    case 'semi-ellipsoidal-2-1':
-    case 'hemispherical': {
-      const a = head.kind === 'hemispherical' ? R : R / 2;
-      const s = (a - z) / a;
-      return R * Math.sqrt(Math.max(0, 1 - s * s));
-    }
-    case 'torispherical': {
-      const t = torus(D, head);
-      if (z <= t.z1) return Math.sqrt(Math.max(0, t.L * t.L - (t.L - z) ** 2));
-      return t.R - t.r + Math.sqrt(Math.max(0, t.r * t.r - (t.depth - z) ** 2));
-    }
+function sliceRadius(shape: HeadShape, z: number): number {
+  const R = shape.R;
+  const t = shape.t;
+  if (t === null) {
+    if (shape.head.kind === 'flat') return R;
+    const a = shape.a;
+    const s = (a - z) / a;
+    return R * Math.sqrt(Math.max(0, 1 - s * s));
   }
-}
-
-/** Simpson's rule, n even. */
-function simpson(f: (z: number) => number, a: number, b: number, n: number): number {
-  if (b <= a) return 0;
-  const step = (b - a) / n;
-  let sum = f(a) + f(b);
-  for (let i = 1; i < n; i++) sum += (i % 2 === 1 ? 4 : 2) * f(a + i * step);
-  return (sum * step) / 3;
+  if (z <= t.z1) {
+    const Lz = t.L - z;
+    return Math.sqrt(Math.max(0, t.L * t.L - Lz * Lz));
+  }
+  const u = t.depth - z;
+  return t.R - t.r + Math.sqrt(Math.max(0, t.r * t.r - u * u));
 }
 
 /**
  * Liquid volume in one head of a horizontal vessel, filled to depth h from the bottom of the shell, m³.
- * Ellipsoids and spheres have the closed form π·a·h²·(3R − h)/(6R); the torispherical head is
- * integrated over axial slices (no simple closed form; Simpson's rule), crown and knuckle separately because the
- * slice radius has a kink in curvature at their tangent.
+ * Ellipsoids and spheres have the closed form π·a·h²·(3R − h)/(6R). The torispherical head has no
+ * simple closed form; it is integrated over axial slices z from the apex (the slice of radius ρ(z)
+ * is a disk, of which the part below the liquid surface, at height y = h − R above the axis,
+ * counts): slices narrower than |y| are either whole (y > 0: the closed form of the vertical head
+ * up to that z) or dry (y < 0); the rest, from z₀ where ρ(z₀) = |y| to the tangent line, are
+ * circular segments, integrated by Gauss–Legendre quadrature in two pieces split at the
+ * crown–knuckle tangent (a kink in the profile's curvature): the crown by the angle on its sphere,
+ * the knuckle by z, each after a substitution (· = onset + width·s²) that makes the segment's
+ * (ρ − |y|)^{3/2} onset smooth in s.
+ * Checked against an independent two-dimensional integration over the head's cross-section
+ * (test/core/check/vessel-geometry.test.ts).
  */
 export function horizontalHeadVolumeM3(head: HeadSpec, D: number, h: number): number {
-  const R = D / 2;
-  const y = clamp(h, 0, D);
-  switch (head.kind) {
-    case 'flat':
-      return 0;
-    case 'semi-ellipsoidal-2-1':
-    case 'hemispherical': {
-      const a = head.kind === 'hemispherical' ? R : R / 2;
-      return (Math.PI * a * y * y * (3 * R - y)) / (6 * R);
-    }
-    case 'torispherical': {
-      const t = torus(D, head);
-      const slice = (z: number) => circleAreaBelow(headSliceRadius(head, D, z), y - R);
-      return simpson(slice, 0, t.z1, 400) + simpson(slice, t.z1, t.depth, 400);
+  return horizontalVolume(headShape(head, D), h);
+}
+
+function horizontalVolume(shape: HeadShape, h: number): number {
+  const R = shape.R;
+  const y = clamp(h, 0, shape.D);
+  const t = shape.t;
+  if (t === null) {
+    if (shape.head.kind === 'flat') return 0;
+    const a = shape.a;
+    return (Math.PI * a * y * y * (3 * R - y)) / (6 * R);
+  }
+  torisphericalSegments(shape, t, y - R);
+  return SEGMENTS[0] as number;
+}
+
+/** Scratch output of torisphericalSegments: [volume below the surface, m³; d(volume)/d(surface height), m²]. */
+const SEGMENTS = new Float64Array(2);
+
+/** Gauss–Legendre points per piece of the torispherical head integral: 16 agree with 64 to 1e-14 of the head volume at every depth tried, from near empty to near full and across the axis (12 only to 1e-12). */
+const GAUSS_POINTS = 16;
+const [GAUSS_X, GAUSS_W] = gaussLegendre(GAUSS_POINTS);
+
+/** Axial distance from the apex of a torispherical head at which its slice radius is rho, m (0 ≤ rho ≤ R). */
+function zAtRadius(t: Torus, rho: number): number {
+  if (t.z1 > 0) {
+    const crownTop = Math.sqrt(t.z1 * (2 * t.L - t.z1));
+    if (rho <= crownTop) return t.L - Math.sqrt(t.L * t.L - rho * rho);
+  }
+  const e = rho - (t.R - t.r);
+  return t.depth - Math.sqrt(Math.max(0, t.r * t.r - e * e));
+}
+
+/**
+ * Area of a slice (disk of radius rho, m) below the surface at height y, m², given the half chord
+ * half = √(ρ² − y²): ρ²·acos(−y/ρ) + y·half (the circular segment of plane geometry), one inverse
+ * cosine per node where segmentArea needs a sine as well. Its two terms cancel for a dry sliver
+ * (y < 0, ρ − |y| ≪ ρ), which segmentArea's series handles instead, so a nearly empty vessel's
+ * few litres stay exact to rounding.
+ */
+function slicePartBelow(rho: number, y: number, half: number): number {
+  if (rho <= 0 || y <= -rho) return 0;
+  if (y >= rho) return Math.PI * rho * rho;
+  if (y < -0.5 * rho) return segmentArea(rho, y + rho);
+  return rho * rho * Math.acos(-y / rho) + y * half;
+}
+
+/**
+ * Fills SEGMENTS with the liquid volume of one torispherical head of a horizontal vessel whose
+ * surface is y above the axis (−R ≤ y ≤ R), and its derivative in y (the integral of the chord
+ * widths 2·√(ρ² − y²), what a Newton step on the level needs).
+ */
+function torisphericalSegments(shape: HeadShape, t: Torus, y: number): void {
+  const R = t.R;
+  if (y <= -R) {
+    SEGMENTS[0] = 0;
+    SEGMENTS[1] = 0;
+    return;
+  }
+  const hd = t.depth;
+  if (y >= R) {
+    SEGMENTS[0] = bottomVolume(shape, hd);
+    SEGMENTS[1] = 0;
+    return;
+  }
+  const ay = Math.abs(y);
+  const z0 = zAtRadius(t, ay);
+  let volume = y > 0 ? bottomVolume(shape, z0) : 0;
+  let slope = 0;
+  const y2 = y * y;
+  const L = t.L;
+  if (z0 < t.z1) {
+    // Crown slices from the onset to the tangent, by the angle θ on the crown sphere: ρ = L·sin θ,
+    // z = L·(1 − cos θ), dz = L·sin θ dθ, smooth in θ from the apex to a hemisphere's rim (z has a
+    // √ at the apex, ρ a √ at the rim), with θ = θ₀ + (θ₁ − θ₀)·s² for the onset.
+    const theta0 = Math.asin(Math.min(1, ay / L));
+    const theta1 = Math.asin(Math.min(1, Math.sqrt(t.z1 * (2 * L - t.z1)) / L));
+    const width = theta1 - theta0;
+    for (let i = 0; i < GAUSS_POINTS; i++) {
+      const s = GAUSS_X[i] as number;
+      const sinTheta = Math.sin(theta0 + width * s * s);
+      const rho = L * sinTheta;
+      const weight = (GAUSS_W[i] as number) * 2 * width * s * L * sinTheta;
+      const half = Math.sqrt(Math.max(0, rho * rho - y2));
+      volume += weight * slicePartBelow(rho, y, half);
+      slope += weight * 2 * half;
     }
   }
+  // Knuckle slices (all of them past the onset, or those from the onset): by z, smooth up to the
+  // tangent, with z = z₀ + (h_d − z₀)·s² anchored at the onset even when it lies in the crown, so an
+  // onset just short of the knuckle still reads smooth.
+  const span = hd - z0;
+  const s1 = t.z1 > z0 ? Math.sqrt((t.z1 - z0) / span) : 0;
+  const width = 1 - s1;
+  for (let i = 0; i < GAUSS_POINTS; i++) {
+    const s = s1 + width * (GAUSS_X[i] as number);
+    const z = z0 + span * s * s;
+    const rho = sliceRadius(shape, z);
+    const weight = (GAUSS_W[i] as number) * width * 2 * span * s;
+    const half = Math.sqrt(Math.max(0, rho * rho - y2));
+    volume += weight * slicePartBelow(rho, y, half);
+    slope += weight * 2 * half;
+  }
+  SEGMENTS[0] = volume;
+  SEGMENTS[1] = slope;
 }
 
 /** Internal volume of the vessel, m³. Throws InputError if the geometry is invalid (see validateGeometry). */
@@ -217,19 +339,37 @@ export function liquidVolumeFromLevel(geometry: CylinderGeometry, levelM: number
   return volumeAtLevel(geometry, levelM);
 }
 
+/** A cylinder geometry resolved once for repeated volume-at-level evaluations. */
+interface LevelShape {
+  horizontal: boolean;
+  R: number;
+  straightLengthM: number;
+  head: HeadShape;
+  /** Volume of one full head, m³. */
+  full: number;
+}
+
+function levelShape(g: CylinderGeometry): LevelShape {
+  const head = headShape(g.head, g.innerDiameterM);
+  return { horizontal: g.shape === 'horizontal-cylinder', R: g.innerDiameterM / 2, straightLengthM: g.straightLengthM, head, full: bottomVolume(head, head.depth) };
+}
+
 function volumeAtLevel(g: CylinderGeometry, h: number): number {
-  const D = g.innerDiameterM;
-  const R = D / 2;
-  if (g.shape === 'horizontal-cylinder') {
-    return circleAreaBelow(R, h - R) * g.straightLengthM + 2 * horizontalHeadVolumeM3(g.head, D, h);
+  return volumeOfShape(levelShape(g), h);
+}
+
+function volumeOfShape(g: LevelShape, h: number): number {
+  const R = g.R;
+  if (g.horizontal) {
+    return circleAreaBelow(R, h - R) * g.straightLengthM + 2 * horizontalVolume(g.head, h);
   }
-  const hd = headDepthM(g.head, D);
-  const full = headVolumeM3(g.head, D);
-  const bottom = bottomHeadVolumeM3(g.head, D, h);
+  const hd = g.head.depth;
+  const full = g.full;
+  const bottom = bottomVolume(g.head, h);
   const shell = Math.PI * R * R * clamp(h - hd, 0, g.straightLengthM);
   // The top head is the bottom head inverted: the empty part above the liquid is a bottom-head fill.
   const topDepth = clamp(h - hd - g.straightLengthM, 0, hd);
-  const top = topDepth > 0 ? full - bottomHeadVolumeM3(g.head, D, hd - topDepth) : 0;
+  const top = topDepth > 0 ? full - bottomVolume(g.head, hd - topDepth) : 0;
   return bottom + shell + top;
 }
 
@@ -244,14 +384,53 @@ export function liquidLevelFromVolume(geometry: CylinderGeometry, volumeM3: numb
   if (!Number.isFinite(volumeM3)) throw new InputError('liquid volume', 'not-a-number', volumeM3, range);
   if (volumeM3 < 0 || volumeM3 > total * (1 + 1e-12)) throw new InputError('liquid volume', 'out-of-range', volumeM3, range);
   const span = vesselLevelSpanM(geometry);
+  const shape = levelShape(geometry);
+  if (shape.horizontal && shape.head.t !== null) return horizontalTorisphericalLevel(shape, shape.head.t, volumeM3, span);
+  // The result of plain bisection (80 steps or 1e-12 of the span), from fewer evaluations
+  // (bisection.ts); V(h) is a sum of a few closed forms or a Simpson sum, within 1e-13 of the
+  // total volume (a few hundred ulp).
+  return bisectionResult((h) => volumeOfShape(shape, h) - volumeM3, 0, span, 80, 1e-12 * span, () => 1e-13 * total, 1e-14 * span);
+}
+
+/**
+ * Level of a horizontal vessel with torispherical heads, m: Newton's method on V(h) with its
+ * derivative (the liquid surface's area, from the same quadrature), kept inside a bracket that
+ * bisection takes over whenever a step would leave it; to 1e-13 of the span. Each evaluation
+ * integrates the heads, so the 40 evaluations of a plain bisection cost more than the rest of a
+ * check (9.5 ms against 40 µs with Simpson's rule); Newton needs about five.
+ */
+function horizontalTorisphericalLevel(g: LevelShape, t: Torus, volumeM3: number, span: number): number {
+  const total = volumeOfShape(g, span);
+  if (volumeM3 <= 0) return 0;
+  if (volumeM3 >= total) return span;
+  const R = g.R;
   let lo = 0;
   let hi = span;
-  for (let i = 0; i < 80 && hi - lo > 1e-12 * span; i++) {
-    const mid = 0.5 * (lo + hi);
-    if (volumeAtLevel(geometry, mid) < volumeM3) lo = mid;
-    else hi = mid;
+  // Start where a plain cylinder would hold this fraction (a few cheap Newton steps on the
+  // circular segment): the heads bend the relation only a little, so the steps below are few.
+  const fraction = volumeM3 / total;
+  const disk = Math.PI * R * R;
+  let h = span * fraction;
+  for (let k = 0; k < 8; k++) {
+    const y = h - R;
+    const w = 2 * Math.sqrt(Math.max(0, R * R - y * y));
+    if (!(w > 0)) break;
+    h = clamp(h - (circleAreaBelow(R, y) - fraction * disk) / w, 0, span);
   }
-  return 0.5 * (lo + hi);
+  for (let k = 0; k < 100; k++) {
+    const y = h - R;
+    torisphericalSegments(g.head, t, y);
+    const V = circleAreaBelow(R, y) * g.straightLengthM + 2 * (SEGMENTS[0] as number);
+    const dV = 2 * Math.sqrt(Math.max(0, R * R - y * y)) * g.straightLengthM + 2 * (SEGMENTS[1] as number);
+    const f = V - volumeM3;
+    if (f < 0) lo = h;
+    else hi = h;
+    let next = dV > 0 ? h - f / dV : Number.NaN;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    if (Math.abs(next - h) <= 1e-13 * span || hi - lo <= 1e-12 * span) return next;
+    h = next;
+  }
+  return h;
 }
 
 const MAX_DIMENSION_M = 100;

@@ -19,13 +19,30 @@ export type TemperatureSensorTolerance =
   | { kind: 'iec-60751'; sensorClass: 'AA' | 'A' | 'B' }
   | { kind: 'stated'; toleranceK: number };
 
+/**
+ * How the tare is known. Weighed on the same scale the way the gross is: its error is another
+ * reading's, independent of the gross (combined root-sum-square, √2 × the weight tolerance). A
+ * nameplate or historic tare is systematic: its own ± limit, combined with one weight reading.
+ */
+export type TareTolerance = { kind: 'weighed-like-gross' } | { kind: 'stated'; toleranceKg: number };
+
 /** Instrument accuracies, each a ± limit (the edge of a rectangular distribution). */
 export interface InstrumentAccuracy {
-  /** Pressure gauge or transmitter: span (full scale minus zero), Pa, and accuracy class, % of span. */
-  pressureGauge: { spanPa: number; accuracyPercentOfSpan: number };
+  /**
+   * Pressure gauge or transmitter: span (full scale minus zero), Pa, and accuracy class, % of span;
+   * optionally a separate indicator (display, recorder) and the drift allowed since calibration,
+   * both % of span (0 when absent).
+   */
+  pressureGauge: { spanPa: number; accuracyPercentOfSpan: number; indicatorPercentOfSpan?: number; driftPercentOfSpan?: number };
   temperatureSensor: TemperatureSensorTolerance;
-  /** ± limit of one weight reading, kg: at least the scale or load-cell resolution; include tare drift and piping restraint. */
+  /** ± limit of the thermometer's indicator or transmitter, K, beside the element's class; 0 when absent. */
+  temperatureIndicatorToleranceK?: number;
+  /** ± drift allowed since the thermometer's calibration, K; 0 when absent. */
+  temperatureDriftToleranceK?: number;
+  /** ± limit of one weight reading, kg: at least the scale or load-cell resolution; include piping restraint. */
   weightToleranceKg: number;
+  /** How the tare is known; absent: weighed like the gross. */
+  tare?: TareTolerance;
   /** ± limit of the internal volume, % of volume (dimensions, internals, straight flanges). */
   volumeTolerancePercent: number;
   /** ± limit of a measured atmospheric (barometer) reading, Pa. */
@@ -50,9 +67,17 @@ export interface VesselSpec {
   vacuumRated: boolean;
   /** Site atmospheric (station) pressure, Pa; the UI resolves an elevation to this. */
   siteAtmospherePa: number;
-  /** Surroundings the vessel cools to when idle, K. */
+  /** Surroundings the vessel cools (or warms) to when idle, K. */
   ambientTemperatureK: number;
   instruments: InstrumentAccuracy;
+  /** ± limit of the relief valve's set pressure, % of set; absent: 3 % (common practice). */
+  reliefSetTolerancePercent?: number;
+  /** A vacuum breaker is fitted (a vessel not rated for vacuum is then protected while it works); absent: none. */
+  vacuumBreaker?: boolean;
+  /** What the vessel is used for; some hazards belong to one service. Absent: not stated. */
+  service?: VesselService;
+  /** How the vessel is heated; absent: not stated. */
+  heating?: VesselHeating;
   /**
    * The units its instruments read in, so a check starts in them; the engine computes in SI and
    * does not use them. Absent on vessels saved before they existed.
@@ -60,11 +85,26 @@ export interface VesselSpec {
   readingUnits?: ReadingUnits;
 }
 
+/** Vessel services the hazards know (the brief's list of closed vessels). */
+export const VESSEL_SERVICES = ['steriliser', 'flash-tank', 'condensate-receiver', 'process-vessel', 'not-stated'] as const;
+export type VesselService = (typeof VESSEL_SERVICES)[number];
+/** Ways a vessel is heated. */
+export const VESSEL_HEATINGS = ['steam-jacket', 'steam-coil', 'direct-steam', 'electric', 'unheated', 'not-stated'] as const;
+export type VesselHeating = (typeof VESSEL_HEATINGS)[number];
+
+/** The relief valve set-pressure tolerance a vessel without its own is given, % of set (±3 %, common practice). */
+export const DEFAULT_RELIEF_SET_TOLERANCE_PERCENT = 3;
+
+/** Whether the vessel takes steam into a jacket, a coil or its contents (hot surfaces, water hammer). */
+export function isSteamHeated(vessel: VesselSpec): boolean {
+  return vessel.heating === 'steam-jacket' || vessel.heating === 'steam-coil' || vessel.heating === 'direct-steam';
+}
+
 /** Valid ranges, SI. Atmosphere: every inhabited elevation up to the 108.38 kPa record high (1083.8 hPa, Agata, 31 Dec 1968: WMO Weather and Climate Extremes Archive, https://wmo.asu.edu/content/world-highest-sea-level-air-pressure-below-700m). */
 export const VESSEL_LIMITS = {
   tareKg: { min: 0, max: 1e6, unit: 'kg' },
   mawpGaugePa: { min: 0, max: 100e6, unit: 'Pa' },
-  designTemperatureK: { min: 273.16, max: 1073.15, unit: 'K' },
+  designTemperatureK: { min: 273.15, max: 1073.15, unit: 'K' },
   siteAtmospherePa: { min: 30e3, max: 110e3, unit: 'Pa' },
   ambientTemperatureK: { min: 223.15, max: 333.15, unit: 'K' },
   gaugeSpanPa: { min: 0, max: 100e6, unit: 'Pa' },
@@ -73,6 +113,12 @@ export const VESSEL_LIMITS = {
   weightToleranceKg: { min: 0, max: 1e5, unit: 'kg' },
   volumeTolerancePercent: { min: 0, max: 50, unit: '%' },
   barometerTolerancePa: { min: 0, max: 10e3, unit: 'Pa' },
+  gaugeIndicatorPercent: { min: 0, max: 10, unit: '% of span' },
+  gaugeDriftPercent: { min: 0, max: 10, unit: '% of span' },
+  temperatureIndicatorToleranceK: { min: 0, max: 50, unit: 'K' },
+  temperatureDriftToleranceK: { min: 0, max: 50, unit: 'K' },
+  tareToleranceKg: { min: 0, max: 1e5, unit: 'kg' },
+  reliefSetTolerancePercent: { min: 0, max: 10, unit: '% of set' },
 } as const;
 
 /**
@@ -126,6 +172,31 @@ export function validateVessel(spec: VesselSpec): void {
     throw new InputError('instrument units', 'out-of-range', JSON.stringify(u), undefined,
       'instrument units: the gauge, thermometer and scale units must each be one of the app\'s units.');
   }
+  // Fields added after the first release are optional, so vessels stored before them still validate.
+  optionalInRange('pressure gauge indicator', ins.pressureGauge.indicatorPercentOfSpan, L.gaugeIndicatorPercent);
+  optionalInRange('pressure gauge drift', ins.pressureGauge.driftPercentOfSpan, L.gaugeDriftPercent);
+  optionalInRange('thermometer indicator tolerance', ins.temperatureIndicatorToleranceK, L.temperatureIndicatorToleranceK);
+  optionalInRange('thermometer drift', ins.temperatureDriftToleranceK, L.temperatureDriftToleranceK);
+  const tare = ins.tare;
+  if (tare !== undefined) {
+    if (tare?.kind === 'stated') inRange('tare tolerance', tare.toleranceKg, L.tareToleranceKg);
+    else if (tare?.kind !== 'weighed-like-gross') {
+      throw new InputError('tare tolerance', 'out-of-range', String((tare as { kind?: unknown } | null)?.kind), undefined,
+        'tare tolerance: say whether the tare was weighed like the gross or give its own ± limit in kg.');
+    }
+  }
+  optionalInRange('relief set pressure tolerance', spec.reliefSetTolerancePercent, L.reliefSetTolerancePercent);
+  if (spec.vacuumBreaker !== undefined && typeof spec.vacuumBreaker !== 'boolean') throw new InputError('vacuum breaker', 'empty', String(spec.vacuumBreaker));
+  if (spec.service !== undefined && !(VESSEL_SERVICES as readonly unknown[]).includes(spec.service)) {
+    throw new InputError('service', 'out-of-range', String(spec.service), undefined, `service: must be one of ${VESSEL_SERVICES.join(', ')}.`);
+  }
+  if (spec.heating !== undefined && !(VESSEL_HEATINGS as readonly unknown[]).includes(spec.heating)) {
+    throw new InputError('heating', 'out-of-range', String(spec.heating), undefined, `heating: must be one of ${VESSEL_HEATINGS.join(', ')}.`);
+  }
+}
+
+function optionalInRange(field: string, value: number | undefined, r: { min: number; max: number; unit: string }): void {
+  if (value !== undefined) inRange(field, value, r);
 }
 
 function inRange(field: string, value: number, r: { min: number; max: number; unit: string }): void {

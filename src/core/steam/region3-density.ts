@@ -13,6 +13,7 @@
 import * as constants from './constants.ts';
 import * as region3 from './region3.ts';
 import * as saturationLine from './saturation-line.ts';
+import * as seedTable from './region3-seed-table.ts';
 import * as solvers from './solvers.ts';
 
 // The imports are read once into module constants: a bundler joins modules into one scope,
@@ -90,27 +91,31 @@ function outerRoot(T: number, ps: number, rho0: number, liquid: boolean): number
 
 // Starting values along the line: the saturated densities solved at 96 nodes evenly spaced in
 // √(Tc − T) (the dome's natural variable near the critical point), interpolated by cubic
-// Catmull-Rom segments (linear in the two intervals next to Tc). Built on first use (most
-// vessels never reach region 3), each node starting from its neighbour and the first from the
-// SR1-86 guesses. They only seed Newton's method (within 3e-5 of the root, 1.5e-4 in the last
-// 0.01 K, so usually two evaluations per phase finish); every returned density is a converged
-// root of Eq. (28).
+// Catmull-Rom segments (linear in the two intervals next to Tc). The nodes are solved by
+// computeSeedTable below (each node starting from its neighbour and the first from the SR1-86
+// guesses) and kept, as solved, in region3-seed-table.ts: solving them on first use cost a fresh
+// process about 3-5 ms, most of the first check of a fill whose liquid-full temperature lies in
+// region 3 (test/core/steam/region3-density.test.ts solves them again and holds the two equal bit
+// for bit). They only seed Newton's method (within 3e-5 of the root, 1.5e-4 in the last 0.01 K,
+// so usually two evaluations per phase finish); every returned density is a converged root of
+// Eq. (28).
 const SEED_NODES = 96;
 const SEED_S_MAX = Math.sqrt(IF97.Tc - 623.15);
-const SEED_LIQUID = new Float64Array(SEED_NODES);
-const SEED_VAPOR = new Float64Array(SEED_NODES);
-let seedsBuilt = false;
+const { SEED_TABLE_LIQUID: SEED_LIQUID, SEED_TABLE_VAPOR: SEED_VAPOR } = seedTable;
 
-function buildSeeds(): void {
+/** Solves the starting-value nodes (the generator of region3-seed-table.ts), ρ in kg/m³, node k at T = Tc − (k·√(Tc − 623.15 K)/95)². */
+export function computeSeedTable(): { liquid: Float64Array; vapor: Float64Array } {
+  const liquid = new Float64Array(SEED_NODES);
+  const vapor = new Float64Array(SEED_NODES);
   for (let k = SEED_NODES - 1; k >= 0; k--) {
     const sk = (SEED_S_MAX * k) / (SEED_NODES - 1);
     const T = IF97.Tc - sk * sk;
     const ps = saturationPressureUnchecked(T);
     const last = k === SEED_NODES - 1;
-    SEED_LIQUID[k] = outerRoot(T, ps, last ? liquidDensityGuess(T) : (SEED_LIQUID[k + 1] as number), true);
-    SEED_VAPOR[k] = outerRoot(T, ps, last ? vaporDensityGuess(T) : (SEED_VAPOR[k + 1] as number), false);
+    liquid[k] = outerRoot(T, ps, last ? liquidDensityGuess(T) : (liquid[k + 1] as number), true);
+    vapor[k] = outerRoot(T, ps, last ? vaporDensityGuess(T) : (vapor[k + 1] as number), false);
   }
-  seedsBuilt = true;
+  return { liquid, vapor };
 }
 
 /** Scratch output of region3SaturatedDensitySeeds: [ρ_f, ρ_g] starting values in kg/m³. */
@@ -122,7 +127,6 @@ export const SEED3 = new Float64Array(2);
  * 0.1 % outside [v_f, v_g] can be classified without solving.
  */
 export function region3SaturatedDensitySeeds(T: number): void {
-  if (!seedsBuilt) buildSeeds();
   const x = (Math.sqrt(Math.max(0, IF97.Tc - T)) / SEED_S_MAX) * (SEED_NODES - 1);
   const i = Math.min(SEED_NODES - 2, Math.floor(x));
   const w = x - i;
@@ -178,6 +182,22 @@ export function region3SaturatedDensities(T: number, ps: number): void {
   cachedVapor = rg;
   SAT3[0] = rf;
   SAT3[1] = rg;
+}
+
+/**
+ * One saturated density from Eq. (28) at p_s(T), kg/m³: exactly what region3SaturatedDensities
+ * gives for that phase (SAT3[0] for the liquid, SAT3[1] for the vapor), solving only that phase's
+ * root, for 623.15 K < T ≤ 647.096 K (not range-checked). Within 0.01 K of Tc, where the two roots
+ * can merge and the pair decides, it solves both.
+ */
+export function region3SaturatedDensity(T: number, ps: number, liquid: boolean): number {
+  if (T === cachedT) return liquid ? cachedLiquid : cachedVapor;
+  if (T >= IF97.Tc - 0.01) {
+    region3SaturatedDensities(T, ps);
+    return (liquid ? SAT3[0] : SAT3[1]) as number;
+  }
+  region3SaturatedDensitySeeds(T);
+  return outerRoot(T, ps, (liquid ? SEED3[0] : SEED3[1]) as number, liquid);
 }
 
 // The (T, p) of the current solve, read by pressureResidual (module scope: no closure per call).

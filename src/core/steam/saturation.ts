@@ -16,10 +16,10 @@ import * as saturationLine from './saturation-line.ts';
 // but Vitest's module runner (which runs the tests and the benchmark) turns every use of an
 // imported binding into a getter call, ~10 ns each on the 2-core CI machine.
 const { IF97, T_13, T_MIN } = constants;
-const { region1State } = region1;
-const { region2State } = region2;
+const { region1State, region1Volume } = region1;
+const { region2State, region2Volume } = region2;
 const { region3State } = region3;
-const { region3SaturatedDensities, SAT3 } = region3Density;
+const { region3SaturatedDensities, region3SaturatedDensity, SAT3 } = region3Density;
 const { saturationPressureUnchecked } = saturationLine;
 
 /**
@@ -43,4 +43,39 @@ export function saturationUnchecked(T: number): SaturationState {
   const rf = SAT3[0] as number;
   const rg = SAT3[1] as number;
   return { T, p, liquid: region3State(rf, T, p), vapor: region3State(rg, T, p) };
+}
+
+
+/**
+ * Specific volume of saturated liquid v_f at T, m³/kg: exactly saturation(T).liquid.v, without
+ * building either phase's state (a third of region 1's sums, no allocation). For solvers that
+ * need v_f alone, such as the heat-up envelope's liquid-full temperature.
+ * @param T temperature, K; 273.15 ≤ T ≤ 647.096
+ * @throws InputError field 'temperature' when T is not finite or outside that range
+ */
+export function saturatedLiquidVolume(T: number): number {
+  checkTemperature(T);
+  const p = saturationPressureUnchecked(T);
+  if (T <= T_13) return region1Volume(T, p);
+  return 1 / region3SaturatedDensity(T, p, true);
+}
+
+/**
+ * Specific volume of saturated vapor v_g at T, m³/kg: exactly saturation(T).vapor.v, without
+ * building either phase's state.
+ * @param T temperature, K; 273.15 ≤ T ≤ 647.096
+ * @throws InputError field 'temperature' when T is not finite or outside that range
+ */
+export function saturatedVaporVolume(T: number): number {
+  checkTemperature(T);
+  const p = saturationPressureUnchecked(T);
+  if (T <= T_13) return region2Volume(T, p);
+  return 1 / region3SaturatedDensity(T, p, false);
+}
+
+function checkTemperature(T: number): void {
+  if (!(T >= T_MIN && T <= IF97.Tc)) {
+    throw new InputError('temperature', Number.isFinite(T) ? 'out-of-range' : 'not-a-number', T,
+      { min: T_MIN, max: IF97.Tc, unit: 'K' });
+  }
 }

@@ -18,7 +18,7 @@ const INPUT_NAMES: Record<string, string> = { temperature: 'Temperature', pressu
 export function CheckRecordView({ record: r }: { record: CheckRecord }) {
   const prefs = unitsInForce(useSettings());
   const view = viewOfRecord(r, prefs);
-  const demo = isDemo(r.vessel) || isDemo(r.vessel.spec as { tag?: unknown; description?: unknown });
+  const demo = isDemo(r.vessel) || isDemo(r.vessel.spec);
   const inputs = Object.entries(r.inputs).map(([k, v]) => ({
     label: INPUT_NAMES[k] ?? k,
     value: `${v.text} ${unitLabel(v.unit)}${v.reference ? ` (${v.reference})` : ''}`,

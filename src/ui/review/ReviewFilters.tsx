@@ -1,8 +1,8 @@
-// The filter form: vessel, period, verdict, signal word, technician and device. Every change
+// The filter form: vessel, period, verdict, outcome, technician and device. Every change
 // applies at once (text fields when they are left or Enter is pressed).
 import type { VesselRecord } from '../../store/index.ts';
 import { EMPTY_FORM, monthOfForm, withMonth, type FilterForm } from './review-filter.ts';
-import { SIGNALS, VERDICTS } from './record-facts.ts';
+import { OUTCOMES, VERDICTS, outcomeLabel } from './record-facts.ts';
 
 interface Props {
   form: FilterForm;
@@ -46,10 +46,10 @@ export function ReviewFilters({ form, vessels, error, onChange }: Props) {
           </select>
         </div>
         <div class="field">
-          <label for="rf-signal">Signal word</label>
-          <select id="rf-signal" value={form.signal} onChange={set('signal')}>
+          <label for="rf-outcome">Outcome</label>
+          <select id="rf-outcome" value={form.outcome} onChange={set('outcome')}>
             <option value="">Any</option>
-            {SIGNALS.map((s) => <option key={s} value={s}>{s}</option>)}
+            {OUTCOMES.map((o) => <option key={o} value={o}>{outcomeLabel(o)}</option>)}
           </select>
         </div>
         <div class="field">

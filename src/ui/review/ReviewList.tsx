@@ -36,7 +36,7 @@ export function ReviewList({ rows, order, loading, more, onOrder, onMore }: Prop
                 <span>{r.when}</span>
               </span>
               <span class="review-row-mid">
-                {r.worstSignal ? <span class={`signal signal-${r.worstSignal}`}>{r.worstSignal}</span> : null}
+                {r.outcome !== 'none' ? <span class={`signal signal-${r.outcome}`}>{r.outcome}</span> : null}
                 <span class={`review-verdict review-verdict-${r.verdict}`}>{r.verdictText}</span>
                 {r.correction ? <span class="demo-tag">correction</span> : null}
               </span>

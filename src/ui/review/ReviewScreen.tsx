@@ -13,7 +13,7 @@ import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilt
 import { ReviewPager, reviewVessels } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
-import { SIGNALS, VERDICTS } from './record-facts.ts';
+import { OUTCOMES, VERDICTS } from './record-facts.ts';
 import { refreshVessels } from '../state/app-state.ts';
 
 const VERDICT_IDS = VERDICTS.map((v) => v.id);
@@ -81,7 +81,7 @@ export function ReviewScreen() {
 
   const changeForm = (next: FilterForm) => {
     setForm(next);
-    const reading = readFilterForm(next, VERDICT_IDS, SIGNALS);
+    const reading = readFilterForm(next, VERDICT_IDS, OUTCOMES);
     if (reading.ok) {
       setFormError(null);
       setFilter(reading.filter);

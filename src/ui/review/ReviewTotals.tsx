@@ -1,7 +1,7 @@
 // Totals for the filter, counted in the background; they grow as the walk goes on.
 import { Fragment } from 'preact';
 import type { ReviewTotals as Totals } from './review-totals.ts';
-import { SIGNALS, VERDICTS } from './record-facts.ts';
+import { OUTCOMES, VERDICTS, outcomeLabel } from './record-facts.ts';
 
 const n = (v: number) => v.toLocaleString('en-GB');
 
@@ -16,8 +16,8 @@ export function ReviewTotals({ totals, complete, paused }: { totals: Totals | nu
           {VERDICTS.filter((v) => totals.byVerdict[v.id] > 0).map((v) => (
             <Fragment key={v.id}><dt>{v.label}</dt><dd>{n(totals.byVerdict[v.id])}</dd></Fragment>
           ))}
-          {SIGNALS.map((s) => (
-            <Fragment key={s}><dt>Worst word {s}</dt><dd>{n(totals.byWorstSignal[s])}</dd></Fragment>
+          {OUTCOMES.map((o) => (
+            <Fragment key={o}><dt>Outcome {outcomeLabel(o)}</dt><dd data-total={`outcome-${o}`}>{n(totals.byOutcome[o])}</dd></Fragment>
           ))}
         </dl>
       ) : <p class="muted">{paused ? 'Counted again when the import is done.' : 'Counting…'}</p>}

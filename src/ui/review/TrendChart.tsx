@@ -1,5 +1,5 @@
 // Trend of one vessel: quality, liquid mass and pressure deviation from saturation over time, one
-// panel each, a mark at every check that carried a caution (coloured by its worst signal word).
+// panel each, a mark at every check with findings (coloured by its outcome, the worst signal word among them).
 import type { TrendGeometry } from './trend-data.ts';
 
 export function TrendChart({ geometry, title }: { geometry: TrendGeometry; title: string }) {
@@ -8,7 +8,7 @@ export function TrendChart({ geometry, title }: { geometry: TrendGeometry; title
     <svg class="picture trend-chart" viewBox={`0 0 ${width} ${height}`} role="img" aria-labelledby="trend-title trend-desc">
       <title id="trend-title">{title}</title>
       <desc id="trend-desc">
-        {panels.map((p) => `${p.spec.title}: ${p.count} checks with a value`).join('; ')}. Marks show checks with cautions.
+        {panels.map((p) => `${p.spec.title}: ${p.count} checks with a value`).join('; ')}. Marks show checks with findings, by outcome.
       </desc>
       {panels.map((p, index) => (
         <g key={p.spec.key} transform={`translate(0 ${p.offsetY})`}>

@@ -4,8 +4,9 @@ import { Fragment } from 'preact';
 import { useEffect, useState } from 'preact/hooks';
 import type { VesselRecord } from '../../store/index.ts';
 import { TrendChart } from './TrendChart.tsx';
-import { trendGeometry, trendPoints, TREND_MAX_POINTS, type TrendPoint } from './trend-data.ts';
+import { trendGeometry, trendPoints, TREND_MAX_POINTS, type StandingHazard, type TrendPoint } from './trend-data.ts';
 import { periodText, reportRow, reportSummary } from './report-data.ts';
+import { outcomeLabel } from './record-facts.ts';
 
 interface Props {
   vessel: VesselRecord;
@@ -16,7 +17,7 @@ interface Props {
 }
 
 export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
-  const [data, setData] = useState<{ points: TrendPoint[]; capped: boolean } | null>(null);
+  const [data, setData] = useState<{ points: TrendPoint[]; capped: boolean; standing: StandingHazard[] } | null>(null);
   const [error, setError] = useState('');
   useEffect(() => {
     let live = true;
@@ -39,27 +40,38 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
       <dl class="figures review-figures">
         <dt>Checks</dt><dd>{summary.checks}{data.capped ? ` (the newest ${TREND_MAX_POINTS} shown)` : ''}</dd>
         <dt>Gauge agreed with saturation</dt><dd>{summary.consistent}</dd>
-        {summary.bySignal.map((s) => <Fragment key={s.signal}><dt>Worst word {s.signal}</dt><dd>{s.count}</dd></Fragment>)}
+        {summary.byOutcome.map((s) => <Fragment key={s.outcome}><dt>Outcome {outcomeLabel(s.outcome)}</dt><dd>{s.count}</dd></Fragment>)}
       </dl>
       {summary.firstTime ? <p>First check {summary.firstTime}; last {summary.lastTime}.</p> : null}
       {data.points.length > 0 ? <TrendChart geometry={trendGeometry(data.points)} title={`Trend of ${vessel.tag}, ${period}`} /> : null}
-      <p class="hint">Marks on the chart: checks with a caution, coloured by its most severe signal word (DANGER red, WARNING orange, CAUTION yellow, NOTICE blue).</p>
+      <p class="hint">Marks on the chart: checks with findings, coloured by their outcome, the most severe signal word among the findings (DANGER red, WARNING orange, CAUTION yellow, NOTICE blue).</p>
       <div class="table-wrap" tabIndex={0} role="region" aria-label={`Checks of ${vessel.tag}`}>
         <table class="report-table">
           <caption class="visually-hidden">Checks of {vessel.tag}, oldest first</caption>
           <thead>
-            <tr><th scope="col">Time</th><th scope="col">Verdict</th><th scope="col">Quality</th><th scope="col">Liquid</th><th scope="col">p − p_sat</th><th scope="col">Word</th><th scope="col">By</th></tr>
+            <tr><th scope="col">Time</th><th scope="col">Verdict</th><th scope="col">Quality</th><th scope="col">Liquid</th><th scope="col">p − p_sat</th><th scope="col">Outcome</th><th scope="col">By</th></tr>
           </thead>
           <tbody>
             {data.points.map(reportRow).map((r) => (
               <tr key={r.id}>
                 <td>{r.time}</td><td>{r.verdict}</td><td>{r.quality}</td><td>{r.liquidMass}</td><td>{r.deviation}</td>
-                <td>{r.signal ? <span class={`signal signal-${r.signal}`}>{r.signal}</span> : '–'}</td><td>{r.technician}</td>
+                <td>{r.outcome !== 'none' ? <span class={`signal signal-${r.outcome}`}>{r.outcome}</span> : 'none'}</td><td>{r.technician}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
+      {data.standing.length > 0 ? (
+        <section aria-labelledby="report-standing-title">
+          <h3 id="report-standing-title">Standing hazards of {vessel.tag}</h3>
+          <p class="hint">Listed once: they belong to hot contents whatever each reading said, so they are not counted in the outcomes above. Wording from the latest check that carried each.</p>
+          <ul class="cautions" aria-label={`Standing hazards of ${vessel.tag}`}>
+            {data.standing.map((h) => (
+              <li key={h.rule}><span class="caution-text"><span class={`signal signal-${h.signal}`}>{h.signal}</span>{h.message} ({h.checks} {h.checks === 1 ? 'check' : 'checks'})</span></li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       <p class="standing-note">
         Figures computed with IAPWS-IF97 from the readings as logged. This report does not replace the vessel's
         inspection regime, local codes, lockout/tagout procedures or licensed practice; each check's cautions stay

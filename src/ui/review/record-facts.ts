@@ -1,11 +1,21 @@
 // What the review needs from one saved check, read defensively from its stored result (the result
 // is the check engine's output as plain JSON; an older or damaged record may lack any part of it).
+// A check is judged by its outcome, the worst signal word among its findings, not by every caution:
+// standing hazards (flash on release, scald …) are on every hot check.
+import { OUTCOME_IDS, SIGNAL_ORDER, outcomeOfRecord, verdictOfResult, type CheckRecord, type Signal, type StoredOutcome } from '../../store/index.ts';
 import { shortTime } from '../state/format.ts';
-import { SIGNAL_ORDER, signalMaskOf, verdictOfResult, worstSignalOfMask, type CheckRecord, type Signal } from '../../store/index.ts';
 
 export type { Signal };
+export type Outcome = StoredOutcome;
 /** Most severe first (ISO 3864 / ANSI Z535 order). */
 export const SIGNALS: readonly Signal[] = SIGNAL_ORDER;
+/** A check's outcome (the worst signal word among its findings), most severe first, then none. */
+export const OUTCOMES: readonly Outcome[] = OUTCOME_IDS;
+
+/** How an outcome reads in lists and totals. */
+export function outcomeLabel(o: Outcome): string {
+  return o === 'none' ? 'none (no findings)' : o;
+}
 
 export type VerdictId = 'consistent' | 'pressure-above-saturation' | 'pressure-below-saturation' | 'none';
 /** `short` is for tables on a phone. */
@@ -18,8 +28,8 @@ export const VERDICTS: readonly { id: VerdictId; label: string; short: string }[
 
 export interface RecordFacts {
   verdict: VerdictId;
-  /** The most severe signal word among the record's cautions (standing note left out), or null. */
-  worstSignal: Signal | null;
+  /** The worst signal word among the record's findings, 'none' when it has none (derived from rule ids for a record saved before findings existed). */
+  outcome: Outcome;
   /** Bulk vapour mass fraction, 0–1, when the contents were two-phase and weighed. */
   quality: number | null;
   liquidMassKg: number | null;
@@ -40,14 +50,9 @@ export function verdictOf(record: CheckRecord): VerdictId {
   return verdictOfResult(record.result) ?? 'none';
 }
 
-/** The most severe signal word among the record's cautions, the standing note left out. */
-export function worstSignalOf(record: CheckRecord): Signal | null {
-  return worstSignalOfMask(signalMaskOf(record.cautions));
-}
-
-/** Whether the record carries a caution with this signal word (standing note left out). */
-export function hasSignal(record: CheckRecord, signal: Signal): boolean {
-  return (signalMaskOf(record.cautions) & (1 << SIGNALS.indexOf(signal))) !== 0;
+/** The record's outcome, as the store's filters and totals count it. */
+export function outcomeOf(record: CheckRecord): Outcome {
+  return outcomeOfRecord(record);
 }
 
 export function factsOf(record: CheckRecord): RecordFacts {
@@ -55,7 +60,7 @@ export function factsOf(record: CheckRecord): RecordFacts {
   const twoPhase = field(inventory, 'regime') === 'two-phase';
   return {
     verdict: verdictOf(record),
-    worstSignal: worstSignalOf(record),
+    outcome: outcomeOf(record),
     quality: twoPhase ? finite(field(inventory, 'quality')) : null,
     liquidMassKg: twoPhase ? finite(field(inventory, 'liquidMassKg')) : null,
     pressureDeviationPa: finite(field(field(record.result, 'saturation'), 'pressureDeviationPa')),

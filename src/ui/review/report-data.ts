@@ -1,13 +1,13 @@
 // The printable vessel report's figures: a summary of the period and one table row per check,
 // already formatted for display.
 import { formatNumber } from '../state/format.ts';
-import { SIGNALS, stampText, verdictLabel, type Signal } from './record-facts.ts';
+import { OUTCOMES, stampText, verdictLabel, type Outcome } from './record-facts.ts';
 import type { TrendPoint } from './trend-data.ts';
 
 export interface ReportSummary {
   checks: number;
-  /** Checks whose worst signal word is this one. */
-  bySignal: { signal: Signal; count: number }[];
+  /** Checks by outcome (the worst signal word among their findings, or none). */
+  byOutcome: { outcome: Outcome; count: number }[];
   consistent: number;
   firstTime: string | null;
   lastTime: string | null;
@@ -20,14 +20,14 @@ export interface ReportRow {
   quality: string;
   liquidMass: string;
   deviation: string;
-  signal: Signal | null;
+  outcome: Outcome;
   technician: string;
 }
 
 export function reportSummary(points: readonly TrendPoint[]): ReportSummary {
   return {
     checks: points.length,
-    bySignal: SIGNALS.map((signal) => ({ signal, count: points.filter((p) => p.worstSignal === signal).length })),
+    byOutcome: OUTCOMES.map((outcome) => ({ outcome, count: points.filter((p) => p.outcome === outcome).length })),
     consistent: points.filter((p) => p.verdict === 'consistent').length,
     firstTime: points[0] ? stampText(points[0].time) : null,
     lastTime: points.length ? stampText(points[points.length - 1]!.time) : null,
@@ -44,7 +44,7 @@ export function reportRow(p: TrendPoint): ReportRow {
     quality: p.quality === null ? dash : `${formatNumber(p.quality * 100, 3)} %`,
     liquidMass: p.liquidMassKg === null ? dash : `${formatNumber(p.liquidMassKg, 4)} kg`,
     deviation: p.pressureDeviationPa === null ? dash : `${formatNumber(p.pressureDeviationPa / 1000, 3)} kPa`,
-    signal: p.worstSignal,
+    outcome: p.outcome,
     technician: p.technician,
   };
 }

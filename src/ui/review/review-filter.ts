@@ -1,6 +1,6 @@
 // The supervisor's filter over the check log, and how its form fields read into it. Dates are the
 // reviewing device's local calendar days (a supervisor asks "what happened on the 3rd, here").
-import type { Signal, VerdictId } from './record-facts.ts';
+import type { Outcome, VerdictId } from './record-facts.ts';
 
 export interface ReviewFilter {
   vesselId: string | null;
@@ -8,7 +8,8 @@ export interface ReviewFilter {
   fromMs: number | null;
   toMs: number | null;
   verdict: VerdictId | null;
-  signal: Signal | null;
+  /** The outcome (worst signal word among the findings, or 'none'). */
+  outcome: Outcome | null;
   /** Part of the technician's name, any case; '' = any. */
   technician: string;
   /** The start of a device id, any case; '' = any. */
@@ -16,7 +17,7 @@ export interface ReviewFilter {
 }
 
 export const NO_FILTER: ReviewFilter = {
-  vesselId: null, fromMs: null, toMs: null, verdict: null, signal: null, technician: '', device: '',
+  vesselId: null, fromMs: null, toMs: null, verdict: null, outcome: null, technician: '', device: '',
 };
 
 const DAY = /^(\d{4})-(\d{2})-(\d{2})$/;
@@ -54,17 +55,17 @@ export interface FilterForm {
   from: string;
   to: string;
   verdict: string;
-  signal: string;
+  outcome: string;
   technician: string;
   device: string;
 }
 
-export const EMPTY_FORM: FilterForm = { vesselId: '', from: '', to: '', verdict: '', signal: '', technician: '', device: '' };
+export const EMPTY_FORM: FilterForm = { vesselId: '', from: '', to: '', verdict: '', outcome: '', technician: '', device: '' };
 
 export type FilterReading = { ok: true; filter: ReviewFilter } | { ok: false; field: keyof FilterForm; message: string };
 
 /** Reads the form into a filter, or names the field that cannot be read. */
-export function readFilterForm(form: FilterForm, verdicts: readonly string[], signals: readonly string[]): FilterReading {
+export function readFilterForm(form: FilterForm, verdicts: readonly string[], outcomes: readonly string[]): FilterReading {
   const fromMs = form.from === '' ? null : dayStartMs(form.from);
   if (form.from !== '' && fromMs === null) return { ok: false, field: 'from', message: 'From: expected a date, e.g. 2026-12-01.' };
   const toMs = form.to === '' ? null : dayEndMs(form.to);
@@ -73,7 +74,7 @@ export function readFilterForm(form: FilterForm, verdicts: readonly string[], si
     return { ok: false, field: 'to', message: `To: ${form.to} is before From ${form.from}; pick a later day.` };
   }
   if (form.verdict !== '' && !verdicts.includes(form.verdict)) return { ok: false, field: 'verdict', message: 'Verdict: pick one from the list.' };
-  if (form.signal !== '' && !signals.includes(form.signal)) return { ok: false, field: 'signal', message: 'Signal word: pick one from the list.' };
+  if (form.outcome !== '' && !outcomes.includes(form.outcome)) return { ok: false, field: 'outcome', message: 'Outcome: pick one from the list.' };
   return {
     ok: true,
     filter: {
@@ -81,7 +82,7 @@ export function readFilterForm(form: FilterForm, verdicts: readonly string[], si
       fromMs,
       toMs,
       verdict: form.verdict === '' ? null : (form.verdict as VerdictId),
-      signal: form.signal === '' ? null : (form.signal as Signal),
+      outcome: form.outcome === '' ? null : (form.outcome as Outcome),
       technician: form.technician,
       device: form.device,
     },

@@ -1,5 +1,5 @@
 // Filtered, cursor-paged reading of the check log. The store answers the whole filter (vessel,
-// dates, verdict, signal word, technician, device) from its month buckets and reads only the
+// dates, verdict, outcome, technician, device) from its month buckets and reads only the
 // records of each page, so nothing reads the whole log into memory.
 import { listVessels, queryChecks, type CheckCursor, type CheckFilter, type CheckRecord, type VesselRecord } from '../../store/index.ts';
 import type { ReviewFilter } from './review-filter.ts';
@@ -11,7 +11,7 @@ export function storeFilter(f: ReviewFilter): CheckFilter {
     ...(f.fromMs !== null ? { from: new Date(f.fromMs) } : {}),
     ...(f.toMs !== null ? { to: new Date(f.toMs) } : {}),
     ...(f.verdict !== null ? { verdict: f.verdict } : {}),
-    ...(f.signal !== null ? { signal: f.signal } : {}),
+    ...(f.outcome !== null ? { outcome: f.outcome } : {}),
     ...(f.technician.trim() !== '' ? { technician: f.technician } : {}),
     ...(f.device.trim() !== '' ? { device: f.device } : {}),
   };

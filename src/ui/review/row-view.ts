@@ -1,7 +1,7 @@
 // One log row as the review list shows it, and its orders: newest and oldest first over the whole
 // match (the store pages in that order), the others over the rows shown so far.
 import type { CheckRecord } from '../../store/index.ts';
-import { SIGNALS, factsOf, stampText, verdictLabel, type Signal, type VerdictId } from './record-facts.ts';
+import { OUTCOMES, factsOf, stampText, verdictLabel, type Outcome, type VerdictId } from './record-facts.ts';
 
 export interface RowView {
   id: string;
@@ -11,7 +11,8 @@ export interface RowView {
   vesselTag: string;
   verdict: VerdictId;
   verdictText: string;
-  worstSignal: Signal | null;
+  /** The worst signal word among the check's findings, or 'none'. */
+  outcome: Outcome;
   technician: string;
   deviceShort: string;
   correction: boolean;
@@ -26,7 +27,7 @@ export function rowView(r: CheckRecord): RowView {
     vesselTag: r.vessel.tag,
     verdict: f.verdict,
     verdictText: verdictLabel(f.verdict),
-    worstSignal: f.worstSignal,
+    outcome: f.outcome,
     technician: r.technician,
     deviceShort: r.deviceId.slice(0, 8),
     correction: r.corrects !== null,
@@ -39,11 +40,11 @@ export const ROW_ORDERS: readonly { id: RowOrder; label: string }[] = [
   { id: 'newest', label: 'Newest first' },
   { id: 'oldest', label: 'Oldest first' },
   { id: 'vessel', label: 'Vessel tag (rows shown)' },
-  { id: 'severity', label: 'Most severe signal word (rows shown)' },
+  { id: 'severity', label: 'Most severe outcome (rows shown)' },
   { id: 'technician', label: 'Technician (rows shown)' },
 ];
 
-const severity = (s: Signal | null) => (s === null ? SIGNALS.length : SIGNALS.indexOf(s));
+const severity = (o: Outcome) => OUTCOMES.indexOf(o);
 
 /** The rows in the chosen order; ties stay newest first. A new array; the input is untouched. */
 export function sortRows(rows: readonly RowView[], order: RowOrder): RowView[] {
@@ -52,7 +53,7 @@ export function sortRows(rows: readonly RowView[], order: RowOrder): RowView[] {
     newest,
     oldest: (a, b) => -newest(a, b),
     vessel: (a, b) => a.vesselTag.localeCompare(b.vesselTag) || newest(a, b),
-    severity: (a, b) => severity(a.worstSignal) - severity(b.worstSignal) || newest(a, b),
+    severity: (a, b) => severity(a.outcome) - severity(b.outcome) || newest(a, b),
     technician: (a, b) => a.technician.localeCompare(b.technician) || newest(a, b),
   };
   return [...rows].sort(by[order]);

@@ -1,8 +1,10 @@
 // The trend chart's data and geometry, computed here so the chart component only draws: per series
 // (quality, liquid mass, pressure deviation from saturation), a path in SVG user units, its axis
-// ticks, and a mark at every check that carried a caution.
-import { checksForVessel, type CheckRecord } from '../../store/index.ts';
-import { factsOf, type Signal, type VerdictId } from './record-facts.ts';
+// ticks, and a mark at every check with findings (by outcome; standing hazards are on every hot
+// check and would mark them all). Also the vessel's standing hazards, gathered once for the report.
+import { isStandingRule } from '../../core/index.ts';
+import { checksForVessel, type CheckRecord, type Signal } from '../../store/index.ts';
+import { factsOf, type Outcome, type VerdictId } from './record-facts.ts';
 
 export interface TrendPoint {
   id: string;
@@ -10,7 +12,7 @@ export interface TrendPoint {
   quality: number | null;
   liquidMassKg: number | null;
   pressureDeviationPa: number | null;
-  worstSignal: Signal | null;
+  outcome: Outcome;
   verdict: VerdictId;
   technician: string;
   /** The stored ISO 8601 time with its offset. */
@@ -20,12 +22,24 @@ export interface TrendPoint {
 /** At most this many checks are drawn (the newest); more would not show on a phone anyway. */
 export const TREND_MAX_POINTS = 2000;
 
+/** A standing hazard of the vessel as the report lists it once: its latest wording and how many checks carried it. */
+export interface StandingHazard {
+  rule: string;
+  signal: Signal;
+  message: string;
+  checks: number;
+}
+
 /**
  * The vessel's checks in [fromMs, toMs] (either null = open) as trend points, oldest first,
- * read a store page at a time; `capped` when older checks were left out.
+ * read a store page at a time; `capped` when older checks were left out. `standing`: the standing
+ * hazards those checks carried, each once, most severe first (the standing note left out: the
+ * report has its own).
  */
-export async function trendPoints(vesselId: string, fromMs: number | null, toMs: number | null): Promise<{ points: TrendPoint[]; capped: boolean }> {
+export async function trendPoints(vesselId: string, fromMs: number | null, toMs: number | null): Promise<{ points: TrendPoint[]; capped: boolean; standing: StandingHazard[] }> {
   const points: TrendPoint[] = [];
+  const standing = new Map<string, StandingHazard>();
+  const done = (capped: boolean) => ({ points: points.reverse(), capped, standing: standingList(standing) });
   let before: { timeMs: number; id: string } | undefined;
   for (;;) {
     const page = await checksForVessel(vesselId, {
@@ -35,19 +49,32 @@ export async function trendPoints(vesselId: string, fromMs: number | null, toMs:
       ...(before ? { before } : {}),
     });
     for (const r of page.checks) {
-      if (points.length >= TREND_MAX_POINTS) return { points: points.reverse(), capped: true };
+      if (points.length >= TREND_MAX_POINTS) return done(true);
       points.push(pointOf(r));
+      // Newest first: the first wording met for a rule is the latest.
+      for (const c of r.cautions) {
+        if (!isStandingRule(c.rule) || c.rule === 'standing-note') continue;
+        const known = standing.get(c.rule);
+        if (known) known.checks += 1;
+        else standing.set(c.rule, { rule: c.rule, signal: c.signal, message: c.message, checks: 1 });
+      }
     }
-    if (!page.next) return { points: points.reverse(), capped: false };
+    if (!page.next) return done(false);
     before = page.next;
   }
+}
+
+const ORDER: readonly Signal[] = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'];
+
+function standingList(found: Map<string, StandingHazard>): StandingHazard[] {
+  return [...found.values()].sort((a, b) => ORDER.indexOf(a.signal) - ORDER.indexOf(b.signal) || b.checks - a.checks);
 }
 
 export function pointOf(r: CheckRecord): TrendPoint {
   const f = factsOf(r);
   return {
     id: r.id, timeMs: r.timeMs, quality: f.quality, liquidMassKg: f.liquidMassKg, pressureDeviationPa: f.pressureDeviationPa,
-    worstSignal: f.worstSignal, verdict: f.verdict, technician: r.technician, time: r.time,
+    outcome: f.outcome, verdict: f.verdict, technician: r.technician, time: r.time,
   };
 }
 
@@ -184,13 +211,13 @@ export function trendGeometry(points: readonly TrendPoint[], width = 340, panelH
       const v = values[i];
       if (v === null || v === undefined) {
         pen = false;
-        if (p.worstSignal) marks.push({ x: xOf(p.timeMs), y: plot.bottom, signal: p.worstSignal, id: p.id });
+        if (p.outcome !== 'none') marks.push({ x: xOf(p.timeMs), y: plot.bottom, signal: p.outcome, id: p.id });
         return;
       }
       // `l0 0` after a move: with round caps a lone value still shows as a dot.
       path += pen ? `L${xOf(p.timeMs)} ${yOf(v)}` : `M${xOf(p.timeMs)} ${yOf(v)}l0 0`;
       pen = true;
-      if (p.worstSignal) marks.push({ x: xOf(p.timeMs), y: yOf(v), signal: p.worstSignal, id: p.id });
+      if (p.outcome !== 'none') marks.push({ x: xOf(p.timeMs), y: yOf(v), signal: p.outcome, id: p.id });
     });
     return {
       spec,

@@ -29,7 +29,7 @@ function LogList() {
         <li key={c.id}>
           <a class="button list-button" href={hrefFor('log', c.id)}>
             <strong>{c.vessel.tag} · {shortTime(c.time)}</strong>
-            {isDemo(c.vessel) || isDemo(c.vessel.spec as { tag?: unknown; description?: unknown }) ? <><span class="demo-tag">DEMO DATA</span> </> : null}
+            {isDemo(c.vessel) || isDemo(c.vessel.spec) ? <><span class="demo-tag">DEMO DATA</span> </> : null}
             <span class={`signal signal-${outcomeOfRecord(c)}`}>{outcomeLabel(outcomeOfRecord(c))}</span> {verdictOfRecord(c)} · {c.technician}
           </a>
         </li>

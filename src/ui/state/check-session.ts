@@ -51,7 +51,7 @@ export function evaluateDraft(
   if (!vessel) return { kind: 'incomplete', message: 'Choose a vessel to see the result.' };
   const r = readingFromDraft(d, measuredAtmospherePa);
   if (r.kind !== 'reading') return r;
-  const spec = vessel.spec as unknown as VesselSpec;
+  const spec = vessel.spec;
   const span = gaugeSpanError(pressureFromPa(r.reading.pressure.pressurePa, d.pressure.unit), d.pressure.text, d.pressure.unit,
     d.pressure.kind, spec, measuredAtmospherePa ?? spec.siteAtmospherePa);
   if (span) return { kind: 'input-error', errors: { pressure: span } };
@@ -134,7 +134,7 @@ export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | und
     if (p) typed.pressure = p;
     if (t) typed.temperature = t;
     if (m) typed.mass = m;
-    return resultView(r.result as unknown as CheckResult, r.vessel.spec as unknown as VesselSpec, prefs, typed);
+    return resultView(r.result, r.vessel.spec, prefs, typed);
   } catch {
     return undefined;
   }
@@ -143,7 +143,7 @@ export function viewOfRecord(r: CheckRecord, prefs: UnitPrefs): ResultView | und
 /** A one-line verdict for the log list. */
 export function verdictOfRecord(r: CheckRecord): string {
   try {
-    return verdictText({ ...(r.result as unknown as CheckResult), cautions: r.cautions as CheckResult['cautions'] }).short;
+    return verdictText(r.result).short;
   } catch {
     return 'Result saved by another app version';
   }

@@ -3,8 +3,8 @@ import { errorText, type FieldUnit } from './error-text.ts';
 import { inPreferredUnits } from './caution-text.ts';
 import { isDemo } from './demo-label.ts';
 import {
-  InputError, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
-  temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget, type VesselSpec,
+  InputError, MASS_UNITS, PRESSURE_UNITS, RULE_CATALOGUE, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
+  temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget,
 } from '../../core/index.ts';
 import type { MassUnit, TemperatureUnit } from '../../core/index.ts';
 import type { VesselRecord } from '../../store/index.ts';
@@ -63,13 +63,18 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   if (d.heatCapacityKJPerK.trim()) request.vesselHeatCapacityJPerK = read('heatCapacity', 'vessel heat capacity', d.heatCapacityKJPerK, (n) => n * 1000);
   if (Object.keys(errors).length) return { kind: 'input-error', errors };
   try {
-    const plan = planFill(vessel.spec as unknown as VesselSpec, request);
-    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec as { tag?: unknown; description?: unknown }) || isDemo(vessel)) };
+    const plan = planFill(vessel.spec, request);
+    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec) || isDemo(vessel)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
     return field ? { kind: 'input-error', errors: { [field]: errorText(e, typedIn, field === 'target' ? d.target : field === 'start' ? d.start : undefined) } } : { kind: 'input-error', errors: {}, general: `No plan: ${messageOf(e)}` };
   }
+}
+
+/** A caution about the plan itself (as opposed to the standing note and the plan's assumption). */
+function isPlanRule(rule: string): boolean {
+  return (RULE_CATALOGUE as Record<string, { kind: string }>)[rule]?.kind === 'plan';
 }
 
 function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
@@ -79,7 +84,7 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
   const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 4)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
   const pr = (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 4)} ${lab(PRESSURE_UNITS, u.pressure)}`;
   const pct = (x: number) => `${formatNumber(x * 100, 3)} %`;
-  const most = p.largestSafeCharge;
+  const most = p.largestTwoPhaseCharge;
   const main: Figure[] = [
     { label: 'Charge this much water', value: m(p.waterMassKg) },
     { label: 'Then the scale reads (gross)', value: m(p.expectedGrossWeightKg) },
@@ -95,11 +100,13 @@ function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
     details.push({ label: 'Heat to reach the target', value: `${formatNumber(p.heat.totalJ / 1e6, 3)} MJ` +
       (p.heat.heatUpTimeS !== null ? `, about ${formatNumber(p.heat.heatUpTimeS / 60, 2)} min at the heater power given` : '') });
   }
-  const danger = p.cautions.some((c) => c.signal === 'DANGER');
+  // The plan's own rules (charge too large, does not fit, target over a limit) are WARNING: they
+  // describe a plan not yet charged (issue 9).
+  const against = p.cautions.some((c) => isPlanRule(c.rule));
   const cautions = p.cautions.map((c) => inPreferredUnits(c, u));
   const split = splitOutcome({ cautions });
-  const verdict = danger
-    ? { tone: 'bad' as const, text: 'DANGER. Do not charge this plan as it stands: see the cautions below.', short: 'Do not charge this plan' }
+  const verdict = against
+    ? { tone: 'bad' as const, text: 'WARNING. Do not charge this plan as it stands: see the cautions below.', short: 'Do not charge this plan' }
     : { tone: 'plan' as const, text: `Plan: charge ${m(p.waterMassKg)} of water; the scale should then read ${m(p.expectedGrossWeightKg)}. Check it against the vessel's procedure before charging.`, short: `Charge ${m(p.waterMassKg)}` };
   return {
     demo,

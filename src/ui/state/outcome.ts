@@ -1,26 +1,22 @@
-// The one adapter between the check engine's result and the screens' outcome. The engine's second
-// pass (issue 9) gives every result `findings`, `standing` and `outcome`; until a result carries
-// them — and for every record saved before — they are derived here from the cautions' rule ids, the
-// way that contract defines them: findings are what this reading says about the vessel now; standing
-// hazards of hot contents and notes about the method never drive the outcome. When the engine's own
-// fields are present they are used as they are, so this module is the only place that changes when
-// they land.
-import type { SignalWord } from '../../core/index.ts';
+// The one adapter between the check engine's result and the screens' outcome. Every result since
+// the engine's second pass (issue 9) carries `findings`, `standing` and `outcome`, used as they are;
+// for a record saved before, they are derived from the cautions' rule ids with the engine's own
+// classification (the store's copy of the engine's STANDING_RULES, held equal to it by
+// test/store/facts.test.ts; taken from the store because the start-up script holds the store but
+// not the engine, which loads on demand): findings are what this reading says about the vessel
+// now; standing hazards of hot contents and notes about the method never drive the outcome.
+import type { Outcome, SignalWord } from '../../core/index.ts';
+import { isStandingRuleId } from '../../store/index.ts';
 
-export type Outcome = SignalWord | 'none';
+export type { Outcome };
 
 interface CautionLike { signal: string; rule: string; message: string }
 
-/** Hazards of hot contents whatever the reading, and the standing note (the contract's standing list, as rules exist today). */
-const STANDING_RULES: readonly string[] = ['flash-on-release', 'vacuum-on-cooling', 'scald', 'standing-note'];
-/** Notes about the check's method, not about the vessel: shown with their figures, folded with the standing hazards' kind. */
-const METHOD_NOTES: readonly string[] = ['saturation-check-limits', 'atmosphere-assumed', 'bulk-quality-not-dryness', 'plan-assumes-air-removed'];
-
 const ORDER: Record<string, number> = { DANGER: 0, WARNING: 1, CAUTION: 2, NOTICE: 3 };
 
-/** True for a rule that never drives the outcome. */
+/** True for a rule that never drives the outcome (the engine's standing hazards, method notes and standing note). */
 export function isStandingOrNote(rule: string): boolean {
-  return STANDING_RULES.includes(rule) || METHOD_NOTES.includes(rule);
+  return isStandingRuleId(rule);
 }
 
 /** The worst signal word among `findings`, 'none' when there are none. */

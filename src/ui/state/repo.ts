@@ -1,5 +1,6 @@
 // The UI's only door to the store: small functions in the words the screens use.
 import * as store from '../../store/index.ts';
+import type { VesselSpec } from '../../core/index.ts';
 import type { CheckRecord, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
 import { StoreError } from '../../store/index.ts';
 import type { AppSettings } from './settings-model.ts';
@@ -41,11 +42,11 @@ export function getVessel(id: string): Promise<VesselRecord | undefined> {
   return store.getVessel(id);
 }
 
-export function addVessel(tag: string, description: string, spec: object): Promise<VesselRecord> {
+export function addVessel(tag: string, description: string, spec: VesselSpec): Promise<VesselRecord> {
   return store.addVessel({ tag, description, spec });
 }
 
-export function updateVessel(id: string, tag: string, description: string, spec: object): Promise<VesselRecord> {
+export function updateVessel(id: string, tag: string, description: string, spec: VesselSpec): Promise<VesselRecord> {
   return store.updateVessel(id, { tag, description, spec });
 }
 

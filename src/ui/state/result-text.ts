@@ -5,8 +5,8 @@
 // heating, and the hazards of the contents folded, each caution once.
 import {
   LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
-  temperatureDifferenceFromK, temperatureFromK, temperatureToleranceK, volumeFromM3, vesselLevelSpanM,
-  type CheckResult, type MassUnit, type PressureUnit, type TemperatureUnit, type VesselSpec,
+  temperatureDifferenceFromK, temperatureFromK, volumeFromM3, vesselLevelSpanM,
+  isCurrentResult, thermometerLimitsK, type MassUnit, type PressureUnit, type StoredCheckResult, type TemperatureUnit, type VesselSpec,
 } from '../../core/index.ts';
 import type { StoredCaution as Caution } from '../../store/index.ts';
 import { saturationChartData } from './chart-data.ts';
@@ -73,7 +73,7 @@ const SHORT: Record<string, string> = {
  * (the worst finding). Standing hazards such as a flash on release stay folded below, so they do
  * not turn every result red.
  */
-export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string; short: string } {
+export function verdictText(r: StoredCheckResult): { tone: 'ok' | 'bad'; text: string; short: string } {
   const { outcome, findings } = splitOutcome(r);
   const lead = outcome === 'DANGER' || outcome === 'WARNING' ? outcome : null;
   const v = r.saturation.verdict;
@@ -95,21 +95,33 @@ export function verdictText(r: CheckResult): { tone: 'ok' | 'bad'; text: string;
 
 /** Which group a caution that is not a finding belongs to. */
 const NOTE_GROUP: Record<string, ResultGroup['id']> = {
-  'saturation-check-limits': 'saturation', 'atmosphere-assumed': 'saturation', 'bulk-quality-not-dryness': 'contents',
+  'saturation-check-limits': 'saturation', 'atmosphere-assumed': 'saturation', 'bulk-quality-not-dryness': 'contents', 'quality-undetermined': 'contents',
 };
 
+/** Each instrument's part of the saturation band (a part that is 0 left out; a result saved before indicator and drift parts existed has only the first three). */
+function bandParts(c: Partial<Record<string, number>>, f: Fmt): string {
+  const names: [string, string][] = [
+    ['pressureGauge', 'gauge class'], ['pressureGaugeIndicator', 'gauge indicator'], ['pressureGaugeDrift', 'gauge drift'],
+    ['atmosphere', 'atmosphere'], ['temperatureSensor', 'thermometer element'], ['temperatureIndicator', 'thermometer indicator'],
+    ['temperatureDrift', 'thermometer drift'],
+  ];
+  return names.filter(([key]) => (c[key] ?? 0) > 0).map(([key, name]) => `${name} ${f.p(c[key]!, c[key]!)}`).join('; ') || 'none';
+}
+
 /** Everything the outcome strip and the full result show. `typed`: the units the reading was typed in. */
-export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed: TypedUnits = {}): ResultView {
+export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs, typed: TypedUnits = {}): ResultView {
   const f = units(u, typed);
   const s = r.saturation;
   const c = s.pressureBand.contributions;
-  const tolK = temperatureToleranceK(spec.instruments.temperatureSensor, r.reading.temperatureK);
-  const absBand = Math.hypot(c.pressureGauge, c.atmosphere);
-  const gaugeBand = c.pressureGauge;
+  const tolK = thermometerLimitsK(spec.instruments, r.reading.temperatureK).combined;
+  // The gauge's own limits: its class, and its indicator and drift when the vessel states them (a result saved before those parts existed has only the class).
+  const gaugeBand = 'pressureGaugeIndicator' in c ? Math.hypot(c.pressureGauge, c.pressureGaugeIndicator, c.pressureGaugeDrift) : c.pressureGauge;
+  const absBand = Math.hypot(gaugeBand, c.atmosphere);
   const saturation: Figure[] = [
     { label: 'Pressure', value: `${f.p(r.reading.gaugePressurePa, absBand)} gauge, ${f.p(s.absolutePressurePa, absBand)} absolute` },
     { label: 'Saturation pressure at the temperature', value: `${f.p(s.saturationPressurePa, c.temperatureSensor)} absolute` },
     { label: 'Pressure minus saturation', value: f.pBand(s.pressureDeviationPa, s.pressureBand.plusMinus) },
+    { label: 'Band parts (±, root-sum-square)', value: bandParts(c, f) },
     { label: 'Temperature', value: f.t(r.reading.temperatureK, tolK) },
     { label: 'Saturation temperature at the pressure', value: f.t(s.saturationTemperatureK, absBand / s.saturationSlopePaPerK) },
     { label: 'Temperature minus saturation', value: f.dt(s.temperatureDeviationK, s.temperatureBandK.plusMinus) },
@@ -123,10 +135,9 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed
   const heating = heatingFigures(r, f, gaugeBand, tolK);
   const hazards = hazardLines(r, f, tolK);
   const all = r.cautions.map((x) => inPreferredUnits(x, u));
-  // The engine's own findings and outcome once it gives them (issue 9); derived from the cautions until then.
-  const own = r as { findings?: CheckResult['cautions']; outcome?: string };
-  const split = splitOutcome<Caution>(own.findings && own.outcome
-    ? { cautions: all, findings: own.findings.map((x) => inPreferredUnits(x, u)), outcome: own.outcome }
+  // The engine's own findings and outcome (issue 9); derived from the cautions' rule ids for a result saved before them.
+  const split = splitOutcome<Caution>(isCurrentResult(r)
+    ? { cautions: all, findings: r.findings.map((x) => inPreferredUnits(x, u)), outcome: r.outcome }
     : { cautions: all });
   const notes = (id: ResultGroup['id']) => split.others.filter((x) => (NOTE_GROUP[x.rule] ?? 'hazards') === id);
   const groups: ResultGroup[] = [
@@ -148,7 +159,7 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed
     cautions: all,
     chart: saturationChartData({
       temperatureK: r.reading.temperatureK, absolutePressurePa: s.absolutePressurePa,
-      temperatureTolK: tolK, pressureTolPa: Math.hypot(c0.pressureGauge, c0.atmosphere),
+      temperatureTolK: tolK, pressureTolPa: Math.hypot(gaugeBand, c0.atmosphere),
     }, { ...u, pressure: f.pressureUnit, temperature: typed.temperature ?? u.temperature }),
     sketch,
   };
@@ -158,7 +169,7 @@ export function resultView(r: CheckResult, spec: VesselSpec, u: UnitPrefs, typed
  * The two or three figures that decide the outcome, for the strip: p − p_sat with its band, T_sat,
  * and the quality (or what the contents are). Cheap enough for every keystroke.
  */
-export function keyFiguresOf(r: CheckResult, u: UnitPrefs, typed: TypedUnits = {}, contents?: readonly Figure[]): Figure[] {
+export function keyFiguresOf(r: StoredCheckResult, u: UnitPrefs, typed: TypedUnits = {}, contents?: readonly Figure[]): Figure[] {
   const f = units({ ...u, pressure: typed.pressure ?? u.pressure, temperature: typed.temperature ?? u.temperature, mass: typed.mass ?? u.mass }, typed);
   const s = r.saturation;
   const c = s.pressureBand.contributions;
@@ -175,7 +186,7 @@ export function keyFiguresOf(r: CheckResult, u: UnitPrefs, typed: TypedUnits = {
   ].slice(0, 3);
 }
 
-function contentsFigures(r: CheckResult, spec: VesselSpec, f: Fmt): { contents: Figure[]; sketch: SketchData | undefined; keyContents: Figure[] } {
+function contentsFigures(r: StoredCheckResult, spec: VesselSpec, f: Fmt): { contents: Figure[]; sketch: SketchData | undefined; keyContents: Figure[] } {
   const inv = r.inventory;
   const contents: Figure[] = [];
   const keyContents: Figure[] = [];
@@ -232,7 +243,7 @@ function contentsFigures(r: CheckResult, spec: VesselSpec, f: Fmt): { contents: 
   return { contents, sketch, keyContents };
 }
 
-function heatingFigures(r: CheckResult, f: Fmt, gaugeBandPa: number, tolK: number): Figure[] {
+function heatingFigures(r: StoredCheckResult, f: Fmt, gaugeBandPa: number, tolK: number): Figure[] {
   const h = r.hazards;
   const pct = (x: number) => `${formatNumber(Math.round(x * 100), 3)} %`;
   const out: Figure[] = [
@@ -249,7 +260,7 @@ function heatingFigures(r: CheckResult, f: Fmt, gaugeBandPa: number, tolK: numbe
   return out;
 }
 
-function hazardLines(r: CheckResult, f: Fmt, tolK: number): Figure[] {
+function hazardLines(r: StoredCheckResult, f: Fmt, tolK: number): Figure[] {
   const h = r.hazards;
   const out: Figure[] = [];
   if (h.flash && h.flash.flashFraction <= 0) {
@@ -259,7 +270,10 @@ function hazardLines(r: CheckResult, f: Fmt, tolK: number): Figure[] {
       (h.flash.totalFlashSteamVolumeM3 !== null ? `; all of it would make ${f.v(h.flash.totalFlashSteamVolumeM3, h.flash.totalFlashSteamVolumeM3 / 20)} of steam` : '') });
   }
   if (h.storedEnergy) out.push({ label: 'Stored expansion energy', value: `${formatNumber(h.storedEnergy.expansionWorkJ / 1e6, 2)} MJ (about ${formatNumber(h.storedEnergy.tntEquivalentKg, 2)} kg TNT equivalent; an indicator, not a blast prediction)` });
-  out.push({ label: `Sealed and cooled to ${f.t(h.cooled.temperatureK, tolK)}`, value: `${f.p(h.cooled.absolutePressurePa, h.cooled.absolutePressurePa / 50)} absolute` +
-    (h.cooled.collapseRisk ? ', below atmosphere in a vessel not rated for vacuum' : h.cooled.belowAtmosphere ? ', below atmosphere (rated for vacuum)' : '') });
+  const cooledPa = h.cooled.absolutePressurePa;
+  const settles = 'direction' in h.cooled && h.cooled.direction === 'warming' ? 'Sealed and warmed to' : 'Sealed and cooled to';
+  out.push({ label: `${settles} ${f.t(h.cooled.temperatureK, tolK)}`, value: cooledPa === null ? 'still liquid-full, above 100 MPa (beyond IF97)'
+    : `${f.p(cooledPa, cooledPa / 50)} absolute` +
+      (h.cooled.collapseRisk ? ', below atmosphere in a vessel neither rated for vacuum nor fitted with a vacuum breaker' : h.cooled.belowAtmosphere ? ', below atmosphere (rated for vacuum or with a vacuum breaker)' : '') });
   return out;
 }

@@ -12,7 +12,7 @@ describe('cautions', () => {
     }
   });
   it('orders most severe first and ends with the standing note', () => {
-    const list = withStandingNote([caution('scald', 'a'), caution('liquid-full-now', 'b'), caution('atmosphere-assumed', 'c'), caution('flash-on-release', 'd')]);
+    const list = withStandingNote([caution('pressure-near-relief-set', 'a'), caution('liquid-full-now', 'b'), caution('atmosphere-assumed', 'c'), caution('flash-on-release', 'd')]);
     expect(list.map((c) => c.signal)).toEqual(['DANGER', 'WARNING', 'CAUTION', 'NOTICE', 'NOTICE']);
     expect(list.at(-1)).toEqual(STANDING_NOTE);
   });

@@ -51,27 +51,29 @@ describe('margins and cooling', () => {
     expect(pressureMargin(0.8e6, 1e6)).toEqual({ marginPa: 0.2e6, fractionOfLimit: 0.8 });
   });
   it('steam cooled to 20 °C falls to p_sat(20 °C) = 2.339 kPa abs and a vessel not rated for vacuum is flagged (python3-iapws 1.5.2 _PSat_T(293.15); vacuum collapse on cooling: https://technewsources.com/tank-trailer-vacuum-collapse/)', () => {
-    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.5, noncondensablePartialPressurePa: 0, temperatureK: 394.15, atmospherePa: ATM, vacuumRated: false });
-    expect(c.absolutePressurePa / 1000).toBeCloseTo(2.339, 3);
+    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.5, noncondensablePartialPressurePa: 0, temperatureK: 394.15, atmospherePa: ATM, vacuumRated: false, vacuumBreaker: false, liquidFullNow: false });
+    expect(c.absolutePressurePa! / 1000).toBeCloseTo(2.339, 3);
     expect(c.collapseRisk).toBe(true);
-    const rated = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 0, temperatureK: 394.15, atmospherePa: ATM, vacuumRated: true });
+    const rated = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 0, temperatureK: 394.15, atmospherePa: ATM, vacuumRated: true, vacuumBreaker: false, liquidFullNow: false });
     expect(rated.belowAtmosphere).toBe(true);
     expect(rated.collapseRisk).toBe(false);
   });
   it('air carried down at constant volume: p_gas × T_cold/T_hot (ideal gas, Gay-Lussac)', () => {
-    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 50e3, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false });
+    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 50e3, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false, vacuumBreaker: false, liquidFullNow: false });
     expect(c.noncondensablePartialPressurePa).toBeCloseTo((50e3 * 293.15) / 393.15, 6);
   });
-  it('ambient below freezing is held at 273.16 K, where IF97 water ends', () => {
-    const c = cooledState({ ambientTemperatureK: 253.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 0, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false });
-    expect(c.temperatureK).toBe(273.16);
-    expect(c.absolutePressurePa).toBeCloseTo(611.657, 0);
+  it('ambient below freezing: figures at 273.15 K, where IF97 water ends (p_s = 611.213 Pa, IAPWS R7-97(2012) Eq. (30)), and it says the water freezes', () => {
+    const c = cooledState({ ambientTemperatureK: 253.15, meanSpecificVolumeM3PerKg: null, noncondensablePartialPressurePa: 0, liquidFullNow: false, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false, vacuumBreaker: false });
+    expect(c.temperatureK).toBe(273.15);
+    expect(c.absolutePressurePa).toBeCloseTo(611.213, 0);
+    expect(c.freezes).toBe(true);
+    expect(c.direction).toBe('cooling');
   });
 });
 
 describe('cooling an overfilled vessel', () => {
   it('liquid-full even cold beyond 100 MPa is flagged, not given a made-up pressure', () => {
-    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.0009, noncondensablePartialPressurePa: 0, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false });
+    const c = cooledState({ ambientTemperatureK: 293.15, meanSpecificVolumeM3PerKg: 0.0009, noncondensablePartialPressurePa: 0, temperatureK: 393.15, atmospherePa: ATM, vacuumRated: false, vacuumBreaker: false, liquidFullNow: false });
     expect(c.aboveFormulationLimit).toBe(true);
     expect(c.belowAtmosphere).toBe(false);
   });

@@ -39,11 +39,11 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
     expect(p.heat!.contentsJ / 313677307).toBeCloseTo(1, 3);
     expect(p.heat!.vesselJ).toBeCloseTo(5e5 * 114, 6);
   });
-  it('largest safe charge stays two-phase up to T_sat(relief) + margin: relief 0.9 MPa g → 179.9 °C, +5 K → 881.67 kg per m³', () => {
+  it('the largest two-phase charge stays two-phase up to T_sat(relief) + margin: relief 0.9 MPa g → 179.9 °C, +5 K → 881.67 kg per m³', () => {
     const p = planFill(oneCubicMetre, request());
-    expect(p.largestSafeCharge.limitTemperatureK).toBeCloseTo(453.0932 + 5, 3);
-    expect(p.largestSafeCharge.waterMassKg).toBeCloseTo(881.667, 2);
-    expect(saturation(p.largestSafeCharge.limitTemperatureK).liquid.v * p.largestSafeCharge.waterMassKg).toBeCloseTo(1, 9);
+    expect(p.largestTwoPhaseCharge.limitTemperatureK).toBeCloseTo(453.0932 + 5, 3);
+    expect(p.largestTwoPhaseCharge.waterMassKg).toBeCloseTo(881.667, 2);
+    expect(saturation(p.largestTwoPhaseCharge.limitTemperatureK).liquid.v * p.largestTwoPhaseCharge.waterMassKg).toBeCloseTo(1, 9);
   });
   it('1.8 m³ at 220 °C with two thirds vapor space needs 518.1 kg, x = 0.0269 (Çengel & Boles, ch. 3 end-of-chapter problem, from memory; answer on a Q&A page)', () => {
     const v = testVessel({ geometry: { shape: 'stated-volume', volumeM3: 1.8 } });
@@ -51,9 +51,11 @@ describe('planFill (reference figures from python3-iapws 1.5.2 run with /usr/bin
     expect(p.waterMassKg).toBeCloseTo(518.1, 0);
     expect(p.atTarget.quality).toBeCloseTo(0.0269, 3);
   });
-  it('a charge above the safe charge is a DANGER', () => {
+  it('a charge above the largest two-phase charge is a WARNING: it describes a plan, not the vessel now (ISO 3864-2 / ANSI Z535.4 meaning: could, not will)', () => {
     const p = planFill(oneCubicMetre, request({ target: { kind: 'quality', quality: 0 } }));
-    expect(p.cautions[0]).toMatchObject({ signal: 'DANGER', rule: 'plan-exceeds-safe-charge' });
+    expect(p.cautions[0]).toMatchObject({ signal: 'WARNING', rule: 'plan-exceeds-two-phase-charge' });
+    expect(p.cautions[0]!.message).toMatch(/largest charge that stays two-phase up to/);
+    expect(p.cautions.map((c) => c.message).join(' ')).not.toMatch(/\bsafe\b/i);
     expect(p.cautions.at(-1)?.rule).toBe('standing-note');
   });
   it('a target above the relief set pressure is a WARNING', () => {

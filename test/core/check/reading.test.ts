@@ -42,7 +42,7 @@ describe('resolveReading', () => {
   });
 
   const cases: [string, Partial<Reading>, string][] = [
-    ['temperature below 0.01 °C', { temperatureK: 273.15 }, 'temperature'],
+    ['temperature below 0.00 °C', { temperatureK: 273.14 }, 'temperature'],
     ['temperature above 373.946 °C', { temperatureK: 647.1 }, 'temperature'],
     ['temperature NaN', { temperatureK: Number.NaN }, 'temperature'],
     ['absolute pressure zero', { pressure: { reference: 'absolute', pressurePa: 0 } }, 'pressure (absolute)'],

@@ -5,8 +5,9 @@ import { describe, expect, it } from 'vitest';
 import { saturationPressure } from '../../../src/core/index.ts';
 import { P3, region3Pressure } from '../../../src/core/steam/region3.ts';
 import {
-  region3DensityFromTP, region3SaturatedDensities, region3SaturatedDensitySeeds, SAT3, SEED3,
+  computeSeedTable, region3DensityFromTP, region3SaturatedDensities, region3SaturatedDensity, region3SaturatedDensitySeeds, SAT3, SEED3,
 } from '../../../src/core/steam/region3-density.ts';
+import { SEED_TABLE_LIQUID, SEED_TABLE_VAPOR } from '../../../src/core/steam/region3-seed-table.ts';
 
 const Tc = 647.096;
 
@@ -57,5 +58,31 @@ describe('region 3 densities', () => {
         expect(Math.abs((P3[0] as number) - p) / p, `T ${T} p ${p}`).toBeLessThan(1e-9);
       }
     }
+  });
+});
+
+describe('the stored table of region 3 starting values', () => {
+  it('is exactly what computeSeedTable solves (IAPWS R7-97(2012) Eq. (28) at p_s(T), bit for bit)', () => {
+    const solved = computeSeedTable();
+    expect(Array.from(SEED_TABLE_LIQUID)).toEqual(Array.from(solved.liquid));
+    expect(Array.from(SEED_TABLE_VAPOR)).toEqual(Array.from(solved.vapor));
+    expect(SEED_TABLE_LIQUID.length).toBe(96);
+  });
+});
+
+describe('region3SaturatedDensity: one phase alone', () => {
+  it('gives exactly the pair\'s liquid and vapor roots from 623.15 K to Tc (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.oneof(fc.double({ min: 623.1500001, max: Tc, noNaN: true }), fc.double({ min: Tc - 0.02, max: Tc, noNaN: true })), fc.boolean(), (T, liquid) => {
+        const ps = saturationPressure(T);
+        // Another temperature first, so neither call is answered by the one-entry cache.
+        region3SaturatedDensities(630, saturationPressure(630));
+        const one = region3SaturatedDensity(T, ps, liquid);
+        region3SaturatedDensities(630.5, saturationPressure(630.5));
+        region3SaturatedDensities(T, ps);
+        expect(one).toBe(liquid ? SAT3[0] : SAT3[1]);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

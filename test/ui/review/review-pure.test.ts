@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { CheckRecord } from '../../../src/store/index.ts';
-import { factsOf, verdictOf, worstSignalOf } from '../../../src/ui/review/record-facts.ts';
+import { factsOf, outcomeOf, verdictOf } from '../../../src/ui/review/record-facts.ts';
 import { dayEndMs, dayStartMs, EMPTY_FORM, monthDays, monthOfForm, readFilterForm, withMonth } from '../../../src/ui/review/review-filter.ts';
 import { niceTicks, trendGeometry, type TrendPoint } from '../../../src/ui/review/trend-data.ts';
 import { sortRows, type RowView } from '../../../src/ui/review/row-view.ts';
@@ -26,17 +26,33 @@ describe('record facts', () => {
         { signal: 'WARNING', message: 'w', rule: 'y' },
       ],
     );
-    expect(factsOf(r)).toEqual({ verdict: 'pressure-above-saturation', worstSignal: 'WARNING', quality: 0.0123, liquidMassKg: 812.4, pressureDeviationPa: 1520.5 });
+    expect(factsOf(r)).toEqual({ verdict: 'pressure-above-saturation', outcome: 'WARNING', quality: 0.0123, liquidMassKg: 812.4, pressureDeviationPa: 1520.5 });
+  });
+
+  it('judges a record by its findings: standing hazards and notes never make the outcome (a v1 record by its rule ids, a v2 one by its findings)', () => {
+    const v1 = record({}, [
+      { signal: 'WARNING', message: 'flash', rule: 'flash-on-release' },
+      { signal: 'WARNING', message: 'vacuum', rule: 'vacuum-on-cooling' },
+      { signal: 'CAUTION', message: 'scald', rule: 'scald' },
+      { signal: 'NOTICE', message: 'limits', rule: 'saturation-check-limits' },
+      { signal: 'NOTICE', message: 'n', rule: 'standing-note' },
+    ]);
+    expect(outcomeOf(v1)).toBe('none');
+    const v2 = record({ resultVersion: 2, findings: [{ signal: 'CAUTION', message: 'below', rule: 'pressure-below-saturation' }] }, [
+      { signal: 'DANGER', message: 'door', rule: 'do-not-open-under-pressure' },
+      { signal: 'CAUTION', message: 'below', rule: 'pressure-below-saturation' },
+    ]);
+    expect(outcomeOf(v2)).toBe('CAUTION');
   });
 
   it('gives nulls, not NaN, for other regimes and for damaged results', () => {
     expect(factsOf(record({ inventory: { regime: 'liquid-full', quality: 0.5 } }))).toMatchObject({ quality: null, liquidMassKg: null, verdict: 'none' });
     for (const bad of [null, 3, 'x', [], { saturation: { verdict: 'consistent', pressureDeviationPa: 'NaN' } }]) {
       const f = factsOf(record(bad));
-      expect(f).toEqual({ verdict: 'none', worstSignal: null, quality: null, liquidMassKg: null, pressureDeviationPa: null });
+      expect(f).toEqual({ verdict: 'none', outcome: 'none', quality: null, liquidMassKg: null, pressureDeviationPa: null });
     }
     expect(verdictOf(record({ saturation: { verdict: { verdict: 'made-up' } } }))).toBe('none');
-    expect(worstSignalOf(record({}, [{ signal: 'NOTICE', message: 'n', rule: 'standing-note' }]))).toBeNull();
+    expect(outcomeOf(record({}, [{ signal: 'NOTICE', message: 'n', rule: 'standing-note' }]))).toBe('none');
   });
 });
 
@@ -56,15 +72,16 @@ describe('filter form', () => {
 
   it('names the field that cannot be read', () => {
     const v = ['consistent'];
-    const s = ['DANGER'];
+    const s = ['DANGER', 'none'];
     expect(readFilterForm({ ...EMPTY_FORM, from: '2026-12-05', to: '2026-12-01' }, v, s)).toMatchObject({ ok: false, field: 'to' });
     expect(readFilterForm({ ...EMPTY_FORM, from: 'yesterday' }, v, s)).toMatchObject({ ok: false, field: 'from' });
     expect(readFilterForm({ ...EMPTY_FORM, verdict: 'fine' }, v, s)).toMatchObject({ ok: false, field: 'verdict' });
-    expect(readFilterForm({ ...EMPTY_FORM, signal: 'ALERT' }, v, s)).toMatchObject({ ok: false, field: 'signal' });
-    expect(readFilterForm({ ...EMPTY_FORM, from: '2026-12-01', to: '2026-12-01', signal: 'DANGER' }, v, s)).toMatchObject({
+    expect(readFilterForm({ ...EMPTY_FORM, outcome: 'ALERT' }, v, s)).toMatchObject({ ok: false, field: 'outcome' });
+    expect(readFilterForm({ ...EMPTY_FORM, from: '2026-12-01', to: '2026-12-01', outcome: 'DANGER' }, v, s)).toMatchObject({
       ok: true,
-      filter: { fromMs: dayStartMs('2026-12-01'), toMs: dayEndMs('2026-12-01'), signal: 'DANGER', vesselId: null },
+      filter: { fromMs: dayStartMs('2026-12-01'), toMs: dayEndMs('2026-12-01'), outcome: 'DANGER', vesselId: null },
     });
+    expect(readFilterForm({ ...EMPTY_FORM, outcome: 'none' }, v, s)).toMatchObject({ ok: true, filter: { outcome: 'none' } });
   });
 });
 
@@ -83,13 +100,13 @@ describe('trend geometry', () => {
     );
   });
 
-  it('keeps every point and mark inside the plot and marks each check with a caution', () => {
+  it('keeps every point and mark inside the plot and marks each check with findings (by its outcome)', () => {
     const point = fc.record({
       timeMs: fc.integer({ min: 0, max: 1e11 }),
       quality: fc.option(fc.double({ min: 0, max: 1, noNaN: true }), { nil: null }),
       liquidMassKg: fc.option(fc.double({ min: 0, max: 1e5, noNaN: true }), { nil: null }),
       pressureDeviationPa: fc.option(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { nil: null }),
-      worstSignal: fc.constantFrom(null, 'DANGER', 'WARNING', 'CAUTION', 'NOTICE' as const),
+      outcome: fc.constantFrom('none', 'DANGER', 'WARNING', 'CAUTION', 'NOTICE' as const),
     });
     fc.assert(
       fc.property(fc.array(point, { minLength: 1, maxLength: 40 }), (raw) => {
@@ -106,7 +123,7 @@ describe('trend geometry', () => {
             expect(y).toBeGreaterThanOrEqual(g.plot.top - 0.05);
             expect(y).toBeLessThanOrEqual(g.plot.bottom + 0.05);
           }
-          expect(panel.marks.length).toBe(points.filter((p) => p.worstSignal !== null).length);
+          expect(panel.marks.length).toBe(points.filter((p) => p.outcome !== 'none').length);
         }
       }),
     );
@@ -114,11 +131,11 @@ describe('trend geometry', () => {
 });
 
 describe('rows and chains', () => {
-  const row = (id: string, timeMs: number, worstSignal: RowView['worstSignal'], vesselTag: string): RowView => ({
-    id, timeMs, when: '', vesselTag, verdict: 'consistent', verdictText: '', worstSignal, technician: 't', deviceShort: '', correction: false,
+  const row = (id: string, timeMs: number, outcome: RowView['outcome'], vesselTag: string): RowView => ({
+    id, timeMs, when: '', vesselTag, verdict: 'consistent', verdictText: '', outcome, technician: 't', deviceShort: '', correction: false,
   });
-  it('orders rows by severity then newest, leaving the input untouched', () => {
-    const rows = [row('a', 1, null, 'B'), row('b', 2, 'CAUTION', 'A'), row('c', 3, 'DANGER', 'C'), row('d', 4, 'CAUTION', 'A')];
+  it('orders rows by outcome then newest, leaving the input untouched', () => {
+    const rows = [row('a', 1, 'none', 'B'), row('b', 2, 'CAUTION', 'A'), row('c', 3, 'DANGER', 'C'), row('d', 4, 'CAUTION', 'A')];
     expect(sortRows(rows, 'severity').map((r) => r.id)).toEqual(['c', 'd', 'b', 'a']);
     expect(sortRows(rows, 'vessel').map((r) => r.id)).toEqual(['d', 'b', 'a', 'c']);
     expect(sortRows(rows, 'oldest').map((r) => r.id)).toEqual(['a', 'b', 'c', 'd']);

@@ -2,12 +2,13 @@
 // the filter, page size and order, paging returns exactly the matching records, in order, once each.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { useFreshDatabase } from '../../store/fixtures.ts';
+import { loose, useFreshDatabase } from '../../store/fixtures.ts';
+import { isStandingRule } from '../../../src/core/index.ts';
 import { addVessel, appendCheck, listChecks, type CheckRecord, type StoredCaution } from '../../../src/store/index.ts';
 import { NO_FILTER, type ReviewFilter } from '../../../src/ui/review/review-filter.ts';
 import { ReviewPager } from '../../../src/ui/review/review-query.ts';
 import { countTotals } from '../../../src/ui/review/review-totals.ts';
-import { verdictOf, worstSignalOf, SIGNALS, VERDICTS } from '../../../src/ui/review/record-facts.ts';
+import { outcomeOf, OUTCOMES, verdictOf, VERDICTS } from '../../../src/ui/review/record-facts.ts';
 
 useFreshDatabase();
 
@@ -20,12 +21,15 @@ const CAUTIONS: StoredCaution[][] = [
   [{ signal: 'CAUTION', message: 'Test caution.', rule: 'test-caution' }],
   [{ signal: 'WARNING', message: 'Test warning.', rule: 'test-warning' }, { signal: 'NOTICE', message: 'Test notice.', rule: 'test-notice' }],
   [{ signal: 'DANGER', message: 'Test danger.', rule: 'test-danger' }],
+  // Standing hazards and a method note only: on every hot check, never the outcome.
+  [{ signal: 'DANGER', message: 'Test door.', rule: 'do-not-open-under-pressure' }, { signal: 'WARNING', message: 'Test flash.', rule: 'flash-on-release' }, { signal: 'NOTICE', message: 'Test limits.', rule: 'saturation-check-limits' }],
+  [{ signal: 'WARNING', message: 'Test flash.', rule: 'flash-on-release' }, { signal: 'CAUTION', message: 'Test below.', rule: 'pressure-below-saturation' }],
 ];
 
 /** A small invented log: 3 vessels, 60 checks spread over 30 days, some sharing one instant. */
 async function buildLog(): Promise<CheckRecord[]> {
   const vessels = [];
-  for (const tag of ['RX-1', 'RX-2', 'RX-3']) vessels.push(await addVessel({ tag, spec: { volumeM3: 1 } }));
+  for (const tag of ['RX-1', 'RX-2', 'RX-3']) vessels.push(await addVessel({ tag, spec: loose.spec({ volumeM3: 1 }) }));
   for (let i = 0; i < 60; i += 1) {
     // i % 7 === 0 reuses the previous instant, so ties broken by id are exercised.
     const hours = i % 7 === 0 && i > 0 ? (i - 1) * 12 : i * 12;
@@ -34,9 +38,9 @@ async function buildLog(): Promise<CheckRecord[]> {
       technician: TECHS[i % TECHS.length]!,
       takenAt: new Date(T0 + hours * HOUR),
       inputs: {},
-      reading: {},
-      result: { saturation: { verdict: { verdict: VERDICT_IDS[i % 3]! }, pressureDeviationPa: i * 10 } },
-      cautions: [...CAUTIONS[i % 4]!, { signal: 'NOTICE', message: 'Standing note.', rule: 'standing-note' }],
+      reading: loose.reading({}),
+      result: loose.result({ saturation: { verdict: { verdict: VERDICT_IDS[i % 3]! }, pressureDeviationPa: i * 10 } }),
+      cautions: [...CAUTIONS[i % CAUTIONS.length]!, { signal: 'NOTICE', message: 'Standing note.', rule: 'standing-note' }],
       appVersion: 'test',
       formulationId: 'IAPWS-IF97 (R7-97(2012))',
     });
@@ -51,6 +55,13 @@ async function buildLog(): Promise<CheckRecord[]> {
   }
 }
 
+/** The worst signal word among a record's cautions that are not standing items (the core's classification), or none. */
+function ownOutcome(r: CheckRecord): string {
+  const words = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'];
+  const worst = Math.min(...r.cautions.filter((c) => !isStandingRule(c.rule)).map((c) => words.indexOf(c.signal)), 4);
+  return worst === 4 ? 'none' : words[worst]!;
+}
+
 /** The filter read straight off each record (this test's own reading, not the store's buckets). */
 function matches(r: CheckRecord, f: ReviewFilter): boolean {
   const verdict = (r.result as { saturation?: { verdict?: { verdict?: string } } }).saturation?.verdict?.verdict;
@@ -58,7 +69,7 @@ function matches(r: CheckRecord, f: ReviewFilter): boolean {
   if (f.fromMs !== null && r.timeMs < f.fromMs) return false;
   if (f.toMs !== null && r.timeMs > f.toMs) return false;
   if (f.verdict !== null && (VERDICT_IDS.includes(verdict as never) ? verdict : 'none') !== f.verdict) return false;
-  if (f.signal !== null && !r.cautions.some((c) => c.signal === f.signal && c.rule !== 'standing-note')) return false;
+  if (f.outcome !== null && ownOutcome(r) !== f.outcome) return false;
   if (f.technician.trim() !== '' && !r.technician.toLowerCase().includes(f.technician.trim().toLowerCase())) return false;
   if (f.device.trim() !== '' && !r.deviceId.toLowerCase().startsWith(f.device.trim().toLowerCase())) return false;
   return true;
@@ -97,7 +108,7 @@ describe('ReviewPager and countTotals', () => {
       fromMs: fc.option(fc.oneof(fc.constantFrom(...times), fc.integer({ min: T0 - 2 * HOUR * 24, max: T0 + 32 * 24 * HOUR })), { nil: null }),
       toMs: fc.option(fc.oneof(fc.constantFrom(...times), fc.integer({ min: T0 - 2 * HOUR * 24, max: T0 + 32 * 24 * HOUR })), { nil: null }),
       verdict: fc.option(fc.constantFrom(...VERDICTS.map((v) => v.id)), { nil: null }),
-      signal: fc.option(fc.constantFrom(...SIGNALS), { nil: null }),
+      outcome: fc.option(fc.constantFrom(...OUTCOMES), { nil: null }),
       technician: fc.constantFrom('', 'osei', 'TANAKA', 'nobody'),
       device: fc.constantFrom('', devices[0]!.slice(0, 4), 'zzzz'),
       pageSize: fc.integer({ min: 1, max: 25 }),
@@ -111,7 +122,7 @@ describe('ReviewPager and countTotals', () => {
           fromMs: a.fromMs,
           toMs: a.toMs,
           verdict: a.verdict,
-          signal: a.signal,
+          outcome: a.outcome,
           technician: a.technician,
           device: a.device,
         };
@@ -121,7 +132,8 @@ describe('ReviewPager and countTotals', () => {
         expect(totals?.checks).toBe(want.length);
         const picked = all.filter((r) => want.includes(r.id));
         for (const v of VERDICTS) expect(totals?.byVerdict[v.id]).toBe(picked.filter((r) => verdictOf(r) === v.id).length);
-        for (const s of SIGNALS) expect(totals?.byWorstSignal[s]).toBe(picked.filter((r) => worstSignalOf(r) === s).length);
+        for (const o of OUTCOMES) expect(totals?.byOutcome[o]).toBe(picked.filter((r) => ownOutcome(r) === o).length);
+        for (const r of picked) expect(outcomeOf(r)).toBe(ownOutcome(r));
       }),
       { numRuns: 40 },
     );
@@ -149,12 +161,13 @@ describe('ReviewPager and countTotals', () => {
     expect(await countTotals(NO_FILTER, { signal: stop.signal })).toBeNull();
   });
 
-  it('the standing note never counts as a signal word', async () => {
+  it('standing hazards, method notes and the standing note never make an outcome', async () => {
     const all = await buildLog();
-    const onlyStanding = all.filter((r) => r.cautions.length === 1);
+    const onlyStanding = all.filter((r) => r.cautions.every((c) => isStandingRule(c.rule)));
     expect(onlyStanding.length).toBeGreaterThan(0);
-    for (const r of onlyStanding) expect(worstSignalOf(r)).toBeNull();
+    expect(onlyStanding.some((r) => r.cautions.some((c) => c.signal === 'DANGER'))).toBe(true);
+    for (const r of onlyStanding) expect(outcomeOf(r)).toBe('none');
     const totals = await countTotals(NO_FILTER);
-    expect(totals?.byWorstSignal.none).toBe(onlyStanding.length);
+    expect(totals?.byOutcome.none).toBe(onlyStanding.length);
   });
 });
