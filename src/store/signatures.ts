@@ -14,8 +14,12 @@ const UTF8 = new TextEncoder();
 export type SignatureStatus =
   /** No signature, and none expected: records saved before the device signed, or by a version that did not. */
   | { state: 'unsigned' }
-  /** Every record from seq 1 to throughSeq is vouched for by a valid signature of the key with this fingerprint. */
-  | { state: 'signed'; fingerprint: string; throughSeq: number }
+  /**
+   * Every record from seq 1 to throughSeq is vouched for by a valid signature of the key with this
+   * fingerprint. Records after throughSeq, when the chain goes on (headSeq), carry no signature:
+   * they arrived without one (plant sync does not carry signatures yet).
+   */
+  | { state: 'signed'; fingerprint: string; throughSeq: number; headSeq: number }
   /**
    * The record `at` is the first no valid signature vouches for (its own fails or is missing, and no
    * later one makes up for it); records up to throughSeq (0: none) are vouched for.
@@ -118,8 +122,8 @@ export async function signatureCoverage(o: {
     return { state: 'failed', fingerprint: key.fingerprint, throughSeq: through, at: { id: head?.id ?? '', seq }, detail: await why(seq, through) };
   };
   if (await good(lastSigned)) {
-    // Records saved after the last signature would be an unsigned tail: not vouched for.
-    return lastSigned >= headSeq ? { state: 'signed', fingerprint: key.fingerprint, throughSeq: lastSigned } : failedAt(lastSigned + 1, lastSigned);
+    // Records after the last signature carry none: vouched for only as far as it goes, said so.
+    return { state: 'signed', fingerprint: key.fingerprint, throughSeq: lastSigned, headSeq: Math.max(headSeq, lastSigned) };
   }
   if (!(await good(firstSigned))) return failedAt(firstSigned, 0);
   let lo = firstSigned; // good

@@ -72,7 +72,7 @@ describe('appendCheck', () => {
     expect(await verifyStoredChains()).toEqual([{
       deviceId: a.deviceId, status: 'ok', count: 3, headSeq: 3, headHash: c.hash,
       // Each save signs the new head with this install's key.
-      signature: { state: 'signed', fingerprint: expect.stringMatching(/^[A-Za-z0-9_-]{43}$/), throughSeq: 3 },
+      signature: { state: 'signed', fingerprint: expect.stringMatching(/^[A-Za-z0-9_-]{43}$/), throughSeq: 3, headSeq: 3 },
     }]);
   });
 

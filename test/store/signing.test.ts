@@ -86,7 +86,7 @@ describe('verifying the stored log', () => {
     await useDevice(new IDBFactory());
     await seedDevice(6);
     const fingerprint = await jwkThumbprint({ ...(await deviceSigningKey(await getDb()))!.publicJwk });
-    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 7, signature: { state: 'signed', fingerprint, throughSeq: 7 } }]);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 7, signature: { state: 'signed', fingerprint, throughSeq: 7, headSeq: 7 } }]);
   });
 
   for (const edited of [1, 5, 12]) {
@@ -109,14 +109,20 @@ describe('verifying the stored log', () => {
     });
   }
 
-  it('a stripped signature on the last record leaves it not vouched for', async () => {
-    await useDevice(new IDBFactory());
-    await seedDevice(3);
+  it('a record with no signature after the signed ones is vouched for by none: the chain says so, and an import refuses it', async () => {
+    const source = await makeDeviceWithBackup(3);
     const db = await getDb();
     const [block] = (await db.getAll('logBlocks')) as LogBlock[];
     block!.sigs![block!.sigs!.length - 1] = '';
     await db.put('logBlocks', block!);
-    expect((await verifyStoredChains())[0]!.signature).toMatchObject({ state: 'failed', throughSeq: 3, at: { seq: 4 }, detail: expect.stringMatching(/carries no signature/) });
+    // Stored: signed up to seq 3, seq 4 without one (as a record pulled by plant sync arrives).
+    expect((await verifyStoredChains())[0]!.signature).toMatchObject({ state: 'signed', throughSeq: 3, headSeq: 4 });
+    // In a file, for a device that signs: the unsigned record refuses the file.
+    const doc = JSON.parse(source.backup) as Doc;
+    doc.signatures = doc.signatures.filter((s) => s.seq !== 4);
+    await useDevice(new IDBFactory());
+    const error = (await importBackup(JSON.stringify(doc)).catch((e: unknown) => e)) as StoreError;
+    expect(error.refused).toEqual([expect.objectContaining({ seq: 4, why: expect.stringMatching(/seq 4 carries no signature that vouches for it/) })]);
   });
 });
 
@@ -130,7 +136,7 @@ describe('signed backups', () => {
     expect(doc.chains[0]!.publicKey).toMatchObject({ crv: 'P-256', kty: 'EC' });
     await useDevice(new IDBFactory());
     const report = await importBackup(source.backup);
-    expect(report.fileSignatures).toEqual([{ deviceId: doc.chains[0]!.deviceId, signature: { state: 'signed', fingerprint, throughSeq: 5 } }]);
+    expect(report.fileSignatures).toEqual([{ deviceId: doc.chains[0]!.deviceId, signature: { state: 'signed', fingerprint, throughSeq: 5, headSeq: 5 } }]);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', signature: { state: 'signed', fingerprint, throughSeq: 5 } }]);
     // Exported again from here: the same records, signatures and key.
     expect((await exportBackup()).replace(/"exportedAt":"[^"]*"/, '')).toBe(source.backup.replace(/"exportedAt":"[^"]*"/, ''));

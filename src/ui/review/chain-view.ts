@@ -33,7 +33,10 @@ export function chainLine(s: StoredChainStatus): ChainLine {
     return { ...base, ok: false, text: `${records}; signature fails at seq ${sig.at.seq}: ${sig.detail}`, at: sig.at.id ? sig.at : null };
   }
   if (sig.state === 'unsigned') return { ...base, ok: true, text: `${records}; not signed (saved before this device signed its records)`, at: null };
-  return { ...base, ok: true, text: `${records}; signed by device ${base.deviceShort} (key fingerprint ${sig.fingerprint})`, at: null };
+  const tail = sig.throughSeq < sig.headSeq
+    ? `, up to seq ${sig.throughSeq}; seq ${sig.throughSeq + 1} to ${sig.headSeq} carry no signature (received without one, as plant sync sends them)`
+    : '';
+  return { ...base, ok: true, text: `${records}; signed by device ${base.deviceShort} (key fingerprint ${sig.fingerprint})${tail}`, at: null };
 }
 
 /** Verifies every device's chain in the store and words the result. */

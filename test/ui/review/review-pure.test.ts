@@ -149,8 +149,12 @@ describe('rows and chains', () => {
   });
   it('says who signed an intact chain, and points a chain whose signatures fail at the first record they no longer vouch for', () => {
     const ok = { deviceId: 'abcdef0123', status: 'ok', count: 9, headSeq: 9, headHash: 'h' } as const;
-    expect(chainLine({ ...ok, signature: { state: 'signed', fingerprint: 'FP-1', throughSeq: 9 } })).toMatchObject({
+    expect(chainLine({ ...ok, signature: { state: 'signed', fingerprint: 'FP-1', throughSeq: 9, headSeq: 9 } })).toMatchObject({
       ok: true, at: null, text: '9 records, seq 1 to 9; signed by device abcdef01 (key fingerprint FP-1)',
+    });
+    // Records received without signatures after the signed ones (plant sync): said, not called broken.
+    expect(chainLine({ ...ok, signature: { state: 'signed', fingerprint: 'FP-1', throughSeq: 6, headSeq: 9 } })).toMatchObject({
+      ok: true, text: expect.stringMatching(/up to seq 6; seq 7 to 9 carry no signature/),
     });
     expect(chainLine({ ...ok, signature: { state: 'unsigned' } }).text).toMatch(/not signed/);
     const failed = chainLine({ ...ok, signature: { state: 'failed', fingerprint: 'FP-1', throughSeq: 4, at: { id: 'rec-5', seq: 5 }, detail: 'seq 5: its signature does not verify' } });
