@@ -226,7 +226,7 @@ function validateSignature(field: string, value: unknown): FileSignature {
   if (typeof s['signature'] !== 'string' || !B64URL_64.test(s['signature'])) {
     throw bad(`${field}.signature`, 'expected 86 base64url characters (64 bytes)');
   }
-  return s as unknown as FileSignature;
+  return { deviceId: s['deviceId'] as string, seq: s['seq'] as number, signature: s['signature'] as string };
 }
 
 function requireList(field: string, value: unknown, max: number): unknown[] {
