@@ -1,7 +1,7 @@
 // Plant-wide sync with Apache CouchDB: the one entry of src/sync, loaded on demand by the app
 // (like the store's long jobs). Talks to CouchDB and to the store's public surfaces, nothing else.
 // README.md beside this file has the design and the words.
-import { getSyncState, updateSyncState, type LastSync, type SyncState } from '../store/transfer.ts';
+import { getSyncState, recordBackup, updateSyncState, type LastSync, type SyncState } from '../store/transfer.ts';
 import { formatIsoWithOffset } from '../store/index.ts';
 import { Couch, DEFAULT_RETRY, type FetchLike, type RetryPolicy } from './couch.ts';
 import { SyncError } from './errors.ts';
@@ -138,7 +138,11 @@ function summary(push: PushResult, plant: SyncReport['plant'], checks: ChecksPul
 }
 
 async function saveOutcome(last: Omit<LastSync, 'at'>): Promise<void> {
-  await updateSyncState({ lastSync: { at: formatIsoWithOffset(new Date()), ...last } });
+  const at = formatIsoWithOffset(new Date());
+  await updateSyncState({ lastSync: { at, ...last } });
+  // An ok sync has pushed every check of this device: the log is consolidated, which the storage
+  // panel and the backup reminder count as a backup.
+  if (last.outcome === 'ok') await recordBackup('consolidation', at).catch(() => undefined);
 }
 
 /**

@@ -75,12 +75,17 @@ describe('the log is the queue', () => {
     expect(errors).toHaveLength(3);
     expect(errors.every((e) => (e as { kind?: string }).kind === 'offline')).toBe(true);
     expect((await d.transfer.getSyncState()).lastSync).toMatchObject({ outcome: 'failed', pushed: 0 });
+    // A failed sync consolidated nothing: the storage panel still says never.
+    expect((await d.store.backupState()).consolidatedAt).toBeNull();
     await server.launch();
     await runner.request(); // as the app does on `online`
     expect(errors).toHaveLength(3);
     expect(sent).toEqual([1, 2, 3]);
     expect(await storedSeqs(d.id)).toEqual([1, 2, 3]);
-    expect((await d.transfer.getSyncState()).lastSync).toMatchObject({ outcome: 'ok', pushed: 3 });
+    const last = (await d.transfer.getSyncState()).lastSync;
+    expect(last).toMatchObject({ outcome: 'ok', pushed: 3 });
+    // An ok sync counts as the log leaving the device whole (the storage panel, the backup reminder).
+    expect((await d.store.backupState()).consolidatedAt).toBe(last!.at);
   });
 
   it('a cancelled push stops; the next one sends the rest, nothing twice', async () => {
