@@ -301,9 +301,21 @@ export function refusal(refused: readonly RefusedRecord[]): StoreError {
 }
 
 const STRICT = { durability: 'strict' } as const;
+/** A settings key nothing stores: what the reads that keep a write open while it waits for its last word ask for. */
+const KEEP_OPEN_KEY = 'store:keepOpen';
+
+/** Options of writePlan: those of any long job, and a last word before the commit. */
+export interface WriteOptions extends LongWorkOptions {
+  /**
+   * Asked once every write is done and only the commit is left; resolving false aborts instead.
+   * The import worker asks the page here, so a Cancel the page heard while the write went on is
+   * still in time however late the worker heard of it (its messages trail what it has done).
+   */
+  beforeCommit?: (() => Promise<boolean>) | undefined;
+}
 
 /** Writes the plan in one strict transaction: all of it, or (on any failure or a cancel) none. */
-export async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options: LongWorkOptions, base: number, total: number): Promise<void> {
+export async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options: WriteOptions, base: number, total: number): Promise<void> {
   const tx = db.transaction(['vessels', 'settings', ...LOG_STORES] as const, 'readwrite', STRICT);
   let cancelled = false;
   const onAbort = () => {
@@ -328,6 +340,16 @@ export async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, o
       ...plan.keys.map((k) => learnPublicKey(tx, k)),
       addToLog(tx, plan.checkAdds, step),
     ]);
+    if (options.beforeCommit) {
+      // The answer is not an IndexedDB request, so awaiting it would let the transaction commit on
+      // its own: small reads keep it open (each one pending until the next is asked for) until
+      // the answer is in, then the commit or the abort follows.
+      let answer: boolean | null = null;
+      void options.beforeCommit().then((go) => { answer = go; }, () => { answer = false; });
+      const settings = tx.objectStore('settings');
+      while (answer === null) await settings.get(KEEP_OPEN_KEY);
+      if (!answer) onAbort();
+    }
   };
   try {
     await settle(tx, work());

@@ -192,6 +192,8 @@ export interface ImportOptions extends LongWorkOptions {
    * Cancel the page heard before this point can stop it by ending the worker (nothing written).
    */
   beforeWrite?: () => Promise<void>;
+  /** Asked when only the commit is left; false aborts the write (see writePlan). */
+  beforeCommit?: () => Promise<boolean>;
 }
 
 /** importBackup's work after the file is parsed and validated. */

@@ -2,7 +2,8 @@
 // progress on, and turns Cancel into the right thing for where the import stands. Until the worker
 // asks to write, nothing of the file is in the store, so Cancel ends the worker at once, even in
 // the middle of JSON.parse; once it writes, Cancel aborts its one transaction and the worker says
-// whether the abort or the commit came first. Where no worker can be made (Node, a refused
+// whether the abort or the commit came first; and when only its commit is left, the worker asks the
+// page once more, so a Cancel heard while the write went on is always in time. Where no worker can be made (Node, a refused
 // worker), the import runs on this thread instead (importBackup).
 import { importBackup, type ImportReport } from './backup.ts';
 import { storeName } from './connection.ts';
@@ -12,6 +13,7 @@ import type { LongWorkOptions } from './records.ts';
 type Out =
   | { type: 'progress'; done: number; total: number }
   | { type: 'may-write' }
+  | { type: 'may-commit' }
   | { type: 'done'; report: ImportReport }
   | { type: 'failed'; error: { code: StoreErrorCode; message: string; field?: string; refused: RefusedRecord[] } };
 
@@ -60,6 +62,9 @@ export function importBackupFile(file: Blob, options: LongWorkOptions = {}): Pro
         // Decided here, on the page's one thread: a Cancel either came before (stop) or is sent after (abort).
         writing = !signal?.aborted;
         w.postMessage({ type: writing ? 'write' : 'stop' });
+      } else if (m.type === 'may-commit') {
+        // The same for the commit: a Cancel heard while the write went on stops it here.
+        w.postMessage({ type: signal?.aborted ? 'stop' : 'write' });
       } else if (m.type === 'done') finish(() => resolve(m.report));
       else {
         const { code, message, field, refused } = m.error;

@@ -4,9 +4,10 @@
 // JSON.parse holds this thread: the page ends the worker (import-job.ts), and before the write
 // transaction opens the worker asks the page whether it still may.
 //
-// Messages in: { type: 'start', file, dbName } then { type: 'write' | 'stop' } (the answer to
-// 'may-write') and { type: 'cancel' }. Out: { type: 'progress', done, total }, { type: 'may-write' },
-// { type: 'done', report } or { type: 'failed', error: { code, message, field, refused } }.
+// Messages in: { type: 'start', file, dbName }, then { type: 'write' | 'stop' } (the answer to
+// 'may-write' and to 'may-commit') and { type: 'cancel' }. Out: { type: 'progress', done, total },
+// { type: 'may-write' } (before the write transaction opens), { type: 'may-commit' } (when only its
+// commit is left), { type: 'done', report } or { type: 'failed', error: { code, message, field, refused } }.
 import { parseBackupInSteps } from './backup-format.ts';
 import { importDocument } from './backup.ts';
 import { openStore } from './connection.ts';
@@ -30,6 +31,17 @@ scope.onmessage = (e) => {
   }
 };
 
+/** Asks the page `question` and waits for its answer ('write' yes, 'stop' or a cancel no). */
+async function ask(question: 'may-write' | 'may-commit'): Promise<boolean> {
+  if (cancel.signal.aborted) return false;
+  const go = await new Promise<boolean>((resolve) => {
+    answer = resolve;
+    scope.postMessage({ type: question });
+  });
+  answer = null;
+  return go;
+}
+
 async function run(file: Blob, dbName: string): Promise<void> {
   try {
     const text = await file.text();
@@ -39,13 +51,11 @@ async function run(file: Blob, dbName: string): Promise<void> {
       signal: cancel.signal,
       onProgress: (done, total) => scope.postMessage({ type: 'progress', done, total }),
       beforeWrite: async () => {
-        const go = await new Promise<boolean>((resolve) => {
-          answer = resolve;
-          scope.postMessage({ type: 'may-write' });
-        });
-        answer = null;
-        if (!go) throw new StoreError('cancelled', 'Import cancelled; nothing was changed.');
+        if (!(await ask('may-write'))) throw new StoreError('cancelled', 'Import cancelled; nothing was changed.');
       },
+      // The page's word on the commit: a Cancel it heard during the write, however late this worker
+      // would hear of it, still stops the commit.
+      beforeCommit: () => ask('may-commit'),
     });
     scope.postMessage({ type: 'done', report });
   } catch (error) {

@@ -321,3 +321,19 @@ describe('importBackupFile', () => {
     await expect(importBackupFile(new Blob([backup]), { signal: stop.signal })).rejects.toMatchObject({ code: 'cancelled' });
   });
 });
+
+describe('the last word before the commit (the import worker asks the page)', () => {
+  it('the write waits, open, for the answer: no stops it with nothing written, yes lets it commit', async () => {
+    const { importDocument } = await import('../../src/store/backup.ts');
+    const { backup } = await makeDeviceWithBackup(5);
+    await useDevice(new IDBFactory());
+    const before = await dump();
+    // A late answer (the page's, through the worker's messages) while the transaction has nothing else to do.
+    const late = (go: boolean) => () => new Promise<boolean>((done) => setTimeout(() => done(go), 30));
+    await expect(importDocument(parseBackup(backup), { beforeCommit: late(false) })).rejects.toMatchObject({ code: 'cancelled' });
+    expect(await dump()).toEqual(before);
+    const report = await importDocument(parseBackup(backup), { beforeCommit: late(true) });
+    expect(report.checks.added).toHaveLength(6);
+    expect((await dump()).checks).toHaveLength(6);
+  });
+});
