@@ -275,7 +275,8 @@ describe('field screens', () => {
       await page.fill('#conv-pressure', '0');
       await page.locator('[data-convert-state="ready"]').waitFor();
       // 0 gauge at that site is 83.5 kPa absolute.
-      expect(await page.locator('tbody tr', { hasText: 'kPa' }).first().locator('td').first().textContent()).toMatch(/^83\.5/);
+      // Typed "0" resolves ±0.5 kPa: one decimal, no more (issue 11 §4).
+      expect(await page.locator('tbody tr', { hasText: 'kPa' }).first().locator('td').first().textContent()).toMatch(/^83\.5$/);
     });
 
     it('the fill plan: a neutral box, full-size choices, plain words, the details folded', async () => {
