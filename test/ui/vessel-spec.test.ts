@@ -137,6 +137,20 @@ describe('vessel form', () => {
       expect(back.spec).toEqual(full);
     });
 
+    it('opened and saved unchanged, a vessel whose gauge reads psi and scale lb keeps every stored figure exactly (the form shows six digits: 300 kPa = 43.5113 psi, NIST SP 811 (2008) B.8)', () => {
+      const us: VesselSpec = { ...full, readingUnits: { pressure: 'psi', temperature: 'degF', mass: 'lb' }, tareKg: 850.123456789 };
+      const opened = formFromSpec(us, UNIT_PRESETS.US);
+      expect(opened.mawp).toBe('43.5113');
+      const back = specFromForm(opened, us, opened);
+      if (!back.ok) throw new Error(JSON.stringify(back.errors));
+      expect(back.spec).toEqual(us);
+      // A figure that was changed is read from its text as usual.
+      const changed = specFromForm({ ...opened, mawp: '50' }, us, opened);
+      if (!changed.ok) throw new Error(JSON.stringify(changed.errors));
+      expect(changed.spec.mawpGaugePa).toBeCloseTo(50 * 6894.757293168361, 6); // 1 psi = 6894.757 293 168 Pa (NIST SP 811 (2008) B.8)
+      expect(changed.spec.reliefSetGaugePa).toBe(us.reliefSetGaugePa);
+    });
+
     it('keys the editor does not show (added by a later version or by plant sync) are kept', () => {
       const withExtra = { ...full, plantNote: 'kept' } as VesselSpec & { plantNote: string };
       const back = specFromForm(formFromSpec(withExtra, UNIT_PRESETS.SI), withExtra);

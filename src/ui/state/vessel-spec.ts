@@ -53,9 +53,12 @@ function formFieldUnit(f: VesselForm, field: FormField): FieldUnit | undefined {
 
 /**
  * Builds the SI VesselSpec from the form, or names every field that cannot be read. `stored` is the
- * vessel being edited: keys of it the editor does not show are kept as they were.
+ * vessel being edited: keys of it the editor does not show are kept as they were. `opened` is the
+ * form as the editor first showed that vessel (formFromSpec): a figure whose text and units are
+ * still as shown keeps its stored value exactly, so opening and saving a vessel changes nothing
+ * the six digits on screen would otherwise round (a psi gauge's 300 kPa MAWP stays 300 000 Pa).
  */
-export function specFromForm(f: VesselForm, stored?: VesselSpec): SpecResult {
+export function specFromForm(f: VesselForm, stored?: VesselSpec, opened?: VesselForm): SpecResult {
   const errors: Partial<Record<FormField, string>> = {};
   const read = (field: FormField, words: string, convert: (n: number) => number = (n) => n): number => {
     try { return convert(readNumber(f[field], words)); } catch (e) { errors[field] = errorText(e, formFieldUnit(f, field), f[field]); return NaN; }
@@ -132,7 +135,18 @@ export function specFromForm(f: VesselForm, stored?: VesselSpec): SpecResult {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] ?? 'tag' : 'tag';
     return { ok: false, errors: { [field]: errorText(e, formFieldUnit(f, field), f[field]) } };
   }
-  return { ok: true, spec };
+  const shown = stored && opened ? specFromForm(opened, stored) : undefined;
+  return { ok: true, spec: shown?.ok ? keepUnchanged(spec, shown.spec, stored) : spec };
+}
+
+/** `built` with every number that equals what the opened form gave (`shown`) replaced by the stored one. */
+function keepUnchanged<T>(built: T, shown: unknown, stored: unknown): T {
+  if (typeof built === 'number') return (Object.is(built, shown) && typeof stored === 'number' ? stored : built) as T;
+  const isRecord = (x: unknown): x is Record<string, unknown> => typeof x === 'object' && x !== null && !Array.isArray(x);
+  if (!isRecord(built) || !isRecord(shown) || !isRecord(stored)) return built;
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(built)) out[k] = keepUnchanged(v, shown[k], stored[k]);
+  return out as T;
 }
 
 /** The form for a stored vessel, values shown in the preferred units. */
