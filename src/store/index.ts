@@ -47,6 +47,7 @@ export {
   loadDraft,
   clearDraft,
   deviceId,
+  syncServer,
   requestPersistence,
   persistenceState,
   backupState,

@@ -2,7 +2,7 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
 import { answerError, type Couch } from './couch.ts';
 import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
@@ -81,11 +81,10 @@ export interface ChecksPullResult {
   gaps: LinkProblem[];
   /** Documents of a kind this version of the app does not know (later record kinds), not stored. */
   unknownKinds: number;
-  /**
-   * Device public key records (seq 0) seen, as their texts: the hook for verifying signed chains
-   * once per-device signing is in the store.
-   */
+  /** Device public key records (seq 0) seen, as their texts; each is learnt before its batch's records merge. */
   deviceKeys: { deviceId: string; text: string }[];
+  /** Devices whose public key this pull learnt (their signed records now verify here). */
+  keysLearnt: string[];
 }
 
 /**
@@ -97,20 +96,30 @@ export async function pullChecks(
   couch: Couch,
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined; batch?: number | undefined } = {},
 ): Promise<ChecksPullResult> {
-  const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [] };
+  const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [], keysLearnt: [] };
   const touched = new Map<string, { fromSeq: number; toSeq: number }>();
   result.read = await pullFeed<RecordDoc>(couch, CHECKS_DB, async (docs) => {
-    const records: { label: string; text: string }[] = [];
+    const records: { label: string; text: string; signature?: string }[] = [];
+    const keys: { label: string; text: string }[] = [];
     const seqOf = new Map<string, RecordDoc>();
     for (const doc of docs) {
       const problem = envelopeProblem(doc);
       if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
-      else if (doc.seq === 0) result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
-      else if (doc.type !== 'check') result.unknownKinds += 1;
+      else if (doc.seq === 0) {
+        result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
+        keys.push({ label: doc._id, text: doc.text });
+      } else if (doc.type !== 'check') result.unknownKinds += 1;
       else {
-        records.push({ label: doc._id, text: doc.text });
+        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature } : { label: doc._id, text: doc.text });
         seqOf.set(doc.id!, doc);
       }
+    }
+    // A device writes its key before its first record, so the feed brings it first: learnt before
+    // the records it vouches for are merged (the merge reads the keys the store knows).
+    if (keys.length > 0) {
+      const learnt = await learnDeviceKeys(keys);
+      result.keysLearnt.push(...learnt.learnt);
+      result.refused.push(...learnt.refused);
     }
     const merged = await mergePulledRecords(records, options.signal ? { signal: options.signal } : {});
     for (const id of merged.added) {
