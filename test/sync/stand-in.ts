@@ -55,7 +55,7 @@ export class StandIn {
   /** Adds an account for a device (deploy/couch-account.mjs) and returns its password. */
   addAccount(kind: 'device' | 'supervisor', deviceId: string): string {
     const out = this.script('couch-account.mjs', [kind], [deviceId]);
-    const json = out.slice(out.indexOf('{'));
+    const json = out.slice(out.indexOf('{'), out.lastIndexOf('}') + 1);
     return (JSON.parse(json) as { password: string }).password;
   }
 
