@@ -15,13 +15,17 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, expect, it } from 'vitest';
 import { build } from 'vite';
 import type { BrowserContext, Page } from 'playwright-core';
+import { readFileSync } from 'node:fs';
 import { ROOT, launch, tempProfile } from '../test/e2e/harness.ts';
+import { browserCpuS } from './browser-cpu.ts';
 import { startSite, type NginxSite } from '../test/sync/nginx.ts';
 import { StandIn } from '../test/sync/stand-in.ts';
 import { fakeUuid, generatedBackup } from './generated-log.ts';
 
 const SIZES = (process.env['BENCH_SYNC_SIZES'] ?? '10000,100000').split(',').map(Number);
 const PROFILE = process.env['BENCH_SYNC_PROFILE'] === '1';
+/** Changes per pull request: the client's own (0), or others to compare (BENCH_SYNC_PULL_BATCHES=0,10000). */
+const PULL_BATCHES = (process.env['BENCH_SYNC_PULL_BATCHES'] ?? '0').split(',').map(Number);
 const rows: string[] = [];
 let couch: StandIn;
 let site: NginxSite;
@@ -56,10 +60,27 @@ afterAll(async () => {
   for (const r of rows) console.log(r);
 });
 
+/** CPU seconds so far of process `pid` (Linux /proc; USER_HZ 100). */
+function processCpuS(pid: number | undefined): number {
+  if (pid === undefined) return NaN;
+  const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+  const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+  return (Number(f[11]) + Number(f[12])) / 100;
+}
+
+/** Runs `fn`, adding the browser's and the server's CPU seconds over it to its figures. */
+async function withCpu(fn: () => Promise<Record<string, number>>): Promise<Record<string, number>> {
+  const b0 = browserCpuS(profile.dir);
+  const s0 = processCpuS(couch.pid);
+  const r = await fn();
+  return { ...r, browserCpuS: browserCpuS(profile.dir) - b0, serverCpuS: processCpuS(couch.pid) - s0 };
+}
+
 function row(label: string, checks: number, r: Record<string, number>, target: string): void {
   const s = r['syncMs']! / 1000;
   const line = `  ${label.padEnd(44)} ${checks.toLocaleString('en')} checks in ${s.toFixed(2)} s = ${Math.round(checks / s).toLocaleString('en')}/s` +
-    ` [${target}]; waiting on the server ${(r['waitedMs']! / 1000).toFixed(2)} s over ${r['requests']} requests (${(r['bytes']! / 1e6).toFixed(1)} MB of answers); load ${loadavg()[0]!.toFixed(2)}`;
+    ` [${target}]; waiting on the server ${(r['waitedMs']! / 1000).toFixed(2)} s over ${r['requests']} requests (${(r['bytes']! / 1e6).toFixed(1)} MB of answers);` +
+    ` CPU: browser ${r['browserCpuS']!.toFixed(1)} s, server ${r['serverCpuS']!.toFixed(1)} s; load ${loadavg()[0]!.toFixed(2)}`;
   rows.push(line);
   console.log(line);
 }
@@ -72,28 +93,33 @@ for (const size of SIZES) {
     writeFileSync(join(dir, `seed-${size}.json`), await generatedBackup({
       deviceId, vesselPrefix: 'be7c0001', vessels: 50, checks: size, startMs: Date.UTC(2026, 0, 1), stepMs: 300_000, technicians: ['Bench One', 'Bench Two'], seed: size,
     }));
-    const pushed = await page.evaluate(([run, url]) => (globalThis as unknown as Bench).syncBench.push(run, url),
-      [{ dbName: `device-${size}`, deviceId, password: couch.addAccount('device', deviceId), role: 'technician' }, `/seed-${size}.json`] as const);
+    const password = couch.addAccount('device', deviceId);
+    const pushed = await withCpu(() => page.evaluate(([run, url]) => (globalThis as unknown as Bench).syncBench.push(run, url),
+      [{ dbName: `device-${size}`, deviceId, password, role: 'technician' }, `/seed-${size}.json`] as const));
     expect(pushed['pushed']).toBe(size);
     rows.push(`  (the device's log imported first in ${(pushed['seedMs']! / 1000).toFixed(1)} s, not counted)`);
     row('push, one device', size, pushed, 'target ≥ 1,000/s');
-    const supervisorId = fakeUuid(0x5e7c0000 + size, 1);
-    const cdp = PROFILE ? await ctx.newCDPSession(page) : null;
-    if (cdp) {
-      await cdp.send('Profiler.enable');
-      await cdp.send('Profiler.setSamplingInterval', { interval: 1000 });
-      await cdp.send('Profiler.start');
-    }
-    const pulled = await page.evaluate(([run]) => (globalThis as unknown as Bench).syncBench.pull(run),
-      [{ dbName: `supervisor-${size}`, deviceId: supervisorId, password: couch.addAccount('supervisor', supervisorId), role: 'supervisor' }] as const);
     // A first pull takes the whole database: the smaller runs' checks too.
     const total = SIZES.filter((s) => s <= size).reduce((a, b) => a + b, 0);
-    expect(pulled['added']).toBe(total);
-    expect(pulled['refused']).toBe(0);
-    row('first pull into the store, supervisor', total, pulled, `target ≥ 5,000/s; 100,000 under 30 s`);
-    if (cdp) {
-      const { profile: p } = (await cdp.send('Profiler.stop')) as unknown as { profile: CpuProfile };
-      rows.push(...selfTimes(p, 15).map((l) => `    ${l}`));
+    for (const batch of PULL_BATCHES) {
+      const supervisorId = fakeUuid(0x5e7c0000 + size + batch, 1);
+      const supervisorPassword = couch.addAccount('supervisor', supervisorId);
+      const cdp = PROFILE ? await ctx.newCDPSession(page) : null;
+      if (cdp) {
+        await cdp.send('Profiler.enable');
+        await cdp.send('Profiler.setSamplingInterval', { interval: 1000 });
+        await cdp.send('Profiler.start');
+      }
+      const pulled = await withCpu(() => page.evaluate(([run, b]) => (globalThis as unknown as Bench).syncBench.pull(run, b),
+        [{ dbName: `supervisor-${size}-${batch}`, deviceId: supervisorId, password: supervisorPassword, role: 'supervisor' }, batch || undefined] as const));
+      expect(pulled['added']).toBe(total);
+      expect(pulled['refused']).toBe(0);
+      row(`first pull into the store, supervisor${batch ? ` (${batch} per request)` : ''}`, total, pulled, 'target ≥ 5,000/s; 100,000 under 30 s');
+      if (cdp) {
+        const { profile: p } = (await cdp.send('Profiler.stop')) as unknown as { profile: CpuProfile };
+        rows.push(...selfTimes(p, 15).map((l) => `    ${l}`));
+        await cdp.detach();
+      }
     }
   }, 1_200_000);
 }

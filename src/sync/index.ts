@@ -42,7 +42,7 @@ export interface SyncOptions {
    * by default the store's own (ownDeviceKeyText), null to send none.
    */
   deviceKeyText?: string | null;
-  /** Changes per pull request (default PULL_BATCH, 2,000). */
+  /** Changes per pull request (default PULL_BATCH, 10,000). */
   pullBatch?: number;
 }
 

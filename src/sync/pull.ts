@@ -8,10 +8,16 @@ import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type Recor
 import { throwIfCancelled } from './errors.ts';
 
 /**
- * Changes per request. bench/sync.bench-run.ts pulled 10,000 checks into the store at 2,266/s with
- * 500 per request, 4,694/s with 1,000 and 5,708/s with 2,000 (Node, stand-in, load average about 3).
+ * Changes per request. Each batch's merge reads and rewrites the store's 256 id buckets, whose size
+ * grows with the log, so a first pull costs about (records)² / (batch) there: a supervisor's first
+ * pull of 100,000 in Chromium took 37.0 s of the browser's CPU with 2,000 per request and 14.7 s
+ * with 10,000 (the stand-in's CPU 9.3 s either way; bench/sync-browser.bench-run.ts, load average
+ * 13, so wall times 83 s and 47 s). 10,000 of these documents are about 23 MB of JSON per answer:
+ * a phone parses that in a fraction of a second, and a sync of a few new checks asks for no more
+ * than there is. (Node and fake-indexeddb, before: 500, 1,000 and 2,000 gave 2,266, 4,694 and
+ * 5,708 checks/s on 10,000.)
  */
-export const PULL_BATCH = 2000;
+export const PULL_BATCH = 10_000;
 
 interface ChangesAnswer<T> {
   results?: { id: string; seq: unknown; deleted?: boolean; doc?: T }[];

@@ -28,6 +28,11 @@ export class StandIn {
   private child: ChildProcess | null = null;
   private constructor(readonly port: number, readonly dir: string) {}
 
+  /** The running server's process id (the benchmarks read its CPU time). */
+  get pid(): number | undefined {
+    return this.child?.pid;
+  }
+
   get url(): string {
     return `http://127.0.0.1:${this.port}/`;
   }
