@@ -21,9 +21,9 @@ const serverState = shared<string | null>(null);
 const runState = shared<SyncRun>({ state: 'idle' });
 
 /**
- * A save starts a sync this long after it (one for a burst of saves): common practice for a field
- * app, long enough for a technician saving several checks in a row, short enough that the server
- * hears within seconds.
+ * A save starts a sync this long after it (one for a burst of saves). Our own choice, not a measured
+ * or published figure: long enough for a technician saving several checks in a row, short enough
+ * that the supervisors' server hears within seconds.
  */
 export const SAVE_DEBOUNCE_MS = 3_000;
 
