@@ -32,7 +32,6 @@ export interface CautionWording {
 
 /** The stored text of one quantity: °C, K, kPa or kg, with a true minus sign like the figures. */
 export function quantityText(q: CautionQuantity): string {
-  const fixed = (x: number, d: number) => x.toFixed(d).replace(/^-/, '\u2212');
   switch (q.kind) {
     case 'temperature': return `${fixed(q.K - 273.15, q.decimals ?? 1)} °C`;
     case 'temperature-difference': return `${fixed(q.K, q.decimals ?? 1)} K`;
@@ -41,17 +40,26 @@ export function quantityText(q: CautionQuantity): string {
   }
 }
 
+/** x to d decimals with a true minus sign (a check formats a dozen figures: no regex per figure). */
+function fixed(x: number, d: number): string {
+  const s = x.toFixed(d);
+  return s.charCodeAt(0) === 45 ? '\u2212' + s.slice(1) : s;
+}
+
 /** Tagged template for caution wording: interpolate celsius(), kilopascal(), kelvinDifference(), kilograms() or plain text. */
 export function say(strings: TemplateStringsArray, ...values: (CautionPart | number)[]): CautionWording {
+  // Plain loops: every check words a dozen cautions, and the callbacks showed in its profile.
   const parts: CautionPart[] = [];
-  strings.forEach((text, i) => {
-    appendPart(parts, text);
+  for (let i = 0; i < strings.length; i++) {
+    appendPart(parts, strings[i] as string);
     if (i < values.length) {
-      const v = values[i]!;
+      const v = values[i] as CautionPart | number;
       appendPart(parts, typeof v === 'number' ? String(v) : v);
     }
-  });
-  return { message: parts.map((p) => (typeof p === 'string' ? p : quantityText(p))).join(''), parts };
+  }
+  let message = '';
+  for (const p of parts) message += typeof p === 'string' ? p : quantityText(p);
+  return { message, parts };
 }
 
 /** Adds a part, merging neighbouring text so the parts stay short. */

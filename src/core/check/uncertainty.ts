@@ -11,7 +11,7 @@
 
 import { IF97, saturatedLiquidVolume, saturatedVaporVolume } from '../steam/index.ts';
 import type { InstrumentAccuracy, TemperatureSensorTolerance, VesselSpec } from './vessel-spec.ts';
-import { liquidLevelFromVolume, vesselVolume, type VesselGeometry } from './vessel-geometry.ts';
+import { levelSolver, vesselVolume, type VesselGeometry } from './vessel-geometry.ts';
 import type { ResolvedReading } from './reading.ts';
 
 /** Weather swing of station pressure around a stored site value, Pa (sea-level pressure usually 970–1040 hPa, about −3 to +4 kPa from standard: University of Wisconsin meteorology course page, http://meteor.wisc.edu/~hopkins/online/cod/cod05t.htm ; ±3 kPa is our choice from that range). */
@@ -217,11 +217,12 @@ function levelBand(
   args: { temperatureK: number; massKg: number; volumeM3: number; massToleranceKg: number; temperatureToleranceK: number; volumeToleranceM3: number },
 ): Band<'weight' | 'temperature' | 'volume'> {
   const drawn = vesselVolume(geometry);
+  const levelAt = levelSolver(geometry);
   const level = (T: number, m: number, V: number) => {
     const vf = saturatedLiquidVolume(T);
     const vg = saturatedVaporVolume(T);
     const liquidM3 = (vf * (m * vg - V)) / (vg - vf);
-    return liquidLevelFromVolume(geometry, Math.min(Math.max(liquidM3, 0), drawn));
+    return levelAt(Math.min(Math.max(liquidM3, 0), drawn));
   };
   const { temperatureK: T, massKg: m, volumeM3: V } = args;
   const across = (limit: number, lo: number, hi: number, at: (x: number) => number) =>
