@@ -48,24 +48,29 @@ function bisect(g: (T: number) => number, lo: number, hi: number, scaleM3PerKg: 
 }
 
 /**
- * v_f and v_g at the fixed temperatures the envelope compares against (623.15 K, Tc, the density
- * maximum, the triple point), each solved once: the same doubles every time, and the region 3
- * solve at Tc is the dearest evaluation of a check.
+ * v_f and v_g at the fixed temperatures the envelope compares against, m³/kg: what
+ * saturatedLiquidVolume / saturatedVaporVolume (IAPWS R7-97(2012): region 1 or 2 at p_s(T) from
+ * Eq. (30); region 3, Eq. (28), from 623.15 K) return there, written out as the shortest decimals
+ * that read back as the same doubles. Solving them in the first check cost a region 3 solve at
+ * Tc, the dearest evaluation of a check, while the code was still cold; test/core/check/heat-up-envelope.test.ts
+ * recomputes each and requires the same double.
  */
-const fixedVolumes: { phase: 'liquid' | 'vapor'; T: number; v: number }[] = [];
-function fixedVolume(phase: 'liquid' | 'vapor', T: number): number {
-  for (const f of fixedVolumes) if (f.T === T && f.phase === phase) return f.v;
-  const v = phase === 'liquid' ? saturatedLiquidVolume(T) : saturatedVaporVolume(T);
-  fixedVolumes.push({ phase, T, v });
-  return v;
-}
+export const FIXED_SATURATED_VOLUMES_M3_PER_KG = {
+  liquidAt623K: 0.0017400705518876086,
+  liquidAtCriticalPoint: 0.0031038655297079033,
+  liquidAtDensityMaximum: 0.0010000743344778164,
+  vaporAt623K: 0.008800931931576298,
+  vaporAtCriticalPoint: 0.0031038655297079033,
+  vaporAtTriplePoint: 205.9974594853836,
+} as const;
+const FIXED = FIXED_SATURATED_VOLUMES_M3_PER_KG;
 
 /** Liquid-full temperature for mean specific volume v, K, or null if the fill never goes liquid-full. v in m³/kg, > 0. */
 export function liquidFullTemperatureK(v: number): number | null {
   // v_f rises from 277.14 K to Tc, so a v below v_f(623.15 K) is below v_c: the region 3 solve at
   // Tc (and its table of starting values) is needed only for fills near the critical volume.
-  if (v >= fixedVolume('liquid', T_13_K) && v >= fixedVolume('liquid', IF97.Tc)) return null;
-  if (v <= fixedVolume('liquid', T_MAX_DENSITY_K)) return T_MIN_K;
+  if (v >= FIXED.liquidAt623K && v >= FIXED.liquidAtCriticalPoint) return null;
+  if (v <= FIXED.liquidAtDensityMaximum) return T_MIN_K;
   return bisect((T) => saturatedLiquidVolume(T) - v, T_MAX_DENSITY_K, IF97.Tc, v);
 }
 
@@ -74,9 +79,9 @@ export function allVaporTemperatureK(v: number): number | null {
   // v_g falls from the triple point to Tc: a v above v_g(623.15 K) is above v_c; and v_f rises to
   // the same v_c, so a v below v_f(623.15 K) (every fill more than about half liquid when cold) is
   // below it: only fills between those two need the region 3 solve at Tc.
-  if (v < fixedVolume('liquid', T_13_K)) return null;
-  if (v <= fixedVolume('vapor', T_13_K) && v <= fixedVolume('vapor', IF97.Tc)) return null;
-  if (v >= fixedVolume('vapor', IF97.Tt)) return T_MIN_K;
+  if (v < FIXED.liquidAt623K) return null;
+  if (v <= FIXED.vaporAt623K && v <= FIXED.vaporAtCriticalPoint) return null;
+  if (v >= FIXED.vaporAtTriplePoint) return T_MIN_K;
   return bisect((T) => v - saturatedVaporVolume(T), IF97.Tt, IF97.Tc, v);
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { allVaporTemperatureK, heatUpEnvelope, liquidFullTemperatureK } from '../../../src/core/check/heat-up-envelope.ts';
-import { saturation, saturationPressure } from '../../../src/core/steam/index.ts';
+import { allVaporTemperatureK, FIXED_SATURATED_VOLUMES_M3_PER_KG as FIXED, heatUpEnvelope, liquidFullTemperatureK } from '../../../src/core/check/heat-up-envelope.ts';
+import { IF97, saturatedLiquidVolume, saturatedVaporVolume, saturation, saturationPressure } from '../../../src/core/steam/index.ts';
 
 /** Cold fill: a fraction of V filled with saturated liquid at 20 °C, vapor mass neglected (as in the python3-iapws reference figures below). */
 function coldFillSpecificVolume(fraction: number): number {
@@ -8,6 +8,18 @@ function coldFillSpecificVolume(fraction: number): number {
 }
 
 describe('heat-up envelope', () => {
+  it('its stored v_f and v_g at 623.15 K, Tc, 277.14 K and the triple point are the doubles the steam functions compute there, and near IF97 values (IAPWS R7-97(2012): v_c = 1/322 m³/kg; v_f(623.15 K) ≈ 0.00174, v_g(623.15 K) ≈ 0.00880, v_g(273.16 K) ≈ 206.0 m³/kg, from memory of the steam tables)', () => {
+    expect(Object.is(FIXED.liquidAt623K, saturatedLiquidVolume(623.15))).toBe(true);
+    expect(Object.is(FIXED.liquidAtCriticalPoint, saturatedLiquidVolume(IF97.Tc))).toBe(true);
+    expect(Object.is(FIXED.liquidAtDensityMaximum, saturatedLiquidVolume(277.14))).toBe(true);
+    expect(Object.is(FIXED.vaporAt623K, saturatedVaporVolume(623.15))).toBe(true);
+    expect(Object.is(FIXED.vaporAtCriticalPoint, saturatedVaporVolume(IF97.Tc))).toBe(true);
+    expect(Object.is(FIXED.vaporAtTriplePoint, saturatedVaporVolume(IF97.Tt))).toBe(true);
+    expect(FIXED.liquidAtCriticalPoint * 322).toBeCloseTo(1, 2);
+    expect(FIXED.liquidAt623K).toBeCloseTo(0.00174, 5);
+    expect(FIXED.vaporAt623K).toBeCloseTo(0.0088, 4);
+    expect(FIXED.vaporAtTriplePoint).toBeCloseTo(206.0, 0);
+  });
   it('a vessel 95 % full of water at 20 °C goes liquid-full at about 113 °C, far below 120 °C (computed with python3-iapws 1.5.2 (IAPWS-IF97): 113.50 °C)', () => {
     const T = liquidFullTemperatureK(coldFillSpecificVolume(0.95));
     expect(T).not.toBeNull();
