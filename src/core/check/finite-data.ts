@@ -14,18 +14,28 @@ export function requireFiniteData<T>(data: T): T {
 
 /** Whether a value is plain data with finite numbers only (the same rules as walk, no paths). */
 function isFinitePlain(value: unknown): boolean {
-  if (value === null || typeof value === 'string' || typeof value === 'boolean') return true;
-  if (typeof value === 'number') return Number.isFinite(value);
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) if (!isFinitePlain(value[i])) return false;
-    return true;
+  // One typeof switch, numbers first: a check result holds a few hundred leaves, most of them
+  // numbers, and the walk showed as 8 % of a check's profile.
+  switch (typeof value) {
+    case 'number':
+      return Number.isFinite(value);
+    case 'string':
+    case 'boolean':
+      return true;
+    case 'object': {
+      if (value === null) return true;
+      if (Array.isArray(value)) {
+        for (let i = 0; i < value.length; i++) if (!isFinitePlain(value[i])) return false;
+        return true;
+      }
+      if (Object.getPrototypeOf(value) !== Object.prototype) return false;
+      // Plain objects inherit nothing enumerable, so for…in visits exactly the own enumerable keys.
+      for (const key in value as Record<string, unknown>) if (!isFinitePlain((value as Record<string, unknown>)[key])) return false;
+      return true;
+    }
+    default:
+      return false;
   }
-  if (typeof value === 'object' && Object.getPrototypeOf(value) === Object.prototype) {
-    // Plain objects inherit nothing enumerable, so for…in visits exactly the own enumerable keys.
-    for (const key in value as Record<string, unknown>) if (!isFinitePlain((value as Record<string, unknown>)[key])) return false;
-    return true;
-  }
-  return false;
 }
 
 function walk(value: unknown, path: string): void {
