@@ -9,7 +9,7 @@ import type { AtmosphereCheck, CheckResult, Hazards } from './check-result.ts';
 import { raiseCheckCautions, type CheckFigures } from './check-rules.ts';
 import { outcomeOf, sortedCautions } from './cautions.ts';
 import { heatUpEnvelope } from './heat-up-envelope.ts';
-import { cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type FlashOnRelease } from './hazards.ts';
+import { atmosphereSaturation, cooledState, expansionWorkPerKgJ, flashOnRelease, pressureMargin, TNT_ENERGY_J_PER_KG, type FlashOnRelease } from './hazards.ts';
 import { idealGasComparison } from './ideal-gas.ts';
 import { contentsState, inventoryOf } from './inventory.ts';
 import { resolveReading, type Reading, type ResolvedReading } from './reading.ts';
@@ -150,26 +150,29 @@ function hazardsOf(
   const T = r.temperatureK;
   let flash: FlashOnRelease | null = null;
   let storedEnergy: Hazards['storedEnergy'] = null;
+  // The flash and the stored energy both expand to the same atmosphere: its saturation once.
+  let atmSat: ReturnType<typeof saturation> | undefined;
+  const atm = () => (atmSat ??= atmosphereSaturation(r.atmospherePa));
   const energy = (workPerKg: number, m: number) => ({ expansionWorkJ: workPerKg * m, tntEquivalentKg: (workPerKg * m) / TNT_ENERGY_J_PER_KG });
   switch (inventory.regime) {
     case 'not-weighed':
       // Liquid assumed present at T: the flash figure per kg still holds.
-      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, null);
+      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, null, atm());
       break;
     case 'two-phase': {
-      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, inventory.liquidMassKg);
+      flash = flashOnRelease(sat.liquid.h, sat.liquid.v, r.atmospherePa, inventory.liquidMassKg, atm());
       const x = inventory.quality;
       const u = sat.liquid.u + x * (sat.vapor.u - sat.liquid.u);
       const s = sat.liquid.s + x * (sat.vapor.s - sat.liquid.s);
-      storedEnergy = energy(expansionWorkPerKgJ(u, s, sat.p, r.atmospherePa), inventory.netMassKg);
+      storedEnergy = energy(expansionWorkPerKgJ(u, s, sat.p, r.atmospherePa, atm()), inventory.netMassKg);
       break;
     }
     case 'liquid-full': {
       const found = contentsState(T, inventory.meanSpecificVolumeM3PerKg);
       if (found.kind === 'state' && found.state.phase !== 'two-phase') {
         const st = found.state;
-        flash = flashOnRelease(st.h, st.v, r.atmospherePa, inventory.netMassKg);
-        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa), inventory.netMassKg);
+        flash = flashOnRelease(st.h, st.v, r.atmospherePa, inventory.netMassKg, atm());
+        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa, atm()), inventory.netMassKg);
       }
       break;
     }
@@ -177,7 +180,7 @@ function hazardsOf(
       const found = contentsState(T, inventory.meanSpecificVolumeM3PerKg);
       if (found.kind === 'state' && found.state.phase !== 'two-phase') {
         const st = found.state;
-        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa), inventory.netMassKg);
+        storedEnergy = energy(expansionWorkPerKgJ(st.u, st.s, st.p, r.atmospherePa, atm()), inventory.netMassKg);
       }
       break;
     }

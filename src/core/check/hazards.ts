@@ -8,7 +8,7 @@
 // Margins: MAWP is the maximum gauge pressure at the top of the vessel, the basis of the relief
 // setting (ASME BPVC Section VIII Div. 1 definition).
 
-import { IF97, saturation, saturationPressure, saturationTemperature, stateTP } from '../steam/index.ts';
+import { IF97, saturation, saturationPressure, saturationTemperature, stateTP, type SaturationState } from '../steam/index.ts';
 import { contentsState } from './inventory.ts';
 
 /** Energy of TNT used for equivalence, J/kg (4.184 MJ/kg, the conventional figure; common practice). */
@@ -25,12 +25,17 @@ export interface FlashOnRelease {
   totalFlashSteamVolumeM3: number | null;
 }
 
+/** Both saturated phases at an atmospheric pressure, Pa: what the flash and the stored energy expand to. */
+export function atmosphereSaturation(atmospherePa: number): SaturationState {
+  return saturation(saturationTemperature(atmospherePa));
+}
+
 /**
  * Flash of liquid with specific enthalpy h₁ (J/kg) and specific volume v₁ (m³/kg) released
- * adiabatically to atmospherePa (Pa, 30–110 kPa). liquidMassKg ≥ 0 or null.
+ * adiabatically to atmospherePa (Pa, 30–110 kPa). liquidMassKg ≥ 0 or null. atm: atmosphereSaturation(atmospherePa),
+ * when the caller has it already.
  */
-export function flashOnRelease(h1: number, v1: number, atmospherePa: number, liquidMassKg: number | null): FlashOnRelease {
-  const atm = saturation(saturationTemperature(atmospherePa));
+export function flashOnRelease(h1: number, v1: number, atmospherePa: number, liquidMassKg: number | null, atm = atmosphereSaturation(atmospherePa)): FlashOnRelease {
   const flashFraction = Math.max(0, (h1 - atm.liquid.h) / (atm.vapor.h - atm.liquid.h));
   const perKg = flashFraction * atm.vapor.v;
   return {
@@ -44,12 +49,13 @@ export function flashOnRelease(h1: number, v1: number, atmospherePa: number, liq
 /**
  * Work of an isentropic expansion to atmosphere of 1 kg with internal energy u₁ (J/kg), entropy
  * s₁ (J/(kg·K)) and pressure p₁ (Pa): u₁ − u₂(s₁, p_atm), ≥ 0 (0 when p₁ ≤ p_atm). The usual
- * vessel-burst energy estimate (method from memory).
+ * vessel-burst energy estimate (method from memory). atmAtm: atmosphereSaturation(atmospherePa), when the
+ * caller has it already.
  */
-export function expansionWorkPerKgJ(u1: number, s1: number, p1: number, atmospherePa: number): number {
+export function expansionWorkPerKgJ(u1: number, s1: number, p1: number, atmospherePa: number, atmAtm?: SaturationState): number {
   if (p1 <= atmospherePa) return 0;
-  const Tb = saturationTemperature(atmospherePa);
-  const atm = saturation(Tb);
+  const atm = atmAtm ?? atmosphereSaturation(atmospherePa);
+  const Tb = atm.T;
   let u2: number;
   if (s1 >= atm.liquid.s && s1 <= atm.vapor.s) {
     const x = (s1 - atm.liquid.s) / (atm.vapor.s - atm.liquid.s);

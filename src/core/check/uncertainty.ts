@@ -193,7 +193,7 @@ export function inventoryBands(args: {
     low: Math.min(m, Math.max(0, here.mLiq - liquidBand.plusMinus)),
     high: Math.min(m, Math.max(0, here.mLiq + liquidBand.plusMinus)),
   };
-  const liquidLevelM = args.geometry === undefined || args.geometry.shape === 'stated-volume' ? null : levelBand(args.geometry, args);
+  const liquidLevelM = args.geometry === undefined || args.geometry.shape === 'stated-volume' ? null : levelBand(args.geometry, args, here.vf, here.vg);
   return { quality, liquidMassKg, liquidLevelM };
 }
 
@@ -215,16 +215,20 @@ function clamp01(x: number): number {
 function levelBand(
   geometry: Exclude<VesselGeometry, { shape: 'stated-volume' }>,
   args: { temperatureK: number; massKg: number; volumeM3: number; massToleranceKg: number; temperatureToleranceK: number; volumeToleranceM3: number },
+  vfHere: number,
+  vgHere: number,
 ): Band<'weight' | 'temperature' | 'volume'> {
   const drawn = vesselVolume(geometry);
   const levelAt = levelSolver(geometry);
-  const level = (T: number, m: number, V: number) => {
-    const vf = saturatedLiquidVolume(T);
-    const vg = saturatedVaporVolume(T);
+  const { temperatureK: T, massKg: m, volumeM3: V } = args;
+  // v_f and v_g at the reading's own T (vfHere, vgHere, m³/kg, as inventoryBands has them) serve
+  // four of the six levels (the weight and volume limits).
+  const level = (t: number, m: number, V: number) => {
+    const vf = t === T ? vfHere : saturatedLiquidVolume(t);
+    const vg = t === T ? vgHere : saturatedVaporVolume(t);
     const liquidM3 = (vf * (m * vg - V)) / (vg - vf);
     return levelAt(Math.min(Math.max(liquidM3, 0), drawn));
   };
-  const { temperatureK: T, massKg: m, volumeM3: V } = args;
   const across = (limit: number, lo: number, hi: number, at: (x: number) => number) =>
     limit === 0 || hi <= lo ? 0 : (Math.abs(at(hi) - at(lo)) * limit) / (hi - lo);
   const dT = args.temperatureToleranceK;
