@@ -124,3 +124,13 @@ export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string
   const { exportBackupParts } = await import('../../store/transfer.ts');
   return { name: `tankside-backup-${stamp}.json`, blob: new Blob(await exportBackupParts(), { type: 'application/json' }) };
 }
+
+/** Saves a record of another kind (a cycle, a periodic test); `draftKey`'s draft is deleted in the same transaction. */
+export function appendRecord(kind: store.RecordKind, record: store.NewKindRecord, draftKey?: string): Promise<store.KindRecord> {
+  return store.appendRecord(kind, record, draftKey === undefined ? {} : { clearDraft: draftKey });
+}
+
+/** The newest records of a kind (one vessel's when given), newest first. */
+export async function recentRecords(kind: store.RecordKind, vesselId?: string, limit = 20): Promise<store.KindRecord[]> {
+  return (await store.listRecords({ kind, limit, ...(vesselId ? { vesselId } : {}) })).records;
+}
