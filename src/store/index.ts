@@ -57,6 +57,7 @@ export {
   loadDraft,
   clearDraft,
   deviceId,
+  syncServer,
   requestPersistence,
   persistenceState,
   backupState,

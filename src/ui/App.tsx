@@ -5,6 +5,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import { SCREENS, useRoute, type Route } from './router.ts';
 import { UpdateBanner } from './components/UpdateBanner.tsx';
 import { TabBar } from './components/TabBar.tsx';
+import { AppFooter } from './components/AppFooter.tsx';
 import { lazyScreen } from './components/LazyScreen.tsx';
 import { useAppReady, useSaveError } from './state/app-state.ts';
 import { CheckScreen } from './screens/CheckScreen.tsx';
@@ -18,6 +19,7 @@ const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').t
 const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
 const CyclesScreen = lazyScreen('Cycle record', () => import('./cycles/CyclesScreen.tsx').then((m) => m.CyclesScreen));
 const SteamTestsScreen = lazyScreen('Steam and chamber tests', () => import('./cycles/SteamTestsScreen.tsx').then((m) => m.SteamTestsScreen));
+const SyncScreen = lazyScreen('Plant sync', () => import('./sync/SyncScreen.tsx').then((m) => m.SyncScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 
 export function App() {
@@ -42,7 +44,7 @@ export function App() {
         {saveError ? <p class="panel field-error" role="alert">{saveError}</p> : null}
         {ready === 'opening' ? <p class="panel" aria-busy="true">Opening this device's records…</p> : <Screen route={route} />}
       </main>
-      <footer class="app-footer"><span class="app-version">Tankside {__APP_VERSION__}</span> · works offline · no data leaves this device</footer>
+      <AppFooter />
     </>
   );
 }
@@ -60,5 +62,6 @@ function Screen({ route }: { route: Route }) {
     case 'labels': return <LabelsScreen />;
     case 'cycles': return <CyclesScreen />;
     case 'steam-tests': return <SteamTestsScreen />;
+    case 'sync': return <SyncScreen param={route.param} />;
   }
 }

@@ -192,7 +192,7 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
-    for (const name of ['Fill plan', 'Review', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -200,6 +200,13 @@ describe('every screen', () => {
     await page.goto(`${server.url}#/labels`);
     await expect.poll(() => page.locator('.vessel-label').count()).toBe(3);
     await inspect('12-labels');
+  });
+
+  it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {
+    await page.goto(`${server.url}#/sync`);
+    await page.locator('[data-sync-enrolment="none"]').waitFor();
+    expect(await page.locator('footer').getAttribute('data-sync-promise')).toBe('local');
+    await inspect('14-sync');
   });
 
   it('Review', async () => {
