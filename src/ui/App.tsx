@@ -17,6 +17,8 @@ const ConvertScreen = lazyScreen('Convert', () => import('./screens/ConvertScree
 const SettingsScreen = lazyScreen('Settings', () => import('./screens/SettingsScreen.tsx').then((m) => m.SettingsScreen));
 const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').then((m) => m.MoreScreen));
 const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
+const CyclesScreen = lazyScreen('Cycle record', () => import('./cycles/CyclesScreen.tsx').then((m) => m.CyclesScreen));
+const SteamTestsScreen = lazyScreen('Steam and chamber tests', () => import('./cycles/SteamTestsScreen.tsx').then((m) => m.SteamTestsScreen));
 const SyncScreen = lazyScreen('Plant sync', () => import('./sync/SyncScreen.tsx').then((m) => m.SyncScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 
@@ -58,6 +60,8 @@ function Screen({ route }: { route: Route }) {
     case 'settings': return <SettingsScreen />;
     case 'more': return <MoreScreen />;
     case 'labels': return <LabelsScreen />;
+    case 'cycles': return <CyclesScreen />;
+    case 'steam-tests': return <SteamTestsScreen />;
     case 'sync': return <SyncScreen param={route.param} />;
   }
 }

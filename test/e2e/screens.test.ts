@@ -192,7 +192,7 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
-    for (const name of ['Fill plan', 'Review', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -214,6 +214,25 @@ describe('every screen', () => {
     await page.locator('#rf-vessel').waitFor();
     await page.locator('.review-screen[data-shown="1"]').waitFor();
     await inspect('13-review');
+  });
+
+  it('Cycle record', async () => {
+    await page.goto(`${server.url}#/cycles`);
+    await page.locator('.cycles-screen[data-draft="loaded"]').waitFor();
+    await pickVessel(page, '#cycle-vessel', 'DEMO-ST-01');
+    await page.locator('.live-cycle[data-live-state="idle"]').waitFor();
+    await inspect('14-cycles');
+  });
+
+  it('Steam and chamber tests', async () => {
+    await page.goto(`${server.url}#/steam-tests`);
+    await page.locator('.steam-tests-screen[data-draft="loaded"]').waitFor();
+    await pickVessel(page, '#test-vessel', 'DEMO-ST-01');
+    await page.selectOption('#test-kind', 'noncondensable-gas');
+    await page.fill('#st-gas', '4.2');
+    await page.fill('#st-cond', '100');
+    await page.locator('[data-test="noncondensable-gas"][data-test-outcome]').waitFor();
+    await inspect('15-steam-tests');
   });
 
   it('Settings', async () => {

@@ -9,6 +9,7 @@ import { ReviewTotals } from './ReviewTotals.tsx';
 import { ChainPanel } from './ChainPanel.tsx';
 import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
+import { KindRecords } from './KindRecords.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
 import { ReviewPager, reviewVessels } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
@@ -113,6 +114,7 @@ export function ReviewScreen() {
         {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
         <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />
         <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+        <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
       </div>
       {vessel && reportFor === vessel.id ? (
         <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} />

@@ -150,3 +150,12 @@ export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string
   const { exportBackupParts } = await import('../../store/transfer.ts');
   return { name: `tankside-backup-${stamp}.json`, blob: new Blob(await exportBackupParts(), { type: 'application/json' }) };
 }
+
+/** Saves a record of another kind (a cycle, a periodic test); `draftKey`'s draft is deleted in the same transaction. */
+export async function appendRecord(kind: store.RecordKind, record: store.NewKindRecord, draftKey?: string): Promise<store.KindRecord> {
+  // Through the on-demand surface, as exportFile: only the cycle and test screens save these, and
+  // their code stays out of the start-up JavaScript.
+  const { appendRecord: append } = await import('../../store/transfer.ts');
+  return append(kind, record, draftKey === undefined ? {} : { clearDraft: draftKey });
+}
+
