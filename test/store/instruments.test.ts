@@ -119,3 +119,16 @@ describe('a new vessel joins the register', () => {
     expect(fitted.temperature!.instrument.spec).toMatchObject({ tag: 'NEW-1 TI', kind: 'rtd', tolerance: { kind: 'iec-60751', sensorClass: 'B' } });
   });
 });
+
+describe('a check records the instruments it used', () => {
+  it('the vessel spec the check was evaluated with is its snapshot; without one, the stored vessel\'s', async () => {
+    const { appendCheck } = await import('../../src/store/index.ts');
+    const { sampleCheck } = await import('./fixtures.ts');
+    const v = await addVessel({ tag: 'V-3', spec: SPEC });
+    const used = { ...SPEC, instrumentsUsed: [{ role: 'pressure', instrumentId: 'i', tag: 'PI-1', kind: 'pressure-gauge', calibrationId: 'c', calibratedMs: 1, due: 'in-date', dueMs: 2, limit: { class: 1, indicator: 0, calibration: 0, drift: 0, plusMinus: 1 }, driftSource: 'kind-setting', foundOutOfTolerance: false }] } as typeof SPEC;
+    const a = await appendCheck({ ...sampleCheck(v.id), vesselSpec: used });
+    const b = await appendCheck(sampleCheck(v.id));
+    expect(a.vessel.spec).toEqual(used);
+    expect(b.vessel.spec).toEqual(SPEC);
+  });
+});

@@ -6,6 +6,7 @@ import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
 import { isMassUnit, type MassUnit } from '../units/mass.ts';
 import { isPressureUnit, type PressureUnit } from '../units/pressure.ts';
 import { isTemperatureUnit, type TemperatureUnit } from '../units/temperature.ts';
+import type { InstrumentUse } from '../instrument/instrument-use.ts';
 
 /** The units the vessel's own instruments show: its gauge's dial, its thermometer, its scale. */
 export interface ReadingUnits {
@@ -83,6 +84,12 @@ export interface VesselSpec {
    * does not use them. Absent on vessels saved before they existed.
    */
   readingUnits?: ReadingUnits;
+  /**
+   * On a check's copy of the vessel: the register instruments whose limits replaced the typed
+   * gauge and thermometer figures above (vesselWithInstruments). Absent on a vessel record, and on
+   * checks saved before the register or on vessels without one.
+   */
+  instrumentsUsed?: InstrumentUse[];
 }
 
 /** Vessel services the hazards know (the brief's list of closed vessels). */

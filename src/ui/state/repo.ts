@@ -1,7 +1,7 @@
 // The UI's only door to the store: small functions in the words the screens use.
 import * as store from '../../store/index.ts';
-import type { VesselSpec } from '../../core/index.ts';
-import type { CheckRecord, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
+import type { FittedForCheck, FittedInstrument, VesselSpec } from '../../core/index.ts';
+import type { CheckRecord, InstrumentHistory, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
 import { StoreError } from '../../store/index.ts';
 import type { AppSettings } from './settings-model.ts';
 
@@ -123,4 +123,18 @@ export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string
   }
   const { exportBackupParts } = await import('../../store/transfer.ts');
   return { name: `tankside-backup-${stamp}.json`, blob: new Blob(await exportBackupParts(), { type: 'application/json' }) };
+}
+
+/** A register instrument as the core takes it: its spec and calibrations with their ids. */
+export function fittedOf(h: InstrumentHistory): FittedInstrument {
+  return { instrumentId: h.instrument.id, spec: h.instrument.spec, calibrations: h.calibrations.map((c) => ({ ...store.calibrationFigures(c), calibrationId: c.id })) };
+}
+
+/** The vessel's pressure and temperature instruments in force at `atMs` (now by default), for a check's band; {} for a vessel without a register. */
+export async function fittedForCheck(vesselId: string, atMs = Date.now()): Promise<FittedForCheck> {
+  const fitted = await store.fittedInstruments(vesselId, atMs);
+  const out: FittedForCheck = {};
+  if (fitted.pressure) out.pressure = fittedOf(fitted.pressure);
+  if (fitted.temperature) out.temperature = fittedOf(fitted.temperature);
+  return out;
 }
