@@ -2,7 +2,7 @@
 // instrument sits on which vessel (append-only fittings, so a swap keeps both histories). Plain
 // JSON like every record here (null, never undefined), SI inside the instrument's spec and the
 // calibration's figures, times as ISO 8601 with the device's offset plus their ms for sorting.
-import type { CalibrationRecord, InstrumentKind, InstrumentSpec } from '../core/index.ts';
+import type { CalibrationRecord, InstrumentKind, InstrumentSpec } from '../core/instrument/index.ts';
 import type { IsoDateTime } from './records.ts';
 
 /** The kinds the register accepts, as stored (the core's INSTRUMENT_KINDS; a test holds the two equal). */

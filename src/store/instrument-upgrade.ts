@@ -3,7 +3,7 @@
 // readers keep using its embedded figures). The mapping is the one src/core/instrument/README.md
 // ("Today's vessels") gives, so with no calibration on record a check's band is what it was.
 // Plain data in, plain data out: it runs inside the upgrade transaction, so nothing is awaited.
-import type { InstrumentSpec } from '../core/index.ts';
+import type { InstrumentSpec } from '../core/instrument/index.ts';
 import type { FittingRecord, InstrumentRecord, InstrumentRole } from './instrument-records.ts';
 import type { IsoDateTime, VesselRecord } from './records.ts';
 

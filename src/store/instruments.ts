@@ -10,7 +10,7 @@ import {
   INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, KINDS_OF_ROLE,
   type CalibrationEntry, type FittingRecord, type InstrumentHistory, type InstrumentRecord, type InstrumentRole, type NewCalibration, type NewInstrument,
 } from './instrument-records.ts';
-import type { InstrumentSpec } from '../core/index.ts';
+import type { InstrumentSpec } from '../core/instrument/index.ts';
 import { formatIsoWithOffset } from './time.ts';
 import { cloneJson, invalid, requireJsonObject, requireText, requireUuid } from './validate.ts';
 

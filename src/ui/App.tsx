@@ -16,6 +16,7 @@ const ConvertScreen = lazyScreen('Convert', () => import('./screens/ConvertScree
 const SettingsScreen = lazyScreen('Settings', () => import('./screens/SettingsScreen.tsx').then((m) => m.SettingsScreen));
 const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').then((m) => m.MoreScreen));
 const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
+const InstrumentsScreen = lazyScreen('Instruments', () => import('./instruments/InstrumentsScreen.tsx').then((m) => m.InstrumentsScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 
 export function App() {
@@ -56,5 +57,6 @@ function Screen({ route }: { route: Route }) {
     case 'settings': return <SettingsScreen />;
     case 'more': return <MoreScreen />;
     case 'labels': return <LabelsScreen />;
+    case 'instruments': return <InstrumentsScreen param={route.param} />;
   }
 }

@@ -2,7 +2,7 @@
 // swaps, and bad input refused with the field named and nothing saved changed. Tags and figures are
 // invented test data.
 import { describe, expect, it } from 'vitest';
-import { INSTRUMENT_KINDS, type InstrumentSpec } from '../../src/core/index.ts';
+import { INSTRUMENT_KINDS, type InstrumentSpec } from '../../src/core/instrument/index.ts';
 import {
   INSTRUMENT_KIND_IDS, StoreError, addCalibration, addInstrument, addVessel, calibrationsOf, fitInstrument, fittedAt, fittedInstruments,
   fittingsOfInstrument, fittingsOfVessel, getInstrument, instrumentHistory, listInstruments, listRegister, retireInstrument, updateInstrument,

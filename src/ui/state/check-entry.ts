@@ -3,7 +3,8 @@
 // the typing a moment later (when the keys pause), so a keystroke repaints only its field and the
 // strip.
 import { useEffect, useMemo, useState } from 'preact/hooks';
-import type { FittedForCheck, ReadingUnits, VesselSpec } from '../../core/index.ts';
+import type { ReadingUnits, VesselSpec } from '../../core/index.ts';
+import type { FittedForCheck } from '../../core/instrument/vessel-instruments.ts';
 import * as repo from './repo.ts';
 import { useSettings, useVessels } from './app-state.ts';
 import { useDraft } from './drafts.ts';

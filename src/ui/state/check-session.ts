@@ -1,10 +1,9 @@
 // One check from entry to log: the draft → Reading → evaluateCheck → what the screen shows, and
 // the record saved to the log. All computation is the core's.
 import { errorText, type FieldUnit } from './error-text.ts';
-import {
-  InputError, evaluateCheck, isMassUnit, isPressureUnit, isTemperatureUnit, pressureFromPa, vesselWithInstruments, withInstrumentFindings,
-  type CheckResult, type FittedForCheck, type VesselSpec,
-} from '../../core/index.ts';
+import { InputError, evaluateCheck, isMassUnit, isPressureUnit, isTemperatureUnit, pressureFromPa, type CheckResult, type VesselSpec } from '../../core/index.ts';
+// The instruments room by its file, not through an index (see src/core/instrument/README.md, "Imports").
+import { vesselWithInstruments, withInstrumentFindings, type FittedForCheck } from '../../core/instrument/vessel-instruments.ts';
 import { gaugeSpanError } from './gauge-span.ts';
 import type { Reading } from '../../core/index.ts';
 import type { CheckRecord, StoredCaution, TypedInput, VesselRecord } from '../../store/index.ts';

@@ -6,9 +6,11 @@
 import {
   LENGTH_UNITS, MASS_UNITS, PRESSURE_UNITS, TEMPERATURE_UNITS, VOLUME_UNITS, lengthFromM, massFromKg, pressureFromPa,
   temperatureDifferenceFromK, temperatureFromK, volumeFromM3, vesselLevelSpanM,
-  CALIBRATION_DUE_WORDS, isCurrentResult, thermometerLimitsK, type InstrumentUse, type MassUnit, type PressureUnit, type StoredCheckResult, type TemperatureUnit, type VesselSpec,
+  isCurrentResult, thermometerLimitsK, type MassUnit, type PressureUnit, type StoredCheckResult, type TemperatureUnit, type VesselSpec,
 } from '../../core/index.ts';
 import type { StoredCaution as Caution } from '../../store/index.ts';
+import { CALIBRATION_DUE_WORDS } from '../../core/instrument/calibration-due.ts';
+import type { InstrumentUse } from '../../core/instrument/instrument-use.ts';
 import { saturationChartData } from './chart-data.ts';
 import { inPreferredUnits } from './caution-text.ts';
 import { formatNumber, formatToBand, formatWithBand } from './format.ts';

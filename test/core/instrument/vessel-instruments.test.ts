@@ -2,10 +2,8 @@
 // at the check's time, the copy names the instruments and calibrations, and an overdue instrument is
 // a finding. The vessel, tags and figures are invented test data.
 import { describe, expect, it } from 'vitest';
-import {
-  DEFAULT_INSTRUMENT_SETTINGS, MS_PER_DAY, MS_PER_YEAR, evaluateCheck, saturationPressure, vesselWithInstruments, withInstrumentFindings,
-  type FittedInstrument, type Reading, type VesselSpec,
-} from '../../../src/core/index.ts';
+import { evaluateCheck, saturationPressure, type Reading, type VesselSpec } from '../../../src/core/index.ts';
+import { DEFAULT_INSTRUMENT_SETTINGS, MS_PER_DAY, MS_PER_YEAR, vesselWithInstruments, withInstrumentFindings, type FittedInstrument } from '../../../src/core/instrument/index.ts';
 import { expectInputError } from '../units/expect-input-error.ts';
 
 const VESSEL: VesselSpec = {
