@@ -524,7 +524,7 @@ describe('the instrument register rung (v6 → current)', () => {
     expect(b.temperature!.instrument.spec).toMatchObject({ kind: 'thermometer', range: { low: 273.15, high: 373.15 }, tolerance: { kind: 'stated', plusMinus: 1 } });
     expect(await fittingsOfVessel(C.id)).toEqual([]);
     const fittings = await fittingsOfVessel(A.id);
-    expect(fittings.map((f) => [f.role, f.fromMs])).toEqual([['pressure', Date.parse(A.createdAt)], ['temperature', Date.parse(A.createdAt)]]);
+    expect(fittings.map((f) => [f.role, f.fromMs]).sort()).toEqual([['pressure', Date.parse(A.createdAt)], ['temperature', Date.parse(A.createdAt)]]);
     expect(await calibrationsOf(a.pressure!.instrument.id)).toEqual([]);
   });
 
