@@ -1,6 +1,6 @@
 // The "tankside-backup" file as a reader takes it (BACKUP-FORMAT.md is the reference): its shapes,
 // its limits, and validation that refuses the whole file at the first field that breaks a rule.
-// Reads format versions 1 and 2; writes (backup.ts) version 2.
+// Reads format versions 1, 2 and 3; writes (backup.ts) BACKUP_FORMAT_VERSION.
 import { StoreError } from './errors.ts';
 import { requireCautions, requireInputs, TEXT_LIMITS } from './checks.ts';
 import { breathe, throwIfAborted } from './integrity.ts';
@@ -8,10 +8,13 @@ import type { CheckRecord, IsoDateTime, JsonObject, PublicJwk, VesselRecord } fr
 import { parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, HEX64, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 import { DESCRIPTION_MAX, TAG_MAX, tagKeyOf } from './vessels.ts';
+import { EMPTY_REGISTER, validateCalibrationRecord, validateFittingRecord, validateInstrumentRecord, type BackupRegister } from './backup-register.ts';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-/** The version this app writes; it reads this one and every one before it. */
-export const BACKUP_FORMAT_VERSION = 2;
+/** The version this app writes; it reads this one and every one before it. 3: the instrument register (renumbered at merge if another room took 3 first). */
+export const BACKUP_FORMAT_VERSION = 3;
+/** The first version with the instrument register's lists. */
+export const REGISTER_FORMAT_VERSION = BACKUP_FORMAT_VERSION;
 /** Refused before parsing: a file longer than maxChars (UTF-16 code units), or holding more records. */
 export interface BackupLimits {
   maxChars: number;
@@ -51,8 +54,8 @@ export interface OtherRecord {
 /** A parsed, validated backup. */
 export interface BackupDocument {
   format: typeof BACKUP_FORMAT;
-  /** The version the file was written as (1 or 2). */
-  formatVersion: 1 | 2;
+  /** The version the file was written as (1 to BACKUP_FORMAT_VERSION). */
+  formatVersion: number;
   exportedAt: IsoDateTime;
   vessels: VesselRecord[];
   checks: CheckRecord[];
@@ -60,6 +63,8 @@ export interface BackupDocument {
   others: OtherRecord[];
   chains: ChainHead[];
   signatures: FileSignature[];
+  /** The instrument register (from REGISTER_FORMAT_VERSION on); absent or empty before it, and in a plant sync's pull. */
+  register?: BackupRegister;
 }
 
 export function bad(field: string, problem: string): StoreError {
@@ -114,6 +119,7 @@ const CHAIN_KEYS_V1 = ['deviceId', 'count', 'headSeq', 'headHash'] as const;
 const CHAIN_KEYS = [...CHAIN_KEYS_V1, 'publicKey'] as const;
 const TOP_KEYS_V1 = ['format', 'formatVersion', 'exportedAt', 'vessels', 'checks', 'chains'] as const;
 const TOP_KEYS = [...TOP_KEYS_V1, 'signatures'] as const;
+const TOP_KEYS_REGISTER = [...TOP_KEYS, 'instruments', 'calibrations', 'fittings'] as const;
 const SIGNATURE_KEYS = ['deviceId', 'seq', 'signature'] as const;
 const JWK_KEYS = ['crv', 'kty', 'x', 'y'] as const;
 /** Chain fields a record of another kind must carry, and may carry beside anything else. */
@@ -299,8 +305,8 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     throw bad('formatVersion', `${top['formatVersion']} was written by a newer Tankside; update the app, then import`);
   }
   const version = top['formatVersion'];
-  if (version !== 1 && version !== 2) throw bad('formatVersion', `expected 1 or ${BACKUP_FORMAT_VERSION}`);
-  requireKeys('file', top, version === 1 ? TOP_KEYS_V1 : TOP_KEYS);
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) throw bad('formatVersion', `expected a whole number from 1 to ${BACKUP_FORMAT_VERSION}`);
+  requireKeys('file', top, version === 1 ? TOP_KEYS_V1 : version < REGISTER_FORMAT_VERSION ? TOP_KEYS : TOP_KEYS_REGISTER);
   requireIso('exportedAt', top['exportedAt']);
   const vessels = requireList('vessels', top['vessels'], limits.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
   const listed = requireList('checks', top['checks'], limits.maxChecks);
@@ -310,7 +316,7 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     if (i % VALIDATE_GROUP === 0) yield;
     const item = listed[i];
     // From v2 a record may name its kind; one without is a check, one of another kind is kept aside.
-    if (version === 2 && typeof item === 'object' && item !== null && !Array.isArray(item) && 'kind' in item) {
+    if (version >= 2 && typeof item === 'object' && item !== null && !Array.isArray(item) && 'kind' in item) {
       others.push(validateOther(`checks[${i}]`, item as Record<string, unknown>));
     } else {
       checks.push(validateCheck(`checks[${i}]`, item));
@@ -327,13 +333,21 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     return { deviceId: head['deviceId'] as string, count: head['count'] as number, headSeq: head['headSeq'] as number, headHash: head['headHash'] as string, publicKey };
   });
   const signatures: FileSignature[] = [];
-  if (version === 2) {
+  if (version >= 2) {
     const signed = requireList('signatures', top['signatures'], limits.maxChecks);
     for (let i = 0; i < signed.length; i += 1) {
       if (i % VALIDATE_GROUP === 0) yield;
       signatures.push(validateSignature(`signatures[${i}]`, signed[i]));
     }
   }
+  const register: BackupRegister = version < REGISTER_FORMAT_VERSION ? EMPTY_REGISTER : {
+    instruments: requireList('instruments', top['instruments'], limits.maxVessels).map((v, i) => validateInstrumentRecord(bad, `instruments[${i}]`, v)),
+    calibrations: requireList('calibrations', top['calibrations'], limits.maxChecks).map((v, i) => validateCalibrationRecord(bad, `calibrations[${i}]`, v)),
+    fittings: requireList('fittings', top['fittings'], limits.maxChecks).map((v, i) => validateFittingRecord(bad, `fittings[${i}]`, v)),
+  };
+  requireUnique('instruments', register.instruments.map((r) => r.id));
+  requireUnique('calibrations', register.calibrations.map((r) => r.id));
+  requireUnique('fittings', register.fittings.map((r) => r.id));
   requireUnique('vessels', vessels.map((v) => v.id));
   requireUnique('checks', [...checks.map((c) => c.id), ...others.map((o) => o.id)]);
   requireUnique('chains', chains.map((h) => h.deviceId));
@@ -342,7 +356,7 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
   signatures.forEach((s, i) => {
     if (!keyed.has(s.deviceId)) throw bad(`signatures[${i}]`, `device ${s.deviceId} has no publicKey in chains`);
   });
-  return { format: BACKUP_FORMAT, formatVersion: version, exportedAt: top['exportedAt'] as string, vessels, checks, others, chains, signatures };
+  return { format: BACKUP_FORMAT, formatVersion: version, exportedAt: top['exportedAt'] as string, vessels, checks, others, chains, signatures, register };
 }
 
 /** False only when no key in `text` can be one of FORBIDDEN_KEYS once parsed. */
