@@ -8,7 +8,8 @@ import type { CheckRecord, IsoDateTime, JsonObject, PublicJwk, VesselRecord } fr
 import { parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, HEX64, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 import { DESCRIPTION_MAX, TAG_MAX, tagKeyOf } from './vessels.ts';
-import { EMPTY_REGISTER, validateCalibrationRecord, validateFittingRecord, validateInstrumentRecord, type BackupRegister } from './backup-register.ts';
+import { EMPTY_REGISTER, type BackupRegister } from './backup-register.ts';
+import { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, type CalibrationEntry, type FittingRecord, type InstrumentRecord } from './instrument-records.ts';
 
 export const BACKUP_FORMAT = 'tankside-backup';
 /** The version this app writes; it reads this one and every one before it. 3: the instrument register (renumbered at merge if another room took 3 first). */
@@ -147,6 +148,81 @@ export function validateVessel(field: string, value: unknown): VesselRecord {
   requireIso(`${field}.createdAt`, v['createdAt']);
   requireIso(`${field}.updatedAt`, v['updatedAt']);
   return v as unknown as VesselRecord;
+}
+
+const INSTRUMENT_KEYS = ['id', 'tag', 'tagKey', 'spec', 'displayUnit', 'description', 'origin', 'retired', 'createdAt', 'updatedAt'] as const;
+const CALIBRATION_KEYS = [
+  'id', 'instrumentId', 'time', 'timeMs', 'asFoundError', 'asLeftError', 'referenceValue', 'nextDue', 'nextDueMs', 'who', 'certificate', 'enteredUnit', 'note', 'enteredAt',
+] as const;
+const FITTING_KEYS = ['id', 'vesselId', 'role', 'instrumentId', 'from', 'fromMs', 'reason', 'enteredAt'] as const;
+
+function finiteOrNull(field: string, value: unknown): void {
+  if (value !== null && (typeof value !== 'number' || !Number.isFinite(value))) throw bad(field, 'expected a finite number or null');
+}
+
+/** One instrument record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateInstrumentRecord(field: string, value: unknown): InstrumentRecord {
+  const v = requireObject(field, value);
+  requireKeys(field, v, INSTRUMENT_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, v['id']);
+    requireText(`${field}.tag`, v['tag'], 1, INSTRUMENT_TEXT_LIMITS.tag);
+    requireJsonObject(`${field}.spec`, v['spec']);
+    requireText(`${field}.displayUnit`, v['displayUnit'], 1, INSTRUMENT_TEXT_LIMITS.displayUnit);
+    requireText(`${field}.description`, v['description'], 0, INSTRUMENT_TEXT_LIMITS.description);
+    requireJsonObject(`${field}.origin`, v['origin']);
+  });
+  const tag = v['tag'] as string;
+  if (tag.trim() !== tag) throw bad(`${field}.tag`, 'has spaces at the start or end');
+  if (v['tagKey'] !== tag.toLowerCase()) throw bad(`${field}.tagKey`, 'does not match the tag');
+  const spec = v['spec'] as Record<string, unknown>;
+  if (spec['tag'] !== tag) throw bad(`${field}.spec.tag`, 'does not match the tag');
+  if (!(INSTRUMENT_KIND_IDS as readonly unknown[]).includes(spec['kind'])) throw bad(`${field}.spec.kind`, `expected one of ${INSTRUMENT_KIND_IDS.join(', ')}`);
+  const origin = v['origin'] as Record<string, unknown>;
+  if (origin['kind'] !== 'entered' && origin['kind'] !== 'from-vessel') throw bad(`${field}.origin.kind`, 'expected "entered" or "from-vessel"');
+  if (typeof v['retired'] !== 'boolean') throw bad(`${field}.retired`, 'expected true or false');
+  requireIso(`${field}.createdAt`, v['createdAt']);
+  requireIso(`${field}.updatedAt`, v['updatedAt']);
+  return v as unknown as InstrumentRecord;
+}
+
+/** One calibration record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateCalibrationRecord(field: string, value: unknown): CalibrationEntry {
+  const c = requireObject(field, value);
+  requireKeys(field, c, CALIBRATION_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, c['id']);
+    requireUuid(`${field}.instrumentId`, c['instrumentId']);
+    requireText(`${field}.who`, c['who'], 1, INSTRUMENT_TEXT_LIMITS.who);
+    requireText(`${field}.certificate`, c['certificate'], 0, INSTRUMENT_TEXT_LIMITS.certificate);
+    requireText(`${field}.enteredUnit`, c['enteredUnit'], 1, INSTRUMENT_TEXT_LIMITS.displayUnit);
+    requireText(`${field}.note`, c['note'], 0, INSTRUMENT_TEXT_LIMITS.note);
+  });
+  if (c['timeMs'] !== requireIso(`${field}.time`, c['time'])) throw bad(`${field}.timeMs`, 'does not match time');
+  if (typeof c['asFoundError'] !== 'number' || !Number.isFinite(c['asFoundError'])) throw bad(`${field}.asFoundError`, 'expected a finite number');
+  finiteOrNull(`${field}.asLeftError`, c['asLeftError']);
+  finiteOrNull(`${field}.referenceValue`, c['referenceValue']);
+  if (c['nextDue'] === null) {
+    if (c['nextDueMs'] !== null) throw bad(`${field}.nextDueMs`, 'expected null when nextDue is null');
+  } else if (c['nextDueMs'] !== requireIso(`${field}.nextDue`, c['nextDue'])) throw bad(`${field}.nextDueMs`, 'does not match nextDue');
+  requireIso(`${field}.enteredAt`, c['enteredAt']);
+  return c as unknown as CalibrationEntry;
+}
+
+/** One fitting record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateFittingRecord(field: string, value: unknown): FittingRecord {
+  const f = requireObject(field, value);
+  requireKeys(field, f, FITTING_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, f['id']);
+    requireUuid(`${field}.vesselId`, f['vesselId']);
+    if (f['instrumentId'] !== null) requireUuid(`${field}.instrumentId`, f['instrumentId']);
+    requireText(`${field}.reason`, f['reason'], 0, INSTRUMENT_TEXT_LIMITS.reason);
+  });
+  if (!(INSTRUMENT_ROLES as readonly unknown[]).includes(f['role'])) throw bad(`${field}.role`, `expected one of ${INSTRUMENT_ROLES.join(', ')}`);
+  if (f['fromMs'] !== requireIso(`${field}.from`, f['from'])) throw bad(`${field}.fromMs`, 'does not match from');
+  requireIso(`${field}.enteredAt`, f['enteredAt']);
+  return f as unknown as FittingRecord;
 }
 
 /** One check record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
@@ -341,9 +417,9 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     }
   }
   const register: BackupRegister = version < REGISTER_FORMAT_VERSION ? EMPTY_REGISTER : {
-    instruments: requireList('instruments', top['instruments'], limits.maxVessels).map((v, i) => validateInstrumentRecord(bad, `instruments[${i}]`, v)),
-    calibrations: requireList('calibrations', top['calibrations'], limits.maxChecks).map((v, i) => validateCalibrationRecord(bad, `calibrations[${i}]`, v)),
-    fittings: requireList('fittings', top['fittings'], limits.maxChecks).map((v, i) => validateFittingRecord(bad, `fittings[${i}]`, v)),
+    instruments: requireList('instruments', top['instruments'], limits.maxVessels).map((v, i) => validateInstrumentRecord(`instruments[${i}]`, v)),
+    calibrations: requireList('calibrations', top['calibrations'], limits.maxChecks).map((v, i) => validateCalibrationRecord(`calibrations[${i}]`, v)),
+    fittings: requireList('fittings', top['fittings'], limits.maxChecks).map((v, i) => validateFittingRecord(`fittings[${i}]`, v)),
   };
   requireUnique('instruments', register.instruments.map((r) => r.id));
   requireUnique('calibrations', register.calibrations.map((r) => r.id));

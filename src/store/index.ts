@@ -34,9 +34,9 @@ export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from '.
 // Instrument register (calibrations and fittings append-only)
 export {
   addInstrument, updateInstrument, retireInstrument, getInstrument, listInstruments, addCalibration, calibrationsOf, instrumentHistory,
-  listRegister, fitInstrument, fittingsOfVessel, fittingsOfInstrument, fittedAt, fittedInstruments, INSTRUMENT_TEXT_LIMITS,
+  listRegister, fitInstrument, fittingsOfVessel, fittingsOfInstrument, fittedAt, fittedInstruments,
 } from './instruments.ts';
-export { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, KINDS_OF_ROLE, calibrationFigures } from './instrument-records.ts';
+export { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE, calibrationFigures } from './instrument-records.ts';
 export type {
   CalibrationEntry, FittingRecord, InstrumentHistory, InstrumentOrigin, InstrumentRecord, InstrumentRole, NewCalibration, NewInstrument,
 } from './instrument-records.ts';

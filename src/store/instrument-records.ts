@@ -10,6 +10,9 @@ export const INSTRUMENT_KIND_IDS = [
   'pressure-gauge', 'pressure-transmitter', 'thermometer', 'rtd', 'barometer', 'weighing-system',
 ] as const satisfies readonly InstrumentKind[];
 
+/** Text limits of the register's fields, characters. */
+export const INSTRUMENT_TEXT_LIMITS = { tag: 64, description: 2000, displayUnit: 16, who: 120, certificate: 120, note: 500, reason: 500 } as const;
+
 /** The place an instrument takes on a vessel: its gauge (or transmitter), its thermometer (or RTD), its scale. */
 export const INSTRUMENT_ROLES = ['pressure', 'temperature', 'weight'] as const;
 export type InstrumentRole = (typeof INSTRUMENT_ROLES)[number];

@@ -39,13 +39,13 @@ export function registerFromVessel(vessel: VesselRecord, now: IsoDateTime, newId
     const id = newId();
     out.instruments.push({
       id, tag, tagKey: tag.trim().toLowerCase(), spec: { tag, ...built.spec }, displayUnit: built.displayUnit,
-      description: `The ${role === 'pressure' ? 'gauge' : 'thermometer'} of vessel ${vessel.tag}, as its accuracies were typed into the vessel.`,
+      description: '',
       origin: { kind: 'from-vessel', vesselId: vessel.id, vesselTag: vessel.tag, note: built.note },
       retired: false, createdAt: now, updatedAt: now,
     });
     out.fittings.push({
       id: newId(), vesselId: vessel.id, role, instrumentId: id, from: vessel.createdAt,
-      fromMs: Number.isFinite(fromMs) ? fromMs : 0, reason: 'register made from the vessel\'s typed instruments (schema upgrade)', enteredAt: now,
+      fromMs: Number.isFinite(fromMs) ? fromMs : 0, reason: 'from the vessel\'s typed instruments', enteredAt: now,
     });
   };
   add('pressure', 'PI', gaugeOf(instruments['pressureGauge'], typeof units['pressure'] === 'string' ? units['pressure'] : 'kPa'));
@@ -65,7 +65,7 @@ function gaugeOf(g: unknown, displayUnit: string): { spec: Omit<InstrumentSpec, 
   if (finite(gauge.indicatorPercentOfSpan) && gauge.indicatorPercentOfSpan > 0) {
     spec.indicatorTolerance = { kind: 'percent-of-span', percentOfSpan: gauge.indicatorPercentOfSpan };
   }
-  return { spec, displayUnit, note: 'Range 0 to the span typed for the vessel (its zero assumed at 0); the drift typed for the vessel applies until a calibration is on record.' };
+  return { spec, displayUnit, note: 'range 0 to the typed span assumed' };
 }
 
 function thermometerOf(instruments: Record<string, unknown>, designK: unknown, displayUnit: string): { spec: Omit<InstrumentSpec, 'tag'>; displayUnit: string; note: string } | null {
@@ -82,8 +82,6 @@ function thermometerOf(instruments: Record<string, unknown>, designK: unknown, d
   } else return null;
   const indicator = instruments['temperatureIndicatorToleranceK'];
   if (finite(indicator) && indicator > 0) spec.indicatorTolerance = { kind: 'stated', plusMinus: indicator };
-  return {
-    spec, displayUnit,
-    note: `Range 0 °C to ${(top - 273.15).toFixed(0)} °C assumed (the vessel's design temperature, at least 100 °C); the drift typed for the vessel applies until a calibration is on record.`,
-  };
+  // The range is not typed for a vessel: 0 °C to its design temperature (at least 100 °C) is assumed, and said.
+  return { spec, displayUnit, note: 'range 0 °C to the design temperature assumed' };
 }

@@ -7,7 +7,7 @@
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import {
-  INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, KINDS_OF_ROLE,
+  INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE,
   type CalibrationEntry, type FittingRecord, type InstrumentHistory, type InstrumentRecord, type InstrumentRole, type NewCalibration, type NewInstrument,
 } from './instrument-records.ts';
 import type { InstrumentSpec } from '../core/instrument/index.ts';
@@ -16,8 +16,6 @@ import { cloneJson, invalid, requireJsonObject, requireText, requireUuid } from 
 
 const STRICT = { durability: 'strict' } as const;
 
-/** Text limits of the register's fields, characters. */
-export const INSTRUMENT_TEXT_LIMITS = { tag: 64, description: 2000, displayUnit: 16, who: 120, certificate: 120, note: 500, reason: 500 } as const;
 
 /** The unit family of each kind: a kind may change only within it (calibration figures are in that unit). */
 const FAMILY = { 'pressure-gauge': 'Pa', 'pressure-transmitter': 'Pa', barometer: 'Pa', thermometer: 'K', rtd: 'K', 'weighing-system': 'kg' } as const;
