@@ -179,7 +179,9 @@ export function calibrationFromDraft(h: InstrumentHistory, d: CalibrationDraft, 
   });
   const errorField = (field: 'asFound' | 'asLeft', name: string) => attempt(field, () => {
     const v = readNumber(d[field], name);
-    if (Math.abs(v) > spanShown) throw new InputError(name, 'out-of-range', v, { min: -spanShown, max: spanShown, unit }, `${name}: ${d[field].trim()} ${unitLabel(unit)} is outside the valid range −${formatNumber(spanShown, 4)} to ${formatNumber(spanShown, 4)} ${unitLabel(unit)} (± the span).`);
+    // The span as a plain number (400, not 400.0): it bounds what may be typed, it is not a measured figure.
+    const limit = String(Number(spanShown.toPrecision(6)));
+    if (Math.abs(v) > spanShown) throw new InputError(name, 'out-of-range', v, { min: -spanShown, max: spanShown, unit }, `${name}: ${d[field].trim()} ${unitLabel(unit)} is outside the valid range −${limit} to ${limit} ${unitLabel(unit)} (± the span).`);
     return toSi(v);
   });
   const asFound = errorField('asFound', 'as-found error');
