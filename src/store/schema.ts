@@ -5,7 +5,7 @@
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
 import { findingMaskOfText } from './facts.ts';
-import { addToLog, MONTH_PART_TARGET, type IdBucket, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
+import { addToLog, MONTH_PART_TARGET, type IdBucket, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
 import type { CalibrationEntry, FittingRecord, InstrumentRecord } from './instrument-records.ts';
 import { registerFromVessel } from './instrument-upgrade.ts';
@@ -29,13 +29,18 @@ export const DB_NAME = 'tankside';
  * - v6: month buckets split by size: logMonthParts (key [vesselId, monthMs, startMs, startId],
  *   index by-month) replaces logMonths, each month's rows moved over in parts of at most
  *   MONTH_PART_TARGET, so a save rewrites one part instead of a whole month.
- * - v7: (another room's rung; skipped here when absent).
+ * - v7 (KINDS_RUNG): records of other kinds than checks (record-kinds.ts) join the chain: logKinds
+ *   (key [kind, vesselKey, timeMs, id], index by-kind-time) lists them per kind, vessel and time.
+ *   A database from before holds none (older versions skipped them on import), so the rung only
+ *   makes the store.
  * - v8 (INSTRUMENT_REGISTER_RUNG): the instrument register: instruments (by-tag), calibrations
  *   (by-instrument on [instrumentId, timeMs, id]) and fittings (by-vessel on [vesselId, fromMs, id],
  *   by-instrument). Every vessel's typed gauge and thermometer become entries fitted to it
  *   (instrument-upgrade.ts); vessel records and checks stay as they were.
  */
-/** The register's rung: one constant, so the lead can renumber it at merge. */
+/** The rung that adds records of other kinds; one constant, so the number can move at a merge. */
+export const KINDS_RUNG = 7;
+/** The register's rung: one constant, so the number can move at a merge. */
 export const INSTRUMENT_REGISTER_RUNG = 8;
 export const DB_VERSION = INSTRUMENT_REGISTER_RUNG;
 
@@ -66,6 +71,7 @@ export interface TanksideDB extends DBSchema {
   logBlocks: { key: [string, number]; value: LogBlock };
   logMonthParts: { key: [string, number, number, string]; value: MonthBucket; indexes: { 'by-month': number } };
   logIds: { key: string; value: IdBucket };
+  logKinds: { key: [string, string, number, string]; value: KindRow; indexes: { 'by-kind-time': [string, number, string] } };
   settings: { key: string; value: JsonValue | DeviceKey | KnownDeviceKey };
   drafts: { key: string; value: DraftRecord };
   instruments: { key: string; value: InstrumentRecord; indexes: { 'by-tag': string } };
@@ -264,6 +270,14 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
           // Already finished.
         }
       });
+    },
+  },
+  {
+    version: KINDS_RUNG,
+    run(db, _tx, next) {
+      db.createObjectStore('logKinds', { keyPath: ['kind', 'vesselKey', 'timeMs', 'id'] })
+        .createIndex('by-kind-time', ['kind', 'timeMs', 'id']);
+      next();
     },
   },
   {

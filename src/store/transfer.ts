@@ -13,6 +13,7 @@ export { recordBackup } from './backup-record.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
 export { exportRegisterCsv, REGISTER_CSV_COLUMNS } from './register-csv.ts';
 export { tallyChecks } from './tally.ts';
+export { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 export type { CheckTally } from './tally.ts';
 export {
   ownChainHead,
