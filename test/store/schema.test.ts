@@ -376,12 +376,7 @@ describe('upgrade ladder', () => {
     }
     const block = { deviceId: D, firstSeq: 1, seqs: [1, 2], texts: records.map((r) => canonicalJson(r)) };
     const old = await rawOpen(6, (db) => {
-      db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
-      db.createObjectStore('settings');
-      db.createObjectStore('drafts');
-      db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
-      db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
-      db.createObjectStore('logIds');
+      createV6(db);
       const tx = upgradeTxOf(db);
       tx.objectStore('vessels').put(vesselV1());
       tx.objectStore('settings').put(D, SETTING_DEVICE_ID);
