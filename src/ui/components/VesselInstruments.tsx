@@ -28,7 +28,8 @@ export function VesselInstruments({ vesselId }: { vesselId: string }) {
     <section class="panel" aria-labelledby="vi-h" data-drift-state={loaded ? 'ready' : error ? 'failed' : 'reading'}>
       <h2 id="vi-h">Instruments of this vessel</h2>
       {error ? <p class="field-error">{error}</p> : null}
-      {loaded && loaded.fitted.length === 0 ? <p>No register instruments fitted.</p> : null}
+      {loaded && loaded.fitted.length === 0 ? <p>No register instruments fitted: checks use the gauge and thermometer figures typed above.</p> : null}
+      {loaded && loaded.fitted.length > 0 ? <p class="hint">Checks take the gauge's and thermometer's limits from these register entries (class, last calibration, drift since), not from the figures typed above; record calibrations on each instrument's page.</p> : null}
       {loaded ? (
         <ul class="list">
           {loaded.fitted.map(({ role, history }) => (
