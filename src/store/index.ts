@@ -67,6 +67,7 @@ export {
   loadDraft,
   clearDraft,
   deviceId,
+  syncServer,
   requestPersistence,
   persistenceState,
   backupState,

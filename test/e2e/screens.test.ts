@@ -192,7 +192,7 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
-    for (const name of ['Fill plan', 'Review', 'Vessel labels', 'Instruments', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Vessel labels', 'Instruments', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -205,10 +205,17 @@ describe('every screen', () => {
   it('Instruments, and one instrument\'s page', async () => {
     await page.goto(`${server.url}#/instruments`);
     await page.locator('[data-register-state="ready"]').waitFor();
-    await inspect('14-instruments');
+    await inspect('16-instruments');
     await page.locator('li[data-tag] a').first().click();
     await page.locator('[data-instrument-state="ready"]').waitFor();
-    await inspect('15-instrument');
+    await inspect('17-instrument');
+  });
+
+  it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {
+    await page.goto(`${server.url}#/sync`);
+    await page.locator('[data-sync-enrolment="none"]').waitFor();
+    expect(await page.locator('footer').getAttribute('data-sync-promise')).toBe('local');
+    await inspect('14-sync');
   });
 
   it('Review', async () => {
