@@ -29,7 +29,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
 
   const save = async (ev: Event) => {
     ev.preventDefault();
-    const built = specFromForm(form);
+    const built = specFromForm(form, vessel?.spec, vessel ? formFromSpec(vessel.spec, prefs) : undefined);
     if (!built.ok) {
       setErrors(built.errors);
       setStatus(`Not saved: ${Object.values(built.errors)[0] ?? 'check the fields'}`);
