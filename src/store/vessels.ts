@@ -4,6 +4,7 @@ import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import type { NewVessel, VesselPatch, VesselRecord } from './records.ts';
 import { formatIsoWithOffset } from './time.ts';
+import { registerFromVessel } from './instrument-upgrade.ts';
 import { cloneJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 
 const STRICT = { durability: 'strict' } as const;
@@ -33,7 +34,8 @@ async function putVessel(record: VesselRecord, what: string): Promise<VesselReco
 
 /**
  * Adds a vessel. `tag` is trimmed, 1–64 characters; `description` up to 2000; `spec` is the check
- * engine's VesselSpec as plain JSON (stored as-is, not interpreted here).
+ * engine's VesselSpec as plain JSON (stored as-is; only its instruments are read, to make their
+ * register entries and fit them, see instrument-upgrade.ts).
  * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
  */
 export async function addVessel(input: NewVessel): Promise<VesselRecord> {
@@ -53,7 +55,22 @@ export async function addVessel(input: NewVessel): Promise<VesselRecord> {
     createdAt: now,
     updatedAt: now,
   };
-  return putVessel(record, `Saving vessel ${tag}`);
+  // Its typed gauge and thermometer join the register in the same transaction, as the upgrade
+  // did for the vessels before it, so every vessel's checks can name their instruments.
+  const register = registerFromVessel(record, now, () => crypto.randomUUID());
+  const db = await getDb();
+  const tx = db.transaction(['vessels', 'instruments', 'fittings'], 'readwrite', STRICT);
+  try {
+    await Promise.all([
+      tx.objectStore('vessels').put(record),
+      ...register.instruments.map((i) => tx.objectStore('instruments').put(i)),
+      ...register.fittings.map((f) => tx.objectStore('fittings').put(f)),
+      tx.done,
+    ]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, `Saving vessel ${tag}`);
+  }
+  return record;
 }
 
 /**

@@ -192,7 +192,7 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
-    for (const name of ['Fill plan', 'Review', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Instruments', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -200,6 +200,15 @@ describe('every screen', () => {
     await page.goto(`${server.url}#/labels`);
     await expect.poll(() => page.locator('.vessel-label').count()).toBe(3);
     await inspect('12-labels');
+  });
+
+  it('Instruments, and one instrument\'s page', async () => {
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('[data-register-state="ready"]').waitFor();
+    await inspect('16-instruments');
+    await page.locator('li[data-tag] a').first().click();
+    await page.locator('[data-instrument-state="ready"]').waitFor();
+    await inspect('17-instrument');
   });
 
   it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {

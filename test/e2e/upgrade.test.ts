@@ -1,4 +1,4 @@
-// Devices upgrading in the real browser: from schema v3 (one IndexedDB record per check) to the log
+// Devices upgrading in the real browser (and, last, from v6 to the instrument register): from schema v3 (one IndexedDB record per check) to the log
 // in blocks, from v4 (every caution's signal words in the month rows) to v5 (the findings'), and
 // from one value per vessel and month to v6's parts of at most 500 rows, and to v7 (records of other kinds
 // beside the checks). The old database is written with raw IndexedDB exactly as that version created it, then the app
@@ -373,3 +373,68 @@ async function v4Layout() {
   }
   return { vessels, blocks, months: [...byMonth.values()], ids: [...idBuckets], records, want };
 }
+
+describe('the instrument register rung in Chromium (v6 → current)', () => {
+  const profile = tempProfile();
+  let server: StaticServer;
+  beforeAll(async () => {
+    server = await startServer(DIST);
+  });
+  afterAll(async () => {
+    await server.close();
+    profile.remove();
+  });
+
+  it('every generated vessel\'s typed gauge and thermometer become register entries fitted to it; the vessel records stay byte for byte', async () => {
+    const vessels = generatedVessels(0x5eed0006, 4, Date.parse('2026-09-01T06:00:00Z'));
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.goto(`${server.url}not-the-app`);
+      await page.evaluate(async ({ vessels }) => {
+        const db = await new Promise<IDBDatabase>((ok, no) => {
+          const r = indexedDB.open('tankside', 6);
+          r.onupgradeneeded = () => {
+            const d = r.result;
+            d.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+            d.createObjectStore('settings');
+            d.createObjectStore('drafts');
+            d.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+            d.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+            d.createObjectStore('logIds');
+          };
+          r.onsuccess = () => ok(r.result);
+          r.onerror = () => no(r.error);
+        });
+        await new Promise<void>((ok, no) => {
+          const tx = db.transaction(['vessels'], 'readwrite');
+          for (const v of vessels) tx.objectStore('vessels').put(v);
+          tx.oncomplete = () => ok();
+          tx.onerror = () => no(tx.error);
+        });
+        db.close();
+      }, { vessels });
+
+      await page.goto(`${server.url}#/instruments`);
+      await page.locator('[data-register-state="ready"]').waitFor();
+      const tags = await page.locator('li[data-tag]').evaluateAll((els) => els.map((e) => e.getAttribute('data-tag')).sort());
+      expect(tags).toEqual(vessels.flatMap((v) => [`${v.tag} PI`, `${v.tag} TI`]).sort());
+      const stored = await page.evaluate(async () => {
+        const db = await new Promise<IDBDatabase>((ok) => { const r = indexedDB.open('tankside'); r.onsuccess = () => ok(r.result); });
+        const all = <T,>(store: string) => new Promise<T[]>((ok) => { const q = db.transaction(store).objectStore(store).getAll(); q.onsuccess = () => ok(q.result as T[]); });
+        const out = { version: db.version, vessels: await all<unknown>('vessels'), fittings: await all<{ vesselId: string; role: string }>('fittings') };
+        db.close();
+        return out;
+      });
+      expect(stored.version).toBe(DB_VERSION);
+      expect(stored.vessels.map((v) => canonicalJson(v as never)).sort()).toEqual(vessels.map((v) => canonicalJson(v as never)).sort());
+      expect(stored.fittings.map((f) => `${f.vesselId} ${f.role}`).sort()).toEqual(vessels.flatMap((v) => [`${v.id} pressure`, `${v.id} temperature`]).sort());
+      // A vessel's page names its fitted instruments.
+      await page.goto(`${server.url}#/vessels/${vessels[0]!.id}`);
+      await page.locator('[data-drift-state="ready"]').waitFor();
+      expect(await page.textContent('[data-drift-state="ready"]')).toContain(`${vessels[0]!.tag} PI`);
+    } finally {
+      await ctx.close();
+    }
+  });
+});

@@ -6,6 +6,7 @@ import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
 import { isMassUnit, type MassUnit } from '../units/mass.ts';
 import { isPressureUnit, type PressureUnit } from '../units/pressure.ts';
 import { isTemperatureUnit, type TemperatureUnit } from '../units/temperature.ts';
+import type { InstrumentUse } from '../instrument/instrument-use.ts';
 import { isLengthUnit, type LengthUnit } from '../units/length.ts';
 import { isVolumeUnit, type VolumeUnit } from '../units/volume.ts';
 import { ELEVATION_RANGE_M } from '../units/atmosphere.ts';
@@ -97,6 +98,12 @@ export interface VesselSpec {
    * was given as a pressure. The engine does not use it.
    */
   siteElevationM?: number;
+  /**
+   * On a check's copy of the vessel: the register instruments whose limits replaced the typed
+   * gauge and thermometer figures above (vesselWithInstruments). Absent on a vessel record, and on
+   * checks saved before the register or on vessels without one.
+   */
+  instrumentsUsed?: InstrumentUse[];
 }
 
 /** Each dimension's unit as typed in the vessel editor (each absent: the person's length or volume unit). */

@@ -3,6 +3,7 @@ import { useState } from 'preact/hooks';
 import { discardDraft, useDraft } from '../state/drafts.ts';
 import { VesselFields } from './VesselFields.tsx';
 import { VesselHistory } from './VesselHistory.tsx';
+import { VesselInstruments } from './VesselInstruments.tsx';
 import { navigate } from '../router.ts';
 import * as repo from '../state/repo.ts';
 import type { VesselRecord } from '../state/repo.ts';
@@ -77,6 +78,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
         ) : null}
       </div>
     </form>
+    {vessel ? <VesselInstruments vesselId={vessel.id} /> : null}
     {vessel ? <VesselHistory vesselId={vessel.id} /> : null}
     </>
   );

@@ -8,6 +8,7 @@ import { trendGeometry, trendPoints, TREND_MAX_POINTS, type StandingHazard, type
 import { periodText, reportRow, reportSummary } from './report-data.ts';
 import { outcomeLabel } from './record-facts.ts';
 import { KindRecords } from './KindRecords.tsx';
+import { ReportInstruments } from './ReportInstruments.tsx';
 
 interface Props {
   vessel: VesselRecord;
@@ -62,6 +63,7 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
           </tbody>
         </table>
       </div>
+      <ReportInstruments vessel={vessel} fromMs={fromMs} toMs={toMs} />
       {data.standing.length > 0 ? (
         <section aria-labelledby="report-standing-title">
           <h3 id="report-standing-title">Standing hazards of {vessel.tag}</h3>
