@@ -29,11 +29,11 @@ export type {
 } from './records.ts';
 
 // Vessels
-export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
+export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_INTERVAL_RANGE_S } from './vessels.ts';
 
 // Checks (append-only)
-export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
-export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';
+export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf, latestChecks } from './checks.ts';
+export type { AppendOptions, CheckFilter, LatestCheck, ListOptions } from './checks.ts';
 export {
   OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';

@@ -475,6 +475,21 @@ export async function countChecks(tx: LogTx<IDBTransactionMode>, vesselId?: stri
   return n;
 }
 
+/**
+ * The newest row of each vessel's month buckets (undefined for a vessel with none): one cursor step
+ * from the top of each vessel's parts, so the cost is one part per vessel, not the log.
+ */
+export async function latestRows(tx: LogTx<IDBTransactionMode>, vesselIds: readonly string[]): Promise<(MonthRow | undefined)[]> {
+  const store = tx.objectStore('logMonthParts');
+  return Promise.all(vesselIds.map(async (id) => {
+    let cursor = await store.openCursor(monthPartRange(id, -Infinity, Infinity), 'prev');
+    // A part is never written empty; the loop only guards a hand-edited store.
+    while (cursor && cursor.value.rows.length === 0) cursor = await cursor.continue();
+    const rows = cursor?.value.rows;
+    return rows?.[rows.length - 1];
+  }));
+}
+
 /** Which checks a listing covers. Times in ms; both ends inclusive. */
 export interface LogQuery {
   vesselId: string | null;
