@@ -22,10 +22,11 @@ function afterPaint(): Promise<void> {
   return new Promise((done) => requestAnimationFrame(() => setTimeout(done, 0)));
 }
 
-export function ReviewScreen() {
+/** `param`: a vessel id to open the Review on that vessel's history (the plant overview's rows link here). */
+export function ReviewScreen({ param }: { param?: string | undefined }) {
   const [vessels, setVessels] = useState<VesselRecord[]>([]);
-  const [form, setForm] = useState<FilterForm>(EMPTY_FORM);
-  const [filter, setFilter] = useState<ReviewFilter>(NO_FILTER);
+  const [form, setForm] = useState<FilterForm>(() => (param ? { ...EMPTY_FORM, vesselId: param } : EMPTY_FORM));
+  const [filter, setFilter] = useState<ReviewFilter>(() => (param ? { ...NO_FILTER, vesselId: param } : NO_FILTER));
   const [formError, setFormError] = useState<{ field: keyof FilterForm; message: string } | null>(null);
   const [rows, setRows] = useState<RowView[]>([]);
   const [more, setMore] = useState(false);
