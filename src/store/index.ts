@@ -34,6 +34,8 @@ export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_IN
 // Checks (append-only)
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf, latestChecks } from './checks.ts';
 export type { AppendOptions, CheckFilter, LatestCheck, ListOptions } from './checks.ts';
+export { CHECK_SORT_KEYS, sortChecks } from './sorted-checks.ts';
+export type { CheckSort, CheckSortKey, SortedChecks } from './sorted-checks.ts';
 export {
   OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';
