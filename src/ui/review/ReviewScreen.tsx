@@ -15,6 +15,8 @@ import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
 import { OUTCOMES, VERDICTS } from './record-facts.ts';
 import { refreshVessels } from '../state/app-state.ts';
+import { useWide } from '../state/wide.ts';
+import { WideReview } from './WideReview.tsx';
 
 const VERDICT_IDS = VERDICTS.map((v) => v.id);
 
@@ -106,15 +108,23 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
     }
   };
   const vessel = filter.vesselId ? vessels.find((v) => v.id === filter.vesselId) : undefined;
+  const wide = useWide();
+  const filters = <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />;
+  const failure = readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null;
+  const totalsPanel = <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />;
 
   return (
     <div class="review-screen" data-shown={shown}>
-      <div class="no-print">
-        <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />
-        {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
-        <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />
-        <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
-      </div>
+      {wide ? (
+        <div class="no-print"><WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} /></div>
+      ) : (
+        <div class="no-print">
+          {filters}
+          {failure}
+          {totalsPanel}
+          <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+        </div>
+      )}
       {vessel && reportFor === vessel.id ? (
         <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} />
       ) : vessel ? (
