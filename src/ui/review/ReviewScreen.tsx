@@ -10,7 +10,7 @@ import { ChainPanel } from './ChainPanel.tsx';
 import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
-import { ReviewPager, reviewVessels } from './review-query.ts';
+import { ReviewPager, reviewVessels, storeFilter } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
 import { OUTCOMES, VERDICTS } from './record-facts.ts';
@@ -136,7 +136,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
       )}
       <div class="no-print">
         <ChainPanel />
-        <TransferPanel onBusy={setImporting} onImported={() => {
+        <TransferPanel filter={storeFilter(filter)} onBusy={setImporting} onImported={() => {
           setGeneration((g) => g + 1);
           // The field screens' vessel list too: an import may have brought vessels.
           void refreshVessels().catch(() => undefined);
