@@ -4,7 +4,8 @@
 import { StoreError } from './errors.ts';
 import { requireCautions, requireInputs, TEXT_LIMITS } from './checks.ts';
 import { breathe, throwIfAborted } from './integrity.ts';
-import type { CheckRecord, IsoDateTime, JsonObject, PublicJwk, VesselRecord } from './records.ts';
+import type { CheckRecord, IsoDateTime, JsonObject, KindRecord, LogRecord, PublicJwk, VesselRecord } from './records.ts';
+import { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 import { parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, HEX64, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 import { DESCRIPTION_MAX, requireCheckInterval, TAG_MAX, tagKeyOf } from './vessels.ts';
@@ -55,8 +56,9 @@ export interface BackupDocument {
   formatVersion: 1 | 2;
   exportedAt: IsoDateTime;
   vessels: VesselRecord[];
-  checks: CheckRecord[];
-  /** Records of other kinds found among `checks` (v2 on), kept out of it. */
+  /** The checks, and the records of kinds this version keeps (record-kinds.ts), in file order. */
+  checks: LogRecord[];
+  /** Records of kinds this version does not keep, found among `checks` (v2 on), kept out of it. */
   others: OtherRecord[];
   chains: ChainHead[];
   signatures: FileSignature[];
@@ -184,6 +186,46 @@ export function validateCheck(field: string, value: unknown): CheckRecord {
   return c as unknown as CheckRecord;
 }
 
+const KIND_KEYS = [
+  'kind', 'id', 'deviceId', 'seq', 'time', 'timeMs', 'technician', 'note', 'vesselId', 'vessel', 'values',
+  'cautions', 'appVersion', 'formulationId', 'prevHash', 'hash',
+] as const;
+
+/**
+ * One record of a kind this version keeps (record-kinds.ts), as records.ts KindRecord defines it:
+ * the envelope checked field by field, `values` as plain JSON.
+ * @throws StoreError('invalid-backup') naming the first bad field
+ */
+export function validateKindRecord(field: string, value: unknown): KindRecord {
+  const r = requireObject(field, value);
+  if (!isKnownKind(r['kind'])) throw bad(`${field}.kind`, `expected one of ${RECORD_KINDS.join(', ')}`);
+  requireKeys(field, r, KIND_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, r['id']);
+    requireUuid(`${field}.deviceId`, r['deviceId']);
+    requireText(`${field}.technician`, r['technician'], 1, TEXT_LIMITS.technician);
+    requireText(`${field}.note`, r['note'], 0, TEXT_LIMITS.note);
+    requireJsonObject(`${field}.values`, r['values']);
+    requireCautions(`${field}.cautions`, r['cautions']);
+    requireText(`${field}.appVersion`, r['appVersion'], 1, TEXT_LIMITS.version);
+    requireText(`${field}.formulationId`, r['formulationId'], 1, TEXT_LIMITS.version);
+  });
+  requireSeq(`${field}.seq`, r['seq']);
+  const ms = requireIso(`${field}.time`, r['time']);
+  if (r['timeMs'] !== ms) throw bad(`${field}.timeMs`, 'does not match time');
+  if (r['vesselId'] === null) {
+    if (r['vessel'] !== null) throw bad(`${field}.vessel`, 'expected null when vesselId is null');
+  } else {
+    within(() => requireUuid(`${field}.vesselId`, r['vesselId']));
+    const vessel = requireObject(`${field}.vessel`, r['vessel']);
+    requireKeys(`${field}.vessel`, vessel, ['tag']);
+    within(() => requireText(`${field}.vessel.tag`, vessel['tag'], 1, TAG_MAX));
+  }
+  requireHex64(`${field}.prevHash`, r['prevHash']);
+  requireHex64(`${field}.hash`, r['hash']);
+  return r as unknown as KindRecord;
+}
+
 /** A record of a kind this version does not keep (v2 on): its chain fields checked, the rest only as plain JSON. */
 function validateOther(field: string, value: Record<string, unknown>): OtherRecord {
   for (const key of LINK_KEYS) if (!(key in value)) throw bad(`${field}.${key}`, 'missing');
@@ -306,14 +348,16 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
   requireIso('exportedAt', top['exportedAt']);
   const vessels = requireList('vessels', top['vessels'], limits.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
   const listed = requireList('checks', top['checks'], limits.maxChecks);
-  const checks: CheckRecord[] = [];
+  const checks: LogRecord[] = [];
   const others: OtherRecord[] = [];
   for (let i = 0; i < listed.length; i += 1) {
     if (i % VALIDATE_GROUP === 0) yield;
     const item = listed[i];
     // From v2 a record may name its kind; one without is a check, one of another kind is kept aside.
     if (version === 2 && typeof item === 'object' && item !== null && !Array.isArray(item) && 'kind' in item) {
-      others.push(validateOther(`checks[${i}]`, item as Record<string, unknown>));
+      // A kind this version keeps is held to its shape and kept; any other is checked for its links only.
+      if (isKnownKind((item as Record<string, unknown>)['kind'])) checks.push(validateKindRecord(`checks[${i}]`, item));
+      else others.push(validateOther(`checks[${i}]`, item as Record<string, unknown>));
     } else {
       checks.push(validateCheck(`checks[${i}]`, item));
     }

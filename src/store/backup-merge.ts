@@ -12,7 +12,7 @@ import { StoreError, storeErrorFromWrite, type RefusedRecord } from './errors.ts
 import { canonicalJson, ChainVerifier, type ChainLink, type ChainStatus } from './integrity.ts';
 import { addToLog, locateIds, LOG_STORES, readRecords, settle, type LogBlock, type NewLogEntry } from './log-layout.ts';
 import { deviceBlocks } from './log-walks.ts';
-import { GENESIS_HASH, type CheckRecord, type KnownDeviceKey, type LongWorkOptions, type VesselRecord } from './records.ts';
+import { GENESIS_HASH, isCheckRecord, type LogRecord, type KnownDeviceKey, type LongWorkOptions, type VesselRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import type { SignatureStatus } from './signatures.ts';
 import { parseIsoWithOffset } from './time.ts';
@@ -30,6 +30,8 @@ export interface ImportReport {
   fileChains: ChainStatus[];
   /** How far each device's signatures in the file vouch for its records, by device. */
   fileSignatures: { deviceId: string; signature: SignatureStatus }[];
+  /** Records of the kinds this version keeps (record-kinds.ts): added, and skipped as already here. */
+  records: { added: { id: string; kind: string }[]; skipped: { id: string; why: string }[] };
   /** Records of kinds this version does not keep, skipped (their links were checked), by kind. */
   skippedKinds: Record<string, number>;
   /** Things worth telling the user that refuse nothing. */
@@ -72,16 +74,16 @@ function byInstant(a: string, b: string): number {
 /** Stored records of one device by seq, each parsed only when asked for. */
 class StoredSeqs {
   private readonly texts = new Map<number, string>();
-  private readonly parsed = new Map<number, CheckRecord>();
+  private readonly parsed = new Map<number, LogRecord>();
   constructor(blocks: readonly LogBlock[]) {
     for (const b of blocks) b.seqs.forEach((seq, i) => this.texts.set(seq, b.texts[i]!));
   }
-  get(seq: number): CheckRecord | undefined {
+  get(seq: number): LogRecord | undefined {
     let r = this.parsed.get(seq);
     if (r) return r;
     const text = this.texts.get(seq);
     if (text === undefined) return undefined;
-    this.parsed.set(seq, (r = JSON.parse(text) as CheckRecord));
+    this.parsed.set(seq, (r = JSON.parse(text) as LogRecord));
     return r;
   }
 }
@@ -148,6 +150,7 @@ export async function planMerge(
   const report: ImportReport = {
     vessels: { added: [], updated: [], skipped: [] },
     checks: { added: [], skipped: [], rejected: [] },
+    records: { added: [], skipped: [] },
     fileChains: [],
     fileSignatures: deviceIds.map((d) => ({ deviceId: d, signature: signing.get(d)?.status ?? { state: 'unsigned' } })),
     skippedKinds: {},
@@ -196,8 +199,9 @@ export async function planMerge(
       }
       const same = l.other ? undefined : existingById[l.check];
       if (same) {
-        if (canonicalJson(same) === texts[l.check!]) report.checks.skipped.push({ id: r.id, why: 'already here, identical' });
-        else refuse(`seq ${r.seq}: a different check with this id is already here`);
+        const file = doc.checks[l.check!]!;
+        if (canonicalJson(same) === texts[l.check!]) (isCheckRecord(file) ? report.checks : report.records).skipped.push({ id: r.id, why: 'already here, identical' });
+        else refuse(`seq ${r.seq}: a different ${isCheckRecord(file) ? 'check' : 'record'} with this id is already here`);
         continue;
       }
       const occupant = here.get(r.seq);
@@ -231,8 +235,10 @@ export async function planMerge(
         report.skippedKinds[l.other.kind] = (report.skippedKinds[l.other.kind] ?? 0) + 1;
         continue;
       }
-      checkAdds.push({ record: doc.checks[l.check]!, text: texts[l.check]!, signature: input.signatureOf(d, r.seq) });
-      report.checks.added.push(r.id);
+      const record = doc.checks[l.check]!;
+      checkAdds.push({ record, text: texts[l.check]!, signature: input.signatureOf(d, r.seq) });
+      if (isCheckRecord(record)) report.checks.added.push(r.id);
+      else report.records.added.push({ id: r.id, kind: record.kind });
     }
   });
   report.fileChains = verifier.results();

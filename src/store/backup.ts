@@ -21,7 +21,7 @@ import { recordBackup } from './backup-record.ts';
 import { signatureCoverage, verifyingKey, type SignedHead, type VerifyingKey } from './signatures.ts';
 import { formatIsoWithOffset } from './time.ts';
 
-export { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS, mayHoldForbiddenKey, parseBackup, parseBackupInSteps, validateCheck, validateVessel } from './backup-format.ts';
+export { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, BACKUP_LIMITS, mayHoldForbiddenKey, parseBackup, parseBackupInSteps, validateCheck, validateKindRecord, validateVessel } from './backup-format.ts';
 export type { BackupDocument, BackupLimits, ChainHead, FileSignature, OtherRecord } from './backup-format.ts';
 export type { ImportReport, MergePolicy } from './backup-merge.ts';
 
@@ -49,7 +49,8 @@ export async function exportBackupParts(options: LongWorkOptions = {}): Promise<
   throwIfAborted(options.signal);
   const tx = db.transaction(['vessels', 'settings', ...LOG_STORES] as const);
   const vessels = await tx.objectStore('vessels').getAll();
-  const total = await countChecks(tx);
+  // Records of other kinds (logKinds rows) go out with the checks, in their chains.
+  const total = (await countChecks(tx)) + (await tx.objectStore('logKinds').count());
   // Blocks come in device-then-seq order, and hold each record's canonical JSON already: the
   // file's check lines are the stored texts, in the order read, one piece per page of blocks.
   // Only each device's last record is parsed, for its chain head.

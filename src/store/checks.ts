@@ -22,6 +22,9 @@ import {
 } from './log-layout.ts';
 import {
   GENESIS_HASH,
+  isCheckRecord,
+  type KindRecord,
+  type LogRecord,
   type CheckCursor,
   type CheckPage,
   type CheckRecord,
@@ -50,7 +53,7 @@ export const TEXT_LIMITS = {
 } as const;
 const MAX_INPUTS = 32;
 const MAX_CAUTIONS = 64;
-/** How often appendCheck recomputes when another tab moved the chain head under it. */
+/** How often a save recomputes when another tab moved the chain head under it. */
 const CHAIN_RETRIES = 10;
 
 /** Checks a TypedInput map; shared with the backup reader. */
@@ -144,12 +147,10 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
   if (corrects !== null && !(await hasCheck(db, corrects))) {
     throw new StoreError('not-found', `No check with id ${corrects} to correct.`, 'corrects');
   }
-  const device = await deviceId();
-  const key = await deviceSigningKey(db);
   const time = formatIsoWithOffset(takenAt);
-  const base = {
+  const base: ChainBase<CheckRecord> = {
     id: crypto.randomUUID(),
-    deviceId: device,
+    deviceId: await deviceId(),
     time,
     // The stamp is to the second; sorting uses the same instant the stamp shows.
     timeMs: Math.floor(takenAt.getTime() / 1000) * 1000,
@@ -167,13 +168,38 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
     reason,
   };
 
+  return appendToChain(db, base, { clearDraft: options.clearDraft, what: 'the check' });
+}
+
+/** A record without the fields its place in the chain gives it. */
+export type ChainBase<R extends LogRecord> = R extends LogRecord ? Omit<R, 'seq' | 'prevHash' | 'hash'> : never;
+
+/** Options of appendToChain: a draft deleted with the write, and what the record is called in errors. */
+export interface ChainWriteOptions {
+  clearDraft?: string | undefined;
+  what: string;
+}
+
+/**
+ * Adds one record (a check, or a record of another kind) as the device's next link: seq and
+ * prevHash from the chain head, hash and signature made before the write opens, then, inside one
+ * strict transaction, the head read again and the record added (and a draft deleted with it). If
+ * another tab moved the head meanwhile, the write is abandoned and redone from the new head.
+ * `base` is the record without its chain fields, already validated.
+ * @throws StoreError('quota-exceeded' | 'write-failed' | 'chain-busy') with nothing saved
+ */
+export async function appendToChain(db: IDBPDatabase<TanksideDB>, base: ChainBase<CheckRecord>, options: ChainWriteOptions): Promise<CheckRecord>;
+export async function appendToChain(db: IDBPDatabase<TanksideDB>, base: ChainBase<KindRecord>, options: ChainWriteOptions): Promise<KindRecord>;
+export async function appendToChain(db: IDBPDatabase<TanksideDB>, base: ChainBase<LogRecord>, options: ChainWriteOptions): Promise<LogRecord> {
+  const device = base.deviceId;
+  const key = await deviceSigningKey(db);
   for (let attempt = 0; attempt < CHAIN_RETRIES; attempt += 1) {
     const head = (await chainHead(db.transaction(LOG_STORES), device)) ?? { seq: 0, hash: GENESIS_HASH };
     const unsigned = { ...base, seq: head.seq + 1, prevHash: head.hash };
-    const record: CheckRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
+    const record: LogRecord = { ...unsigned, hash: await computeCheckHash(unsigned) };
     const text = canonicalJson(record);
     // Signed before the write opens (no await of anything but IndexedDB inside it); a signature that
-    // cannot be made leaves the check unsigned rather than unsaved.
+    // cannot be made leaves the record unsigned rather than unsaved.
     const signature = key ? await signChainHead(key, device, record.seq, record.hash).catch(() => '') : '';
 
     const scope: StoreNames<TanksideDB>[] = options.clearDraft === undefined ? [...LOG_STORES] : [...LOG_STORES, 'drafts'];
@@ -197,12 +223,12 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
     } catch (error) {
       // Moved, or (another tab between our reads) the seq or id was taken: start again from the new head.
       if (moved || error instanceof LogConflict) continue;
-      throw storeErrorFromWrite(error, 'Saving the check');
+      throw storeErrorFromWrite(error, `Saving ${options.what}`);
     }
     void askPersistenceOnce();
     return record;
   }
-  throw new StoreError('chain-busy', 'Other tabs kept saving checks at the same moment; this check was not saved. Try again.');
+  throw new StoreError('chain-busy', `Other tabs kept saving at the same moment; ${options.what} was not saved. Try again.`);
 }
 
 /** One check, or undefined. */
@@ -212,7 +238,8 @@ export async function getCheck(id: string): Promise<CheckRecord | undefined> {
   const at = (await locateIds(tx, [id])).get(id)?.at;
   if (!at) return undefined;
   const [record] = await readRecords(tx, [{ deviceId: at[0], seq: at[1] }]);
-  return record;
+  // Ids are unique across the log; a record of another kind is not a check (getRecord reads those).
+  return record && isCheckRecord(record) ? record : undefined;
 }
 
 /** Whether a check with this id is stored. */
@@ -230,7 +257,7 @@ export async function correctionsOf(checkId: string): Promise<CheckRecord[]> {
     const at = places.get(id)?.at;
     return at ? [{ deviceId: at[0], seq: at[1] }] : [];
   });
-  const found = (await readRecords(tx, refs)).filter((r): r is CheckRecord => r !== undefined);
+  const found = (await readRecords(tx, refs)).filter((r): r is CheckRecord => r !== undefined && isCheckRecord(r));
   return found.sort((a, b) => a.timeMs - b.timeMs || (a.id < b.id ? -1 : 1));
 }
 
@@ -334,7 +361,7 @@ export async function queryChecks(filter: CheckFilter & ListOptions = {}): Promi
     ...(order === 'newest' ? { before: cursor } : { after: cursor }),
   });
   const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
-  const checks = records.filter((r): r is CheckRecord => r !== undefined);
+  const checks = records.filter((r): r is CheckRecord => r !== undefined && isCheckRecord(r));
   const last = rows[rows.length - 1];
   return { checks, next: more && last ? { timeMs: last[0], id: last[1] } : null };
 }

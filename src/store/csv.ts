@@ -6,7 +6,7 @@ import { throwIfAborted } from './integrity.ts';
 import { outcomeOfRecord, signalMaskOf, worstSignalOfMask } from './facts.ts';
 import { blockPages, compareRows, countChecks, LOG_STORES, matchingRows, pageRows, readRecords, type MonthRow } from './log-layout.ts';
 import { windowOf, type CheckFilter } from './checks.ts';
-import type { CheckCursor, CheckRecord, LongWorkOptions } from './records.ts';
+import { isCheckRecord, type CheckCursor, type CheckRecord, type LogRecord, type LongWorkOptions } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { requireUuid } from './validate.ts';
 
@@ -252,16 +252,18 @@ async function wholeLogPieces(tx: LogReadTx, options: LongWorkOptions): Promise<
     throwIfAborted(options.signal);
     for (const block of page) {
       for (let i = 0; i < block.texts.length; i += 1) {
-        const r = JSON.parse(block.texts[i]!) as CheckRecord;
+        const r = JSON.parse(block.texts[i]!) as LogRecord;
+        // Records of other kinds are not checks: they have no month row and no line here.
+        if (!isCheckRecord(r)) continue;
         const line = lineOf(block.deviceId, block.seqs[i]!);
         const p = Math.floor(line / ROWS_PER_PART);
         // A stored record the buckets do not list (only a hand-edited store has one).
         if (line < 0 || order[line]![1] !== r.id || pieces[p] !== null || lines[line] !== undefined) return sortedByTime(tx, options.signal);
         lines[line] = csvRow(r);
+        done += 1;
         filled[p] = filled[p]! + 1;
         if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
       }
-      done += block.texts.length;
     }
     options.onProgress?.(done, total);
   }
@@ -300,7 +302,8 @@ async function sortedByTime(tx: LogReadTx, signal: AbortSignal | undefined): Pro
     throwIfAborted(signal);
     for (const block of page) {
       for (const text of block.texts) {
-        const r = JSON.parse(text) as CheckRecord;
+        const r = JSON.parse(text) as LogRecord;
+        if (!isCheckRecord(r)) continue;
         keyed.push({ timeMs: r.timeMs, id: r.id, text: csvRow(r) });
       }
     }
@@ -322,7 +325,7 @@ async function selectionPieces(tx: LogReadTx, window: ReturnType<typeof windowOf
     const page = rows.slice(at, at + PAGE);
     const records = await readRecords(tx, page.map((r) => ({ deviceId: r[2], seq: r[3] })));
     const lines: string[] = [];
-    for (const r of records) if (r) lines.push(csvRow(r));
+    for (const r of records) if (r && isCheckRecord(r)) lines.push(csvRow(r));
     pieces.push(...piecesOf(lines));
     options.onProgress?.(Math.min(rows.length, at + PAGE), rows.length);
   }
@@ -340,7 +343,7 @@ async function vesselPieces(tx: LogReadTx, vesselId: string, options: LongWorkOp
     throwIfAborted(options.signal);
     const records = await readRecords(tx, rows.map((r) => ({ deviceId: r[2], seq: r[3] })));
     const lines: string[] = [];
-    for (const r of records) if (r) lines.push(csvRow(r));
+    for (const r of records) if (r && isCheckRecord(r)) lines.push(csvRow(r));
     pieces.push(...piecesOf(lines));
     done += rows.length;
     options.onProgress?.(done, total);

@@ -10,12 +10,16 @@ export { StoreError } from './errors.ts';
 export type { RefusedRecord, StoreErrorCode } from './errors.ts';
 
 // Records
-export { GENESIS_HASH } from './records.ts';
+export { GENESIS_HASH, isCheckRecord } from './records.ts';
 export type {
   CheckCursor,
   CheckPage,
   CheckRecord,
   IsoDateTime,
+  KindRecord,
+  KindRecordPage,
+  LogRecord,
+  NewKindRecord,
   JsonObject,
   JsonValue,
   LongWorkOptions,
@@ -40,6 +44,12 @@ export {
   OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';
 export type { Signal, StoredOutcome, StoredVerdict } from './facts.ts';
+
+// Records of other kinds (cycles, periodic tests …), in the same chain
+export { appendRecord, getRecord, listRecords, countRecords } from './kind-records.ts';
+export type { AppendRecordOptions, KindFilter } from './kind-records.ts';
+export { RECORD_KINDS, isKnownKind } from './record-kinds.ts';
+export type { RecordKind } from './record-kinds.ts';
 
 // Settings, drafts, device, persistence
 export {

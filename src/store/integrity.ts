@@ -1,8 +1,11 @@
 // Tamper evidence for the check log: a canonical serialisation of each record's content, hashed
 // with SHA-256 together with the previous record's hash on the same device. Pure functions; the
 // only platform call is WebCrypto's digest.
-import { GENESIS_HASH, type CheckRecord, type LongWorkOptions } from './records.ts';
+import { GENESIS_HASH, type CheckRecord, type KindRecord, type LogRecord, type LongWorkOptions } from './records.ts';
 import { StoreError } from './errors.ts';
+
+/** A record with or without its hash: what the hash is computed over. */
+export type HashableRecord = LogRecord | Omit<CheckRecord, 'hash'> | Omit<KindRecord, 'hash'>;
 
 /**
  * Canonical JSON of a value: object keys sorted by UTF-16 code units, no whitespace, strings
@@ -201,7 +204,7 @@ function describeNotJson(value: unknown, path: string): string {
 }
 
 /** The content a check's hash covers: every field except `hash` itself (prevHash included). */
-export function hashedContent(record: CheckRecord | Omit<CheckRecord, 'hash'>): string {
+export function hashedContent(record: HashableRecord): string {
   const value: unknown = record;
   if (typeof value !== 'object' || value === null || Array.isArray(value)) return canonicalJson(value);
   try {
@@ -227,8 +230,8 @@ export async function sha256Hex(text: string): Promise<string> {
 const UTF8 = new TextEncoder();
 const HEX_BYTE: readonly string[] = Array.from({ length: 256 }, (_, b) => b.toString(16).padStart(2, '0'));
 
-/** The hash a check should carry, from its content (prevHash included). */
-export function computeCheckHash(record: CheckRecord | Omit<CheckRecord, 'hash'>): Promise<string> {
+/** The hash a check (or a record of another kind) should carry, from its content (prevHash included). */
+export function computeCheckHash(record: HashableRecord): Promise<string> {
   return sha256Hex(hashedContent(record));
 }
 
@@ -351,6 +354,7 @@ export type ChainLink = Pick<CheckRecord, 'id' | 'deviceId' | 'seq' | 'hash' | '
 
 const DEVICE_MEMBER = ',"deviceId":"';
 const ID_MEMBER = ',"id":"';
+const KIND_MEMBER = ',"kind":"';
 const PREV_MEMBER = ',"prevHash":"';
 
 /**
@@ -388,6 +392,23 @@ export function chainFieldsOfText(text: string, seq: number): { link: ChainLink;
     },
     content: text.slice(0, h) + text.slice(hEnd + 1),
   };
+}
+
+/**
+ * The kind of a stored record from its canonical text: 'check' for a check (no `kind` member), or
+ * the kind it names. In canonical JSON "kind" follows "id" directly in a record of another kind
+ * (records.ts KindRecord), and "inputs" does in a check; the first `,"hash":"` is the top-level one
+ * (see contentOfText), so the member after the id is found without parsing. A text not in the
+ * store's shape is parsed instead.
+ */
+export function kindOfText(text: string): string {
+  const h = text.indexOf(HASH_MEMBER);
+  const hEnd = h < 0 ? -1 : text.indexOf('"', h + HASH_MEMBER.length);
+  const iEnd = hEnd < 0 || !text.startsWith(ID_MEMBER, hEnd + 1) ? -1 : text.indexOf('"', hEnd + 1 + ID_MEMBER.length);
+  if (iEnd >= 0 && text.startsWith(KIND_MEMBER, iEnd + 1)) return text.slice(iEnd + 1 + KIND_MEMBER.length, text.indexOf('"', iEnd + 1 + KIND_MEMBER.length));
+  if (iEnd >= 0 && text.startsWith(',"inputs":', iEnd + 1)) return 'check';
+  const parsed = JSON.parse(text) as { kind?: unknown };
+  return typeof parsed.kind === 'string' ? parsed.kind : 'check';
 }
 
 /**

@@ -25,12 +25,18 @@
 //   rewrite megabytes.
 // - logIds, key: the last two hex digits of a check id: where each id is stored, and the ids of
 //   the checks that correct it. A v4 UUID is random there, so 256 values share the log evenly.
+//   Records of other kinds (cycles, periodic tests) are listed here too, so an id is unique
+//   across every record of the log.
+// - logKinds (schema v7), key [kind, vesselKey, timeMs, id], index by-kind-time [kind, timeMs, id]:
+//   one small row per record of another kind (KindRow), for listing a kind per vessel and time.
+//   One value per record, not buckets: such records come a few a day, not thousands a month.
+//   The month buckets hold checks only, so the review's totals and filters stay about checks.
 //
 // A write touches a handful of values, whatever number of checks it adds; it runs only IndexedDB
 // requests inside its transaction, as every transaction here must.
 import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
 import { factsOfRecord, type StoredVerdict } from './facts.ts';
-import type { CheckRecord, CheckCursor } from './records.ts';
+import { isCheckRecord, type CheckCursor, type KindRecord, type LogRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 
 /** Checks per block when a block is started; inserts below a device's head may pass it. */
@@ -90,8 +96,26 @@ export interface IdEntry {
 /** Entries of the ids that end in one pair of hex digits. */
 export type IdBucket = Record<string, IdEntry>;
 
-export const LOG_STORES = ['logBlocks', 'logMonthParts', 'logIds'] as const;
-/** Any transaction whose scope includes the three log stores. */
+/**
+ * Where a record of another kind is listed (logKinds): its kind, its vessel ('' for none), its
+ * instant and id (the sort), and where its text is stored.
+ */
+export interface KindRow {
+  kind: string;
+  vesselKey: string;
+  timeMs: number;
+  id: string;
+  deviceId: string;
+  seq: number;
+}
+
+/** The logKinds row of a record of another kind. */
+export function kindRowOf(r: KindRecord): KindRow {
+  return { kind: r.kind, vesselKey: r.vesselId ?? '', timeMs: r.timeMs, id: r.id, deviceId: r.deviceId, seq: r.seq };
+}
+
+export const LOG_STORES = ['logBlocks', 'logMonthParts', 'logIds', 'logKinds'] as const;
+/** Any transaction whose scope includes the log stores. */
 export type LogTx<Mode extends IDBTransactionMode> = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], Mode>;
 
 /** Where a check is in logBlocks. */
@@ -102,7 +126,7 @@ export interface CheckRef {
 
 /** A record to add, with its canonical text and (when signed) its chain-head signature. */
 export interface NewLogEntry {
-  record: CheckRecord;
+  record: LogRecord;
   text: string;
   signature?: string | undefined;
 }
@@ -166,7 +190,7 @@ export async function firstSeqsOf(tx: LogTx<IDBTransactionMode>, deviceId: strin
  * The stored records at `refs`, in the same order (undefined where none is stored). Reads each
  * block once however many of its checks are asked for, and parses only the texts asked for.
  */
-export async function readRecords(tx: LogTx<IDBTransactionMode>, refs: readonly CheckRef[]): Promise<(CheckRecord | undefined)[]> {
+export async function readRecords(tx: LogTx<IDBTransactionMode>, refs: readonly CheckRef[]): Promise<(LogRecord | undefined)[]> {
   const devices = [...new Set(refs.map((r) => r.deviceId))];
   const firstSeqs = new Map(await Promise.all(devices.map(async (d) => [d, await firstSeqsOf(tx, d)] as const)));
   const wanted = new Map<string, [string, number]>();
@@ -184,7 +208,7 @@ export async function readRecords(tx: LogTx<IDBTransactionMode>, refs: readonly 
     const block = key === null || key === undefined ? undefined : blocks.get(key);
     if (!block) return undefined;
     const at = seqIndex(block.seqs, r.seq);
-    return at < 0 ? undefined : (JSON.parse(block.texts[at]!) as CheckRecord);
+    return at < 0 ? undefined : (JSON.parse(block.texts[at]!) as LogRecord);
   });
 }
 
@@ -206,7 +230,7 @@ export async function chainHead(tx: LogTx<IDBTransactionMode>, deviceId: string)
   const cursor = await tx.objectStore('logBlocks').openCursor(deviceRange(deviceId), 'prev');
   const block = cursor?.value;
   if (!block || block.texts.length === 0) return null;
-  const last = JSON.parse(block.texts[block.texts.length - 1]!) as CheckRecord;
+  const last = JSON.parse(block.texts[block.texts.length - 1]!) as LogRecord;
   return { seq: last.seq, hash: last.hash };
 }
 
@@ -239,7 +263,12 @@ export async function addToLog(
     list.push(e);
   }
   const months = new Map<string, { vesselId: string; monthMs: number; rows: MonthRow[] }>();
+  const kindRows: KindRow[] = [];
   for (const { record: r } of entries) {
+    if (!isCheckRecord(r)) {
+      kindRows.push(kindRowOf(r));
+      continue;
+    }
     const monthMs = monthOf(r.timeMs);
     const key = `${monthMs}\u0000${r.vesselId}`;
     let m = months.get(key);
@@ -250,7 +279,7 @@ export async function addToLog(
   const idKeys = new Set<string>();
   for (const { record: r } of entries) {
     idKeys.add(idBucketOf(r.id));
-    if (r.corrects !== null) idKeys.add(idBucketOf(r.corrects));
+    if (isCheckRecord(r) && r.corrects !== null) idKeys.add(idBucketOf(r.corrects));
   }
   const [deviceState, monthBuckets, idBuckets] = await Promise.all([
     Promise.all(
@@ -293,7 +322,7 @@ export async function addToLog(
     entry.at = [r.deviceId, r.seq];
   }
   for (const { record: r } of entries) {
-    if (r.corrects === null) continue;
+    if (!isCheckRecord(r) || r.corrects === null) continue;
     const entry = entryOf(r.corrects);
     (entry.by ??= []).push(r.id);
   }
@@ -348,6 +377,11 @@ export async function addToLog(
     for (const part of placeRows(m.vesselId, m.monthMs, monthBuckets[i]!, m.rows)) puts.push(monthsStore.put(part));
   });
   for (const [key, bucket] of ids) puts.push(idsStore.put(bucket, key));
+  // Only touched when there is a row to add: the v4 rung moves checks with this function before logKinds exists.
+  if (kindRows.length > 0) {
+    const kindsStore = tx.objectStore('logKinds');
+    for (const row of kindRows) puts.push(kindsStore.add(row));
+  }
   await Promise.all(puts);
 }
 

@@ -185,3 +185,63 @@ export interface KnownDeviceKey {
 
 /** The chain hash that the first record on a device points back to. */
 export const GENESIS_HASH = '0'.repeat(64);
+
+/**
+ * A record of another kind than a check in a device's chain (BACKUP-FORMAT.md, "Records of other
+ * kinds"): a cycle, a periodic test, later a review note. Same chain, seq, hash and signature as a
+ * check; its own free-form `values` (plain JSON, read by the room that made it). The members are
+ * fixed so that every member sorting before "prevHash" holds only plain strings or cautions: the
+ * chain fields can then be cut from the canonical text without parsing it, as for a check
+ * (integrity.ts chainFieldsOfText).
+ */
+export interface KindRecord {
+  /** The record's kind: 1–32 lower-case letters, digits or dashes, never "check" (record-kinds.ts lists those this version keeps). */
+  kind: string;
+  id: string;
+  deviceId: string;
+  seq: number;
+  /** When the record's subject happened (a cycle's start, a test's time), ISO 8601 with the device's offset. */
+  time: IsoDateTime;
+  timeMs: number;
+  technician: string;
+  note: string;
+  /** The vessel it is about, or null for a record about no one vessel. */
+  vesselId: string | null;
+  /** The vessel's tag as it was when the record was saved; null with vesselId null. */
+  vessel: { tag: string } | null;
+  /** What the kind's room saved: its inputs, limits, evaluation (plain JSON). */
+  values: JsonObject;
+  /** The cautions shown with it, as a check's (signal word, message, rule). */
+  cautions: StoredCaution[];
+  appVersion: string;
+  formulationId: string;
+  prevHash: string;
+  hash: string;
+}
+
+/** What the UI passes to appendRecord. The store adds kind, id, device, seq, time, hashes. */
+export interface NewKindRecord {
+  vesselId: string | null;
+  technician: string;
+  note?: string;
+  /** When it happened; defaults to now. */
+  takenAt?: Date;
+  values: JsonObject;
+  cautions: readonly StoredCaution[];
+  appVersion: string;
+  formulationId: string;
+}
+
+/** Any record of a device's chain: a check (no `kind` member) or a record of another kind. */
+export type LogRecord = CheckRecord | KindRecord;
+
+/** Whether a stored record is a check (a check carries no `kind` member). */
+export function isCheckRecord(record: LogRecord): record is CheckRecord {
+  return !('kind' in record);
+}
+
+/** One page of records of a kind, newest first unless asked otherwise. */
+export interface KindRecordPage {
+  records: KindRecord[];
+  next: CheckCursor | null;
+}

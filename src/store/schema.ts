@@ -5,7 +5,7 @@
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
 import { findingMaskOfText } from './facts.ts';
-import { addToLog, MONTH_PART_TARGET, type IdBucket, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
+import { addToLog, MONTH_PART_TARGET, type IdBucket, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
 
 export const DB_NAME = 'tankside';
@@ -26,8 +26,14 @@ export const DB_NAME = 'tankside';
  * - v6: month buckets split by size: logMonthParts (key [vesselId, monthMs, startMs, startId],
  *   index by-month) replaces logMonths, each month's rows moved over in parts of at most
  *   MONTH_PART_TARGET, so a save rewrites one part instead of a whole month.
+ * - v7 (KINDS_RUNG): records of other kinds than checks (record-kinds.ts) join the chain: logKinds
+ *   (key [kind, vesselKey, timeMs, id], index by-kind-time) lists them per kind, vessel and time.
+ *   A database from before holds none (older versions skipped them on import), so the rung only
+ *   makes the store.
  */
-export const DB_VERSION = 6;
+/** The rung that adds records of other kinds; one constant, so the number can move at a merge. */
+export const KINDS_RUNG = 7;
+export const DB_VERSION = KINDS_RUNG;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -56,6 +62,7 @@ export interface TanksideDB extends DBSchema {
   logBlocks: { key: [string, number]; value: LogBlock };
   logMonthParts: { key: [string, number, number, string]; value: MonthBucket; indexes: { 'by-month': number } };
   logIds: { key: string; value: IdBucket };
+  logKinds: { key: [string, string, number, string]; value: KindRow; indexes: { 'by-kind-time': [string, number, string] } };
   settings: { key: string; value: JsonValue | DeviceKey | KnownDeviceKey };
   drafts: { key: string; value: DraftRecord };
 }
@@ -251,6 +258,14 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
           // Already finished.
         }
       });
+    },
+  },
+  {
+    version: KINDS_RUNG,
+    run(db, _tx, next) {
+      db.createObjectStore('logKinds', { keyPath: ['kind', 'vesselKey', 'timeMs', 'id'] })
+        .createIndex('by-kind-time', ['kind', 'timeMs', 'id']);
+      next();
     },
   },
 ];

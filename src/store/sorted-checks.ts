@@ -6,7 +6,7 @@ import { getDb } from './connection.ts';
 import { windowOf, type CheckFilter } from './checks.ts';
 import { SIGNAL_ORDER, VERDICT_IDS } from './facts.ts';
 import { LOG_STORES, matchingRows, readRecords, type MonthRow } from './log-layout.ts';
-import type { CheckRecord } from './records.ts';
+import { isCheckRecord, type CheckRecord } from './records.ts';
 import { invalid } from './validate.ts';
 
 /** What the whole match can be sorted by (every one a fact the month rows keep). */
@@ -62,7 +62,7 @@ export async function sortChecks(filter: CheckFilter, sort: CheckSort): Promise<
       if (!Number.isInteger(limit) || limit < 1 || limit > 1000) throw invalid('limit', `${limit}; allowed 1 to 1000`);
       const refs = order.slice(offset, offset + limit).map((i) => ({ deviceId: rows[i]![2], seq: rows[i]![3] }));
       const read = await readRecords((await getDb()).transaction(LOG_STORES), refs);
-      return read.filter((r): r is CheckRecord => r !== undefined);
+      return read.filter((r): r is CheckRecord => r !== undefined && isCheckRecord(r));
     },
   };
 }

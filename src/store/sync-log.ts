@@ -5,13 +5,13 @@
 // On the transfer.ts surface: the sync client is loaded on demand, as the other long jobs are.
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
-import { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, mergeRecords, validateCheck, validateVessel, type BackupDocument } from './backup.ts';
+import { BACKUP_FORMAT, BACKUP_FORMAT_VERSION, mergeRecords, validateCheck, validateKindRecord, validateVessel, type BackupDocument } from './backup.ts';
 import { sealMigratedChecks } from './checks.ts';
 import { hashTexts } from './hash-texts.ts';
-import { canonicalJson, chainFieldsOfText, contentOfText, throwIfAborted } from './integrity.ts';
+import { canonicalJson, chainFieldsOfText, contentOfText, kindOfText, throwIfAborted } from './integrity.ts';
 import { chainHead, LOG_STORES } from './log-layout.ts';
 import { deviceBlocks } from './log-walks.ts';
-import { GENESIS_HASH, type CheckRecord, type IsoDateTime, type JsonValue, type VesselRecord } from './records.ts';
+import { GENESIS_HASH, type LogRecord, type IsoDateTime, type JsonValue, type VesselRecord } from './records.ts';
 import { deviceId } from './settings.ts';
 import { sha256OfText } from './sha256.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
@@ -26,6 +26,8 @@ const SETTING_PLANT = 'store:plant';
 
 /** One of this device's records as stored: its canonical text and the chain fields cut from it. */
 export interface OwnRecord {
+  /** 'check', or the record's kind (record-kinds.ts): the server document's type. */
+  kind: string;
   seq: number;
   id: string;
   hash: string;
@@ -61,8 +63,8 @@ export async function ownRecords(fromSeq: number, count: number): Promise<OwnRec
       if (seq < fromSeq || seq > last) return;
       const text = block.texts[i]!;
       const cut = chainFieldsOfText(text, seq);
-      const { id, hash } = cut ? cut.link : (JSON.parse(text) as CheckRecord);
-      out.push({ seq, id, hash, text });
+      const { id, hash } = cut ? cut.link : (JSON.parse(text) as LogRecord);
+      out.push({ kind: kindOfText(text), seq, id, hash, text });
     });
   }
   return out;
@@ -78,7 +80,7 @@ export interface PulledRecord {
 
 /** What mergePulledRecords did. */
 export interface PullMergeReport {
-  /** Ids of the checks stored by this merge. */
+  /** Ids of the records stored by this merge: checks, and records of the kinds this version keeps. */
   added: string[];
   /** Records already here, identical. */
   skipped: number;
@@ -99,7 +101,7 @@ export interface PullMergeReport {
  */
 export async function mergePulledRecords(records: readonly PulledRecord[], options: { signal?: AbortSignal } = {}): Promise<PullMergeReport> {
   const report: PullMergeReport = { added: [], skipped: 0, refused: [], gaps: [] };
-  const checks: CheckRecord[] = [];
+  const checks: LogRecord[] = [];
   const texts: string[] = [];
   const labels: string[] = [];
   const inBatch = new Map<string, string>(); // id -> text
@@ -129,22 +131,22 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
     exportedAt: formatIsoWithOffset(new Date()),
     vessels: [],
     checks,
-    // The server does not carry records of other kinds or signatures into this merge yet.
+    // Kinds this version does not keep were left on the server by the pull; signatures are not carried yet.
     others: [],
     chains: [],
     signatures: [],
   };
   const merged = await mergeRecords(doc, texts, hashes, { policy: 'record-by-record', ...(options.signal ? { signal: options.signal } : {}) });
   const labelOf = new Map(checks.map((c, i) => [c.id, labels[i]!]));
-  report.added = merged.checks.added;
-  report.skipped += merged.checks.skipped.length;
+  report.added = [...merged.checks.added, ...merged.records.added.map((r) => r.id)];
+  report.skipped += merged.checks.skipped.length + merged.records.skipped.length;
   for (const r of merged.checks.rejected) report.refused.push({ label: labelOf.get(r.id) ?? r.id, why: r.why });
   report.gaps = merged.warnings;
   return report;
 }
 
-/** The pulled text as a check record, or why it cannot be one. */
-function problemOfPulled(text: string): CheckRecord | string {
+/** The pulled text as a check or a record of a kind this version keeps, or why it cannot be one. */
+function problemOfPulled(text: string): LogRecord | string {
   if (typeof text !== 'string') return 'the text is not a string';
   let value: unknown;
   try {
@@ -152,9 +154,10 @@ function problemOfPulled(text: string): CheckRecord | string {
   } catch {
     return 'the text is not JSON';
   }
-  let record: CheckRecord;
+  let record: LogRecord;
   try {
-    record = validateCheck('record', value);
+    const kinded = typeof value === 'object' && value !== null && !Array.isArray(value) && 'kind' in value;
+    record = kinded ? validateKindRecord('record', value) : validateCheck('record', value);
   } catch (error) {
     return problemOf(error);
   }
@@ -210,7 +213,7 @@ export async function linksAround(ranges: readonly { deviceId: string; fromSeq: 
           const seq = block.seqs[i]!;
           if (seq < low || seq > toSeq + 1) continue;
           const text = block.texts[i]!;
-          const link = chainFieldsOfText(text, seq)?.link ?? (JSON.parse(text) as CheckRecord);
+          const link = chainFieldsOfText(text, seq)?.link ?? (JSON.parse(text) as LogRecord);
           if (seq >= fromSeq) {
             const linked = prev !== null && prev.seq === seq - 1;
             if (seq === 1 ? link.prevHash !== GENESIS_HASH : linked && link.prevHash !== prev!.hash) {

@@ -12,6 +12,7 @@ export { importBackupFile } from './import-job.ts';
 export { recordBackup } from './backup-record.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
 export { tallyChecks } from './tally.ts';
+export { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 export type { CheckTally } from './tally.ts';
 export {
   ownChainHead,

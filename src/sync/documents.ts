@@ -3,8 +3,9 @@
 //
 // tankside-checks: one document per record of a device's chain,
 //   _id "<deviceId>:<seq, 10 digits>", { type, deviceId, seq, id, hash, text }, text the record's
-//   canonical JSON exactly as stored and hashed (never re-serialised). `type` is the record's kind
-//   ("check" today; later kinds of record carry a `kind` member and pass the same rules). Seq 0,
+//   canonical JSON exactly as stored and hashed (never re-serialised). `type` is the record's kind:
+//   "check", or the `kind` member of a record of another kind ("cycle", "periodic-test"; they pass
+//   the same rules). Seq 0,
 //   "<deviceId>:0000000000", is reserved for the device's public key record (type "device-key").
 // tankside-plant: one document per version of a vessel definition and author,
 //   _id "vessel:<vesselId>:<version, 6 digits>:<author>", { type: "vessel", vesselId, version, author, text }.
@@ -46,7 +47,7 @@ export function vesselDocId(vesselId: string, version: number, author: string): 
 
 /** The document for one of this device's records. */
 export function recordDoc(deviceId: string, r: OwnRecord): RecordDoc {
-  return { _id: recordDocId(deviceId, r.seq), type: 'check', deviceId, seq: r.seq, id: r.id, hash: r.hash, text: r.text };
+  return { _id: recordDocId(deviceId, r.seq), type: r.kind, deviceId, seq: r.seq, id: r.id, hash: r.hash, text: r.text };
 }
 
 /** The document for this device's public key record (seq 0), written once at enrolment. */

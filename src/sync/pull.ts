@@ -2,7 +2,7 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, isKnownKind, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
 import { answerError, type Couch } from './couch.ts';
 import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
@@ -106,7 +106,7 @@ export async function pullChecks(
       const problem = envelopeProblem(doc);
       if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
       else if (doc.seq === 0) result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
-      else if (doc.type !== 'check') result.unknownKinds += 1;
+      else if (doc.type !== 'check' && !isKnownKind(doc.type)) result.unknownKinds += 1;
       else {
         records.push({ label: doc._id, text: doc.text });
         seqOf.set(doc.id!, doc);

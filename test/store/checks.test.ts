@@ -57,7 +57,7 @@ describe('appendCheck', () => {
       spy.mockRestore();
     }
     expect(await loadDraft('check')).toBeUndefined();
-    expect(scopes).toEqual([['drafts', 'logBlocks', 'logIds', 'logMonthParts']]);
+    expect(scopes).toEqual([['drafts', 'logBlocks', 'logIds', 'logKinds', 'logMonthParts']]);
     await expect(appendCheck(sampleCheck(v.id), { clearDraft: '' })).rejects.toThrow(/clearDraft: 0 characters; allowed 1 to 100/);
   });
 

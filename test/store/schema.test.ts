@@ -7,7 +7,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { appendCheck, checksForVessel, closeStore, correctionsOf, getCheck, getSetting, getVessel, listChecks, loadDraft, openStore, saveDraft, GENESIS_HASH, type StoreEvent } from '../../src/store/index.ts';
 import Papa from 'papaparse';
 import { exportCsv, tallyChecks, verifyStoredChains } from '../../src/store/transfer.ts';
-import { outcomeOfMask, queryChecks } from '../../src/store/index.ts';
+import { appendRecord, countStoredChecks, listRecords, outcomeOfMask, queryChecks } from '../../src/store/index.ts';
 import { getDb } from '../../src/store/connection.ts';
 import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
 import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
@@ -103,6 +103,7 @@ const CURRENT_SCHEMA = {
   drafts: [],
   logBlocks: [],
   logIds: [],
+  logKinds: ['by-kind-time:["kind","timeMs","id"]'],
   logMonthParts: ['by-month:"monthMs"'],
   settings: [],
   vessels: ['by-tag:"tagKey"'],
@@ -151,7 +152,7 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(6);
+    expect(DB_VERSION).toBe(7);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
@@ -350,6 +351,61 @@ describe('upgrade ladder', () => {
     // The next save goes into the last part of its month, or a new one: never the whole month again.
     await appendCheck(sampleCheck(VESSEL_ID, { takenAt: new Date(Date.UTC(2026, 0, 30)) }));
     expect((await db.getAll('logMonthParts')).map((p) => p.rows.length)).toEqual([500, 500, 201, 3]);
+  });
+
+  it('v6 → v7: the records-of-other-kinds list is added; the v6 log stays byte for byte, and a cycle record carries its chain on', async () => {
+    // Two chained checks of one device as v6 wrote them: a block, a month part, id buckets.
+    const D = '4a6b8c0d-1e2f-4a3b-8c4d-5e6f7a8b9c0d';
+    const records: Record<string, unknown>[] = [];
+    let prevHash = GENESIS_HASH;
+    for (let i = 0; i < 2; i += 1) {
+      const timeMs = Date.UTC(2026, 11, 1, 8 + i);
+      const { takenAt: _t, corrects: _c, reason: _r, vesselId: _v, ...rest } = sampleCheck(VESSEL_ID);
+      const content = {
+        ...rest, id: `6c8d0e2f-0000-4000-8000-${String(i).padStart(12, '0')}`, deviceId: D, seq: i + 1,
+        time: new Date(timeMs).toISOString().slice(0, 19) + 'Z', timeMs, vesselId: VESSEL_ID, vessel: { tag: 'CR-3', spec: SPEC },
+        corrects: null, reason: null, prevHash,
+      };
+      const hash = await computeCheckHash(content as never);
+      records.push({ ...content, hash });
+      prevHash = hash;
+    }
+    const block = { deviceId: D, firstSeq: 1, seqs: [1, 2], texts: records.map((r) => canonicalJson(r)) };
+    const old = await rawOpen(6, (db) => {
+      db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+      db.createObjectStore('settings');
+      db.createObjectStore('drafts');
+      db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+      db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+      db.createObjectStore('logIds');
+      const tx = upgradeTxOf(db);
+      tx.objectStore('vessels').put(vesselV1());
+      tx.objectStore('settings').put(D, SETTING_DEVICE_ID);
+      tx.objectStore('logBlocks').put(block);
+      const monthMs = Date.UTC(2026, 11, 1);
+      tx.objectStore('logMonthParts').put({
+        vesselId: VESSEL_ID, monthMs, startMs: monthMs, startId: '',
+        rows: records.map((r) => [r['timeMs'], r['id'], D, r['seq'], null, 0, r['technician']]),
+      });
+      const ids: Record<string, Record<string, { at: [string, number] }>> = {};
+      for (const r of records) (ids[(r['id'] as string).slice(-2)] ??= {})[r['id'] as string] = { at: [D, r['seq'] as number] };
+      for (const [k, bucket] of Object.entries(ids)) tx.objectStore('logIds').put(bucket, k);
+    });
+    old.close();
+    await openStore({ onEvent: (e) => events.push(e) });
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    expect(await db.getAll('logBlocks')).toEqual([block]);
+    expect((await listChecks()).checks.map((c) => c.id)).toEqual([records[1]!['id'], records[0]!['id']]);
+    const cycle = await appendRecord('cycle', {
+      vesselId: VESSEL_ID, technician: 'T', values: { invented: true }, cautions: [], appVersion: '0.1.0', formulationId: 'IAPWS-IF97 (R7-97(2012))',
+    });
+    expect(cycle).toMatchObject({ deviceId: D, seq: 3, prevHash: records[1]!['hash'] });
+    expect((await listRecords({ kind: 'cycle', vesselId: VESSEL_ID })).records).toEqual([cycle]);
+    expect(await countStoredChecks()).toBe(2);
+    expect(await verifyStoredChains()).toMatchObject([{ deviceId: D, status: 'ok', count: 3, headSeq: 3 }]);
+    expect(events).toEqual([]);
   });
 
   it('a current database reopens untouched', async () => {

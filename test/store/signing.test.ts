@@ -203,7 +203,7 @@ describe('signed backups', () => {
     const key = (await deviceSigningKey(db))!;
     const doc = JSON.parse(source.backup) as Doc;
     const last = doc.checks.at(-1)!;
-    const content = { deviceId: last.deviceId, id: '7d9e3a52-1c4b-4e8f-9a6d-2b5c8e1f0a3d', kind: 'cycle', prevHash: last.hash, seq: last.seq + 1, cycle: { holdS: 180, note: 'invented' } };
+    const content = { deviceId: last.deviceId, id: '7d9e3a52-1c4b-4e8f-9a6d-2b5c8e1f0a3d', kind: 'calibration-note', prevHash: last.hash, seq: last.seq + 1, note: { text: 'invented' } };
     const hash = await computeCheckHash(content as unknown as CheckRecord);
     (doc.checks as unknown[]).push({ ...content, hash });
     doc.signatures.push({ deviceId: last.deviceId, seq: content.seq, signature: await signChainHead(key, last.deviceId, content.seq, hash) });
@@ -211,11 +211,11 @@ describe('signed backups', () => {
     await useDevice(new IDBFactory());
     const report = await importBackup(JSON.stringify(doc));
     expect(report.checks.added).toHaveLength(3);
-    expect(report.skippedKinds).toEqual({ cycle: 1 });
-    expect(report.warnings).toEqual([expect.stringMatching(/Skipped 1 record of kind "cycle"/)]);
+    expect(report.skippedKinds).toEqual({ 'calibration-note': 1 });
+    expect(report.warnings).toEqual([expect.stringMatching(/Skipped 1 record of kind "calibration-note"/)]);
     expect(report.fileSignatures[0]!.signature).toMatchObject({ state: 'signed', throughSeq: content.seq });
     // Changed after it was hashed, the same record refuses the file.
-    (doc.checks.at(-1) as unknown as { cycle: { holdS: number } }).cycle.holdS = 1;
+    (doc.checks.at(-1) as unknown as { note: { text: string } }).note.text = 'changed';
     await useDevice(new IDBFactory());
     const error = (await importBackup(JSON.stringify(doc)).catch((e: unknown) => e)) as StoreError;
     expect(error.refused).toEqual([expect.objectContaining({ seq: content.seq, why: expect.stringMatching(/content does not match its hash/) })]);

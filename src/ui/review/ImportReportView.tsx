@@ -30,7 +30,8 @@ export function ImportReportView({ outcome }: { outcome: ImportOutcome }) {
   return (
     <div class="import-report" role="status" data-import-result="done">
       <p>
-        <strong data-import-added={v.added}>Added {v.added.toLocaleString('en-GB')} checks</strong>, {v.vesselsAdded} new
+        <strong data-import-added={v.added}>Added {v.added.toLocaleString('en-GB')} checks</strong>
+        {Object.entries(v.recordsAdded).map(([kind, n]) => <span key={kind} data-import-added-kind={kind}>, {n.toLocaleString('en-GB')} {kind} records</span>)}, {v.vesselsAdded} new
         vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>.
       </p>
       <Lines title="Skipped" lines={v.skipped} kind="skipped" />

@@ -42,6 +42,8 @@ export interface ReportLine { key: string; label: string; why: string }
 
 export interface ImportView {
   added: number;
+  /** Records of other kinds added (cycles, periodic tests), by kind. */
+  recordsAdded: Record<string, number>;
   vesselsAdded: number;
   vesselsUpdated: number;
   skipped: ReportLine[];
@@ -54,9 +56,10 @@ export interface ImportView {
 export function importView(r: ImportReport): ImportView {
   return {
     added: r.checks.added.length,
+    recordsAdded: r.records.added.reduce<Record<string, number>>((n, a) => ({ ...n, [a.kind]: (n[a.kind] ?? 0) + 1 }), {}),
     vesselsAdded: r.vessels.added.length,
     vesselsUpdated: r.vessels.updated.length,
-    skipped: [...r.vessels.skipped.map((s) => ({ key: s.id, label: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why }))],
+    skipped: [...r.vessels.skipped.map((s) => ({ key: s.id, label: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why })), ...r.records.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why }))],
     warnings: r.warnings,
     brokenChains: r.fileChains.filter((c) => c.status === 'broken').map((c) => `device ${c.deviceId.slice(0, 8)}: ${c.status === 'broken' ? c.detail : ''}`),
     signatures: r.fileSignatures.map(({ deviceId, signature: s }) => {
