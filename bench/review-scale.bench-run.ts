@@ -129,7 +129,7 @@ async function reviewFigures(page: Page, url: string, count: string, devices: nu
   console.log(`\n With ${count} checks on the device:`);
   await page.goto(`${url}#/settings`);
   await page.reload();
-  await page.locator('main h1').waitFor();
+  await page.locator('header h1').waitFor();
   note(`first rows of the review screen (${count} checks; from another screen)`, await timeRows(page, 'hash||#/review'), '≤ 300 ms');
   noteRead();
   await page.reload();
@@ -253,7 +253,7 @@ it(`a plant's consolidated log: ${PLANT.toLocaleString('en-GB')} checks from ${P
     // At a desk: the overview, and the wide review's sort over the whole match.
     await page.setViewportSize({ width: 1440, height: 900 });
     await page.goto(`${url}#/settings`);
-    await page.locator('main h1').waitFor();
+    await page.locator('header h1').waitFor();
     const overview = await page.evaluate(async () => {
       const t0 = performance.now();
       location.hash = '#/overview';
