@@ -278,4 +278,4 @@ it(`a plant's consolidated log: ${PLANT.toLocaleString('en-GB')} checks from ${P
     note(`wide review: sort the whole match by outcome (${count})`, sorted, '(no target)');
     console.log('Summary:', JSON.stringify(rows.map((r) => ({ [r.what]: Math.round(r.ms) }))));
   });
-});
+}, 3_600_000);
