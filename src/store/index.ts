@@ -46,7 +46,7 @@ export {
 export type { Signal, StoredOutcome, StoredVerdict } from './facts.ts';
 
 // Records of other kinds (cycles, periodic tests …), in the same chain
-export { appendRecord, getRecord, listRecords, countRecords } from './kind-records.ts';
+export { appendRecord, getRecord, listRecords, countRecords, latestOfKind } from './kind-records.ts';
 export type { AppendRecordOptions, KindFilter } from './kind-records.ts';
 export { RECORD_KINDS, isKnownKind } from './record-kinds.ts';
 export type { RecordKind } from './record-kinds.ts';

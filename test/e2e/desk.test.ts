@@ -8,7 +8,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { DIST, PHONE, launch, screenshot, startServer, tempProfile, type StaticServer } from './harness.ts';
+import { DIST, PHONE, launch, screenshot, startServer, tempProfile, verifyChainsOnScreen, type StaticServer } from './harness.ts';
 import { backupText, generatedChecks, generatedVessels } from '../../bench/generated-log.ts';
 import { checkDue, type CheckDueState } from '../../src/core/check/check-due.ts';
 import { outcomeOfRecord } from '../../src/store/facts.ts';
@@ -152,8 +152,47 @@ describe("the supervisor's desk", () => {
       await page.keyboard.press('ArrowDown');
       await page.keyboard.press('Enter');
       await page.locator(`[data-open-record="${reversed[2]!.id}"]`).waitFor();
-      await screenshot(page, 'desk-review-1440');
       await expect.poll(() => page.locator('.review-record').textContent()).toContain(reversed[2]!.vessel.tag);
+      await screenshot(page, 'desk-review-1440');
+    } finally {
+      await ctx.close();
+    }
+  });
+
+  it('at 1440×900 a review note clears a flag, and the note verifies in this device\'s chain', async () => {
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.clock.setFixedTime(NOW);
+      await page.setViewportSize({ width: 1440, height: 900 });
+      await page.goto(`${server.url}#/overview`);
+      await page.locator('[data-overview-state="ready"]').waitFor();
+      const flagged = page.locator('tr[data-flagged="true"]');
+      const before = await flagged.count();
+      const tag = (await flagged.first().getAttribute('data-vessel-tag'))!;
+      expect(before, 'the generated plant has flagged vessels').toBeGreaterThan(0);
+      expect(expected.get(tag)!.outcome).not.toBe('none');
+      await page.locator(`tr[data-vessel-tag="${tag}"]`).getByRole('button', { name: /Review note/ }).click();
+      // Bad input is named, nothing is saved.
+      await page.getByRole('button', { name: 'Save review note' }).click();
+      await expect.poll(() => page.locator('.review-note-form').textContent()).toContain('Supervisor: give your name, 1 to 100 characters.');
+      await page.fill('#note-supervisor', 'Demo Supervisor');
+      await page.fill('#note-decision', 'Demo data: gauge to be compared with the reference gauge; vessel stays in service meanwhile.');
+      await page.getByRole('button', { name: 'Save review note' }).click();
+      await page.locator(`[data-overview-generation="1"][data-overview-state="ready"] tr[data-vessel-tag="${tag}"][data-flagged="false"]`).waitFor();
+      expect(await page.locator('tr[data-flagged="true"]').count()).toBe(before - 1);
+      expect(await page.locator(`tr[data-vessel-tag="${tag}"]`).textContent()).toContain('cleared by a review note');
+
+      // The note is a record in this device's chain: the chain verifies, signed.
+      await page.goto(`${server.url}#/review`);
+      await page.locator('[data-review-table-state="ready"]').waitFor();
+      const { state, lines } = await verifyChainsOnScreen(page);
+      expect(state).toBe('done');
+      expect(lines.map((l) => l.chain)).toEqual(['ok', 'ok']);
+      expect(lines.some((l) => l.text.includes('1 records, seq 1 to 1') && l.text.includes('signed by device'))).toBe(true);
+      // After a reload the flag stays cleared (read from the stored note).
+      await page.goto(`${server.url}#/overview`);
+      await page.locator(`[data-overview-state="ready"] tr[data-vessel-tag="${tag}"][data-flagged="false"]`).waitFor();
     } finally {
       await ctx.close();
     }

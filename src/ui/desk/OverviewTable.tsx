@@ -12,12 +12,14 @@ interface Props {
   sort: OverviewSort;
   reverse: boolean;
   onSort(sort: OverviewSort): void;
+  /** Opens the review note form for a flagged vessel. */
+  onNote(vesselId: string): void;
 }
 
 const COLUMN_OF: Partial<Record<string, OverviewSort>> = { Vessel: 'vessel', 'Latest outcome': 'outcome', 'Last checked': 'last-checked', 'Checked by': 'technician', Due: 'due' };
 const COLUMNS = ['Vessel', 'Latest outcome', 'Last checked', 'Checked by', 'Due', 'Open findings'] as const;
 
-export function OverviewTable({ caption, rows, sort, reverse, onSort }: Props) {
+export function OverviewTable({ caption, rows, sort, reverse, onSort, onNote }: Props) {
   return (
     <table class="overview-table">
       <caption>{caption}</caption>
@@ -51,7 +53,10 @@ export function OverviewTable({ caption, rows, sort, reverse, onSort }: Props) {
             <td data-label="Last checked">{r.latest ? instantText(r.latest.timeMs) : '—'}</td>
             <td data-label="Checked by">{r.latest?.technician ?? '—'}</td>
             <td data-label="Due" class={`due-${r.due.state}`}>{dueText(r.due)}</td>
-            <td data-label="Open findings">{openFindingsText(r)}</td>
+            <td data-label="Open findings">
+              {openFindingsText(r)}
+              {r.flagged ? <> <button type="button" class="note-button" onClick={() => onNote(r.vessel.id)}>Review note<span class="visually-hidden"> on {r.vessel.tag}</span></button></> : null}
+            </td>
           </tr>
         ))}
       </tbody>

@@ -1,7 +1,7 @@
 // Review for supervisors: filter the log, page through it, totals, chain status per device, the
 // vessel report with its trend chart, export and import. Reads the store a page at a time.
 import { useEffect, useRef, useState } from 'preact/hooks';
-import type { VesselRecord } from '../../store/index.ts';
+import type { CheckRecord, VesselRecord } from '../../store/index.ts';
 import './review.css';
 import { ReviewFilters } from './ReviewFilters.tsx';
 import { ReviewList } from './ReviewList.tsx';
@@ -43,6 +43,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
   // While an import writes, counting totals would only compete with it for the store.
   const [importing, setImporting] = useState(false);
   const pager = useRef<ReviewPager | null>(null);
+  const [openRecord, setOpenRecord] = useState<CheckRecord | null>(null);
   // Newest and oldest first come from the store (the whole match in that order); the other orders
   // sort the rows shown.
   const storeOrder = order === 'oldest' ? 'oldest' : 'newest';
@@ -116,7 +117,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
   return (
     <div class="review-screen" data-shown={shown}>
       {wide ? (
-        <div class="no-print"><WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} /></div>
+        <div class="no-print"><WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} open={openRecord} onOpen={setOpenRecord} /></div>
       ) : (
         <div class="no-print">
           {filters}

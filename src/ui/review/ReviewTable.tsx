@@ -24,7 +24,10 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
   const [sort, setSort] = useState<TableSort>({ by: 'time', descending: true });
   const [rows, setRows] = useState<CheckRecord[]>([]);
   const [state, setState] = useState<{ loading: boolean; more: boolean; total: number | null; error: string }>({ loading: true, more: false, total: null, error: '' });
-  const [active, setActive] = useState(0);
+  const [active, setActiveState] = useState(0);
+  // Keys can come faster than renders: the handler reads the row the last key moved to, not the last render's.
+  const activeNow = useRef(0);
+  const setActive = (i: number) => { activeNow.current = i; setActiveState(i); };
   const pager = useRef<TablePager | null>(null);
   const body = useRef<HTMLTableSectionElement>(null);
 
@@ -58,11 +61,12 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
     (body.current?.children[next] as HTMLElement | undefined)?.focus();
   };
   const onKey = (e: KeyboardEvent) => {
-    if (e.key === 'ArrowDown') { e.preventDefault(); move(active + 1); }
-    else if (e.key === 'ArrowUp') { e.preventDefault(); move(active - 1); }
+    const at = activeNow.current;
+    if (e.key === 'ArrowDown') { e.preventDefault(); move(at + 1); }
+    else if (e.key === 'ArrowUp') { e.preventDefault(); move(at - 1); }
     else if (e.key === 'Home') { e.preventDefault(); move(0); }
     else if (e.key === 'End') { e.preventDefault(); move(rows.length - 1); }
-    else if (e.key === 'Enter' && rows[active]) { e.preventDefault(); onOpen(rows[active]!); }
+    else if (e.key === 'Enter' && rows[at]) { e.preventDefault(); onOpen(rows[at]!); }
   };
   const sortBy = (c: Column) => {
     if (!c.sort) return;

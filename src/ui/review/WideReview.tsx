@@ -1,7 +1,6 @@
 // The Review at 1024 px and wider: the filter and totals in a side panel, the checks as a table,
 // the chosen check's full record beside it.
 import type { ComponentChildren } from 'preact';
-import { useState } from 'preact/hooks';
 import type { CheckRecord } from '../../store/index.ts';
 import { CheckRecordView } from '../components/CheckRecordView.tsx';
 import { useSettings } from '../state/app-state.ts';
@@ -13,11 +12,13 @@ interface Props {
   side: ComponentChildren;
   filter: ReviewFilter;
   generation: number;
+  /** The record shown beside the table; held by the screen, so a layout change (a rotated tablet) keeps it. */
+  open: CheckRecord | null;
+  onOpen(record: CheckRecord): void;
 }
 
-export function WideReview({ side, filter, generation }: Props) {
+export function WideReview({ side, filter, generation, open, onOpen: setOpen }: Props) {
   const prefs = unitsInForce(useSettings());
-  const [open, setOpen] = useState<CheckRecord | null>(null);
   return (
     <div class="review-desk">
       <aside class="review-side" aria-label="Filter and totals">{side}</aside>
