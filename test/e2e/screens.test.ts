@@ -192,7 +192,7 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
-    for (const name of ['Fill plan', 'Review', 'Vessel labels', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Plant overview', 'Vessel labels', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -207,6 +207,14 @@ describe('every screen', () => {
     await page.locator('#rf-vessel').waitFor();
     await page.locator('.review-screen[data-shown="1"]').waitFor();
     await inspect('13-review');
+  });
+
+  it('Plant overview (the demo plant; issue 14)', async () => {
+    await page.goto(`${server.url}#/overview`);
+    await page.locator('[data-overview-state="ready"]').waitFor();
+    // The demo plant's vessels in service (one of its four is retired by an earlier test).
+    expect(await page.locator('.overview-table tbody tr').count()).toBeGreaterThanOrEqual(3);
+    await inspect('14-overview');
   });
 
   it('Settings', async () => {
