@@ -151,7 +151,7 @@ async function reviewFigures(page: Page, url: string, count: string, devices: nu
   note(`filter by outcome DANGER as well (${count})`, await timeRows(page, 'change|#rf-outcome|DANGER'), '≤ 200 ms');
   noteRead();
   await page.locator('.review-totals[data-complete="yes"]').waitFor();
-  note(`CSV of the filtered checks (June, DANGER; ${count})`, await timeClick(page, 'Download CSV of the filtered checks', download), '(no target)');
+  note(`CSV of the filtered checks (June, DANGER; ${count})`, await timeClick(page, 'Filtered checks as CSV', download), '(no target)');
   noteJob('of which exportCsvParts({ filter }) and making the file, timed in the page', await jobMs(page, 'Writing the CSV of the filtered checks'));
   note(`filter cleared (${count})`, await timeRows(page, 'change|#rf-month|'), '≤ 200 ms');
   await page.selectOption('#rf-outcome', '');
@@ -268,6 +268,7 @@ it(`a plant's consolidated log: ${PLANT.toLocaleString('en-GB')} checks from ${P
     await page.locator('[data-review-table-state="ready"]').waitFor();
     const sorted = await page.evaluate(async () => {
       const t0 = performance.now();
+      // data-sort-by names the order of the rows shown, so this waits for the sorted rows themselves.
       (document.querySelector('.review-table [data-sort-column="outcome"]') as HTMLButtonElement).click();
       await new Promise<void>((done) => {
         const tick = () => (document.querySelector('.review-table[data-sort-by="outcome"][data-review-table-state="ready"] tbody tr') ? done() : requestAnimationFrame(tick));

@@ -23,6 +23,8 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
   const columns = chosenColumns(ids);
   const [sort, setSort] = useState<TableSort>({ by: 'time', descending: true });
   const [rows, setRows] = useState<CheckRecord[]>([]);
+  // The order the rows shown are in (the one asked for until its first page arrives): what data-sort-by says.
+  const [shownSort, setShownSort] = useState<TableSort>(sort);
   const [state, setState] = useState<{ loading: boolean; more: boolean; total: number | null; error: string }>({ loading: true, more: false, total: null, error: '' });
   const [active, setActiveState] = useState(0);
   // Keys can come faster than renders: the handler reads the row the last key moved to, not the last render's.
@@ -39,6 +41,7 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
     p.nextPage(stop.signal).then((page) => {
       if (stop.signal.aborted) return;
       setRows(page.rows);
+      setShownSort(sort);
       setActive(0);
       setState({ loading: false, more: page.more, total: page.total, error: '' });
     }, (e: unknown) => { if (!stop.signal.aborted) setState({ loading: false, more: false, total: null, error: e instanceof Error ? e.message : String(e) }); });
@@ -86,7 +89,7 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
       </p>
       {state.error ? <p class="field-error" role="alert">The log could not be read: {state.error}</p> : null}
       <div class="review-table-scroll">
-        <table class="review-table" data-review-table-state={state.loading ? 'loading' : 'ready'} data-sort-by={sort.by} data-sort-dir={sort.descending ? 'descending' : 'ascending'}>
+        <table class="review-table" data-review-table-state={state.loading ? 'loading' : 'ready'} data-sort-by={shownSort.by} data-sort-dir={shownSort.descending ? 'descending' : 'ascending'}>
           <thead>
             <tr>
               {columns.map((c) => (

@@ -49,7 +49,7 @@ export function TransferPanel({ onBusy, onImported, filter = {} }: { onBusy(busy
       <h2 id="review-transfer-title">Export and import</h2>
       <div class="row">
         <button type="button" onClick={() => void exportAs('csv')} disabled={busy}>Download CSV</button>
-        {narrowed ? <button type="button" onClick={() => void exportAs('csv', true)} disabled={busy}>Download CSV of the filtered checks</button> : null}
+        {narrowed ? <button type="button" onClick={() => void exportAs('csv', true)} disabled={busy}>Filtered checks as CSV</button> : null}
         <button type="button" onClick={() => void exportAs('json')} disabled={busy}>Download JSON backup</button>
       </div>
       <p aria-live="polite" data-export-message data-export-result={message?.result}>{message?.text ?? ''}</p>
