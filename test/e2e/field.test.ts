@@ -246,7 +246,9 @@ describe('field screens', () => {
       await page.fill('#chk-temperature', '133,5');
       await page.fill('#chk-pressure', '200');
       await page.fill('#chk-gross', '1400');
-      await page.locator('#result[data-settled="true"]').waitFor();
+      // The card of the reading without the weight is settled too until the weighed one replaces it:
+      // wait for the weighed result (its quality figure) before reading the words.
+      await expect.poll(() => page.locator('#result[data-settled="true"]').innerText()).toMatch(/Quality \(steam mass fraction\)/);
       await page.$eval('details[data-group="hazards"]', (d) => { (d as HTMLDetailsElement).open = true; });
       seen.push(await page.$eval('body', (el) => (el as HTMLElement).innerText));
       expect(seen.join('\n')).toMatch(/vapour/);
