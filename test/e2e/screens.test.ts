@@ -192,6 +192,8 @@ describe('every screen', () => {
 
   it('More, and every destination on it one tap away', async () => {
     await page.getByRole('link', { name: 'More' }).click();
+    // The More screen is its own chunk: count its links once it is drawn, not while it loads.
+    await page.locator('.more-screen').waitFor();
     for (const name of ['Fill plan', 'Review', 'Plant overview', 'Vessel labels', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
