@@ -21,7 +21,7 @@ export default defineConfig({
   root: resolve(rootDir, 'src'),
   publicDir: resolve(rootDir, 'src/public'),
   base: './',
-  define: { __APP_VERSION__: JSON.stringify(appVersion) },
+  define: { __APP_VERSION__: JSON.stringify(appVersion), __SYNC_ORIGIN__: JSON.stringify(SYNC_ORIGIN ?? '') },
   build: {
     outDir: resolve(rootDir, 'dist'),
     emptyOutDir: true,

@@ -38,4 +38,13 @@ if (existing.status === 200) user._rev = existing.body._rev;
 await server.expect([201, 202], 'PUT', path, user);
 console.log(`Account ${deviceId} ${existing.status === 200 ? 'updated' : 'created'} with roles ${roles.join(', ')}.`);
 console.log('Enrolment for the device (give it to the device only; the password is not shown again):');
-console.log(JSON.stringify({ account: deviceId, password, role: kind === 'supervisor' ? 'supervisor' : 'technician' }, null, 2));
+const role = kind === 'supervisor' ? 'supervisor' : 'technician';
+console.log(JSON.stringify({ account: deviceId, password, role }, null, 2));
+// With the app's address (TANKSIDE_APP_URL=https://tankside.plant.example/), also the enrolment link
+// the Sync screen reads (src/ui/sync/enrolment.ts), to open on the device or show as a QR code.
+const app = process.env.TANKSIDE_APP_URL;
+if (app) {
+  const link = new URL(app);
+  link.hash = `/sync/enrol?${new URLSearchParams({ server: process.env.TANKSIDE_SYNC_SERVER ?? '/db/', account: deviceId, password, role })}`;
+  console.log(`Enrolment link: ${link}`);
+}

@@ -9,6 +9,7 @@ import { loadAppState, reportSaveError, reportStoreFailed } from './ui/state/app
 import { flushDrafts } from './ui/state/drafts.ts';
 import { openAppStore, storageMessage } from './ui/state/repo.ts';
 import { warmEngineWhenIdle } from './ui/state/engine.ts';
+import { startSyncTriggers } from './ui/state/sync-status.ts';
 
 // The stylesheet travels inside this script and is adopted before the first render: no stylesheet
 // request holds up the first paint, and the shell is never drawn unstyled. A constructed sheet is
@@ -24,6 +25,9 @@ async function start(): Promise<void> {
     await openAppStore(reportSaveError);
     await loadAppState();
     warmEngineWhenIdle();
+    // Sync never holds up the app: the triggers start once the store is open, and a failure to
+    // read the sync settings only leaves sync off.
+    void startSyncTriggers().catch(() => undefined);
   } catch (e) {
     reportStoreFailed();
     reportSaveError(`Storage is not available, so nothing can be saved: ${storageMessage(e)}`);

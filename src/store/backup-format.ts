@@ -250,7 +250,8 @@ function validateOther(field: string, value: Record<string, unknown>): OtherReco
   };
 }
 
-function validatePublicKey(field: string, value: unknown): PublicJwk | null {
+/** A public JWK as the backup (and the plant server's device-key record) carries it; null stays null. @throws StoreError('invalid-backup') naming the field */
+export function validatePublicKey(field: string, value: unknown): PublicJwk | null {
   if (value === null) return null;
   const k = requireObject(field, value);
   requireKeys(field, k, JWK_KEYS);

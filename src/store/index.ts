@@ -59,6 +59,7 @@ export {
   loadDraft,
   clearDraft,
   deviceId,
+  syncServer,
   requestPersistence,
   persistenceState,
   backupState,

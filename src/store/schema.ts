@@ -46,6 +46,8 @@ export const SETTING_LAST_BACKUP = 'store:lastBackup';
 export const SETTING_SIGNING_KEY = 'store:signingKey';
 /** Followed by a device id: that device's public key, learnt from a backup it signed (KnownDeviceKey). */
 export const SETTING_DEVICE_KEY_PREFIX = 'store:deviceKey:';
+/** Plant sync's settings (sync-log.ts SyncState): server, account, checkpoints, last outcome. */
+export const SETTING_SYNC = 'store:sync';
 
 /** A saved draft: whatever the screen wants back after a reload, with when it was saved. */
 export interface DraftRecord {

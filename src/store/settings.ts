@@ -2,7 +2,7 @@
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import type { IsoDateTime, JsonValue } from './records.ts';
-import { RESERVED_SETTING_PREFIX, SETTING_DEVICE_ID, SETTING_LAST_BACKUP, SETTING_PERSISTENCE } from './schema.ts';
+import { RESERVED_SETTING_PREFIX, SETTING_DEVICE_ID, SETTING_LAST_BACKUP, SETTING_PERSISTENCE, SETTING_SYNC } from './schema.ts';
 import { formatIsoWithOffset } from './time.ts';
 import { requireJson, requireText } from './validate.ts';
 
@@ -77,6 +77,17 @@ export async function clearDraft(key: string): Promise<void> {
   } catch (error) {
     throw storeErrorFromWrite(error, 'Clearing the draft');
   }
+}
+
+/**
+ * The plant server this device is enrolled with, as saved at enrolment (an absolute URL or a path
+ * on the app's own origin), or null while plant sync is off. On the everyday surface, so the shell
+ * can say where checks go without loading the sync client (sync-log.ts keeps the whole state).
+ */
+export async function syncServer(): Promise<string | null> {
+  const stored = await (await getDb()).get('settings', SETTING_SYNC);
+  const server = typeof stored === 'object' && stored !== null && !Array.isArray(stored) ? (stored as { server?: unknown }).server : null;
+  return typeof server === 'string' && server !== '' ? server : null;
 }
 
 /** This install's device id (a UUID made on first use), which every check it saves carries. */

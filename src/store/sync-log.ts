@@ -12,14 +12,14 @@ import { canonicalJson, chainFieldsOfText, contentOfText, kindOfText, throwIfAbo
 import { chainHead, LOG_STORES } from './log-layout.ts';
 import { deviceBlocks } from './log-walks.ts';
 import { GENESIS_HASH, type LogRecord, type IsoDateTime, type JsonValue, type VesselRecord } from './records.ts';
+import { SETTING_SYNC } from './schema.ts';
 import { deviceId } from './settings.ts';
 import { sha256OfText } from './sha256.ts';
 import { formatIsoWithOffset, parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, invalid, requireText, requireUuid } from './validate.ts';
 
 const STRICT = { durability: 'strict' } as const;
-/** Settings keys of this module; reserved ("store:"), so putSetting cannot overwrite them. */
-const SETTING_SYNC = 'store:sync';
+/** Settings key of this module (and SETTING_SYNC, schema.ts); reserved ("store:"), so putSetting cannot overwrite it. */
 const SETTING_PLANT = 'store:plant';
 
 // ---------------------------------------------------------------- this device's chain
@@ -33,6 +33,8 @@ export interface OwnRecord {
   hash: string;
   /** The canonical JSON the store holds (the exact text that was hashed). */
   text: string;
+  /** The record's chain-head signature (signing.ts), '' where it was saved unsigned. */
+  signature: string;
 }
 
 /** This device's id and the seq and hash of its last stored record (null before the first). */
@@ -64,7 +66,7 @@ export async function ownRecords(fromSeq: number, count: number): Promise<OwnRec
       const text = block.texts[i]!;
       const cut = chainFieldsOfText(text, seq);
       const { id, hash } = cut ? cut.link : (JSON.parse(text) as LogRecord);
-      out.push({ kind: kindOfText(text), seq, id, hash, text });
+      out.push({ kind: kindOfText(text), seq, id, hash, text, signature: block.sigs?.[i] ?? '' });
     });
   }
   return out;
@@ -76,6 +78,8 @@ export async function ownRecords(fromSeq: number, count: number): Promise<OwnRec
 export interface PulledRecord {
   label: string;
   text: string;
+  /** The record's chain-head signature as the server carries it; '' or absent for none. */
+  signature?: string;
 }
 
 /** What mergePulledRecords did. */
@@ -104,8 +108,9 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
   const checks: LogRecord[] = [];
   const texts: string[] = [];
   const labels: string[] = [];
+  const signatures: BackupDocument['signatures'] = [];
   const inBatch = new Map<string, string>(); // id -> text
-  for (const { label, text } of records) {
+  for (const { label, text, signature } of records) {
     const why = problemOfPulled(text);
     if (typeof why === 'string') {
       report.refused.push({ label, why });
@@ -118,6 +123,7 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
       continue;
     }
     inBatch.set(why.id, text);
+    if (signature) signatures.push({ deviceId: why.deviceId, seq: why.seq, signature });
     checks.push(why);
     texts.push(text);
     labels.push(label);
@@ -131,10 +137,11 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
     exportedAt: formatIsoWithOffset(new Date()),
     vessels: [],
     checks,
-    // Kinds this version does not keep were left on the server by the pull; signatures are not carried yet.
+    // Kinds this version does not keep were left on the server by the pull. Keys come from the
+    // devices' key records, learnt before the merge (sync-keys.ts), so no chains are needed here.
     others: [],
     chains: [],
-    signatures: [],
+    signatures,
   };
   const merged = await mergeRecords(doc, texts, hashes, { policy: 'record-by-record', ...(options.signal ? { signal: options.signal } : {}) });
   const labelOf = new Map(checks.map((c, i) => [c.id, labels[i]!]));
@@ -241,6 +248,11 @@ export interface LastSync {
   pulled: number;
   /** Plain words for the user: what was done, or what went wrong. */
   message: string;
+  /**
+   * The seq of this device's last record the server was known to hold after this sync (the pending
+   * count is the local head less this); absent before the first sync that got that far.
+   */
+  serverHead?: number;
 }
 
 /** The sync settings of this device. */
@@ -320,6 +332,9 @@ function requireSyncPatch(patch: Partial<SyncState>): void {
       if (!Number.isSafeInteger(last[n]) || last[n] < 0) throw invalid(`lastSync.${n}`, `${last[n]}; expected a whole number from 0`);
     }
     requireText('lastSync.message', last.message, 0, 2000);
+    if (last.serverHead !== undefined && (!Number.isSafeInteger(last.serverHead) || last.serverHead < 0)) {
+      throw invalid('lastSync.serverHead', `${last.serverHead}; expected a whole number from 0`);
+    }
   }
 }
 

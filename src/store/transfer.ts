@@ -25,6 +25,8 @@ export {
   vesselEditsToPublish,
   recordPublished,
 } from './sync-log.ts';
+export { learnDeviceKeys, ownDeviceKeyText } from './sync-keys.ts';
+export type { DeviceKeyRecord, KeyLearnReport } from './sync-keys.ts';
 export type {
   LastSync,
   LinkProblem,

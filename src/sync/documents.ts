@@ -5,8 +5,11 @@
 //   _id "<deviceId>:<seq, 10 digits>", { type, deviceId, seq, id, hash, text }, text the record's
 //   canonical JSON exactly as stored and hashed (never re-serialised). `type` is the record's kind:
 //   "check", or the `kind` member of a record of another kind ("cycle", "periodic-test"; they pass
-//   the same rules). Seq 0,
-//   "<deviceId>:0000000000", is reserved for the device's public key record (type "device-key").
+//   the same rules). Seq 0, "<deviceId>:0000000000", is the device's public key record (type
+//   "device-key"), written once. A record saved signed carries its chain-head signature
+//   (signing.ts) beside the text, in `signature`: the signature covers (deviceId, seq, hash), so it
+//   needs no place in the text, and records saved before their device signed (or by an older
+//   version of the app) have none.
 // tankside-plant: one document per version of a vessel definition and author,
 //   _id "vessel:<vesselId>:<version, 6 digits>:<author>", { type: "vessel", vesselId, version, author, text }.
 import type { OwnRecord, VesselVersion } from '../store/transfer.ts';
@@ -24,7 +27,12 @@ export interface RecordDoc {
   id?: string;
   hash?: string;
   text: string;
+  /** The record's chain-head signature, 86 base64url characters (64 bytes, r ‖ s); absent for none. */
+  signature?: string;
 }
+
+/** A signature as the server's rules accept it: 64 bytes in base64url without padding. */
+const SIGNATURE_PATTERN = /^[A-Za-z0-9_-]{86}$/;
 
 /** A vessel version as the server holds it. */
 export interface VesselDoc {
@@ -47,7 +55,9 @@ export function vesselDocId(vesselId: string, version: number, author: string): 
 
 /** The document for one of this device's records. */
 export function recordDoc(deviceId: string, r: OwnRecord): RecordDoc {
-  return { _id: recordDocId(deviceId, r.seq), type: r.kind, deviceId, seq: r.seq, id: r.id, hash: r.hash, text: r.text };
+  const doc: RecordDoc = { _id: recordDocId(deviceId, r.seq), type: r.kind, deviceId, seq: r.seq, id: r.id, hash: r.hash, text: r.text };
+  if (r.signature !== '') doc.signature = r.signature;
+  return doc;
 }
 
 /** The document for this device's public key record (seq 0), written once at enrolment. */
@@ -68,6 +78,9 @@ export function envelopeProblem(doc: RecordDoc): string | null {
   if (typeof doc.text !== 'string') return 'no text';
   if (typeof doc.deviceId !== 'string' || !Number.isSafeInteger(doc.seq)) return 'no deviceId or seq';
   if (doc._id !== recordDocId(doc.deviceId, doc.seq)) return `_id is not ${recordDocId(doc.deviceId, doc.seq)}`;
+  if (doc.signature !== undefined && (typeof doc.signature !== 'string' || !SIGNATURE_PATTERN.test(doc.signature) || doc.seq === 0)) {
+    return 'signature is not 86 base64url characters on a record of seq 1 or more';
+  }
   let record: Record<string, unknown>;
   try {
     record = JSON.parse(doc.text) as Record<string, unknown>;

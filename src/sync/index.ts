@@ -1,7 +1,7 @@
 // Plant-wide sync with Apache CouchDB: the one entry of src/sync, loaded on demand by the app
 // (like the store's long jobs). Talks to CouchDB and to the store's public surfaces, nothing else.
 // README.md beside this file has the design and the words.
-import { getSyncState, recordBackup, updateSyncState, type LastSync, type SyncState } from '../store/transfer.ts';
+import { getSyncState, ownDeviceKeyText, recordBackup, updateSyncState, type LastSync, type SyncState } from '../store/transfer.ts';
 import { formatIsoWithOffset } from '../store/index.ts';
 import { Couch, DEFAULT_RETRY, type FetchLike, type RetryPolicy } from './couch.ts';
 import { SyncError } from './errors.ts';
@@ -38,11 +38,11 @@ export interface SyncOptions {
   /** The person's name for vessel versions a supervisor publishes. */
   authorName?: string;
   /**
-   * This device's public key record (canonical JSON), to be written once at seq 0 before its
-   * chain. The hook for per-device signing: pass it at enrolment once the store signs chains.
+   * This device's public key record (canonical JSON), written once at seq 0 before its chain;
+   * by default the store's own (ownDeviceKeyText), null to send none.
    */
   deviceKeyText?: string | null;
-  /** Changes per pull request (default PULL_BATCH, 2,000). */
+  /** Changes per pull request (default PULL_BATCH, 10,000). */
   pullBatch?: number;
 }
 
@@ -100,22 +100,26 @@ export async function syncNow(options: SyncOptions): Promise<SyncReport> {
   const supervisor = state.role === 'supervisor';
   let pushed = 0;
   let pulled = 0;
+  // Until this push says otherwise, the server holds what it held after the last sync.
+  let serverHead = state.lastSync?.serverHead;
   try {
     options.onProgress?.({ step: 'sign-in', done: 0, total: null });
     await couch.signIn();
-    const push = await pushOwnChain(couch, { signal: options.signal, onProgress: progress('push'), deviceKeyText: options.deviceKeyText });
+    const deviceKeyText = options.deviceKeyText !== undefined ? options.deviceKeyText : await ownDeviceKeyText();
+    const push = await pushOwnChain(couch, { signal: options.signal, onProgress: progress('push'), deviceKeyText });
     pushed = push.pushed;
+    serverHead = push.serverHead;
     const publish = supervisor ? await publishVesselEdits(couch, state.account, options.authorName ?? '') : null;
     const plant = await pullPlant(couch, { signal: options.signal, onProgress: progress('pull-plant') });
     const checks = supervisor ? await pullChecks(couch, { signal: options.signal, onProgress: progress('pull-checks'), batch: options.pullBatch }) : null;
     pulled = checks?.added.length ?? 0;
     const report: SyncReport = { push, publish, plant, checks, message: summary(push, plant, checks) };
-    await saveOutcome({ outcome: 'ok', pushed, pulled, message: report.message });
+    await saveOutcome({ outcome: 'ok', pushed, pulled, message: report.message, ...(serverHead === undefined ? {} : { serverHead }) });
     return report;
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const outcome = error instanceof SyncError && error.kind === 'cancelled' ? 'cancelled' : 'failed';
-    await saveOutcome({ outcome, pushed, pulled, message }).catch(() => {});
+    await saveOutcome({ outcome, pushed, pulled, message, ...(serverHead === undefined ? {} : { serverHead }) }).catch(() => {});
     throw error;
   }
 }

@@ -2,16 +2,22 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, isKnownKind, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
 import { answerError, type Couch } from './couch.ts';
 import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
 
 /**
- * Changes per request. bench/sync.bench-run.ts pulled 10,000 checks into the store at 2,266/s with
- * 500 per request, 4,694/s with 1,000 and 5,708/s with 2,000 (Node, stand-in, load average about 3).
+ * Changes per request. Each batch's merge reads and rewrites the store's 256 id buckets, whose size
+ * grows with the log, so a first pull costs about (records)² / (batch) there: a supervisor's first
+ * pull of 100,000 in Chromium took 37.0 s of the browser's CPU with 2,000 per request and 14.7 s
+ * with 10,000 (the stand-in's CPU 9.3 s either way; bench/sync-browser.bench-run.ts, load average
+ * 13, so wall times 83 s and 47 s). 10,000 of these documents are about 23 MB of JSON per answer:
+ * a phone parses that in a fraction of a second, and a sync of a few new checks asks for no more
+ * than there is. (Node and fake-indexeddb, before: 500, 1,000 and 2,000 gave 2,266, 4,694 and
+ * 5,708 checks/s on 10,000.)
  */
-export const PULL_BATCH = 2000;
+export const PULL_BATCH = 10_000;
 
 interface ChangesAnswer<T> {
   results?: { id: string; seq: unknown; deleted?: boolean; doc?: T }[];
@@ -42,13 +48,23 @@ async function pullFeed<T extends { _id: string }>(
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined; batch?: number | undefined },
 ): Promise<number> {
   const key = checkpointKey(couch.root.href, db);
-  let since = (await getSyncState()).checkpoints[key] ?? 0;
+  const since = (await getSyncState()).checkpoints[key] ?? 0;
   const limit = options.batch ?? PULL_BATCH;
+  const read = (from: unknown) => couch.request<ChangesAnswer<T>>('GET', `${db}/_changes?since=${encodeURIComponent(String(from))}&include_docs=true&limit=${limit}`);
   let done = 0;
+  let next = read(since);
   for (;;) {
     throwIfCancelled(options.signal);
-    const r = await couch.request<ChangesAnswer<T>>('GET', `${db}/_changes?since=${encodeURIComponent(String(since))}&include_docs=true&limit=${limit}`);
+    const r = await next;
     if (r.status !== 200 || !Array.isArray(r.body.results) || r.body.last_seq === undefined) throw answerError(`Reading the changes of ${db}`, r);
+    const more = !(r.body.results.length < limit || (typeof r.body.pending === 'number' && r.body.pending === 0));
+    if (more) {
+      // The next batch is asked for while this one is merged here: the server's answer and the
+      // phone's write overlap (bench/sync-browser.bench-run.ts: waiting on the server was about
+      // 40 % of a first pull). The checkpoint still moves only past what has committed.
+      next = read(r.body.last_seq);
+      next.catch(() => undefined); // heard when awaited; a merge failing first must not leave it unhandled
+    }
     const docs: T[] = [];
     for (const change of r.body.results) {
       if (change.deleted || !change.doc || change.id.startsWith('_design/')) continue;
@@ -59,8 +75,7 @@ async function pullFeed<T extends { _id: string }>(
     // Only now, with the batch committed here: a batch pulled twice is skipped as identical.
     if (r.body.results.length > 0) await updateSyncState({ checkpoints: { [key]: r.body.last_seq as string | number } });
     options.onProgress?.({ done, pending: typeof r.body.pending === 'number' ? r.body.pending : null });
-    if (r.body.results.length < limit || (typeof r.body.pending === 'number' && r.body.pending === 0)) return done;
-    since = r.body.last_seq as string | number;
+    if (!more) return done;
   }
 }
 
@@ -81,11 +96,10 @@ export interface ChecksPullResult {
   gaps: LinkProblem[];
   /** Documents of a kind this version of the app does not know (later record kinds), not stored. */
   unknownKinds: number;
-  /**
-   * Device public key records (seq 0) seen, as their texts: the hook for verifying signed chains
-   * once per-device signing is in the store.
-   */
+  /** Device public key records (seq 0) seen, as their texts; each is learnt before its batch's records merge. */
   deviceKeys: { deviceId: string; text: string }[];
+  /** Devices whose public key this pull learnt (their signed records now verify here). */
+  keysLearnt: string[];
 }
 
 /**
@@ -97,20 +111,30 @@ export async function pullChecks(
   couch: Couch,
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined; batch?: number | undefined } = {},
 ): Promise<ChecksPullResult> {
-  const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [] };
+  const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [], keysLearnt: [] };
   const touched = new Map<string, { fromSeq: number; toSeq: number }>();
   result.read = await pullFeed<RecordDoc>(couch, CHECKS_DB, async (docs) => {
-    const records: { label: string; text: string }[] = [];
+    const records: { label: string; text: string; signature?: string }[] = [];
+    const keys: { label: string; text: string }[] = [];
     const seqOf = new Map<string, RecordDoc>();
     for (const doc of docs) {
       const problem = envelopeProblem(doc);
       if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
-      else if (doc.seq === 0) result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
-      else if (doc.type !== 'check' && !isKnownKind(doc.type)) result.unknownKinds += 1;
+      else if (doc.seq === 0) {
+        result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
+        keys.push({ label: doc._id, text: doc.text });
+      } else if (doc.type !== 'check' && !isKnownKind(doc.type)) result.unknownKinds += 1;
       else {
-        records.push({ label: doc._id, text: doc.text });
+        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature } : { label: doc._id, text: doc.text });
         seqOf.set(doc.id!, doc);
       }
+    }
+    // A device writes its key before its first record, so the feed brings it first: learnt before
+    // the records it vouches for are merged (the merge reads the keys the store knows).
+    if (keys.length > 0) {
+      const learnt = await learnDeviceKeys(keys);
+      result.keysLearnt.push(...learnt.learnt);
+      result.refused.push(...learnt.refused);
     }
     const merged = await mergePulledRecords(records, options.signal ? { signal: options.signal } : {});
     for (const id of merged.added) {

@@ -78,6 +78,9 @@ export async function pushOwnChain(
       );
     }
   }
+  // Written at the first sync after enrolment; sent again each time (a refusal as existing is read
+  // back and compared, two small requests) so a device enrolled before it had a key, or whose first
+  // answer was lost, still gets its key onto the server before its records.
   if (options.deviceKeyText) await sendDocs(couch, [deviceKeyDoc(deviceId, options.deviceKeyText)]);
   const from = server?.seq ?? 0;
   const total = localHead - from;

@@ -5,6 +5,7 @@ import { useEffect, useRef } from 'preact/hooks';
 import { SCREENS, useRoute, type Route } from './router.ts';
 import { UpdateBanner } from './components/UpdateBanner.tsx';
 import { TabBar } from './components/TabBar.tsx';
+import { AppFooter } from './components/AppFooter.tsx';
 import { lazyScreen } from './components/LazyScreen.tsx';
 import { useAppReady, useSaveError } from './state/app-state.ts';
 import { CheckScreen } from './screens/CheckScreen.tsx';
@@ -16,6 +17,7 @@ const ConvertScreen = lazyScreen('Convert', () => import('./screens/ConvertScree
 const SettingsScreen = lazyScreen('Settings', () => import('./screens/SettingsScreen.tsx').then((m) => m.SettingsScreen));
 const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').then((m) => m.MoreScreen));
 const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
+const SyncScreen = lazyScreen('Plant sync', () => import('./sync/SyncScreen.tsx').then((m) => m.SyncScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 const OverviewScreen = lazyScreen('Plant overview', () => import('./desk/OverviewScreen.tsx').then((m) => m.OverviewScreen));
 
@@ -41,7 +43,7 @@ export function App() {
         {saveError ? <p class="panel field-error" role="alert">{saveError}</p> : null}
         {ready === 'opening' ? <p class="panel" aria-busy="true">Opening this device's records…</p> : <Screen route={route} />}
       </main>
-      <footer class="app-footer"><span class="app-version">Tankside {__APP_VERSION__}</span> · works offline · no data leaves this device</footer>
+      <AppFooter />
     </>
   );
 }
@@ -58,5 +60,6 @@ function Screen({ route }: { route: Route }) {
     case 'settings': return <SettingsScreen />;
     case 'more': return <MoreScreen />;
     case 'labels': return <LabelsScreen />;
+    case 'sync': return <SyncScreen param={route.param} />;
   }
 }

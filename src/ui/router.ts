@@ -7,7 +7,7 @@
 // more entry with `place: 'more'` and a group: neither the bar nor the More screen changes.
 import { useEffect, useState } from 'preact/hooks';
 
-export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'settings' | 'overview';
+export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'settings' | 'overview' | 'sync';
 
 /** Groups of the More screen, in the order it lists them. */
 export const MORE_GROUPS = ['Plan and review', 'Plant records', 'This device'] as const;
@@ -36,6 +36,7 @@ export const SCREENS: readonly ScreenEntry[] = [
   { id: 'fill', label: 'Fill plan', title: 'Fill plan', place: 'more', group: 'Plan and review', summary: 'How much water to charge for a target condition.' },
   { id: 'review', label: 'Review', title: 'Review', place: 'more', group: 'Plan and review', summary: 'Filter, count, chart and print the log; export and import.' },
   { id: 'labels', label: 'Vessel labels', title: 'Vessel labels', place: 'more', group: 'Plant records', summary: 'Print a sheet of QR labels that open each vessel\'s new check.' },
+  { id: 'sync', label: 'Plant sync', title: 'Plant sync', place: 'more', group: 'This device', summary: 'Send this device\'s checks to the plant server and receive the vessel inventory.' },
   { id: 'settings', label: 'Settings', title: 'Settings', place: 'more', group: 'This device', summary: 'Your name, units, site atmosphere, storage and backup.' },
 ];
 

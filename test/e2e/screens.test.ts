@@ -194,7 +194,7 @@ describe('every screen', () => {
     await page.getByRole('link', { name: 'More' }).click();
     // The More screen is its own chunk: count its links once it is drawn, not while it loads.
     await page.locator('.more-screen').waitFor();
-    for (const name of ['Fill plan', 'Review', 'Plant overview', 'Vessel labels', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Plant overview', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -202,6 +202,13 @@ describe('every screen', () => {
     await page.goto(`${server.url}#/labels`);
     await expect.poll(() => page.locator('.vessel-label').count()).toBe(3);
     await inspect('12-labels');
+  });
+
+  it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {
+    await page.goto(`${server.url}#/sync`);
+    await page.locator('[data-sync-enrolment="none"]').waitFor();
+    expect(await page.locator('footer').getAttribute('data-sync-promise')).toBe('local');
+    await inspect('14-sync');
   });
 
   it('Review', async () => {
@@ -216,7 +223,7 @@ describe('every screen', () => {
     await page.locator('[data-overview-state="ready"]').waitFor();
     // The demo plant's vessels in service (one of its four is retired by an earlier test).
     expect(await page.locator('.overview-table tbody tr').count()).toBeGreaterThanOrEqual(3);
-    await inspect('14-overview');
+    await inspect('15-overview');
   });
 
   it('Settings', async () => {

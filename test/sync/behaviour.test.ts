@@ -35,11 +35,14 @@ async function saveCheck(d: Device, vesselId: string, note: string): Promise<voi
   });
 }
 
-/** A fetch that notes the seqs of every record document each _bulk_docs request carries, in order. */
+/**
+ * A fetch that notes the seqs of every check record each _bulk_docs request carries, in order
+ * (the device-key record at seq 0, sent at each sync before the records, is left out).
+ */
 function recordingFetch(sent: number[]): typeof fetch {
   return (input, init) => {
     if (String(input).endsWith('/_bulk_docs') && typeof init?.body === 'string') {
-      for (const doc of (JSON.parse(init.body) as { docs: { seq: number }[] }).docs) sent.push(doc.seq);
+      for (const doc of (JSON.parse(init.body) as { docs: { seq: number }[] }).docs) if (doc.seq > 0) sent.push(doc.seq);
     }
     return fetch(input, init);
   };
@@ -47,13 +50,14 @@ function recordingFetch(sent: number[]): typeof fetch {
 
 /** The server's documents of a device in the order its changes feed lists them. */
 /**
- * The seqs of this device's records the server holds, ascending. The feed lists one _bulk_docs
+ * The seqs of this device's check records the server holds (its key record at seq 0 left out),
+ * ascending. The feed lists one _bulk_docs
  * batch in the order its writes finished, not in seq order, so the order is not asserted here
  * (what went up in which order is read off the request bodies instead).
  */
 async function storedSeqs(deviceId: string): Promise<number[]> {
   const r = await server.admin<{ results: { id: string; doc: { deviceId: string; seq: number } }[] }>('GET', `${CHECKS}/_changes?include_docs=true`);
-  return r.body.results.filter((c) => c.doc?.deviceId === deviceId).map((c) => c.doc.seq).sort((x, y) => x - y);
+  return r.body.results.filter((c) => c.doc?.deviceId === deviceId && c.doc.seq > 0).map((c) => c.doc.seq).sort((x, y) => x - y);
 }
 
 describe('the log is the queue', () => {
@@ -201,5 +205,54 @@ describe('the plant inventory: versions', () => {
     await s1.syncNow();
     expect((await t.syncNow()).plant.conflicts).toMatchObject([{ kind: 'local-edit', vesselId: vessel.id, version: 4 }]);
     expect((await t.store.getVessel(vessel.id))?.description).toBe('edited on the phone');
+  });
+});
+
+describe('signatures over sync', () => {
+  it('a device\'s key goes up once before its records; a supervisor learns it and verifies the chain as signed', async () => {
+    const t = await makeDevice(fakeUuid(0x5191ed00, 6));
+    await t.enrol(server.url, server.addAccount('device', t.id));
+    // Two records saved before the device signed (an import of its own older records carries no
+    // signature), then two signed saves: old documents without a signature still pull.
+    await seedChain(t, 2, 61);
+    const vessel = await t.store.addVessel({ tag: 'TEST-SIG', spec: SPEC });
+    await saveCheck(t, vessel.id, 'signed one');
+    await saveCheck(t, vessel.id, 'signed two');
+    await t.syncNow();
+    await t.syncNow(); // the key record again: read back, identical, nothing new
+    const doc = (seq: number) => server.admin<Record<string, unknown>>('GET', `${CHECKS}/${encodeURIComponent(`${t.id}:${String(seq).padStart(10, '0')}`)}`);
+    expect((await doc(0)).body).toMatchObject({ type: 'device-key', seq: 0 });
+    expect((await doc(1)).body['signature']).toBeUndefined();
+    expect((await doc(4)).body['signature']).toMatch(/^[A-Za-z0-9_-]{86}$/);
+
+    const s = await makeDevice(fakeUuid(0x5e000000, 7));
+    await s.enrol(server.url, server.addAccount('supervisor', s.id), 'supervisor');
+    const report = (await s.syncNow()).checks!;
+    expect(report.keysLearnt).toContain(t.id);
+    expect(report.refused.filter((r) => r.label.startsWith(t.id))).toEqual([]);
+    const status = (await s.transfer.verifyStoredChains()).find((c) => c.deviceId === t.id);
+    expect(status).toMatchObject({ status: 'ok', count: 4, signature: { state: 'signed', throughSeq: 4 } });
+  });
+
+  it('a record whose signature was changed on the server is refused; the ones its valid signatures vouch for are taken', async () => {
+    const f = await makeDevice(fakeUuid(0xf0e9ed00, 8));
+    await f.enrol(server.url, server.addAccount('device', f.id));
+    const vessel = await f.store.addVessel({ tag: 'TEST-FORGE', spec: SPEC });
+    for (const note of ['one', 'two', 'three']) await saveCheck(f, vessel.id, note);
+    await f.syncNow();
+    // An administrator (past the rules) gives record 3 the signature of record 2.
+    const id = (seq: number) => encodeURIComponent(`${f.id}:${String(seq).padStart(10, '0')}`);
+    const two = (await server.admin<Record<string, unknown>>('GET', `${CHECKS}/${id(2)}`)).body;
+    const three = (await server.admin<Record<string, unknown>>('GET', `${CHECKS}/${id(3)}`)).body;
+    await server.admin('PUT', `${CHECKS}/${id(3)}`, { ...three, signature: two['signature'] });
+
+    const s = await makeDevice(fakeUuid(0x5e000000, 9));
+    await s.enrol(server.url, server.addAccount('supervisor', s.id), 'supervisor');
+    const report = (await s.syncNow()).checks!;
+    const refused = report.refused.filter((r) => r.label.startsWith(f.id));
+    expect(refused.map((r) => r.label)).toEqual([`${f.id}:0000000003`]);
+    expect(refused[0]!.why).toMatch(/signature does not verify/);
+    const status = (await s.transfer.verifyStoredChains()).find((c) => c.deviceId === f.id);
+    expect(status).toMatchObject({ status: 'ok', count: 2, signature: { state: 'signed', throughSeq: 2 } });
   });
 });

@@ -4,76 +4,32 @@
 // device signs in at /db/_session (the cookie's path rewritten to /db/), pushes, and the page's
 // security headers are sent. What the site must do is the issue's "same origin" design and
 // deploy/README.md.
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fakeUuid } from '../../bench/generated-log.ts';
 import { makeDevice, seedChain } from './devices.ts';
-import { freePort, StandIn } from './stand-in.ts';
+import { startSite, type NginxSite } from './nginx.ts';
+import { StandIn } from './stand-in.ts';
 
-const NGINX = '/usr/sbin/nginx';
-const SITE = resolve(import.meta.dirname, '../../deploy/nginx-tankside.conf');
 let server: StandIn;
-let nginx: ChildProcess;
+let site: NginxSite;
 let dir: string;
 let origin: string;
 
-/** The site file with the test's port, root and upstream; everything else as shipped. */
-function testSite(port: number, root: string, couchPort: number): string {
-  let site = readFileSync(SITE, 'utf8');
-  const swap = (from: RegExp, to: string) => {
-    if (!from.test(site)) throw new Error(`the site file no longer has ${from}`);
-    site = site.replace(from, to);
-  };
-  swap(/server 127\.0\.0\.1:5984;/, `server 127.0.0.1:${couchPort};`);
-  swap(/listen 443 ssl http2;/, `listen 127.0.0.1:${port};`);
-  swap(/\n\s*ssl_certificate .*\n\s*ssl_certificate_key .*\n\s*ssl_protocols .*\n/, '\n');
-  swap(/root \/srv\/tankside\/dist;/, `root ${root};`);
-  swap(/\nserver \{\n    listen 80;[\s\S]*$/, '\n'); // the redirect from port 80
-  return site;
-}
-
 beforeAll(async () => {
   server = await StandIn.start();
-  dir = mkdtempSync(join(tmpdir(), 'tankside-nginx-'));
+  dir = mkdtempSync(join(tmpdir(), 'tankside-nginx-root-'));
   const root = join(dir, 'dist');
   mkdirSync(root);
   writeFileSync(join(root, 'index.html'), '<!doctype html><title>test page</title>');
-  const port = await freePort();
-  origin = `http://127.0.0.1:${port}`;
-  writeFileSync(join(dir, 'site.conf'), testSite(port, root, server.port));
-  writeFileSync(
-    join(dir, 'nginx.conf'),
-    [
-      process.getuid?.() === 0 ? 'user root;' : '',
-      'daemon off;', 'worker_processes 1;', `pid ${dir}/nginx.pid;`, `error_log ${dir}/error.log;`, 'events {}',
-      'http {', '  include /etc/nginx/mime.types;', '  access_log off;',
-      ...['client_body', 'proxy', 'fastcgi', 'uwsgi', 'scgi'].map((t) => `  ${t}_temp_path ${dir}/${t};`),
-      `  include ${dir}/site.conf;`, '}',
-    ].join('\n'),
-  );
-  const check = spawnSync(NGINX, ['-t', '-p', dir, '-c', join(dir, 'nginx.conf')], { encoding: 'utf8' });
-  if (check.status !== 0) throw new Error(`nginx -t refused the site: ${check.stderr}`);
-  nginx = spawn(NGINX, ['-p', dir, '-c', join(dir, 'nginx.conf')], { stdio: 'ignore' });
-  for (let i = 0; ; i += 1) {
-    try {
-      if ((await fetch(`${origin}/`)).status === 200) break;
-    } catch {
-      // Not listening yet.
-    }
-    if (i > 300) throw new Error('nginx did not answer');
-    await new Promise((r) => setTimeout(r, 50)); // polling nginx's start, not the app
-  }
+  site = await startSite(root, server.port);
+  origin = site.origin;
 }, 60_000);
 
 afterAll(async () => {
-  if (nginx?.pid && nginx.exitCode === null) {
-    const gone = new Promise((r) => nginx.once('exit', r));
-    process.kill(nginx.pid, 'SIGTERM');
-    await gone;
-  }
+  await site?.stop();
   await server?.stop();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
@@ -104,6 +60,7 @@ describe('the nginx site in front of CouchDB', () => {
     const report = await device.syncNow();
     expect(report.push).toMatchObject({ pushed: 300, localHead: 300 });
     const direct = await server.admin<{ rows: unknown[] }>('GET', `tankside-checks/_all_docs?startkey=${encodeURIComponent(JSON.stringify(`${device.id}:`))}&endkey=${encodeURIComponent(JSON.stringify(`${device.id}:\ufff0`))}`);
-    expect(direct.body.rows).toHaveLength(300);
+    // The 300 checks and the device's key record (seq 0), written before them.
+    expect(direct.body.rows).toHaveLength(301);
   });
 });

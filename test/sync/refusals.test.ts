@@ -156,10 +156,29 @@ describe('writes the rules refuse (signed in as device A)', () => {
   });
 
   it('the device-key record (seq 0): once, and only its own', async () => {
+    // A's first sync wrote its key record before its checks (sync/index.ts, ownDeviceKeyText).
+    const stored = await server.admin<Record<string, unknown>>('GET', `${CHECKS}/${encodeURIComponent(`${a.id}:0000000000`)}`);
+    expect(stored.body).toMatchObject({ type: 'device-key', deviceId: a.id, seq: 0 });
+    expect(JSON.parse(stored.body['text'] as string)).toMatchObject({ kind: 'device-key', deviceId: a.id, seq: 0, publicJwk: { kty: 'EC', crv: 'P-256' } });
     const key = (device: string) => ({ _id: `${device}:0000000000`, type: 'device-key', deviceId: device, seq: 0, text: JSON.stringify({ deviceId: device, kind: 'device-key', seq: 0 }) });
-    expect((await asA.request('PUT', `${CHECKS}/${encodeURIComponent(`${a.id}:0000000000`)}`, key(a.id))).status).toBe(201);
     expect((await asA.request('PUT', `${CHECKS}/${encodeURIComponent(`${a.id}:0000000000`)}`, key(a.id))).status).toBe(403);
     expect((await asA.request('PUT', `${CHECKS}/${encodeURIComponent(`${b.id}:0000000000`)}`, key(b.id))).status).toBe(403);
+    await expectBUnchanged();
+  });
+
+  it('a signature that is not 64 bytes of base64url', async () => {
+    const good: Record<string, unknown> = { ...(await ownDoc(1)), _id: `${a.id}:0000000200`, seq: 200 };
+    good.text = (good.text as string).replace('"seq":1,', '"seq":200,');
+    const bad: Record<string, unknown>[] = [
+      { ...good, signature: 'not base64url!' },
+      { ...good, signature: 'A'.repeat(85) },
+      { ...good, signature: 12 },
+    ];
+    for (const doc of bad) {
+      const r = await asA.request<{ reason?: string }>('PUT', `${CHECKS}/${encodeURIComponent(doc['_id'] as string)}`, doc);
+      expect(r.status, JSON.stringify(r.body)).toBe(403);
+      expect(r.body.reason).toBe('signature must be 86 base64url characters (64 bytes)');
+    }
   });
 });
 

@@ -28,6 +28,11 @@ export class StandIn {
   private child: ChildProcess | null = null;
   private constructor(readonly port: number, readonly dir: string) {}
 
+  /** The running server's process id (the benchmarks read its CPU time). */
+  get pid(): number | undefined {
+    return this.child?.pid;
+  }
+
   get url(): string {
     return `http://127.0.0.1:${this.port}/`;
   }
@@ -55,7 +60,7 @@ export class StandIn {
   /** Adds an account for a device (deploy/couch-account.mjs) and returns its password. */
   addAccount(kind: 'device' | 'supervisor', deviceId: string): string {
     const out = this.script('couch-account.mjs', [kind], [deviceId]);
-    const json = out.slice(out.indexOf('{'));
+    const json = out.slice(out.indexOf('{'), out.lastIndexOf('}') + 1);
     return (JSON.parse(json) as { password: string }).password;
   }
 

@@ -4,9 +4,11 @@ import { useState } from 'preact/hooks';
 import * as repo from '../state/repo.ts';
 import { updateSettings } from '../state/app-state.ts';
 import { formatIsoWithOffset } from '../../store/index.ts';
+import { serverLabel, useSyncServer } from '../state/sync-status.ts';
 
 export function BackupPanel() {
   const [message, setMessage] = useState('');
+  const server = useSyncServer();
   const exportNow = async (kind: 'backup' | 'csv') => {
     try {
       const file = await repo.exportFile(kind);
@@ -25,10 +27,17 @@ export function BackupPanel() {
   return (
     <section class="panel" aria-labelledby="set-store">
       <h2 id="set-store">Backup</h2>
-      <p>
-        The log lives only on this device until you export it; clearing the browser's site data deletes it. Export
-        at the end of each shift.
-      </p>
+      {server === null ? (
+        <p>
+          The log lives only on this device until you export it; clearing the browser's site data deletes it. Export
+          at the end of each shift.
+        </p>
+      ) : (
+        <p>
+          Plant sync sends this device's checks to {serverLabel(server)} when online (see Plant sync for what is still
+          waiting); clearing the browser's site data deletes what has not gone yet. An export is a copy of your own.
+        </p>
+      )}
       <div class="row">
         <button type="button" class="primary" onClick={() => void exportNow('backup')}>Export full backup (JSON)</button>
         <button type="button" onClick={() => void exportNow('csv')}>Export log for spreadsheets (CSV)</button>

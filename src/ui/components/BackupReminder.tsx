@@ -6,10 +6,12 @@ import { hrefFor } from '../router.ts';
 import * as repo from '../state/repo.ts';
 import { shortTime } from '../state/format.ts';
 import { backupReminder, reminderDays, storageFacts } from '../state/storage-state.ts';
+import { useSyncServer } from '../state/sync-status.ts';
 
 export function BackupReminder() {
   const s = useSettings();
   const days = reminderDays(s);
+  const server = useSyncServer();
   const [state, setState] = useState<{ due: boolean; daysSince: number | null; last: string | null } | null>(null);
   useEffect(() => {
     void Promise.all([storageFacts(s.lastBackup), repo.hasChecks()]).then(([facts, any]) => {
@@ -20,7 +22,9 @@ export function BackupReminder() {
   return (
     <p class="panel notice-panel" role="status" data-backup-reminder="due">
       {state.last ? `Last backup ${state.daysSince} days ago (${shortTime(state.last)}).` : 'No backup yet.'}{' '}
-      The log lives only on this phone: <a href={hrefFor('settings')}>export a backup</a> and keep it elsewhere.
+      {server === null
+        ? <>The log lives only on this phone: <a href={hrefFor('settings')}>export a backup</a> and keep it elsewhere.</>
+        : <>Checks saved since then may be only on this phone: <a href={hrefFor('sync')}>sync with the plant server</a> or <a href={hrefFor('settings')}>export a backup</a>.</>}
     </p>
   );
 }

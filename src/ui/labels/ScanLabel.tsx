@@ -1,6 +1,8 @@
-// Scanning a vessel's QR label with the phone's camera inside the app, where the browser offers
-// BarcodeDetector (the Shape Detection API). The camera stops as soon as a label is read, on Cancel
-// and when the component goes away. Anything that is not one of our labels is said so and ignored.
+// Scanning a QR code with the phone's camera inside the app, where the browser offers
+// BarcodeDetector (the Shape Detection API): a vessel's label (ScanLabel), or an enrolment code
+// for plant sync (ScanCode, used by the Sync screen). The camera stops as soon as a code is read,
+// on Cancel and when the component goes away. Anything that is not what is asked for is said so
+// and ignored.
 import { useEffect, useRef, useState } from 'preact/hooks';
 import { vesselIdOfLabel } from './label-link.ts';
 
@@ -10,6 +12,26 @@ type DetectorClass = new (options: { formats: string[] }) => Detector;
 interface Props { onVessel: (vesselId: string) => void; onClose: () => void }
 
 export function ScanLabel({ onVessel, onClose }: Props) {
+  return (
+    <ScanCode read={(t) => vesselIdOfLabel(t) !== undefined} onText={(t) => onVessel(vesselIdOfLabel(t)!)} onClose={onClose}
+      notOurs="That code is not a Tankside vessel label." typeInstead="Type the tag instead." aimAt="the vessel's label" />
+  );
+}
+
+interface CodeProps {
+  /** Whether a code's text is what is asked for. */
+  read: (text: string) => boolean;
+  onText: (text: string) => void;
+  onClose: () => void;
+  /** Said when a code is something else. */
+  notOurs: string;
+  /** Said when the camera cannot be opened. */
+  typeInstead: string;
+  /** What to point the camera at. */
+  aimAt?: string;
+}
+
+export function ScanCode({ read, onText, onClose, notOurs, typeInstead, aimAt = 'the code' }: CodeProps) {
   const video = useRef<HTMLVideoElement>(null);
   const [message, setMessage] = useState('Starting the camera…');
   useEffect(() => {
@@ -21,9 +43,8 @@ export function ScanLabel({ onVessel, onClose }: Props) {
       if (!live || !video.current) return;
       try {
         for (const code of await detector.detect(video.current)) {
-          const id = vesselIdOfLabel(code.rawValue);
-          if (id) { live = false; onVessel(id); return; }
-          setMessage('That code is not a Tankside vessel label.');
+          if (read(code.rawValue)) { live = false; onText(code.rawValue); return; }
+          setMessage(notOurs);
         }
       } catch { /* a frame not ready yet */ }
       if (live) requestAnimationFrame(() => void look());
@@ -33,9 +54,9 @@ export function ScanLabel({ onVessel, onClose }: Props) {
       if (!live || !video.current) return;
       video.current.srcObject = s;
       await video.current.play();
-      setMessage('Point the camera at the vessel\'s label.');
+      setMessage(`Point the camera at ${aimAt}.`);
       void look();
-    }, (e: unknown) => setMessage(`The camera could not be opened (${e instanceof Error ? e.message : String(e)}). Type the tag instead.`));
+    }, (e: unknown) => setMessage(`The camera could not be opened (${e instanceof Error ? e.message : String(e)}). ${typeInstead}`));
     return () => {
       live = false;
       stream?.getTracks().forEach((t) => t.stop());

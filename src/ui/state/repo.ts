@@ -61,9 +61,35 @@ export function retireVessel(id: string): Promise<VesselRecord> {
   return store.retireVessel(id);
 }
 
+const savedListeners = new Set<() => void>();
+
+/** Calls `listener` after each check saved (plant sync's trigger); it runs after the save, never inside it. */
+export function onCheckSaved(listener: () => void): () => void {
+  savedListeners.add(listener);
+  return () => savedListeners.delete(listener);
+}
+
 /** Saves a check; `draftKey`, when given, is the draft of the entry, deleted in the same transaction. */
-export function appendCheck(check: NewCheck, draftKey?: string): Promise<CheckRecord> {
-  return store.appendCheck(check, draftKey === undefined ? {} : { clearDraft: draftKey });
+export async function appendCheck(check: NewCheck, draftKey?: string): Promise<CheckRecord> {
+  const saved = await store.appendCheck(check, draftKey === undefined ? {} : { clearDraft: draftKey });
+  for (const l of savedListeners) {
+    try {
+      l();
+    } catch {
+      // The check is saved; a listener's failure is not the save's.
+    }
+  }
+  return saved;
+}
+
+/** The plant server this device syncs with, or null while sync is off. */
+export function syncServer(): Promise<string | null> {
+  return store.syncServer();
+}
+
+/** This install's device id, the account name its plant server knows it by. */
+export function deviceId(): Promise<string> {
+  return store.deviceId();
 }
 
 export function getCheck(id: string): Promise<CheckRecord | undefined> {
