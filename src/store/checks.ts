@@ -13,7 +13,6 @@ import {
   locateIds,
   LogConflict,
   LOG_STORES,
-  latestRows,
   pageRows,
   readRecords,
   type MonthRow,
@@ -383,35 +382,6 @@ export async function checksForVessel(
   options: ListOptions & { from?: Date; to?: Date } = {},
 ): Promise<CheckPage> {
   return queryChecks({ ...options, vesselId });
-}
-
-/** A vessel's newest check as its month bucket row has it (no record is read). */
-export interface LatestCheck {
-  vesselId: string;
-  id: string;
-  timeMs: number;
-  deviceId: string;
-  seq: number;
-  technician: string;
-  verdict: StoredVerdict | null;
-  /** The most severe signal word among its findings, or 'none'. */
-  outcome: StoredOutcome;
-  /** Its findings' signal words, most severe first. */
-  findingSignals: Signal[];
-}
-
-/**
- * The newest check of each vessel named (by the instant taken; ties by id), or null for a vessel with
- * none. Read from the top of each vessel's month buckets: a step per vessel, whatever the log holds.
- * @throws StoreError('invalid-record') for an id that is not a UUID
- */
-export async function latestChecks(vesselIds: readonly string[]): Promise<(LatestCheck | null)[]> {
-  vesselIds.forEach((id, i) => requireUuid(`vesselIds[${i}]`, id));
-  const rows = await latestRows((await getDb()).transaction(LOG_STORES), vesselIds);
-  return rows.map((r, i) => r === undefined ? null : {
-    vesselId: vesselIds[i]!, timeMs: r[0], id: r[1], deviceId: r[2], seq: r[3], verdict: r[4], technician: r[6],
-    outcome: outcomeOfMask(r[5]), findingSignals: SIGNAL_ORDER.filter((_, bit) => (r[5] & (1 << bit)) !== 0),
-  });
 }
 
 /** How many checks are stored (one vessel's when given). Reads the month buckets, not the checks. */

@@ -36,17 +36,16 @@ export type {
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_INTERVAL_RANGE_S } from './vessels.ts';
 
 // Checks (append-only)
-export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf, latestChecks } from './checks.ts';
-export type { AppendOptions, CheckFilter, LatestCheck, ListOptions } from './checks.ts';
-export { CHECK_SORT_KEYS, sortChecks } from './sorted-checks.ts';
-export type { CheckSort, CheckSortKey, SortedChecks } from './sorted-checks.ts';
+export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
+export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';
+// The desk's reads (latestChecks, latestOfKind, sortChecks) are in ./desk.ts, loaded on demand.
 export {
   OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';
 export type { Signal, StoredOutcome, StoredVerdict } from './facts.ts';
 
 // Records of other kinds (cycles, periodic tests …), in the same chain
-export { appendRecord, getRecord, listRecords, countRecords, latestOfKind } from './kind-records.ts';
+export { appendRecord, getRecord, listRecords, countRecords } from './kind-records.ts';
 export type { AppendRecordOptions, KindFilter } from './kind-records.ts';
 export { RECORD_KINDS, isKnownKind } from './record-kinds.ts';
 export type { RecordKind } from './record-kinds.ts';

@@ -135,21 +135,6 @@ export async function listRecords(filter: KindFilter): Promise<KindRecordPage> {
   return { records, next: rows.length > limit && last ? { timeMs: last.timeMs, id: last.id } : null };
 }
 
-/**
- * The newest record of `kind` about each vessel named (by instant; ties by id), as its logKinds row
- * says (no record is read): { timeMs, id }, or null for a vessel with none. One cursor step per vessel.
- * @throws StoreError('invalid-record') for a bad kind or vessel id
- */
-export async function latestOfKind(kind: string, vesselIds: readonly string[]): Promise<({ timeMs: number; id: string } | null)[]> {
-  requireText('kind', kind, 1, 64);
-  vesselIds.forEach((id, i) => requireUuid(`vesselIds[${i}]`, id));
-  const kinds = (await getDb()).transaction(LOG_STORES).objectStore('logKinds');
-  return Promise.all(vesselIds.map(async (vesselId) => {
-    const cursor = await kinds.openCursor(IDBKeyRange.bound([kind, vesselId, -Infinity], [kind, vesselId, Infinity, '\uffff']), 'prev');
-    return cursor ? { timeMs: cursor.value.timeMs, id: cursor.value.id } : null;
-  }));
-}
-
 /** How many records of `kind` are stored (one vessel's when given). Reads the rows, not the records. */
 export async function countRecords(kind: string, vesselId?: string): Promise<number> {
   requireText('kind', kind, 1, 64);

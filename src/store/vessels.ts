@@ -20,7 +20,7 @@ export function requireCheckInterval(field: string, value: unknown): number | nu
   if (value === null) return null;
   const { min, max } = CHECK_INTERVAL_RANGE_S;
   if (typeof value !== 'number' || !Number.isFinite(value) || value < min || value > max) {
-    throw invalid(field, `expected a number of seconds from ${min} (1 hour) to ${max} (1,096 days), or null for none`);
+    throw invalid(field, `expected ${min} (1 hour) to ${max} s (1,096 days), or null for none`);
   }
   return value;
 }

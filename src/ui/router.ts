@@ -32,7 +32,7 @@ export const SCREENS: readonly ScreenEntry[] = [
   { id: 'log', label: 'Log', title: 'Log', place: 'bar' },
   { id: 'convert', label: 'Convert', title: 'Convert', place: 'bar' },
   { id: 'more', label: 'More', title: 'More', place: 'bar' },
-  { id: 'overview', label: 'Plant overview', title: 'Plant overview', place: 'more', group: 'Plan and review', summary: 'Which vessels need attention: latest outcome, checks overdue or due today, open findings.' },
+  { id: 'overview', label: 'Plant overview', title: 'Plant overview', place: 'more', group: 'Plan and review', summary: 'Each vessel\'s latest outcome, checks due and open findings.' },
   { id: 'fill', label: 'Fill plan', title: 'Fill plan', place: 'more', group: 'Plan and review', summary: 'How much water to charge for a target condition.' },
   { id: 'review', label: 'Review', title: 'Review', place: 'more', group: 'Plan and review', summary: 'Filter, count, chart and print the log; export and import.' },
   { id: 'labels', label: 'Vessel labels', title: 'Vessel labels', place: 'more', group: 'Plant records', summary: 'Print a sheet of QR labels that open each vessel\'s new check.' },

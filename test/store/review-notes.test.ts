@@ -3,7 +3,8 @@
 // Names and texts are invented test data.
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { addVessel, appendCheck, appendRecord, latestOfKind, type NewKindRecord } from '../../src/store/index.ts';
+import { addVessel, appendCheck, appendRecord, type NewKindRecord } from '../../src/store/index.ts';
+import { latestOfKind } from '../../src/store/desk.ts';
 import { exportBackup, verifyStoredChains } from '../../src/store/transfer.ts';
 import { canonicalJson } from '../../src/store/integrity.ts';
 import { sampleCheck, SPEC, useFreshDatabase } from './fixtures.ts';

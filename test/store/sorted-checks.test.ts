@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
-import { addVessel, appendCheck, listChecks, outcomeOfRecord, sortChecks, verdictOfResult, type CheckRecord } from '../../src/store/index.ts';
+import { addVessel, appendCheck, listChecks, outcomeOfRecord, verdictOfResult, type CheckRecord } from '../../src/store/index.ts';
+import { sortChecks } from '../../src/store/desk.ts';
 
 useFreshDatabase();
 

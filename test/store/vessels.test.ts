@@ -7,12 +7,12 @@ import {
   checksForVessel,
   CHECK_INTERVAL_RANGE_S,
   getVessel,
-  latestChecks,
   listVessels,
   retireVessel,
   updateVessel,
 } from '../../src/store/index.ts';
 import { validateVessel } from '../../src/store/backup-format.ts';
+import { latestChecks } from '../../src/store/desk.ts';
 import { CHECK_INTERVAL_MAX_S, CHECK_INTERVAL_MIN_S } from '../../src/core/check/check-due.ts';
 
 useFreshDatabase();

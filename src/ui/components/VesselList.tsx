@@ -1,4 +1,5 @@
 // Vessels as large tappable rows; a retired or demo vessel says so, and the due state of its routine check when known.
+import './vessel-list.css';
 import type { VesselRecord } from '../state/repo.ts';
 import type { CheckDue } from '../../core/basics.ts';
 import { hrefFor } from '../router.ts';

@@ -2,6 +2,7 @@
 // outcome, when and by whom it was last checked, its due state and open findings; overdue first
 // in a group of its own. Read from the newest month row of each vessel, never the whole log.
 import { useMemo, useState } from 'preact/hooks';
+import './wide-layout.css';
 import './desk.css';
 import { useVessels } from '../state/app-state.ts';
 import { OverviewFilters } from './OverviewFilters.tsx';

@@ -1,7 +1,8 @@
 // What the overview reads: each vessel's newest check (month rows) and newest review note (kind
 // rows), read again when `generation` changes (a note was saved).
 import { useEffect, useState } from 'preact/hooks';
-import { latestChecks, type VesselRecord } from '../../store/index.ts';
+import type { VesselRecord } from '../../store/index.ts';
+import { latestChecks } from '../../store/desk.ts';
 import { storageMessage } from '../state/repo.ts';
 import { vesselDues } from '../state/vessel-due.ts';
 import { overviewRows, type OverviewRow } from './overview-rows.ts';

@@ -2,7 +2,8 @@
 // findings. Saved as a record of kind 'review-note' in this device's append-only chain (the same
 // seq, hash and signature as a check), so it is verified, exported and synced with the log. The
 // overview reads only each vessel's newest note's time, from the store's kind rows.
-import { appendRecord, latestOfKind, type KindRecord, type LatestCheck, type VesselRecord } from '../../store/index.ts';
+import { appendRecord, type KindRecord, type VesselRecord } from '../../store/index.ts';
+import { latestOfKind, type LatestCheck } from '../../store/desk.ts';
 import type { NoteMark } from './overview-rows.ts';
 
 export const REVIEW_NOTE_KIND = 'review-note';

@@ -2,6 +2,7 @@
 // vessel report with its trend chart, export and import. Reads the store a page at a time.
 import { useEffect, useRef, useState } from 'preact/hooks';
 import type { CheckRecord, VesselRecord } from '../../store/index.ts';
+import '../desk/wide-layout.css';
 import './review.css';
 import { ReviewFilters } from './ReviewFilters.tsx';
 import { ReviewList } from './ReviewList.tsx';

@@ -3,7 +3,8 @@
 // columns do not sort (the table says so); every other column sorts the whole match.
 import { formatNumber } from '../state/format.ts';
 import { massFromKg, pressureFromPa, temperatureFromK } from '../../core/basics.ts';
-import type { CheckRecord, CheckSortKey } from '../../store/index.ts';
+import type { CheckRecord } from '../../store/index.ts';
+import type { CheckSortKey } from '../../store/desk.ts';
 import type { UnitPrefs } from '../state/settings-model.ts';
 import { unitLabel } from '../state/unit-labels.ts';
 import { factsOf, stampText, verdictLabel } from './record-facts.ts';

@@ -1,7 +1,8 @@
 // Filtered, cursor-paged reading of the check log. The store answers the whole filter (vessel,
 // dates, verdict, outcome, technician, device) from its month buckets and reads only the
 // records of each page, so nothing reads the whole log into memory.
-import { listVessels, queryChecks, sortChecks, type CheckCursor, type CheckFilter, type CheckRecord, type CheckSortKey, type SortedChecks, type VesselRecord } from '../../store/index.ts';
+import { listVessels, queryChecks, type CheckCursor, type CheckFilter, type CheckRecord, type VesselRecord } from '../../store/index.ts';
+import { sortChecks, type CheckSortKey, type SortedChecks } from '../../store/desk.ts';
 import type { ReviewFilter } from './review-filter.ts';
 
 /** The review's filter as the store takes it. */

@@ -52,10 +52,6 @@ export function updateVessel(id: string, tag: string, description: string, spec:
   return store.updateVessel(id, { tag, description, spec, ...(checkIntervalS === undefined ? {} : { checkIntervalS }) });
 }
 
-/** Each vessel's newest check from the month buckets (null: none), in the order of `vesselIds`. */
-export function latestChecks(vesselIds: readonly string[]): Promise<(store.LatestCheck | null)[]> {
-  return store.latestChecks(vesselIds);
-}
 
 export function retireVessel(id: string): Promise<VesselRecord> {
   return store.retireVessel(id);

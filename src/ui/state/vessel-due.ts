@@ -4,12 +4,12 @@ import { useEffect, useState } from 'preact/hooks';
 import { CHECK_DUE_ORDER, checkDue, type CheckDue, type CheckDueState } from '../../core/basics.ts';
 import * as repo from './repo.ts';
 import type { VesselRecord } from './repo.ts';
-import type { LatestCheck } from '../../store/index.ts';
+import { latestChecks, type LatestCheck } from '../../store/desk.ts';
 import { formatIsoWithOffset } from '../../store/index.ts';
 import { shortTime } from './format.ts';
 import { intervalText } from './check-interval.ts';
 
-export type { LatestCheck } from '../../store/index.ts';
+export type { LatestCheck } from '../../store/desk.ts';
 
 export interface VesselDue {
   vessel: VesselRecord;
@@ -71,7 +71,7 @@ export function useVesselDues(vessels: readonly VesselRecord[]): { dues: VesselD
   const [state, setState] = useState<{ dues: VesselDue[] | null; error: string }>({ dues: null, error: '' });
   useEffect(() => {
     let live = true;
-    repo.latestChecks(vessels.map((v) => v.id)).then(
+    latestChecks(vessels.map((v) => v.id)).then(
       (latest) => { if (live) setState({ dues: vesselDues(vessels, latest, Date.now()), error: '' }); },
       (e: unknown) => { if (live) setState({ dues: null, error: repo.storageMessage(e) }); },
     );
