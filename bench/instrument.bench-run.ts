@@ -4,7 +4,7 @@
 // invented; see test/core/instrument/generated-log.ts).
 import { it } from 'vitest';
 import fc from 'fast-check';
-import { driftFromLog, instrumentLimit, MS_PER_DAY, type InstrumentSpec } from '../src/core/index.ts';
+import { driftFromLog, instrumentLimit, MS_PER_DAY, type InstrumentSpec } from '../src/core/instrument/index.ts';
 import { buildLog, LOG_START_MS, MONTH_MS, rawLog } from '../test/core/instrument/generated-log.ts';
 
 function time(label: string, n: number, run: (i: number) => void): void {

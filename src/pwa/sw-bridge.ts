@@ -2,6 +2,9 @@
 // page when a new version is installed and waiting, and applies it only when the person asks:
 // flush the entry in progress, ask the waiting worker to take over (SKIP_WAITING), then reload
 // exactly once when it takes control. A page never reloads on its own, so no entry is cut off.
+// <html data-worker-state> says where this page stands ("registering", then "current" once the
+// registration has settled with this page controlled and no newer worker installing or waiting,
+// "update-ready", "reloading"): browser tests wait on it, never on a fixed time.
 import { Workbox } from 'workbox-window';
 
 /** Saves whatever is being typed; must resolve only once it is stored. */
@@ -15,6 +18,26 @@ let reloadRequested = false;
 let flushBeforeReload: FlushBeforeReload = () => Promise.resolve();
 const readyListeners = new Set<() => void>();
 
+type WorkerState = 'registering' | 'current' | 'update-ready' | 'reloading';
+
+function setWorkerState(state: WorkerState): void {
+  document.documentElement.dataset['workerState'] = state;
+}
+
+/** 'current' once nothing newer is on its way; a later 'waiting' event still moves it on. */
+function settle(registration: ServiceWorkerRegistration): void {
+  const settled = () => {
+    if (updateReady || reloadRequested) return;
+    if (registration.installing || registration.waiting || !navigator.serviceWorker.controller) return;
+    setWorkerState('current');
+  };
+  settled();
+  navigator.serviceWorker.addEventListener('controllerchange', settled);
+  registration.addEventListener('updatefound', () => {
+    registration.installing?.addEventListener('statechange', settled);
+  });
+}
+
 /**
  * Registers the service worker in production builds (a no-op in dev and where unsupported).
  * `flush` runs before an accepted update reloads the page.
@@ -23,14 +46,18 @@ export function startServiceWorker(flush: FlushBeforeReload): void {
   flushBeforeReload = flush;
   if (workbox || !('serviceWorker' in navigator) || import.meta.env.DEV) return;
   workbox = new Workbox('./sw.js', { scope: './' });
+  setWorkerState('registering');
   // 'waiting' covers both a worker installed during this visit and one left waiting by an
   // earlier visit or another tab (event.wasWaitingBeforeRegister).
   workbox.addEventListener('waiting', () => {
     updateReady = true;
+    setWorkerState('update-ready');
     for (const listener of readyListeners) listener();
   });
   void workbox.register().then((registration) => {
-    if (registration) pollForUpdates(registration);
+    if (!registration) return;
+    settle(registration);
+    pollForUpdates(registration);
   }, () => undefined);
 }
 
@@ -56,6 +83,7 @@ export async function applyUpdate(): Promise<void> {
     // Guarded: DevTools "update on reload" and repeated skips can fire this more than once.
     if (reloadRequested) return;
     reloadRequested = true;
+    setWorkerState('reloading');
     window.location.reload();
   });
   workbox.messageSkipWaiting();

@@ -1,6 +1,6 @@
 // The "tankside-backup" file as a reader takes it (BACKUP-FORMAT.md is the reference): its shapes,
 // its limits, and validation that refuses the whole file at the first field that breaks a rule.
-// Reads format versions 1 and 2; writes (backup.ts) version 2.
+// Reads format versions 1, 2 and 3; writes (backup.ts) BACKUP_FORMAT_VERSION.
 import { StoreError } from './errors.ts';
 import { requireCautions, requireInputs, TEXT_LIMITS } from './checks.ts';
 import { breathe, throwIfAborted } from './integrity.ts';
@@ -9,10 +9,14 @@ import { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 import { parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, HEX64, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
 import { DESCRIPTION_MAX, requireCheckInterval, TAG_MAX, tagKeyOf } from './vessels.ts';
+import { EMPTY_REGISTER, type BackupRegister } from './backup-register.ts';
+import { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, type CalibrationEntry, type FittingRecord, type InstrumentRecord } from './instrument-records.ts';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-/** The version this app writes; it reads this one and every one before it. */
-export const BACKUP_FORMAT_VERSION = 2;
+/** The version this app writes; it reads this one and every one before it. 3: the instrument register (renumbered at merge if another room took 3 first). */
+export const BACKUP_FORMAT_VERSION = 3;
+/** The first version with the instrument register's lists. */
+export const REGISTER_FORMAT_VERSION = BACKUP_FORMAT_VERSION;
 /** Refused before parsing: a file longer than maxChars (UTF-16 code units), or holding more records. */
 export interface BackupLimits {
   maxChars: number;
@@ -52,8 +56,8 @@ export interface OtherRecord {
 /** A parsed, validated backup. */
 export interface BackupDocument {
   format: typeof BACKUP_FORMAT;
-  /** The version the file was written as (1 or 2). */
-  formatVersion: 1 | 2;
+  /** The version the file was written as (1 to BACKUP_FORMAT_VERSION). */
+  formatVersion: number;
   exportedAt: IsoDateTime;
   vessels: VesselRecord[];
   /** The checks, and the records of kinds this version keeps (record-kinds.ts), in file order. */
@@ -62,6 +66,8 @@ export interface BackupDocument {
   others: OtherRecord[];
   chains: ChainHead[];
   signatures: FileSignature[];
+  /** The instrument register (from REGISTER_FORMAT_VERSION on); absent or empty before it, and in a plant sync's pull. */
+  register?: BackupRegister;
 }
 
 export function bad(field: string, problem: string): StoreError {
@@ -116,6 +122,7 @@ const CHAIN_KEYS_V1 = ['deviceId', 'count', 'headSeq', 'headHash'] as const;
 const CHAIN_KEYS = [...CHAIN_KEYS_V1, 'publicKey'] as const;
 const TOP_KEYS_V1 = ['format', 'formatVersion', 'exportedAt', 'vessels', 'checks', 'chains'] as const;
 const TOP_KEYS = [...TOP_KEYS_V1, 'signatures'] as const;
+const TOP_KEYS_REGISTER = [...TOP_KEYS, 'instruments', 'calibrations', 'fittings'] as const;
 const SIGNATURE_KEYS = ['deviceId', 'seq', 'signature'] as const;
 const JWK_KEYS = ['crv', 'kty', 'x', 'y'] as const;
 /** Chain fields a record of another kind must carry, and may carry beside anything else. */
@@ -145,6 +152,81 @@ export function validateVessel(field: string, value: unknown): VesselRecord {
   requireIso(`${field}.createdAt`, v['createdAt']);
   requireIso(`${field}.updatedAt`, v['updatedAt']);
   return v as unknown as VesselRecord;
+}
+
+const INSTRUMENT_KEYS = ['id', 'tag', 'tagKey', 'spec', 'displayUnit', 'description', 'origin', 'retired', 'createdAt', 'updatedAt'] as const;
+const CALIBRATION_KEYS = [
+  'id', 'instrumentId', 'time', 'timeMs', 'asFoundError', 'asLeftError', 'referenceValue', 'nextDue', 'nextDueMs', 'who', 'certificate', 'enteredUnit', 'note', 'enteredAt',
+] as const;
+const FITTING_KEYS = ['id', 'vesselId', 'role', 'instrumentId', 'from', 'fromMs', 'reason', 'enteredAt'] as const;
+
+function finiteOrNull(field: string, value: unknown): void {
+  if (value !== null && (typeof value !== 'number' || !Number.isFinite(value))) throw bad(field, 'expected a finite number or null');
+}
+
+/** One instrument record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateInstrumentRecord(field: string, value: unknown): InstrumentRecord {
+  const v = requireObject(field, value);
+  requireKeys(field, v, INSTRUMENT_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, v['id']);
+    requireText(`${field}.tag`, v['tag'], 1, INSTRUMENT_TEXT_LIMITS.tag);
+    requireJsonObject(`${field}.spec`, v['spec']);
+    requireText(`${field}.displayUnit`, v['displayUnit'], 1, INSTRUMENT_TEXT_LIMITS.displayUnit);
+    requireText(`${field}.description`, v['description'], 0, INSTRUMENT_TEXT_LIMITS.description);
+    requireJsonObject(`${field}.origin`, v['origin']);
+  });
+  const tag = v['tag'] as string;
+  if (tag.trim() !== tag) throw bad(`${field}.tag`, 'has spaces at the start or end');
+  if (v['tagKey'] !== tag.toLowerCase()) throw bad(`${field}.tagKey`, 'does not match the tag');
+  const spec = v['spec'] as Record<string, unknown>;
+  if (spec['tag'] !== tag) throw bad(`${field}.spec.tag`, 'does not match the tag');
+  if (!(INSTRUMENT_KIND_IDS as readonly unknown[]).includes(spec['kind'])) throw bad(`${field}.spec.kind`, `expected one of ${INSTRUMENT_KIND_IDS.join(', ')}`);
+  const origin = v['origin'] as Record<string, unknown>;
+  if (origin['kind'] !== 'entered' && origin['kind'] !== 'from-vessel') throw bad(`${field}.origin.kind`, 'expected "entered" or "from-vessel"');
+  if (typeof v['retired'] !== 'boolean') throw bad(`${field}.retired`, 'expected true or false');
+  requireIso(`${field}.createdAt`, v['createdAt']);
+  requireIso(`${field}.updatedAt`, v['updatedAt']);
+  return v as unknown as InstrumentRecord;
+}
+
+/** One calibration record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateCalibrationRecord(field: string, value: unknown): CalibrationEntry {
+  const c = requireObject(field, value);
+  requireKeys(field, c, CALIBRATION_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, c['id']);
+    requireUuid(`${field}.instrumentId`, c['instrumentId']);
+    requireText(`${field}.who`, c['who'], 1, INSTRUMENT_TEXT_LIMITS.who);
+    requireText(`${field}.certificate`, c['certificate'], 0, INSTRUMENT_TEXT_LIMITS.certificate);
+    requireText(`${field}.enteredUnit`, c['enteredUnit'], 1, INSTRUMENT_TEXT_LIMITS.displayUnit);
+    requireText(`${field}.note`, c['note'], 0, INSTRUMENT_TEXT_LIMITS.note);
+  });
+  if (c['timeMs'] !== requireIso(`${field}.time`, c['time'])) throw bad(`${field}.timeMs`, 'does not match time');
+  if (typeof c['asFoundError'] !== 'number' || !Number.isFinite(c['asFoundError'])) throw bad(`${field}.asFoundError`, 'expected a finite number');
+  finiteOrNull(`${field}.asLeftError`, c['asLeftError']);
+  finiteOrNull(`${field}.referenceValue`, c['referenceValue']);
+  if (c['nextDue'] === null) {
+    if (c['nextDueMs'] !== null) throw bad(`${field}.nextDueMs`, 'expected null when nextDue is null');
+  } else if (c['nextDueMs'] !== requireIso(`${field}.nextDue`, c['nextDue'])) throw bad(`${field}.nextDueMs`, 'does not match nextDue');
+  requireIso(`${field}.enteredAt`, c['enteredAt']);
+  return c as unknown as CalibrationEntry;
+}
+
+/** One fitting record. @throws StoreError('invalid-backup') naming the first bad field */
+export function validateFittingRecord(field: string, value: unknown): FittingRecord {
+  const f = requireObject(field, value);
+  requireKeys(field, f, FITTING_KEYS);
+  within(() => {
+    requireUuid(`${field}.id`, f['id']);
+    requireUuid(`${field}.vesselId`, f['vesselId']);
+    if (f['instrumentId'] !== null) requireUuid(`${field}.instrumentId`, f['instrumentId']);
+    requireText(`${field}.reason`, f['reason'], 0, INSTRUMENT_TEXT_LIMITS.reason);
+  });
+  if (!(INSTRUMENT_ROLES as readonly unknown[]).includes(f['role'])) throw bad(`${field}.role`, `expected one of ${INSTRUMENT_ROLES.join(', ')}`);
+  if (f['fromMs'] !== requireIso(`${field}.from`, f['from'])) throw bad(`${field}.fromMs`, 'does not match from');
+  requireIso(`${field}.enteredAt`, f['enteredAt']);
+  return f as unknown as FittingRecord;
 }
 
 /** One check record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
@@ -344,8 +426,8 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     throw bad('formatVersion', `${top['formatVersion']} was written by a newer Tankside; update the app, then import`);
   }
   const version = top['formatVersion'];
-  if (version !== 1 && version !== 2) throw bad('formatVersion', `expected 1 or ${BACKUP_FORMAT_VERSION}`);
-  requireKeys('file', top, version === 1 ? TOP_KEYS_V1 : TOP_KEYS);
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) throw bad('formatVersion', `expected a whole number from 1 to ${BACKUP_FORMAT_VERSION}`);
+  requireKeys('file', top, version === 1 ? TOP_KEYS_V1 : version < REGISTER_FORMAT_VERSION ? TOP_KEYS : TOP_KEYS_REGISTER);
   requireIso('exportedAt', top['exportedAt']);
   const vessels = requireList('vessels', top['vessels'], limits.maxVessels).map((v, i) => validateVessel(`vessels[${i}]`, v));
   const listed = requireList('checks', top['checks'], limits.maxChecks);
@@ -355,7 +437,7 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     if (i % VALIDATE_GROUP === 0) yield;
     const item = listed[i];
     // From v2 a record may name its kind; one without is a check, one of another kind is kept aside.
-    if (version === 2 && typeof item === 'object' && item !== null && !Array.isArray(item) && 'kind' in item) {
+    if (version >= 2 && typeof item === 'object' && item !== null && !Array.isArray(item) && 'kind' in item) {
       // A kind this version keeps is held to its shape and kept; any other is checked for its links only.
       if (isKnownKind((item as Record<string, unknown>)['kind'])) checks.push(validateKindRecord(`checks[${i}]`, item));
       else others.push(validateOther(`checks[${i}]`, item as Record<string, unknown>));
@@ -374,13 +456,21 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
     return { deviceId: head['deviceId'] as string, count: head['count'] as number, headSeq: head['headSeq'] as number, headHash: head['headHash'] as string, publicKey };
   });
   const signatures: FileSignature[] = [];
-  if (version === 2) {
+  if (version >= 2) {
     const signed = requireList('signatures', top['signatures'], limits.maxChecks);
     for (let i = 0; i < signed.length; i += 1) {
       if (i % VALIDATE_GROUP === 0) yield;
       signatures.push(validateSignature(`signatures[${i}]`, signed[i]));
     }
   }
+  const register: BackupRegister = version < REGISTER_FORMAT_VERSION ? EMPTY_REGISTER : {
+    instruments: requireList('instruments', top['instruments'], limits.maxVessels).map((v, i) => validateInstrumentRecord(`instruments[${i}]`, v)),
+    calibrations: requireList('calibrations', top['calibrations'], limits.maxChecks).map((v, i) => validateCalibrationRecord(`calibrations[${i}]`, v)),
+    fittings: requireList('fittings', top['fittings'], limits.maxChecks).map((v, i) => validateFittingRecord(`fittings[${i}]`, v)),
+  };
+  requireUnique('instruments', register.instruments.map((r) => r.id));
+  requireUnique('calibrations', register.calibrations.map((r) => r.id));
+  requireUnique('fittings', register.fittings.map((r) => r.id));
   requireUnique('vessels', vessels.map((v) => v.id));
   requireUnique('checks', [...checks.map((c) => c.id), ...others.map((o) => o.id)]);
   requireUnique('chains', chains.map((h) => h.deviceId));
@@ -389,7 +479,7 @@ function* parsingSteps(text: string, limits: Readonly<BackupLimits>): Generator<
   signatures.forEach((s, i) => {
     if (!keyed.has(s.deviceId)) throw bad(`signatures[${i}]`, `device ${s.deviceId} has no publicKey in chains`);
   });
-  return { format: BACKUP_FORMAT, formatVersion: version, exportedAt: top['exportedAt'] as string, vessels, checks, others, chains, signatures };
+  return { format: BACKUP_FORMAT, formatVersion: version, exportedAt: top['exportedAt'] as string, vessels, checks, others, chains, signatures, register };
 }
 
 /** False only when no key in `text` can be one of FORBIDDEN_KEYS once parsed. */

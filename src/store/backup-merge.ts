@@ -16,10 +16,13 @@ import { GENESIS_HASH, isCheckRecord, type LogRecord, type KnownDeviceKey, type 
 import type { TanksideDB } from './schema.ts';
 import type { SignatureStatus } from './signatures.ts';
 import { parseIsoWithOffset } from './time.ts';
+import { EMPTY_REGISTER, planRegister, type RegisterPlan } from './backup-register.ts';
 
 /** What importBackup did, record by record (a refused file throws instead: see importBackup). */
 export interface ImportReport {
   vessels: { added: string[]; updated: string[]; skipped: { id: string; why: string }[] };
+  /** The instrument register's records (instruments, calibrations, fittings) together. */
+  register: RegisterPlan['report'];
   checks: {
     added: string[];
     skipped: { id: string; why: string }[];
@@ -60,6 +63,7 @@ export interface DeviceSigning {
 
 export interface MergePlan {
   vesselWrites: VesselRecord[];
+  register: RegisterPlan;
   checkAdds: NewLogEntry[];
   keys: KnownDeviceKey[];
   report: ImportReport;
@@ -107,8 +111,9 @@ export async function planMerge(
 ): Promise<MergePlan> {
   const { texts, hashes, signing } = input;
   const wholeFile = input.policy === 'whole-file';
-  const tx = db.transaction(['vessels', ...LOG_STORES] as const);
+  const tx = db.transaction(['vessels', 'instruments', 'calibrations', 'fittings', ...LOG_STORES] as const);
   const vesselStore = tx.objectStore('vessels');
+  const fileRegister = doc.register ?? EMPTY_REGISTER;
   const devices = new Map<string, FileLink[]>();
   const add = (deviceId: string, link: FileLink) => {
     let list = devices.get(deviceId);
@@ -120,7 +125,7 @@ export async function planMerge(
   const seqOf = (l: FileLink) => (l.other ? l.other.seq : doc.checks[l.check]!.seq);
   const deviceIds = [...devices.keys()].sort();
   // One read snapshot with nothing but IndexedDB requests awaited inside it.
-  const [existingVessels, existingById, existingRanges] = await Promise.all([
+  const [existingVessels, existingById, existingRanges, hereInstruments, hereCalibrations, hereFittings] = await Promise.all([
     Promise.all(doc.vessels.map((v) => vesselStore.get(v.id))),
     (async () => {
       const places = await locateIds(tx, doc.checks.map((c) => c.id));
@@ -144,11 +149,16 @@ export async function planMerge(
         return new StoredSeqs(await deviceBlocks(tx, d, Math.max(1, lo - 1), hi + 1));
       }),
     ),
+    Promise.all(fileRegister.instruments.map((r) => tx.objectStore('instruments').get(r.id))),
+    Promise.all(fileRegister.calibrations.map((r) => tx.objectStore('calibrations').get(r.id))),
+    Promise.all(fileRegister.fittings.map((r) => tx.objectStore('fittings').get(r.id))),
     tx.done,
   ]);
+  const register = planRegister(fileRegister, { instruments: hereInstruments, calibrations: hereCalibrations, fittings: hereFittings });
 
   const report: ImportReport = {
     vessels: { added: [], updated: [], skipped: [] },
+    register: register.report,
     checks: { added: [], skipped: [], rejected: [] },
     records: { added: [], skipped: [] },
     fileChains: [],
@@ -273,9 +283,9 @@ export async function planMerge(
   if (!wholeFile) {
     // Record by record: what failed stays out, reported; the rest goes in.
     report.checks.rejected = refused;
-    return { vesselWrites, checkAdds, keys, report, refused: [] };
+    return { vesselWrites, register, checkAdds, keys, report, refused: [] };
   }
-  return { vesselWrites, checkAdds, keys, report, refused };
+  return { vesselWrites, register, checkAdds, keys, report, refused };
 }
 
 /** Why a new record of a signing device cannot be taken, or null if a valid signature in the file vouches for it. */
@@ -322,7 +332,7 @@ export interface WriteOptions extends LongWorkOptions {
 
 /** Writes the plan in one strict transaction: all of it, or (on any failure or a cancel) none. */
 export async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, options: WriteOptions, base: number, total: number): Promise<void> {
-  const tx = db.transaction(['vessels', 'settings', ...LOG_STORES] as const, 'readwrite', STRICT);
+  const tx = db.transaction(['vessels', 'settings', 'instruments', 'calibrations', 'fittings', ...LOG_STORES] as const, 'readwrite', STRICT);
   let cancelled = false;
   const onAbort = () => {
     try {
@@ -343,6 +353,9 @@ export async function writePlan(db: IDBPDatabase<TanksideDB>, plan: MergePlan, o
     };
     await Promise.all([
       ...plan.vesselWrites.map((v) => vessels.put(v).then(() => step(1))),
+      ...plan.register.instruments.map((r) => tx.objectStore('instruments').put(r)),
+      ...plan.register.calibrations.map((r) => tx.objectStore('calibrations').put(r)),
+      ...plan.register.fittings.map((r) => tx.objectStore('fittings').put(r)),
       ...plan.keys.map((k) => learnPublicKey(tx, k)),
       addToLog(tx, plan.checkAdds, step),
     ]);

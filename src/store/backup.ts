@@ -28,7 +28,7 @@ export type { ImportReport, MergePolicy } from './backup-merge.ts';
 // ---------------------------------------------------------------- export
 
 /**
- * Exports every vessel and check as a "tankside-backup" format version 2 document (JSON text),
+ * Exports every vessel, check and register record as a "tankside-backup" document of BACKUP_FORMAT_VERSION (JSON text),
  * read from one consistent snapshot, with each record's signature and each device's public key.
  * Deterministic: the same store content gives the same text apart from `exportedAt` (vessels by
  * id, checks and signatures by device then seq, each record as canonical JSON). Records this
@@ -47,8 +47,12 @@ export async function exportBackupParts(options: LongWorkOptions = {}): Promise<
   const db = await getDb();
   await sealMigratedChecks(db);
   throwIfAborted(options.signal);
-  const tx = db.transaction(['vessels', 'settings', ...LOG_STORES] as const);
+  const tx = db.transaction(['vessels', 'settings', 'instruments', 'calibrations', 'fittings', ...LOG_STORES] as const);
   const vessels = await tx.objectStore('vessels').getAll();
+  // Each by id (its key), as vessels are.
+  const [instruments, calibrations, fittings] = await Promise.all([
+    tx.objectStore('instruments').getAll(), tx.objectStore('calibrations').getAll(), tx.objectStore('fittings').getAll(),
+  ]);
   // Records of other kinds (logKinds rows) go out with the checks, in their chains.
   const total = (await countChecks(tx)) + (await tx.objectStore('logKinds').count());
   // Blocks come in device-then-seq order, and hold each record's canonical JSON already: the
@@ -94,6 +98,9 @@ export async function exportBackupParts(options: LongWorkOptions = {}): Promise<
   const parts = [
     `{"format":${JSON.stringify(BACKUP_FORMAT)},"formatVersion":${BACKUP_FORMAT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},\n`,
     `"vessels":[${lines(vessels.map((v) => canonicalJson(v)))}],\n`,
+    `"instruments":[${lines(instruments.map((r) => canonicalJson(r)))}],\n`,
+    `"calibrations":[${lines(calibrations.map((r) => canonicalJson(r)))}],\n`,
+    `"fittings":[${lines(fittings.map((r) => canonicalJson(r)))}],\n`,
     '"checks":[',
     ...pieces(checkParts),
     '],\n',

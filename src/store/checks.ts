@@ -122,6 +122,7 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
   const inputs = cloneJson(requireInputs('inputs', input.inputs));
   requireJsonObject('reading', input.reading);
   requireJson('result', input.result);
+  if (input.vesselSpec !== undefined) requireJsonObject('vesselSpec', input.vesselSpec);
   const reading = cloneJson(input.reading);
   const result = cloneJson(input.result);
   const cautions = cloneJson(requireCautions('cautions', input.cautions));
@@ -156,7 +157,7 @@ export async function appendCheck(input: NewCheck, options: AppendOptions = {}):
     technician,
     note,
     vesselId: vessel.id,
-    vessel: { tag: vessel.tag, spec: vessel.spec },
+    vessel: { tag: vessel.tag, spec: input.vesselSpec === undefined ? vessel.spec : cloneJson(input.vesselSpec) },
     inputs,
     reading,
     result,

@@ -81,6 +81,9 @@ const absoluteBandPa = (r: CheckRecord): number | null => {
   const a = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'atmosphere']));
   return g === null ? null : Math.hypot(g, a ?? 0);
 };
+/** The atmosphere's part of the band, else the vessel's barometer limit, Pa (as the screen's "Atmosphere used"). */
+const atmosphereBandPa = (r: CheckRecord): number | null =>
+  num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'atmosphere'])) || num(at(r.vessel.spec, ['instruments', 'barometerTolerancePa']));
 function highestSignal(r: CheckRecord): Cell {
   return worstSignalOfMask(signalMaskOf(r.cautions));
 }
@@ -136,6 +139,13 @@ export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => C
   { header: 'hash (SHA-256)', cell: (r) => r.hash },
   // Added after the first release, at the end so every earlier column keeps its place.
   { header: 'outcome (worst signal word among the findings; none when none)', cell: (r) => outcomeOfRecord(r) },
+  // Rounded beside the SI columns above, as the check screen shows them (its bands: the gauge and
+  // atmosphere on the gauge reading, the scale on the net contents, the liquid mass's band on the
+  // vapour mass, the barometer's on the atmosphere).
+  { header: 'gauge pressure (kPa, as shown)', cell: shownFromResult('reading.gaugePressurePa', absoluteBandPa, 1e-3) },
+  { header: 'atmosphere (kPa, as shown)', cell: shownFromResult('reading.atmospherePa', atmosphereBandPa, 1e-3) },
+  { header: 'net mass (kg, as shown)', cell: shownFromResult('reading.netMassKg', (r) => num(at(r.vessel.spec, ['instruments', 'weightToleranceKg']))) },
+  { header: 'vapour mass (kg, as shown)', cell: shownFromResult('inventory.vaporMassKg', bandAt('inventoryBands.liquidMassKg.plusMinus')) },
 ];
 
 /**

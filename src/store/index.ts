@@ -35,6 +35,16 @@ export type {
 // Vessels
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_INTERVAL_RANGE_S } from './vessels.ts';
 
+// Instrument register (calibrations and fittings append-only)
+export {
+  addInstrument, updateInstrument, retireInstrument, getInstrument, listInstruments, addCalibration, calibrationsOf, instrumentHistory,
+  listRegister, fitInstrument, fittingsOfVessel, fittingsOfInstrument, fittedAt, fittedInstruments,
+} from './instruments.ts';
+export { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE, calibrationFigures } from './instrument-records.ts';
+export type {
+  CalibrationEntry, FittingRecord, InstrumentHistory, InstrumentOrigin, InstrumentRecord, InstrumentRole, NewCalibration, NewInstrument,
+} from './instrument-records.ts';
+
 // Checks (append-only)
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
 export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';

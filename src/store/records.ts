@@ -92,6 +92,12 @@ export interface NewCheck {
   reading: Reading;
   /** evaluateCheck's result, stored as-is (checked to be plain JSON). */
   result: CheckResult;
+  /**
+   * The vessel spec the check was evaluated with, when it differs from the stored vessel's: the
+   * register's limits in its instrument figures and `instrumentsUsed` naming the instruments and
+   * calibrations (core vesselWithInstruments). Absent: the stored vessel's spec is the snapshot.
+   */
+  vesselSpec?: VesselSpec;
   cautions: readonly StoredCaution[];
   appVersion: string;
   formulationId: string;
@@ -119,7 +125,7 @@ export interface CheckRecord {
   technician: string;
   note: string;
   vesselId: string;
-  /** The vessel as it was when the check was saved. */
+  /** The vessel as the check used it: its stored spec, or (with a register) that spec with the instruments' limits and `instrumentsUsed`. */
   vessel: { tag: string; spec: VesselSpecData };
   inputs: Record<string, TypedInput>;
   /** The reading as evaluateCheck took it. */

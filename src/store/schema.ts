@@ -7,6 +7,9 @@ import { canonicalJson } from './integrity.ts';
 import { findingMaskOfText } from './facts.ts';
 import { addToLog, MONTH_PART_TARGET, type IdBucket, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
+import type { CalibrationEntry, FittingRecord, InstrumentRecord } from './instrument-records.ts';
+import { registerFromVessel } from './instrument-upgrade.ts';
+import { formatIsoWithOffset } from './time.ts';
 
 export const DB_NAME = 'tankside';
 /**
@@ -30,10 +33,16 @@ export const DB_NAME = 'tankside';
  *   (key [kind, vesselKey, timeMs, id], index by-kind-time) lists them per kind, vessel and time.
  *   A database from before holds none (older versions skipped them on import), so the rung only
  *   makes the store.
+ * - v8 (INSTRUMENT_REGISTER_RUNG): the instrument register: instruments (by-tag), calibrations
+ *   (by-instrument on [instrumentId, timeMs, id]) and fittings (by-vessel on [vesselId, fromMs, id],
+ *   by-instrument). Every vessel's typed gauge and thermometer become entries fitted to it
+ *   (instrument-upgrade.ts); vessel records and checks stay as they were.
  */
 /** The rung that adds records of other kinds; one constant, so the number can move at a merge. */
 export const KINDS_RUNG = 7;
-export const DB_VERSION = KINDS_RUNG;
+/** The register's rung: one constant, so the number can move at a merge. */
+export const INSTRUMENT_REGISTER_RUNG = 8;
+export const DB_VERSION = INSTRUMENT_REGISTER_RUNG;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -67,6 +76,9 @@ export interface TanksideDB extends DBSchema {
   logKinds: { key: [string, string, number, string]; value: KindRow; indexes: { 'by-kind-time': [string, number, string] } };
   settings: { key: string; value: JsonValue | DeviceKey | KnownDeviceKey };
   drafts: { key: string; value: DraftRecord };
+  instruments: { key: string; value: InstrumentRecord; indexes: { 'by-tag': string } };
+  calibrations: { key: string; value: CalibrationEntry; indexes: { 'by-instrument': [string, number, string] } };
+  fittings: { key: string; value: FittingRecord; indexes: { 'by-vessel': [string, number, string]; 'by-instrument': string } };
 }
 
 type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
@@ -268,6 +280,31 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
       db.createObjectStore('logKinds', { keyPath: ['kind', 'vesselKey', 'timeMs', 'id'] })
         .createIndex('by-kind-time', ['kind', 'timeMs', 'id']);
       next();
+    },
+  },
+  {
+    version: INSTRUMENT_REGISTER_RUNG,
+    run(db, tx, next) {
+      db.createObjectStore('instruments', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+      db.createObjectStore('calibrations', { keyPath: 'id' }).createIndex('by-instrument', ['instrumentId', 'timeMs', 'id']);
+      const fittings = db.createObjectStore('fittings', { keyPath: 'id' });
+      fittings.createIndex('by-vessel', ['vesselId', 'fromMs', 'id']);
+      fittings.createIndex('by-instrument', 'instrumentId');
+      const raw = unwrap(tx) as IDBTransaction;
+      const now = formatIsoWithOffset(new Date(), undefined, true);
+      // Vessels are few (an inventory, not a log): one cursor, each vessel's entries put as it is read.
+      const cursor = raw.objectStore('vessels').openCursor();
+      cursor.onsuccess = () => {
+        const c = cursor.result;
+        if (!c) {
+          next();
+          return;
+        }
+        const made = registerFromVessel(c.value as VesselRecord, now, () => crypto.randomUUID());
+        for (const i of made.instruments) raw.objectStore('instruments').put(i);
+        for (const f of made.fittings) raw.objectStore('fittings').put(f);
+        c.continue();
+      };
     },
   },
 ];

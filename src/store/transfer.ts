@@ -11,8 +11,11 @@ export type { BackupDocument, BackupLimits, ChainHead, ImportReport } from './ba
 export { importBackupFile } from './import-job.ts';
 export { recordBackup } from './backup-record.ts';
 export { exportCsv, exportCsvParts, csvFromChecks } from './csv.ts';
+export { exportRegisterCsv, REGISTER_CSV_COLUMNS } from './register-csv.ts';
 export { tallyChecks } from './tally.ts';
 export { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
+// Also on index.ts; here for the screens that save them, so they load with those screens.
+export { appendRecord, listRecords } from './kind-records.ts';
 export type { CheckTally } from './tally.ts';
 export {
   ownChainHead,

@@ -4,6 +4,7 @@ import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import type { NewVessel, VesselPatch, VesselRecord } from './records.ts';
 import { formatIsoWithOffset } from './time.ts';
+import { registerFromVessel } from './instrument-upgrade.ts';
 import { cloneJson, invalid, requireJsonObject, requireText, requireUuid } from './validate.ts';
 
 const STRICT = { durability: 'strict' } as const;
@@ -54,8 +55,9 @@ async function putVessel(record: VesselRecord, what: string): Promise<VesselReco
 
 /**
  * Adds a vessel. `tag` is trimmed, 1–64 characters; `description` up to 2000; `spec` is the check
- * engine's VesselSpec as plain JSON (stored as-is, not interpreted here); `checkIntervalS` 3,600 s
- * to 1,096 days, or null / absent for none.
+ * engine's VesselSpec as plain JSON (stored as-is; only its instruments are read, to make their
+ * register entries and fit them, see instrument-upgrade.ts); `checkIntervalS` 3,600 s to 1,096 days,
+ * or null / absent for none.
  * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
  */
 export async function addVessel(input: NewVessel): Promise<VesselRecord> {
@@ -76,7 +78,23 @@ export async function addVessel(input: NewVessel): Promise<VesselRecord> {
     createdAt: now,
     updatedAt: now,
   };
-  return putVessel(withInterval(record, interval), `Saving vessel ${tag}`);
+  // Its typed gauge and thermometer join the register in the same transaction, as the upgrade
+  // did for the vessels before it, so every vessel's checks can name their instruments.
+  const stored = withInterval(record, interval);
+  const register = registerFromVessel(stored, now, () => crypto.randomUUID());
+  const db = await getDb();
+  const tx = db.transaction(['vessels', 'instruments', 'fittings'], 'readwrite', STRICT);
+  try {
+    await Promise.all([
+      tx.objectStore('vessels').put(stored),
+      ...register.instruments.map((i) => tx.objectStore('instruments').put(i)),
+      ...register.fittings.map((f) => tx.objectStore('fittings').put(f)),
+      tx.done,
+    ]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, `Saving vessel ${tag}`);
+  }
+  return stored;
 }
 
 /**

@@ -127,13 +127,13 @@ export async function syncNow(options: SyncOptions): Promise<SyncReport> {
 function summary(push: PushResult, plant: SyncReport['plant'], checks: ChecksPullResult | null): string {
   const parts = [
     push.localHead === 0
-      ? 'No checks saved on this device yet'
-      : `${push.pushed} check${push.pushed === 1 ? '' : 's'} sent; all ${push.localHead} of this device's are on the server`,
+      ? 'No records saved on this device yet'
+      : `${push.pushed} record${push.pushed === 1 ? '' : 's'} sent (checks, cycles, tests); all ${push.localHead} of this device's are on the server`,
   ];
   if (plant.applied.length > 0) parts.push(`${plant.applied.length} vessel definition${plant.applied.length === 1 ? '' : 's'} updated`);
   if (plant.conflicts.length > 0) parts.push(`${plant.conflicts.length} vessel definition${plant.conflicts.length === 1 ? '' : 's'} need a supervisor (two edits of one version, or an edit here)`);
   if (checks) {
-    parts.push(`${checks.added.length} check${checks.added.length === 1 ? '' : 's'} received`);
+    parts.push(`${checks.added.length} record${checks.added.length === 1 ? '' : 's'} received`);
     if (checks.gaps.length > 0) parts.push(`${checks.gaps.length} gap${checks.gaps.length === 1 ? '' : 's'} in other devices' chains`);
   }
   const refused = refusedSummary([...plant.refused, ...(checks?.refused ?? [])]);

@@ -17,6 +17,9 @@ const ConvertScreen = lazyScreen('Convert', () => import('./screens/ConvertScree
 const SettingsScreen = lazyScreen('Settings', () => import('./screens/SettingsScreen.tsx').then((m) => m.SettingsScreen));
 const MoreScreen = lazyScreen('More', () => import('./screens/MoreScreen.tsx').then((m) => m.MoreScreen));
 const LabelsScreen = lazyScreen('Vessel labels', () => import('./labels/LabelsScreen.tsx').then((m) => m.LabelsScreen));
+const CyclesScreen = lazyScreen('Cycle record', () => import('./cycles/CyclesScreen.tsx').then((m) => m.CyclesScreen));
+const SteamTestsScreen = lazyScreen('Steam and chamber tests', () => import('./cycles/SteamTestsScreen.tsx').then((m) => m.SteamTestsScreen));
+const InstrumentsScreen = lazyScreen('Instruments', () => import('./instruments/InstrumentsScreen.tsx').then((m) => m.InstrumentsScreen));
 const SyncScreen = lazyScreen('Plant sync', () => import('./sync/SyncScreen.tsx').then((m) => m.SyncScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
 const OverviewScreen = lazyScreen('Plant overview', () => import('./desk/OverviewScreen.tsx').then((m) => m.OverviewScreen));
@@ -60,6 +63,9 @@ function Screen({ route }: { route: Route }) {
     case 'settings': return <SettingsScreen />;
     case 'more': return <MoreScreen />;
     case 'labels': return <LabelsScreen />;
+    case 'cycles': return <CyclesScreen />;
+    case 'steam-tests': return <SteamTestsScreen />;
+    case 'instruments': return <InstrumentsScreen param={route.param} />;
     case 'sync': return <SyncScreen param={route.param} />;
   }
 }

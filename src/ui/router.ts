@@ -7,7 +7,7 @@
 // more entry with `place: 'more'` and a group: neither the bar nor the More screen changes.
 import { useEffect, useState } from 'preact/hooks';
 
-export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'settings' | 'overview' | 'sync';
+export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'instruments' | 'settings' | 'sync' | 'cycles' | 'steam-tests' | 'overview';
 
 /** Groups of the More screen, in the order it lists them. */
 export const MORE_GROUPS = ['Plan and review', 'Plant records', 'This device'] as const;
@@ -35,7 +35,10 @@ export const SCREENS: readonly ScreenEntry[] = [
   { id: 'overview', label: 'Plant overview', title: 'Plant overview', place: 'more', group: 'Plan and review', summary: 'Each vessel\'s latest outcome, checks due and open findings.' },
   { id: 'fill', label: 'Fill plan', title: 'Fill plan', place: 'more', group: 'Plan and review', summary: 'How much water to charge for a target condition.' },
   { id: 'review', label: 'Review', title: 'Review', place: 'more', group: 'Plan and review', summary: 'Filter, count, chart and print the log; export and import.' },
+  { id: 'cycles', label: 'Cycle record', title: 'Cycle record', place: 'more', group: 'Plant records', summary: 'A sterilising cycle, live or from a recorder file.' },
+  { id: 'steam-tests', label: 'Steam and chamber tests', title: 'Steam and chamber tests', place: 'more', group: 'Plant records', summary: 'Supply steam, air leakage, air-removal test.' },
   { id: 'labels', label: 'Vessel labels', title: 'Vessel labels', place: 'more', group: 'Plant records', summary: 'Print a sheet of QR labels that open each vessel\'s new check.' },
+  { id: 'instruments', label: 'Instruments', title: 'Instruments', place: 'more', group: 'Plant records', summary: 'Gauges and thermometers: calibrations, due dates, drift found in the log.' },
   { id: 'sync', label: 'Plant sync', title: 'Plant sync', place: 'more', group: 'This device', summary: 'Send this device\'s checks to the plant server and receive the vessel inventory.' },
   { id: 'settings', label: 'Settings', title: 'Settings', place: 'more', group: 'This device', summary: 'Your name, units, site atmosphere, storage and backup.' },
 ];

@@ -93,7 +93,7 @@ describe('fault matrix', () => {
   beforeAll(async () => {
     server = await startServer(DIST);
     // A second build with another version, to arrive as an update mid-entry.
-    const built = spawnSync('npx', ['vite', 'build', '--outDir', NEXT, '--logLevel', 'warn'], { cwd: ROOT, env: { ...process.env, TANKSIDE_BUILD_TAG: 'next' }, stdio: 'inherit' });
+    const built = spawnSync('npx', ['vite', 'build', '--outDir', NEXT, '--logLevel', 'warn'], { cwd: ROOT, env: { ...process.env, NODE_ENV: 'production', TANKSIDE_BUILD_TAG: 'next' }, stdio: 'inherit' });
     expect(built.status).toBe(0);
 
     // Another device's valid signed log, and damaged copies of it.

@@ -173,6 +173,7 @@ describe('field screens', () => {
       await page.fill('#v-straightLengthM', '1,2');
       // πD²L/4 + 2·πD³/24 for 2:1 heads (common practice) = 0.396 m³.
       await expect.poll(() => page.locator('[data-volume]').textContent()).toMatch(/0\.396 m³/);
+      await page.locator('[data-site-summary]').click(); // the site is folded, its defaults filled in
       await page.selectOption('#v-atm', 'elevation');
       expect(await page.inputValue('#v-elevationM-unit')).toBe('m');
       await page.fill('#v-elevationM', '1600');
@@ -195,6 +196,73 @@ describe('field screens', () => {
       await expect.poll(() => page.getByRole('link', { name: /E2E-HIGH/ }).count()).toBe(1);
     });
 
+    it('the vessel editor keeps every field: typed, kept across a reload mid-edit, saved, and opened again with every value and unit back', async () => {
+      // An invented vessel (test data) with every field of the editor filled, the folded ones too.
+      const texts: [string, string][] = [
+        ['#v-tag', 'E2E-EVERY'], ['#v-desc', 'Invented vessel with every field set'],
+        ['#v-diameterM', '900'], ['#v-straightLengthM', '1,5'], ['#v-crownRadius', '850'], ['#v-knuckleRadius', '90'],
+        ['#v-mawp', '300'], ['#v-relief', '280'], ['#v-designTemperature', '145'], ['#v-reliefTolPercent', '5'],
+        ['#v-gaugeSpan', '400'], ['#v-sensorTol', '0,5'], ['#v-tare', '850'], ['#v-weightTol', '2'],
+        ['#v-gaugeAccuracyPercent', '1,6'], ['#v-gaugeIndicatorPercent', '0,5'], ['#v-gaugeDriftPercent', '0,25'],
+        ['#v-sensorIndicatorTol', '0,2'], ['#v-sensorDriftTol', '0,1'], ['#v-tareTol', '5'], ['#v-volumeTolPercent', '3'],
+        ['#v-elevationM', '1600'], ['#v-ambientTemperature', '18'],
+      ];
+      const choices: [string, string][] = [
+        ['#v-diameterM-unit', 'mm'], ['#v-crownRadius-unit', 'mm'], ['#v-knuckleRadius-unit', 'mm'], ['#v-straightLengthM-unit', 'm'],
+        ['#v-service', 'steriliser'], ['#v-heating', 'steam-jacket'], ['#v-pressure-unit', 'kPa'], ['#v-temperature-unit', 'degC'],
+        ['#v-sensor', 'stated'], ['#v-mass-unit', 'kg'], ['#v-tareKnown', 'stated'], ['#v-atm', 'elevation'], ['#v-elevationM-unit', 'm'],
+      ];
+      const openFolds = async () => {
+        const folded = page.locator('form details:not([open]) > summary');
+        while (await folded.count() > 0) await folded.first().click();
+      };
+      const same = (text: string) => text.replace(',', '.');
+      const expectAll = async () => {
+        await openFolds();
+        for (const [sel, value] of choices) expect(await page.inputValue(sel), sel).toBe(value);
+        for (const [sel, value] of texts) expect(same(await page.inputValue(sel)), sel).toBe(same(value));
+        expect(await page.isChecked('#v-vacuumBreaker')).toBe(true);
+        expect(await page.isChecked('#v-vacuum')).toBe(false);
+      };
+
+      await page.goto(`${server.url}#/vessels/new`);
+      await page.locator('form[data-draft="loaded"]').waitFor();
+      await page.selectOption('#v-shape', 'horizontal-cylinder');
+      await page.selectOption('#v-head', 'torispherical');
+      await page.selectOption('#v-sensor', 'stated');
+      await openFolds();
+      await page.selectOption('#v-atm', 'elevation');
+      await page.selectOption('#v-tareKnown', 'stated');
+      for (const [sel, value] of choices) await page.selectOption(sel, value);
+      for (const [sel, value] of texts) await page.fill(sel, value);
+      await page.check('#v-vacuumBreaker');
+      await page.locator('html[data-draft-state="saved"]').waitFor();
+      await page.reload();
+      await page.locator('form[data-draft="loaded"]').waitFor();
+      await expect.poll(() => page.inputValue('#v-tag')).toBe('E2E-EVERY');
+      await expectAll();
+
+      await page.getByRole('button', { name: 'Save vessel' }).click();
+      await page.getByRole('link', { name: /E2E-EVERY/ }).click();
+      await page.locator('form[data-draft="loaded"]').waitFor();
+      await expect.poll(() => page.inputValue('#v-tag')).toBe('E2E-EVERY');
+      await expectAll();
+    });
+
+    it('a new vessel\'s common case fits on about two screens (page at most 2 × 844 px with the usual fields shown)', async () => {
+      await page.goto(`${server.url}#/vessels/new`);
+      await page.locator('form[data-draft="loaded"]').waitFor();
+      await page.getByRole('button', { name: 'Start over' }).click();
+      await page.fill('#v-diameterM', '1');
+      await page.fill('#v-straightLengthM', '2');
+      await page.locator('.shape-preview svg, .shape-preview img, .shape-preview [role="img"]').first().waitFor();
+      const height = await page.evaluate(() => document.documentElement.scrollHeight);
+      await page.screenshot({ path: 'test-results/screens/vessel-editor-new-full.png', fullPage: true });
+      console.log(`vessel editor, new vessel at 390×844: page ${height} px tall (${(height / 844).toFixed(2)} screens)`);
+      expect(height).toBeLessThanOrEqual(2 * 844);
+      await page.getByRole('button', { name: 'Start over' }).click();
+    });
+
     it('Convert uses a vessel\'s own site atmosphere, not the standard one, and changes it with one 48 px control', async () => {
       await page.goto(`${server.url}#/convert`);
       await page.locator('#conv-atm').waitFor();
@@ -207,7 +275,8 @@ describe('field screens', () => {
       await page.fill('#conv-pressure', '0');
       await page.locator('[data-convert-state="ready"]').waitFor();
       // 0 gauge at that site is 83.5 kPa absolute.
-      expect(await page.locator('tbody tr', { hasText: 'kPa' }).first().locator('td').first().textContent()).toMatch(/^83\.5/);
+      // Typed "0" resolves ±0.5 kPa: one decimal, no more (issue 11 §4).
+      expect(await page.locator('tbody tr', { hasText: 'kPa' }).first().locator('td').first().textContent()).toMatch(/^83\.5$/);
     });
 
     it('the fill plan: a neutral box, full-size choices, plain words, the details folded', async () => {

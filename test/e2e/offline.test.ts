@@ -44,6 +44,7 @@ describe('offline first use and restart', () => {
     await page.fill('#v-gaugeSpan', '1000');
     await page.selectOption('#v-temperature-unit', 'degC');
     await page.fill('#v-designTemperature', '180');
+    await page.locator('[data-site-summary]').click(); // the site is folded, its defaults filled in
     await page.fill('#v-ambientTemperature', '20');
     await page.fill('#v-barometerTol', '0,5');
     await page.getByRole('button', { name: 'Save vessel' }).click();

@@ -194,7 +194,7 @@ describe('every screen', () => {
     await page.getByRole('link', { name: 'More' }).click();
     // The More screen is its own chunk: count its links once it is drawn, not while it loads.
     await page.locator('.more-screen').waitFor();
-    for (const name of ['Fill plan', 'Review', 'Plant overview', 'Vessel labels', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
+    for (const name of ['Fill plan', 'Review', 'Plant overview', 'Cycle record', 'Steam and chamber tests', 'Vessel labels', 'Instruments', 'Plant sync', 'Settings']) expect(await page.getByRole('link', { name: new RegExp(name) }).count()).toBe(1);
     await inspect('11-more');
   });
 
@@ -202,6 +202,15 @@ describe('every screen', () => {
     await page.goto(`${server.url}#/labels`);
     await expect.poll(() => page.locator('.vessel-label').count()).toBe(3);
     await inspect('12-labels');
+  });
+
+  it('Instruments, and one instrument\'s page', async () => {
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('[data-register-state="ready"]').waitFor();
+    await inspect('16-instruments');
+    await page.locator('li[data-tag] a').first().click();
+    await page.locator('[data-instrument-state="ready"]').waitFor();
+    await inspect('17-instrument');
   });
 
   it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {
@@ -218,12 +227,31 @@ describe('every screen', () => {
     await inspect('13-review');
   });
 
+  it('Cycle record', async () => {
+    await page.goto(`${server.url}#/cycles`);
+    await page.locator('.cycles-screen[data-draft="loaded"]').waitFor();
+    await pickVessel(page, '#cycle-vessel', 'DEMO-ST-01');
+    await page.locator('.live-cycle[data-live-state="idle"]').waitFor();
+    await inspect('14-cycles');
+  });
+
+  it('Steam and chamber tests', async () => {
+    await page.goto(`${server.url}#/steam-tests`);
+    await page.locator('.steam-tests-screen[data-draft="loaded"]').waitFor();
+    await pickVessel(page, '#test-vessel', 'DEMO-ST-01');
+    await page.selectOption('#test-kind', 'noncondensable-gas');
+    await page.fill('#st-gas', '4.2');
+    await page.fill('#st-cond', '100');
+    await page.locator('[data-test="noncondensable-gas"][data-test-outcome]').waitFor();
+    await inspect('15-steam-tests');
+  });
+
   it('Plant overview (the demo plant; issue 14)', async () => {
     await page.goto(`${server.url}#/overview`);
     await page.locator('[data-overview-state="ready"]').waitFor();
     // The demo plant's vessels in service (one of its four is retired by an earlier test).
     expect(await page.locator('.overview-table tbody tr').count()).toBeGreaterThanOrEqual(3);
-    await inspect('15-overview');
+    await inspect('16-overview');
   });
 
   it('Settings', async () => {

@@ -12,9 +12,11 @@ const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as
 describe('app update during an entry', () => {
   const profile = tempProfile();
   beforeAll(() => {
-    // A second build with a different version: new bytes for every asset and for sw.js.
+    // A second build with a different version: new bytes for every asset and for sw.js. NODE_ENV is
+    // Vitest's 'test' here, which Vite would build with import.meta.env.DEV set (and the new page's
+    // worker bridge switched off); the update must be a production build like the first.
     const r = spawnSync('npx', ['vite', 'build', '--outDir', NEXT, '--logLevel', 'warn'], {
-      cwd: ROOT, env: { ...process.env, TANKSIDE_BUILD_TAG: 'next' }, stdio: 'inherit',
+      cwd: ROOT, env: { ...process.env, NODE_ENV: 'production', TANKSIDE_BUILD_TAG: 'next' }, stdio: 'inherit',
     });
     expect(r.status).toBe(0);
   });
@@ -53,7 +55,11 @@ describe('app update during an entry', () => {
     expect(await page.inputValue('#chk-temperature')).toBe('151,8');
     expect(await page.inputValue('#chk-pressure')).toBe('400');
     expect(await page.locator('#pick-vessel option:checked').textContent()).toMatch(/DEMO-FT-02/);
-    await page.waitForTimeout(1000); // a second reload (an unguarded controllerchange) would land here
+    // The new page says when its worker registration has settled (controlled by the new worker,
+    // nothing installing or waiting): a second reload (an unguarded controllerchange) would have
+    // been issued by then, and the new page would not have settled in the old one's place.
+    await page.waitForSelector('html[data-worker-state="current"]', { timeout: 30_000 });
+    expect(await page.locator('.app-version').textContent()).toBe(`Tankside ${VERSION}+next`);
     expect(loads).toBe(1);
     await ctx.close();
     await server.close();

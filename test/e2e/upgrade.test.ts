@@ -1,6 +1,7 @@
-// Devices upgrading in the real browser: from schema v3 (one IndexedDB record per check) to the log
+// Devices upgrading in the real browser (and, last, from v6 to the instrument register): from schema v3 (one IndexedDB record per check) to the log
 // in blocks, from v4 (every caution's signal words in the month rows) to v5 (the findings'), and
-// from one value per vessel and month to v6's parts of at most 500 rows. The old database is written with raw IndexedDB exactly as that version created it, then the app
+// from one value per vessel and month to v6's parts of at most 500 rows, and to v7 (records of other kinds
+// beside the checks). The old database is written with raw IndexedDB exactly as that version created it, then the app
 // opens it. Every check must arrive unchanged: the review counts them (by outcome, after v5), the
 // chains verify, and the JSON backup's check lines are the records' canonical JSON, in device and
 // seq order. The logs are generated test data (bench/generated-log.ts and below), not demo data.
@@ -209,6 +210,105 @@ describe('upgrade from schema v3 in Chromium', () => {
   });
 });
 
+describe('upgrade from schema v6 in Chromium', () => {
+  let server: StaticServer;
+  beforeAll(async () => {
+    server = await startServer(DIST);
+  });
+  afterAll(async () => {
+    await server.close();
+  });
+
+  it('v6 → v7: the log stays byte for byte, and a periodic test saved after it joins the same chain', async () => {
+    const backup = await generatedBackup({ ...LOG, deviceId: '3c4d5e6f-7081-4923-b4c5-d6e7f8091a2b', vesselPrefix: '5eed0007', vessels: 2, checks: 30, seed: 7 });
+    const doc = JSON.parse(backup) as { vessels: { id: string; tag: string }[]; checks: CheckRecord[] };
+    const deviceId = doc.checks[0]!.deviceId;
+    const block = { deviceId, firstSeq: 1, seqs: doc.checks.map((c) => c.seq), texts: doc.checks.map((c) => canonicalJson(c)) };
+    const monthOf = (ms: number) => { const d = new Date(ms); return Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), 1); };
+    const parts = new Map<string, { vesselId: string; monthMs: number; startMs: number; startId: string; rows: unknown[][] }>();
+    for (const c of doc.checks) {
+      const key = `${c.vesselId} ${monthOf(c.timeMs)}`;
+      if (!parts.has(key)) parts.set(key, { vesselId: c.vesselId, monthMs: monthOf(c.timeMs), startMs: monthOf(c.timeMs), startId: '', rows: [] });
+      const f = factsOfRecord(c);
+      parts.get(key)!.rows.push([c.timeMs, c.id, c.deviceId, c.seq, f.verdict, f.signals, f.technician]);
+    }
+    const ids: Record<string, Record<string, { at: [string, number] }>> = {};
+    for (const c of doc.checks) (ids[c.id.slice(-2)] ??= {})[c.id] = { at: [c.deviceId, c.seq] };
+    const profile = tempProfile();
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.goto(`${server.url}not-the-app`);
+      await page.evaluate(async ({ vessels, block, parts, ids, deviceId }) => {
+        const db = await new Promise<IDBDatabase>((ok, no) => {
+          const r = indexedDB.open('tankside', 6);
+          r.onupgradeneeded = () => {
+            const d = r.result;
+            d.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+            d.createObjectStore('settings');
+            d.createObjectStore('drafts');
+            d.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+            d.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+            d.createObjectStore('logIds');
+          };
+          r.onsuccess = () => ok(r.result);
+          r.onerror = () => no(r.error);
+        });
+        await new Promise<void>((ok, no) => {
+          const tx = db.transaction(['vessels', 'settings', 'logBlocks', 'logMonthParts', 'logIds'], 'readwrite');
+          for (const v of vessels) tx.objectStore('vessels').put(v);
+          tx.objectStore('settings').put(deviceId, 'store:deviceId');
+          tx.objectStore('logBlocks').put(block);
+          for (const p of parts) tx.objectStore('logMonthParts').put(p);
+          for (const [k, bucket] of Object.entries(ids)) tx.objectStore('logIds').put(bucket, k);
+          tx.oncomplete = () => ok();
+          tx.onerror = () => no(tx.error);
+        });
+        db.close();
+      }, { vessels: doc.vessels, block, parts: [...parts.values()], ids, deviceId });
+
+      await page.goto(`${server.url}#/steam-tests`);
+      await page.locator('.steam-tests-screen[data-draft="loaded"]').waitFor();
+      const tag = doc.vessels[0]!.tag;
+      await page.locator('#test-vessel option', { hasText: tag }).waitFor({ state: 'attached' });
+      await page.selectOption('#test-vessel', doc.vessels[0]!.id);
+      await page.selectOption('#test-kind', 'air-removal');
+      await page.fill('#st-batch', 'TEST-LOT-1');
+      await page.locator('[data-test="air-removal"][data-test-outcome]').waitFor();
+      await page.fill('#test-tech', 'Gen Seven');
+      await page.getByRole('button', { name: 'Save test' }).click();
+      await page.locator('[data-save-state="saved"]').waitFor();
+
+      await page.goto(`${server.url}#/review`);
+      await page.locator('.review-totals[data-complete="yes"]').waitFor();
+      // Checks are still 30: the test is a record of another kind, listed beside them.
+      expect(await page.textContent('[data-total="checks"]')).toBe('30');
+      await page.locator('.kind-records[data-kind-records="1"]').waitFor();
+      const version = await page.evaluate(async () => {
+        const db = await new Promise<IDBDatabase>((ok) => { const r = indexedDB.open('tankside'); r.onsuccess = () => ok(r.result); });
+        const out = { version: db.version, kinds: [...db.objectStoreNames].includes('logKinds') };
+        db.close();
+        return out;
+      });
+      expect(version).toEqual({ version: DB_VERSION, kinds: true });
+      const chains = await verifyChainsOnScreen(page);
+      expect(chains.lines.map((l) => l.chain)).toEqual(['ok']);
+      expect(chains.lines[0]!.text).toContain('31 records, seq 1 to 31');
+      const [dl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download JSON backup' }).click()]);
+      const exported = readFileSync((await dl.path())!, 'utf8');
+      const lines = (text: string) => text.split('\n').filter((l) => l.startsWith('{"appVersion"')).map((l) => l.replace(/,$/, ''));
+      const after = lines(exported);
+      // The 30 checks byte for byte, then the test as seq 31 of the same chain.
+      expect(after.slice(0, 30)).toEqual(lines(backup));
+      const test = JSON.parse(after[30]!) as { kind: string; seq: number; prevHash: string };
+      expect(test).toMatchObject({ kind: 'periodic-test', seq: 31, prevHash: doc.checks[29]!.hash });
+    } finally {
+      await ctx.close();
+      profile.remove();
+    }
+  });
+});
+
 const tempProfileV4 = tempProfile();
 afterAll(() => tempProfileV4.remove());
 
@@ -273,3 +373,68 @@ async function v4Layout() {
   }
   return { vessels, blocks, months: [...byMonth.values()], ids: [...idBuckets], records, want };
 }
+
+describe('the instrument register rung in Chromium (v6 → current)', () => {
+  const profile = tempProfile();
+  let server: StaticServer;
+  beforeAll(async () => {
+    server = await startServer(DIST);
+  });
+  afterAll(async () => {
+    await server.close();
+    profile.remove();
+  });
+
+  it('every generated vessel\'s typed gauge and thermometer become register entries fitted to it; the vessel records stay byte for byte', async () => {
+    const vessels = generatedVessels(0x5eed0006, 4, Date.parse('2026-09-01T06:00:00Z'));
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.goto(`${server.url}not-the-app`);
+      await page.evaluate(async ({ vessels }) => {
+        const db = await new Promise<IDBDatabase>((ok, no) => {
+          const r = indexedDB.open('tankside', 6);
+          r.onupgradeneeded = () => {
+            const d = r.result;
+            d.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+            d.createObjectStore('settings');
+            d.createObjectStore('drafts');
+            d.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+            d.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+            d.createObjectStore('logIds');
+          };
+          r.onsuccess = () => ok(r.result);
+          r.onerror = () => no(r.error);
+        });
+        await new Promise<void>((ok, no) => {
+          const tx = db.transaction(['vessels'], 'readwrite');
+          for (const v of vessels) tx.objectStore('vessels').put(v);
+          tx.oncomplete = () => ok();
+          tx.onerror = () => no(tx.error);
+        });
+        db.close();
+      }, { vessels });
+
+      await page.goto(`${server.url}#/instruments`);
+      await page.locator('[data-register-state="ready"]').waitFor();
+      const tags = await page.locator('li[data-tag]').evaluateAll((els) => els.map((e) => e.getAttribute('data-tag')).sort());
+      expect(tags).toEqual(vessels.flatMap((v) => [`${v.tag} PI`, `${v.tag} TI`]).sort());
+      const stored = await page.evaluate(async () => {
+        const db = await new Promise<IDBDatabase>((ok) => { const r = indexedDB.open('tankside'); r.onsuccess = () => ok(r.result); });
+        const all = <T,>(store: string) => new Promise<T[]>((ok) => { const q = db.transaction(store).objectStore(store).getAll(); q.onsuccess = () => ok(q.result as T[]); });
+        const out = { version: db.version, vessels: await all<unknown>('vessels'), fittings: await all<{ vesselId: string; role: string }>('fittings') };
+        db.close();
+        return out;
+      });
+      expect(stored.version).toBe(DB_VERSION);
+      expect(stored.vessels.map((v) => canonicalJson(v as never)).sort()).toEqual(vessels.map((v) => canonicalJson(v as never)).sort());
+      expect(stored.fittings.map((f) => `${f.vesselId} ${f.role}`).sort()).toEqual(vessels.flatMap((v) => [`${v.id} pressure`, `${v.id} temperature`]).sort());
+      // A vessel's page names its fitted instruments.
+      await page.goto(`${server.url}#/vessels/${vessels[0]!.id}`);
+      await page.locator('[data-drift-state="ready"]').waitFor();
+      expect(await page.textContent('[data-drift-state="ready"]')).toContain(`${vessels[0]!.tag} PI`);
+    } finally {
+      await ctx.close();
+    }
+  });
+});

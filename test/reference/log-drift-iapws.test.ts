@@ -5,7 +5,7 @@
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { driftFromLog, type SaturatedCheck } from '../../src/core/index.ts';
+import { driftFromLog, type SaturatedCheck } from '../../src/core/instrument/index.ts';
 
 const SCRIPT = fileURLToPath(new URL('./log-drift-iapws.py', import.meta.url));
 const START = Date.parse('2026-03-02T07:30:00Z');

@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { IDBFactory } from 'fake-indexeddb';
 import { closeStore, computeCheckHash, listVessels, StoreError, updateVessel, type CheckRecord } from '../../src/store/index.ts';
 import { exportBackup, importBackup, verifyStoredChains } from '../../src/store/transfer.ts';
-import { BACKUP_LIMITS, parseBackup, parseBackupInSteps } from '../../src/store/backup.ts';
+import { BACKUP_FORMAT_VERSION, BACKUP_LIMITS, parseBackup, parseBackupInSteps } from '../../src/store/backup.ts';
 import { dump, makeDeviceWithBackup, seedDevice, useDevice } from './backup-fixtures.ts';
 import { failWritesOverQuota } from './fixtures.ts';
 import type { LogBlock } from '../../src/store/log-layout.ts';
@@ -38,13 +38,15 @@ describe('export and import', () => {
     const { backup } = await makeDeviceWithBackup(2);
     const doc = parseBackup(backup);
     expect(doc.format).toBe('tankside-backup');
-    expect(doc.formatVersion).toBe(2);
+    expect(doc.formatVersion).toBe(BACKUP_FORMAT_VERSION);
+    expect(BACKUP_FORMAT_VERSION).toBe(3);
     expect(doc.exportedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(Z|[+-]\d\d:\d\d)$/);
-    // Header, then each section with one record per line (2 vessels, 3 checks, 3 signatures, 1 chain head).
+    // Header, then each section with one record per line (2 vessels, 3 checks, 3 signatures, 1 chain head; the test vessels have no typed instruments, so no register records).
     const recordLines = backup.split('\n').filter((l) => l.startsWith('{"') && !l.startsWith('{"format"'));
     expect(recordLines).toHaveLength(2 + 3 + 3 + 1);
     for (const line of recordLines) expect(() => JSON.parse(line.replace(/,$/, ''))).not.toThrow();
-    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":2,"exportedAt":')).toBe(true);
+    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":3,"exportedAt":')).toBe(true);
+    expect(backup).toContain('\n"instruments":[],\n"calibrations":[],\n"fittings":[],\n');
   });
 
   it('importing the same file again adds nothing and reports every record as already here', async () => {
@@ -216,7 +218,7 @@ describe('hostile and damaged files change nothing', () => {
     await expectRefused(edit(backup, (d) => void (d.checks[0]!['hash'] = 'A'.repeat(64))), 'checks[0].hash');
     await expectRefused(edit(backup, (d) => void (d.vessels[0]!['tagKey'] = 'nope')), 'vessels[0].tagKey');
     await expectRefused(edit(backup, (d) => void (d.vessels[1]!['id'] = d.vessels[0]!['id'])), 'vessels[1]');
-    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 3)), 'formatVersion');
+    await expectRefused(edit(backup, (d) => void (d['formatVersion'] = BACKUP_FORMAT_VERSION + 1)), 'formatVersion');
     await expectRefused(edit(backup, (d) => void (d['formatVersion'] = 0)), 'formatVersion');
     await expectRefused(edit(backup, (d) => void (d['format'] = 'other')), 'format');
     await expectRefused(edit(backup, (d) => void (d['extra'] = true)), 'file.extra');
@@ -229,7 +231,7 @@ describe('hostile and damaged files change nothing', () => {
 
   it('names a newer format version so the user knows to update', async () => {
     const { backup } = await makeDeviceWithBackup(1);
-    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 3)))).rejects.toThrow(/3 was written by a newer Tankside/);
+    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 4)))).rejects.toThrow(/4 was written by a newer Tankside/);
   });
 
   it('refuses a file over the size or count limits before parsing it', async () => {

@@ -183,10 +183,10 @@ describe('the CSV\'s rounded columns', () => {
     const record = {
       id: 'c1', vesselId: 'v1', deviceId: 'd1', seq: 1, time: '2026-12-01T10:00:00+00:00', timeMs: 0, technician: 'R. Okafor', note: 'invented test data',
       corrects: null, reason: null, appVersion: '0', formulationId: 'IAPWS-IF97', hash: 'h', prevHash: 'p',
-      vessel: { tag: 'FT-204', description: '', spec: {} }, inputs: {},
+      vessel: { tag: 'FT-204', description: '', spec: { instruments: { weightToleranceKg: 2 } } }, inputs: {},
       reading: { temperatureK: 396.54999999999995, pressure: { reference: 'gauge', pressurePa: 120_000 } },
       result: {
-        reading: { absolutePressurePa: 221_325.000000001, atmospherePa: 101_325, netMassKg: 500 },
+        reading: { absolutePressurePa: 221_325.000000001, gaugePressurePa: 120_000.000000001, atmospherePa: 101_325, netMassKg: 500 },
         saturation: {
           saturationPressurePa: 219_004.123, pressureDeviationPa: 2_320.877, saturationSlopePaPerK: 5_000,
           pressureBand: { plusMinus: 4_100, contributions: { pressureGauge: 4_000, atmosphere: 0, temperatureSensor: 900 } },
@@ -206,6 +206,13 @@ describe('the CSV\'s rounded columns', () => {
     expect(row['quality (%, as shown)']).toBe(1.23);
     expect(row['liquid mass (kg, as shown)']).toBe(493.8);
     expect(row['vapour mass (kg)']).toBe(6.1729);
+    // The columns added beside the SI ones: gauge ±4 kPa → whole kPa; atmosphere with no band of its
+    // own and no barometer limit → 4 significant digits; net ±2 kg (the vessel's scale) → 0.1 kg;
+    // vapour mass on the liquid mass's ±2.4 kg → 0.1 kg.
+    expect(row['gauge pressure (kPa, as shown)']).toBe(120);
+    expect(row['atmosphere (kPa, as shown)']).toBe(101.3);
+    expect(row['net mass (kg, as shown)']).toBe(500);
+    expect(row['vapour mass (kg, as shown)']).toBe(6.2);
   });
 });
 

@@ -9,7 +9,8 @@ import Papa from 'papaparse';
 import { exportCsv, tallyChecks, verifyStoredChains } from '../../src/store/transfer.ts';
 import { appendRecord, countStoredChecks, listRecords, outcomeOfMask, queryChecks } from '../../src/store/index.ts';
 import { getDb } from '../../src/store/connection.ts';
-import { DB_NAME, DB_VERSION, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
+import { calibrationsOf, fittedInstruments, fittingsOfVessel, listInstruments, listVessels } from '../../src/store/index.ts';
+import { DB_NAME, DB_VERSION, INSTRUMENT_REGISTER_RUNG, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
 import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
 import { storedChecks } from './log-access.ts';
 import { failWritesOverQuota, sampleCheck } from './fixtures.ts';
@@ -100,7 +101,10 @@ let upgradeTxOf: (db: IDBDatabase) => IDBTransaction = () => {
 };
 
 const CURRENT_SCHEMA = {
+  calibrations: ['by-instrument:["instrumentId","timeMs","id"]'],
   drafts: [],
+  fittings: ['by-instrument:"instrumentId"', 'by-vessel:["vesselId","fromMs","id"]'],
+  instruments: ['by-tag:"tagKey"'],
   logBlocks: [],
   logIds: [],
   logKinds: ['by-kind-time:["kind","timeMs","id"]'],
@@ -152,7 +156,7 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(7);
+    expect(DB_VERSION).toBe(INSTRUMENT_REGISTER_RUNG);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
@@ -372,12 +376,7 @@ describe('upgrade ladder', () => {
     }
     const block = { deviceId: D, firstSeq: 1, seqs: [1, 2], texts: records.map((r) => canonicalJson(r)) };
     const old = await rawOpen(6, (db) => {
-      db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
-      db.createObjectStore('settings');
-      db.createObjectStore('drafts');
-      db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
-      db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
-      db.createObjectStore('logIds');
+      createV6(db);
       const tx = upgradeTxOf(db);
       tx.objectStore('vessels').put(vesselV1());
       tx.objectStore('settings').put(D, SETTING_DEVICE_ID);
@@ -513,3 +512,80 @@ function createV4(db: IDBDatabase): void {
   db.createObjectStore('logMonths', { keyPath: ['vesselId', 'monthMs'] }).createIndex('by-month', 'monthMs');
   db.createObjectStore('logIds');
 }
+
+/** Schema v6 exactly as it shipped (a fresh v6 install: the log in blocks and month parts). */
+function createV6(db: IDBDatabase): void {
+  db.createObjectStore('vessels', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+  db.createObjectStore('settings');
+  db.createObjectStore('drafts');
+  db.createObjectStore('logBlocks', { keyPath: ['deviceId', 'firstSeq'] });
+  db.createObjectStore('logMonthParts', { keyPath: ['vesselId', 'monthMs', 'startMs', 'startId'] }).createIndex('by-month', 'monthMs');
+  db.createObjectStore('logIds');
+}
+
+describe('the instrument register rung (v6 → current)', () => {
+  // Invented test vessels: an RTD with an indicator and a gauge with one, a stated thermometer, and
+  // a loose record of the kind very old tests stored (no instruments: it gets no entries).
+  const instruments = (extra: object) => ({ weightToleranceKg: 2, volumeTolerancePercent: 2, barometerTolerancePa: 0, ...extra });
+  const vessel = (id: string, tag: string, spec: object) => ({
+    id, tag, tagKey: tag.toLowerCase(), description: 'test vessel', spec, retired: false, retiredAt: null,
+    createdAt: '2026-03-02T08:00:00+01:00', updatedAt: '2026-03-02T08:00:00+01:00',
+  });
+  const A = vessel('0a0a0a0a-0000-4000-8000-00000000000a', 'ST-9', {
+    tag: 'ST-9', designTemperatureK: 413.15, readingUnits: { pressure: 'bar', temperature: 'degC', mass: 'kg' },
+    instruments: instruments({
+      pressureGauge: { spanPa: 400e3, accuracyPercentOfSpan: 1, indicatorPercentOfSpan: 0.5, driftPercentOfSpan: 0.25 },
+      temperatureSensor: { kind: 'iec-60751', sensorClass: 'A' }, temperatureIndicatorToleranceK: 0.2, temperatureDriftToleranceK: 0.1,
+    }),
+  });
+  const B = vessel('0b0b0b0b-0000-4000-8000-00000000000b', 'CR-4', {
+    tag: 'CR-4', designTemperatureK: 343.15,
+    instruments: instruments({ pressureGauge: { spanPa: 600e3, accuracyPercentOfSpan: 1.6 }, temperatureSensor: { kind: 'stated', toleranceK: 1 } }),
+  });
+  const C = vessel('0c0c0c0c-0000-4000-8000-00000000000c', 'OLD-1', SPEC);
+
+  it(`every vessel's typed gauge and thermometer become register entries fitted to it, nothing lost (rung ${INSTRUMENT_REGISTER_RUNG})`, async () => {
+    const old = await rawOpen(6, createV6);
+    await rawWrite(old, [['vessels', A], ['vessels', B], ['vessels', C], ['settings', 'kept', 'app-settings']]);
+    old.close();
+    await openStore();
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    // The vessel records are exactly as they were.
+    expect(await listVessels({ includeRetired: true })).toEqual([B, C, A].sort((x, y) => x.tagKey.localeCompare(y.tagKey)));
+    expect(await getSetting('app-settings')).toBe('kept');
+    const tags = (await listInstruments()).map((i) => i.tag);
+    expect(tags).toEqual(['CR-4 PI', 'CR-4 TI', 'ST-9 PI', 'ST-9 TI']);
+    const a = await fittedInstruments(A.id);
+    expect(a.pressure!.instrument).toMatchObject({
+      displayUnit: 'bar',
+      spec: { tag: 'ST-9 PI', kind: 'pressure-gauge', range: { low: 0, high: 400e3 }, tolerance: { kind: 'percent-of-span', percentOfSpan: 1 }, indicatorTolerance: { kind: 'percent-of-span', percentOfSpan: 0.5 } },
+      origin: { kind: 'from-vessel', vesselId: A.id, vesselTag: 'ST-9' },
+    });
+    expect(a.temperature!.instrument).toMatchObject({
+      displayUnit: 'degC',
+      spec: { kind: 'rtd', range: { low: 273.15, high: 413.15 }, tolerance: { kind: 'iec-60751', sensorClass: 'A' }, indicatorTolerance: { kind: 'stated', plusMinus: 0.2 } },
+    });
+    expect(a.pressure!.calibrations).toEqual([]);
+    const b = await fittedInstruments(B.id);
+    expect(b.pressure!.instrument.displayUnit).toBe('kPa');
+    expect(b.pressure!.instrument.spec.indicatorTolerance).toBeUndefined();
+    // A thermometer's range reaches at least 100 °C, so its stated ± fits its span.
+    expect(b.temperature!.instrument.spec).toMatchObject({ kind: 'thermometer', range: { low: 273.15, high: 373.15 }, tolerance: { kind: 'stated', plusMinus: 1 } });
+    expect(await fittingsOfVessel(C.id)).toEqual([]);
+    const fittings = await fittingsOfVessel(A.id);
+    expect(fittings.map((f) => [f.role, f.fromMs]).sort()).toEqual([['pressure', Date.parse(A.createdAt)], ['temperature', Date.parse(A.createdAt)]]);
+    expect(await calibrationsOf(a.pressure!.instrument.id)).toEqual([]);
+  });
+
+  it('a v6 log comes through the rung unchanged and takes new checks', async () => {
+    const old = await rawOpen(6, createV6);
+    await rawWrite(old, [['vessels', A]]);
+    old.close();
+    await openStore();
+    const saved = await appendCheck(sampleCheck(A.id));
+    expect((await listChecks()).checks.map((c) => c.id)).toEqual([saved.id]);
+    expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 1 }]);
+  });
+});

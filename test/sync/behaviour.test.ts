@@ -168,6 +168,30 @@ describe('what a supervisor pulls', () => {
   });
 });
 
+describe('records of other kinds', () => {
+  it('a cycle record goes up under its kind through the server\'s rules and comes down to a supervisor, listed and verified', async () => {
+    const d = await makeDevice(fakeUuid(0xc1c1e000, 6));
+    await d.enrol(server.url, server.addAccount('device', d.id));
+    const vessel = await d.store.addVessel({ tag: 'TEST-AC', spec: SPEC });
+    await saveCheck(d, vessel.id, 'before the cycle');
+    const cycle = await d.store.appendRecord('cycle', {
+      vesselId: vessel.id, technician: 'Test Technician', values: { invented: 'test cycle' }, cautions: [],
+      appVersion: 'test', formulationId: 'IAPWS-IF97 (R7-97(2012))',
+    });
+    expect((await d.syncNow()).push.pushed).toBe(2);
+    const doc = (await server.admin<{ type: string; id: string }>('GET', `${CHECKS}/${encodeURIComponent(`${d.id}:${String(2).padStart(10, '0')}`)}`)).body;
+    expect(doc).toMatchObject({ type: 'cycle', id: cycle.id });
+
+    const s = await makeDevice(fakeUuid(0x5ec1c1e0, 1));
+    await s.enrol(server.url, server.addAccount('supervisor', s.id), 'supervisor');
+    const report = (await s.syncNow()).checks!;
+    expect(report.added).toContain(cycle.id);
+    expect(report.unknownKinds).toBe(0);
+    expect((await s.store.listRecords({ kind: 'cycle', vesselId: vessel.id })).records).toEqual([cycle]);
+    expect((await s.transfer.verifyStoredChains()).find((c) => c.deviceId === d.id)).toMatchObject({ status: 'ok', count: 2 });
+  });
+});
+
 describe('the plant inventory: versions', () => {
   it('newest version wins; two edits of one version are shown and not applied; a newer version resolves it', async () => {
     const s1 = await makeDevice(fakeUuid(0x51000000, 6));

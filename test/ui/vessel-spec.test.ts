@@ -3,6 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { formFromSpec, specFromForm } from '../../src/ui/state/vessel-spec.ts';
 import { emptyVesselForm, type VesselForm } from '../../src/ui/state/vessel-form.ts';
 import { UNIT_PRESETS } from '../../src/ui/state/settings-model.ts';
+import { atmosphereFromElevation } from '../../src/core/index.ts';
+import type { VesselSpec } from '../../src/core/check/vessel-spec.ts';
 
 const filled: VesselForm = {
   ...emptyVesselForm(UNIT_PRESETS.SI, { pressureText: '101.325' }),
@@ -86,7 +88,9 @@ describe('vessel form', () => {
   it('shows stored metres in the preferred length unit (US customary: ft) and reads them back', () => {
     const r = specFromForm(filled);
     if (!r.ok) throw new Error('spec');
-    const us = formFromSpec(r.spec, UNIT_PRESETS.US);
+    // A vessel saved before its dimensions kept the units they were typed in.
+    const { entryUnits: _none, ...older } = r.spec;
+    const us = formFromSpec(older, UNIT_PRESETS.US);
     expect(us.lengthUnit).toBe('ft');
     expect(Number(us.diameterM)).toBeCloseTo(1.2 / 0.3048, 4);
     const back = specFromForm(us);
@@ -101,5 +105,67 @@ describe('vessel form', () => {
     const r = specFromForm(old as VesselForm);
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
     expect(r.spec.geometry).toEqual({ shape: 'vertical-cylinder', innerDiameterM: 1.2, straightLengthM: 2, head: { kind: 'semi-ellipsoidal-2-1' } });
+  });
+
+  describe('every field round-trips: a stored vessel opened in the editor and saved unchanged is the same vessel', () => {
+    // An invented steriliser chamber with every optional field set (demo-style data, not a real vessel).
+    const full: VesselSpec = {
+      tag: 'RT-9', description: 'invented round-trip vessel',
+      geometry: { shape: 'horizontal-cylinder', innerDiameterM: 0.9, straightLengthM: 1.5, head: { kind: 'torispherical', crownRadiusM: 0.85, knuckleRadiusM: 0.09 } },
+      tareKg: 850, mawpGaugePa: 300e3, designTemperatureK: 418.15, reliefSetGaugePa: 280e3, vacuumRated: false,
+      siteAtmospherePa: atmosphereFromElevation(1600), siteElevationM: 1600, ambientTemperatureK: 291.15,
+      instruments: {
+        pressureGauge: { spanPa: 400e3, accuracyPercentOfSpan: 1, indicatorPercentOfSpan: 0.5, driftPercentOfSpan: 0.25 },
+        temperatureSensor: { kind: 'stated', toleranceK: 0.5 },
+        temperatureIndicatorToleranceK: 0.2, temperatureDriftToleranceK: 0.1,
+        weightToleranceKg: 2, tare: { kind: 'stated', toleranceKg: 5 }, volumeTolerancePercent: 2, barometerTolerancePa: 0,
+      },
+      reliefSetTolerancePercent: 5, vacuumBreaker: true, service: 'steriliser', heating: 'steam-jacket',
+      readingUnits: { pressure: 'kPa', temperature: 'degC', mass: 'kg' },
+      entryUnits: { diameter: 'mm', straightLength: 'm', crownRadius: 'mm', knuckleRadius: 'mm', elevation: 'm', volume: 'L' },
+    };
+
+    it('every value, its unit and the site as an elevation come back (formFromSpec → specFromForm)', () => {
+      const form = formFromSpec(full, UNIT_PRESETS.US);
+      expect(form.diameterM).toBe('900');
+      expect(form.diameterUnit).toBe('mm');
+      expect(form.crownRadius).toBe('850');
+      expect(form.atmosphereMode).toBe('elevation');
+      expect(form.elevationM).toBe('1600');
+      const back = specFromForm(form, full);
+      if (!back.ok) throw new Error(JSON.stringify(back.errors));
+      expect(back.spec).toEqual(full);
+    });
+
+    it('opened and saved unchanged, a vessel whose gauge reads psi and scale lb keeps every stored figure exactly (the form shows six digits: 300 kPa = 43.5113 psi, NIST SP 811 (2008) B.8)', () => {
+      const us: VesselSpec = { ...full, readingUnits: { pressure: 'psi', temperature: 'degF', mass: 'lb' }, tareKg: 850.123456789 };
+      const opened = formFromSpec(us, UNIT_PRESETS.US);
+      expect(opened.mawp).toBe('43.5113');
+      const back = specFromForm(opened, us, opened);
+      if (!back.ok) throw new Error(JSON.stringify(back.errors));
+      expect(back.spec).toEqual(us);
+      // A figure that was changed is read from its text as usual.
+      const changed = specFromForm({ ...opened, mawp: '50' }, us, opened);
+      if (!changed.ok) throw new Error(JSON.stringify(changed.errors));
+      expect(changed.spec.mawpGaugePa).toBeCloseTo(50 * 6894.757293168361, 6); // 1 psi = 6894.757 293 168 Pa (NIST SP 811 (2008) B.8)
+      expect(changed.spec.reliefSetGaugePa).toBe(us.reliefSetGaugePa);
+    });
+
+    it('keys the editor does not show (added by a later version or by plant sync) are kept', () => {
+      const withExtra = { ...full, plantNote: 'kept' } as VesselSpec & { plantNote: string };
+      const back = specFromForm(formFromSpec(withExtra, UNIT_PRESETS.SI), withExtra);
+      if (!back.ok) throw new Error(JSON.stringify(back.errors));
+      expect((back.spec as typeof withExtra).plantNote).toBe('kept');
+    });
+
+    it('an older vessel without the optional fields stays without them (the engine\'s defaults apply)', () => {
+      const r = specFromForm(filled);
+      if (!r.ok) throw new Error('spec');
+      const back = specFromForm(formFromSpec(r.spec, UNIT_PRESETS.SI), r.spec);
+      if (!back.ok) throw new Error(JSON.stringify(back.errors));
+      expect(back.spec.reliefSetTolerancePercent).toBe(3); // the new form's default, ±3 % (common practice)
+      expect(back.spec.instruments.pressureGauge.indicatorPercentOfSpan).toBeUndefined();
+      expect(back.spec.instruments.tare).toEqual({ kind: 'weighed-like-gross' });
+    });
   });
 });

@@ -28,6 +28,7 @@ export {
 export type { CautionRule, RuleEntry, RuleKind } from './cautions.ts';
 export { RULE_REASONS } from './rule-reasons.ts';
 export type { PressureBandPart, SaturationCheck, SaturationVerdict } from './saturation-consistency.ts';
+export { saturationSlopePaPerK } from './saturation-consistency.ts';
 export type { Hydraulic, HydraulicBand, Inventory, MawpVerdict } from './inventory.ts';
 export type { Band, ClippedBand, InventoryBands, UndeterminedReason } from './uncertainty.ts';
 export { gaugeLimitsPa, SITE_ATMOSPHERE_TOLERANCE_PA, temperatureToleranceK, thermometerLimitsK } from './uncertainty.ts';

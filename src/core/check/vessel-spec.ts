@@ -6,6 +6,10 @@ import { validateGeometry, type VesselGeometry } from './vessel-geometry.ts';
 import { isMassUnit, type MassUnit } from '../units/mass.ts';
 import { isPressureUnit, type PressureUnit } from '../units/pressure.ts';
 import { isTemperatureUnit, type TemperatureUnit } from '../units/temperature.ts';
+import type { InstrumentUse } from '../instrument/instrument-use.ts';
+import { isLengthUnit, type LengthUnit } from '../units/length.ts';
+import { isVolumeUnit, type VolumeUnit } from '../units/volume.ts';
+import { ELEVATION_RANGE_M } from '../units/atmosphere.ts';
 
 /** The units the vessel's own instruments show: its gauge's dial, its thermometer, its scale. */
 export interface ReadingUnits {
@@ -83,6 +87,33 @@ export interface VesselSpec {
    * does not use them. Absent on vessels saved before they existed.
    */
   readingUnits?: ReadingUnits;
+  /**
+   * The units the vessel's dimensions were typed in, so the editor opens them as they were typed;
+   * the engine does not use them. Absent on vessels saved before they existed (then the person's).
+   */
+  entryUnits?: EntryUnits;
+  /**
+   * The site as it was given, when it was given as an elevation: geometric metres above mean sea
+   * level (siteAtmospherePa is the US Standard Atmosphere 1976 pressure there). Absent when the site
+   * was given as a pressure. The engine does not use it.
+   */
+  siteElevationM?: number;
+  /**
+   * On a check's copy of the vessel: the register instruments whose limits replaced the typed
+   * gauge and thermometer figures above (vesselWithInstruments). Absent on a vessel record, and on
+   * checks saved before the register or on vessels without one.
+   */
+  instrumentsUsed?: InstrumentUse[];
+}
+
+/** Each dimension's unit as typed in the vessel editor (each absent: the person's length or volume unit). */
+export interface EntryUnits {
+  diameter?: LengthUnit;
+  straightLength?: LengthUnit;
+  crownRadius?: LengthUnit;
+  knuckleRadius?: LengthUnit;
+  elevation?: LengthUnit;
+  volume?: VolumeUnit;
 }
 
 /** Vessel services the hazards know (the brief's list of closed vessels). */
@@ -172,6 +203,15 @@ export function validateVessel(spec: VesselSpec): void {
     throw new InputError('instrument units', 'out-of-range', JSON.stringify(u), undefined,
       'instrument units: the gauge, thermometer and scale units must each be one of the app\'s units.');
   }
+  const e = spec.entryUnits;
+  if (e !== undefined) {
+    const lengths = [e?.diameter, e?.straightLength, e?.crownRadius, e?.knuckleRadius, e?.elevation];
+    if (typeof e !== 'object' || e === null || lengths.some((x) => x !== undefined && !isLengthUnit(x)) || (e.volume !== undefined && !isVolumeUnit(e.volume))) {
+      throw new InputError('dimension units', 'out-of-range', JSON.stringify(e), undefined,
+        'dimension units: each length and the volume must be typed in one of the app\'s units.');
+    }
+  }
+  optionalInRange('site elevation', spec.siteElevationM, { ...ELEVATION_RANGE_M, unit: 'm' });
   // Fields added after the first release are optional, so vessels stored before them still validate.
   optionalInRange('pressure gauge indicator', ins.pressureGauge.indicatorPercentOfSpan, L.gaugeIndicatorPercent);
   optionalInRange('pressure gauge drift', ins.pressureGauge.driftPercentOfSpan, L.gaugeDriftPercent);

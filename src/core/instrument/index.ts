@@ -19,3 +19,6 @@ export {
 export type { DriftContext, Interval, LogDrift, LogDriftEstimate, SaturatedCheck } from './log-drift.ts';
 export { INSTRUMENT_RULES, calibrationFinding } from './instrument-findings.ts';
 export type { InstrumentPair, InstrumentRule } from './instrument-findings.ts';
+export { vesselWithInstruments, withInstrumentFindings } from './vessel-instruments.ts';
+export type { FittedForCheck, FittedInstrument, VesselForCheck } from './vessel-instruments.ts';
+export type { InstrumentRole, InstrumentUse } from './instrument-use.ts';

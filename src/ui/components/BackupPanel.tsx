@@ -2,6 +2,7 @@
 // state and the last backup are in StoragePanel).
 import { useState } from 'preact/hooks';
 import * as repo from '../state/repo.ts';
+import { downloadFile } from './download.ts';
 import { updateSettings } from '../state/app-state.ts';
 import { formatIsoWithOffset } from '../../store/index.ts';
 import { serverLabel, useSyncServer } from '../state/sync-status.ts';
@@ -12,12 +13,7 @@ export function BackupPanel() {
   const exportNow = async (kind: 'backup' | 'csv') => {
     try {
       const file = await repo.exportFile(kind);
-      const url = URL.createObjectURL(file.blob);
-      const a = document.createElement('a');
-      a.href = url;
-      a.download = file.name;
-      a.click();
-      setTimeout(() => URL.revokeObjectURL(url), 10_000);
+      downloadFile(file);
       if (kind === 'backup') await updateSettings({ lastBackup: formatIsoWithOffset(new Date()) });
       setMessage(`Exported ${file.name}. Keep it somewhere other than this phone.`);
     } catch (e) {

@@ -6,7 +6,7 @@ import { Choice } from './Choice.tsx';
 import { useSettings } from '../state/app-state.ts';
 import { unitsInForce } from '../state/settings-model.ts';
 import { saturationFromPressure, saturationFromTemperature, type PressureKind, type SaturationAnswer } from '../state/convert.ts';
-import { formatNumber } from '../state/format.ts';
+import { formatToBand } from '../state/format.ts';
 
 const KINDS = [{ id: 'gauge', label: 'Gauge' }, { id: 'absolute', label: 'Absolute' }] as const;
 
@@ -27,12 +27,12 @@ export function SaturationConverter({ atmospherePa }: { atmospherePa: number }) 
       <NumberField id="sat-t" label="Temperature" value={tText} onInput={setTText}
         unit={tUnit} units={TEMPERATURE_UNITS} onUnit={(u) => setTUnit(u as TemperatureUnit)}
         error={fromT.ok === false ? fromT.error : undefined} />
-      <Answer a={fromT} text={(a) => `Saturation pressure ${formatNumber(a.absolute, 5)} ${pLabel} absolute, ${formatNumber(a.gauge, 5)} ${pLabel} gauge`} />
+      <Answer a={fromT} text={(a) => `Saturation pressure ${formatToBand(a.absolute, a.pressureBand)} ${pLabel} absolute, ${formatToBand(a.gauge, a.pressureBand)} ${pLabel} gauge`} />
       <NumberField id="sat-p" label="Pressure" value={pText} onInput={setPText}
         unit={pUnit} units={PRESSURE_UNITS} onUnit={(u) => setPUnit(u as PressureUnit)}
         error={fromP.ok === false ? fromP.error : undefined} />
       <Choice name="sat-kind" legend="The pressure above is" value={kind} options={KINDS} onChange={setKind} />
-      <Answer a={fromP} text={(a) => `Saturation temperature ${formatNumber(a.temperature, 5)} ${tLabel}`} />
+      <Answer a={fromP} text={(a) => `Saturation temperature ${formatToBand(a.temperature, a.temperatureBand)} ${tLabel}`} />
     </section>
   );
 }

@@ -3,6 +3,7 @@ import { useState } from 'preact/hooks';
 import { discardDraft, useDraft } from '../state/drafts.ts';
 import { VesselFields } from './VesselFields.tsx';
 import { VesselHistory } from './VesselHistory.tsx';
+import { VesselInstruments } from './VesselInstruments.tsx';
 import { navigate } from '../router.ts';
 import * as repo from '../state/repo.ts';
 import type { VesselRecord } from '../state/repo.ts';
@@ -35,7 +36,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
 
   const save = async (ev: Event) => {
     ev.preventDefault();
-    const built = specFromForm(form);
+    const built = specFromForm(form, vessel?.spec, vessel ? formFromSpec(vessel.spec, prefs) : undefined);
     const interval = readInterval(form.checkEvery ?? stored.text, form.checkEveryUnit ?? stored.unit);
     setIntervalError(interval.ok ? undefined : interval.message);
     if (!built.ok || !interval.ok) {
@@ -88,6 +89,7 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
         ) : null}
       </div>
     </form>
+    {vessel ? <VesselInstruments vesselId={vessel.id} /> : null}
     {vessel ? <VesselHistory vesselId={vessel.id} /> : null}
     </>
   );

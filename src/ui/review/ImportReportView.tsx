@@ -34,6 +34,9 @@ export function ImportReportView({ outcome }: { outcome: ImportOutcome }) {
         {Object.entries(v.recordsAdded).map(([kind, n]) => <span key={kind} data-import-added-kind={kind}>, {n.toLocaleString('en-GB')} {kind} records</span>)}, {v.vesselsAdded} new
         vessels, {v.vesselsUpdated} vessels updated; skipped <span data-import-skipped={v.skipped.length}>{v.skipped.length}</span>.
       </p>
+      {v.registerAdded + v.registerUpdated + v.registerSkipped > 0 ? (
+        <p data-import-register={v.registerAdded}>Instrument register: {v.registerAdded} records added, {v.registerUpdated} updated, {v.registerSkipped} already here or kept as here.</p>
+      ) : null}
       <Lines title="Skipped" lines={v.skipped} kind="skipped" />
       {v.signatures.length > 0 ? <ul class="import-signatures" data-import="signatures">{v.signatures.map((t) => <li key={t}>{t}</li>)}</ul> : null}
       {v.warnings.length + v.brokenChains.length > 0 ? (

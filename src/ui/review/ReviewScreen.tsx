@@ -10,6 +10,7 @@ import { ReviewTotals } from './ReviewTotals.tsx';
 import { ChainPanel } from './ChainPanel.tsx';
 import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
+import { KindRecords } from './KindRecords.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
 import { ReviewPager, reviewVessels, storeFilter } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
@@ -118,13 +119,17 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
   return (
     <div class="review-screen" data-shown={shown}>
       {wide ? (
-        <div class="no-print"><WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} open={openRecord} onOpen={setOpenRecord} /></div>
+        <div class="no-print">
+          <WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} open={openRecord} onOpen={setOpenRecord} />
+        <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
+        </div>
       ) : (
         <div class="no-print">
           {filters}
           {failure}
           {totalsPanel}
           <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+          <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
         </div>
       )}
       {vessel && reportFor === vessel.id ? (

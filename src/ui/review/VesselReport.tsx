@@ -7,6 +7,8 @@ import { TrendChart } from './TrendChart.tsx';
 import { trendGeometry, trendPoints, TREND_MAX_POINTS, type StandingHazard, type TrendPoint } from './trend-data.ts';
 import { periodText, reportRow, reportSummary } from './report-data.ts';
 import { outcomeLabel } from './record-facts.ts';
+import { KindRecords } from './KindRecords.tsx';
+import { ReportInstruments } from './ReportInstruments.tsx';
 
 interface Props {
   vessel: VesselRecord;
@@ -61,6 +63,7 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
           </tbody>
         </table>
       </div>
+      <ReportInstruments vessel={vessel} fromMs={fromMs} toMs={toMs} />
       {data.standing.length > 0 ? (
         <section aria-labelledby="report-standing-title">
           <h3 id="report-standing-title">Standing hazards of {vessel.tag}</h3>
@@ -72,6 +75,7 @@ export function VesselReport({ vessel, fromMs, toMs, from, to }: Props) {
           </ul>
         </section>
       ) : null}
+      <KindRecords vesselId={vessel.id} fromMs={fromMs} toMs={toMs} idPrefix="report-kinds" title={`Cycles and periodic tests of ${vessel.tag}`} />
       <p class="standing-note">
         Figures computed with IAPWS-IF97 from the readings as logged. This report does not replace the vessel's
         inspection regime, local codes, lockout/tagout procedures or licensed practice; each check's cautions stay

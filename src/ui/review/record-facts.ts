@@ -35,6 +35,14 @@ export interface RecordFacts {
   liquidMassKg: number | null;
   /** p − p_sat(T), Pa. */
   pressureDeviationPa: number | null;
+  /** The ± bands the engine gave those figures (same units; null where the record has none), so a report rounds them as the screen did. */
+  bands: FigureBands;
+}
+
+export interface FigureBands {
+  quality: number | null;
+  liquidMassKg: number | null;
+  pressureDeviationPa: number | null;
 }
 
 function field(value: unknown, key: string): unknown {
@@ -64,6 +72,11 @@ export function factsOf(record: CheckRecord): RecordFacts {
     quality: twoPhase ? finite(field(inventory, 'quality')) : null,
     liquidMassKg: twoPhase ? finite(field(inventory, 'liquidMassKg')) : null,
     pressureDeviationPa: finite(field(field(record.result, 'saturation'), 'pressureDeviationPa')),
+    bands: {
+      quality: finite(field(field(field(record.result, 'inventoryBands'), 'quality'), 'plusMinus')),
+      liquidMassKg: finite(field(field(field(record.result, 'inventoryBands'), 'liquidMassKg'), 'plusMinus')),
+      pressureDeviationPa: finite(field(field(field(record.result, 'saturation'), 'pressureBand'), 'plusMinus')),
+    },
   };
 }
 

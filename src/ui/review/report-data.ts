@@ -1,6 +1,6 @@
 // The printable vessel report's figures: a summary of the period and one table row per check,
 // already formatted for display.
-import { formatNumber } from '../state/format.ts';
+import { formatNumber, formatToBand } from '../state/format.ts';
 import { OUTCOMES, stampText, verdictLabel, type Outcome } from './record-facts.ts';
 import type { TrendPoint } from './trend-data.ts';
 
@@ -36,14 +36,20 @@ export function reportSummary(points: readonly TrendPoint[]): ReportSummary {
 
 const dash = '–';
 
+/** A figure rounded to the place its ± band resolves, as the check screen showed it; a few significant digits without a band. */
+function shown(value: number, band: number | null | undefined, significant: number): string {
+  return band === null || band === undefined || !(band > 0) ? formatNumber(value, significant) : formatToBand(value, band);
+}
+
 export function reportRow(p: TrendPoint): ReportRow {
+  const b = p.bands;
   return {
     id: p.id,
     time: stampText(p.time),
     verdict: verdictLabel(p.verdict, 'short'),
-    quality: p.quality === null ? dash : `${formatNumber(p.quality * 100, 3)} %`,
-    liquidMass: p.liquidMassKg === null ? dash : `${formatNumber(p.liquidMassKg, 4)} kg`,
-    deviation: p.pressureDeviationPa === null ? dash : `${formatNumber(p.pressureDeviationPa / 1000, 3)} kPa`,
+    quality: p.quality === null ? dash : `${shown(p.quality * 100, b?.quality == null ? null : b.quality * 100, 3)} %`,
+    liquidMass: p.liquidMassKg === null ? dash : `${shown(p.liquidMassKg, b?.liquidMassKg, 4)} kg`,
+    deviation: p.pressureDeviationPa === null ? dash : `${shown(p.pressureDeviationPa / 1000, b?.pressureDeviationPa == null ? null : b.pressureDeviationPa / 1000, 3)} kPa`,
     outcome: p.outcome,
     technician: p.technician,
   };

@@ -46,6 +46,10 @@ export interface ImportView {
   recordsAdded: Record<string, number>;
   vesselsAdded: number;
   vesselsUpdated: number;
+  /** Instrument register records (instruments, calibrations, fittings) added or updated. */
+  registerAdded: number;
+  registerUpdated: number;
+  registerSkipped: number;
   skipped: ReportLine[];
   warnings: string[];
   brokenChains: string[];
@@ -59,6 +63,10 @@ export function importView(r: ImportReport): ImportView {
     recordsAdded: r.records.added.reduce<Record<string, number>>((n, a) => ({ ...n, [a.kind]: (n[a.kind] ?? 0) + 1 }), {}),
     vesselsAdded: r.vessels.added.length,
     vesselsUpdated: r.vessels.updated.length,
+    // A report made by an import of before the register has no register part.
+    registerAdded: r.register?.added ?? 0,
+    registerUpdated: r.register?.updated ?? 0,
+    registerSkipped: r.register?.skipped.length ?? 0,
     skipped: [...r.vessels.skipped.map((s) => ({ key: s.id, label: s.id, why: `vessel: ${s.why}` })), ...r.checks.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why })), ...r.records.skipped.map((s) => ({ key: s.id, label: s.id, why: s.why }))],
     warnings: r.warnings,
     brokenChains: r.fileChains.filter((c) => c.status === 'broken').map((c) => `device ${c.deviceId.slice(0, 8)}: ${c.status === 'broken' ? c.detail : ''}`),

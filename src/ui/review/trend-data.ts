@@ -4,7 +4,7 @@
 // check and would mark them all). Also the vessel's standing hazards, gathered once for the report.
 import { isStandingRule } from '../../core/index.ts';
 import { checksForVessel, type CheckRecord, type Signal } from '../../store/index.ts';
-import { factsOf, type Outcome, type VerdictId } from './record-facts.ts';
+import { factsOf, type FigureBands, type Outcome, type VerdictId } from './record-facts.ts';
 
 export interface TrendPoint {
   id: string;
@@ -12,6 +12,8 @@ export interface TrendPoint {
   quality: number | null;
   liquidMassKg: number | null;
   pressureDeviationPa: number | null;
+  /** The engine's ± bands of those figures; absent: shown to a few significant digits. */
+  bands?: FigureBands;
   outcome: Outcome;
   verdict: VerdictId;
   technician: string;
@@ -73,7 +75,7 @@ function standingList(found: Map<string, StandingHazard>): StandingHazard[] {
 export function pointOf(r: CheckRecord): TrendPoint {
   const f = factsOf(r);
   return {
-    id: r.id, timeMs: r.timeMs, quality: f.quality, liquidMassKg: f.liquidMassKg, pressureDeviationPa: f.pressureDeviationPa,
+    id: r.id, timeMs: r.timeMs, quality: f.quality, liquidMassKg: f.liquidMassKg, pressureDeviationPa: f.pressureDeviationPa, bands: f.bands,
     outcome: f.outcome, verdict: f.verdict, technician: r.technician, time: r.time,
   };
 }

@@ -12,7 +12,7 @@ import { siteAtmosphere } from '../state/atmosphere.ts';
 import { atmosphereChoices, chosenAtmosphere } from '../state/convert-atmosphere.ts';
 import { pressureInAllUnits, type PressureKind } from '../state/convert.ts';
 import { unitsInForce } from '../state/settings-model.ts';
-import { formatNumber, formatEditable } from '../state/format.ts';
+import { formatNumber, formatToBand } from '../state/format.ts';
 import { StandingNote } from '../components/StandingNote.tsx';
 
 const KINDS = [{ id: 'gauge', label: 'Gauge' }, { id: 'absolute', label: 'Absolute' }] as const;
@@ -50,7 +50,7 @@ export function ConvertScreen() {
                 <thead><tr><th scope="col">Unit</th><th scope="col">Absolute</th><th scope="col">Gauge</th></tr></thead>
                 <tbody>
                   {table.rows.map((r) => (
-                    <tr key={r.unit}><th scope="row">{r.label}</th><td>{formatEditable(r.absolute)}</td><td>{formatEditable(r.gauge)}</td></tr>
+                    <tr key={r.unit}><th scope="row">{r.label}</th><td>{formatToBand(r.absolute, r.band)}</td><td>{formatToBand(r.gauge, r.band)}</td></tr>
                   ))}
                 </tbody>
               </table>

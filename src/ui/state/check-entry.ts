@@ -4,6 +4,8 @@
 // strip.
 import { useEffect, useMemo, useState } from 'preact/hooks';
 import type { ReadingUnits, VesselSpec } from '../../core/index.ts';
+import type { FittedForCheck } from '../../core/instrument/vessel-instruments.ts';
+import * as repo from './repo.ts';
 import { useSettings, useVessels } from './app-state.ts';
 import { useDraft } from './drafts.ts';
 import { CHECK_DRAFT_KEY, emptyCheckDraft, inVesselUnits, vesselUnits, type CheckDraft } from './check-draft.ts';
@@ -79,6 +81,17 @@ export function useCheckEntry(routeVesselId: string | undefined) {
     if (draft.loaded && units) draft.update((x) => inVesselUnits(x, units));
   }, [draft.loaded, vessel?.id, units?.pressure, units?.temperature, units?.mass]);
 
+  // The vessel's register instruments, read again whenever the vessel changes (a calibration entered elsewhere counts at once).
+  const [fitted, setFitted] = useState<{ vesselId: string; fitted: FittedForCheck } | undefined>(undefined);
+  useEffect(() => {
+    if (!vessel) return;
+    let live = true;
+    const id = vessel.id;
+    repo.fittedForCheck(id).then((f) => live && setFitted({ vesselId: id, fitted: f }), () => live && setFitted({ vesselId: id, fitted: {} }));
+    return () => { live = false; };
+  }, [vessel?.id]);
+  const fittedNow = vessel && fitted?.vesselId === vessel.id ? fitted.fitted : undefined;
+
   const engine = useEngine();
   const atm = useMemo(() => siteAtmosphere(settings.atmosphere), [settings.atmosphere]);
   const measured = settings.atmosphere.mode === 'barometer' && atm.ok ? atm.pressurePa : undefined;
@@ -87,10 +100,10 @@ export function useCheckEntry(routeVesselId: string | undefined) {
     if (!engine) return undefined;
     // A User Timing entry per evaluation: the speed benchmark tells the engine's share of a key press by it.
     const t0 = performance.now();
-    const e = engine.evaluateDraft(typed, vessel, measured, prefs);
+    const e = engine.evaluateDraft(typed, vessel, measured, prefs, fittedNow);
     performance.measure('tankside: evaluate the check', { start: t0 });
     return e;
-  }, [engine, typed, vessel, settings]);
+  }, [engine, typed, vessel, settings, fittedNow]);
   const strip = useMemo(() => stripOf(engine !== undefined, evaluation), [engine, evaluation]);
   const details = useSettled(evaluation, DETAILS_AFTER_MS);
   const chooseVessel = useMemo(() => (vesselId: string) => draft.update((x) => ({ ...x, vesselId })), [draft.update]);

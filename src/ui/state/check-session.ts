@@ -2,6 +2,8 @@
 // the record saved to the log. All computation is the core's.
 import { errorText, type FieldUnit } from './error-text.ts';
 import { InputError, evaluateCheck, isMassUnit, isPressureUnit, isTemperatureUnit, pressureFromPa, type CheckResult, type VesselSpec } from '../../core/index.ts';
+// The instruments room by its file, not through an index (see src/core/instrument/README.md, "Imports").
+import { vesselWithInstruments, withInstrumentFindings, type FittedForCheck } from '../../core/instrument/vessel-instruments.ts';
 import { gaugeSpanError } from './gauge-span.ts';
 import type { Reading } from '../../core/index.ts';
 import type { CheckRecord, StoredCaution, TypedInput, VesselRecord } from '../../store/index.ts';
@@ -21,6 +23,8 @@ export type Evaluation =
   | { kind: 'input-error'; errors: Partial<Record<ReadingField, string>>; general?: string }
   | {
     kind: 'result'; reading: Reading; result: CheckResult;
+    /** The vessel as the check used it: with a register, its instruments' limits at the reading's time and `instrumentsUsed`. */
+    vessel: VesselSpec;
     /** What the outcome strip shows: cheap, computed with every keystroke. */
     strip: { outcome: Outcome; verdict: string; figures: readonly Figure[]; demo: boolean };
     /** The full result, worked out on first use (when the keys pause) and kept. */
@@ -44,11 +48,15 @@ function typedText(d: CheckDraft, field: ReadingField): string {
   return field === 'gross' ? d.gross.text : d[field].text;
 }
 
-/** Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any. */
+/**
+ * Evaluates the entry as typed; `measuredAtmospherePa` is a barometer reading from Settings, if any;
+ * `fitted` the vessel's register instruments (undefined while they are being read).
+ */
 export function evaluateDraft(
-  d: CheckDraft, vessel: VesselRecord | undefined, measuredAtmospherePa: number | undefined, prefs: UnitPrefs,
+  d: CheckDraft, vessel: VesselRecord | undefined, measuredAtmospherePa: number | undefined, prefs: UnitPrefs, fitted?: FittedForCheck,
 ): Evaluation {
   if (!vessel) return { kind: 'incomplete', message: 'Choose a vessel to see the result.' };
+  if (!fitted) return { kind: 'incomplete', message: "Reading the vessel's instruments…" };
   const r = readingFromDraft(d, measuredAtmospherePa);
   if (r.kind !== 'reading') return r;
   const spec = vessel.spec;
@@ -56,11 +64,13 @@ export function evaluateDraft(
     d.pressure.kind, spec, measuredAtmospherePa ?? spec.siteAtmospherePa);
   if (span) return { kind: 'input-error', errors: { pressure: span } };
   try {
-    const result = evaluateCheck(spec, r.reading);
+    // The band of the reading's own time: a calibration entered later, or one overdue by then, counts as it stood.
+    const forCheck = vesselWithInstruments(spec, fitted, { nowMs: Date.parse(r.reading.time) });
+    const result = withInstrumentFindings(evaluateCheck(forCheck.vessel, r.reading), forCheck.findings);
     const typed = { pressure: d.pressure.unit, temperature: d.temperature.unit, mass: d.gross.unit };
     let view: ResultView | undefined;
     const strip = { outcome: splitOutcome(result).outcome, verdict: verdictText(result).short, figures: keyFiguresOf(result, prefs, typed), demo: isDemo(spec) };
-    return { kind: 'result', reading: r.reading, result, strip, view: () => (view ??= resultView(result, spec, prefs, typed)) };
+    return { kind: 'result', reading: r.reading, result, vessel: forCheck.vessel, strip, view: () => (view ??= resultView(result, forCheck.vessel, prefs, typed)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     if (field) return { kind: 'input-error', errors: { [field]: errorText(e, typedUnit(d, field), typedText(d, field)) } };
@@ -112,6 +122,7 @@ export async function saveCheck(d: CheckDraft, vessel: VesselRecord, e: Extract<
     inputs,
     reading: e.reading,
     result: e.result,
+    vesselSpec: e.vessel,
     // The log keeps each caution's stored wording (°C, K, kPa, kg); its parts stay in the result.
     cautions: e.result.cautions.map(({ signal, message, rule }) => ({ signal, message, rule })),
     appVersion: __APP_VERSION__,

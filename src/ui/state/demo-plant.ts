@@ -15,7 +15,7 @@ const COMMON = {
   readingUnits: { pressure: 'kPa', temperature: 'degC', mass: 'kg' },
 } as const;
 
-const DEMO_PLANT: readonly VesselSpec[] = [
+export const DEMO_PLANT: readonly VesselSpec[] = [
   {
     ...COMMON,
     tag: 'DEMO-ST-01',

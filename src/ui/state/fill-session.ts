@@ -3,12 +3,13 @@ import { errorText, type FieldUnit } from './error-text.ts';
 import { inPreferredUnits } from './caution-text.ts';
 import { isDemo } from './demo-label.ts';
 import {
-  InputError, MASS_UNITS, PRESSURE_UNITS, RULE_CATALOGUE, TEMPERATURE_UNITS, massFromKg, planFill, pressureFromPa,
+  InputError, MASS_UNITS, PRESSURE_UNITS, RULE_CATALOGUE, TEMPERATURE_UNITS, gaugeLimitsPa, massFromKg, planFill, pressureFromPa,
+  temperatureDifferenceFromK, thermometerLimitsK, type InstrumentAccuracy,
   temperatureDifferenceToK, temperatureFromK, temperatureToK, type FillPlan, type FillRequest, type FillTarget,
 } from '../../core/index.ts';
 import type { MassUnit, TemperatureUnit } from '../../core/index.ts';
 import type { VesselRecord } from '../../store/index.ts';
-import { formatNumber, readNumber } from './format.ts';
+import { formatNumber, formatToBand, readNumber } from './format.ts';
 import { messageOf } from './atmosphere.ts';
 import type { Figure, ResultView } from './result-view.ts';
 import { splitOutcome } from './outcome.ts';
@@ -64,7 +65,7 @@ export function evaluateFill(d: FillDraft, vessel: VesselRecord | undefined, u: 
   if (Object.keys(errors).length) return { kind: 'input-error', errors };
   try {
     const plan = planFill(vessel.spec, request);
-    return { kind: 'plan', plan, view: planView(plan, u, isDemo(vessel.spec) || isDemo(vessel)) };
+    return { kind: 'plan', plan, view: planView(plan, u, vessel.spec.instruments, isDemo(vessel.spec) || isDemo(vessel)) };
   } catch (e) {
     const field = e instanceof InputError ? ENGINE_FIELDS[e.field] : undefined;
     const typedIn: FieldUnit | undefined = field === 'target' || field === 'start' ? { kind: 'temperature', unit: tu } : undefined;
@@ -77,12 +78,20 @@ function isPlanRule(rule: string): boolean {
   return (RULE_CATALOGUE as Record<string, { kind: string }>)[rule]?.kind === 'plan';
 }
 
-function planView(p: FillPlan, u: UnitPrefs, demo: boolean): ResultView {
+/**
+ * The plan's figures as the vessel's own instruments will check them: a charge and a gross weight
+ * to the scale's ± limit, target pressures to the gauge's, temperatures to the thermometer's, each
+ * rounded to what that band resolves (formatToBand), so a plan never asks for a digit no
+ * instrument on the vessel can show. Shares and estimates keep a few significant digits.
+ */
+function planView(p: FillPlan, u: UnitPrefs, instruments: InstrumentAccuracy, demo: boolean): ResultView {
   const lab = (list: readonly { id: string; label: string }[], id: string) => list.find((x) => x.id === id)?.label ?? id;
-  // A plan has no instrument band: masses to the kilogram's tenth at most, four significant digits.
-  const m = (kg: number) => `${formatNumber(massFromKg(kg, u.mass as MassUnit), 4)} ${lab(MASS_UNITS, u.mass)}`;
-  const t = (k: number) => `${formatNumber(temperatureFromK(k, u.temperature), 4)} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
-  const pr = (pa: number) => `${formatNumber(pressureFromPa(pa, u.pressure), 4)} ${lab(PRESSURE_UNITS, u.pressure)}`;
+  const massUnit = u.mass as MassUnit;
+  const scaleBand = massFromKg(instruments.weightToleranceKg, massUnit);
+  const gaugeBand = pressureFromPa(gaugeLimitsPa(instruments).combined, u.pressure);
+  const m = (kg: number) => `${formatToBand(massFromKg(kg, massUnit), scaleBand)} ${lab(MASS_UNITS, u.mass)}`;
+  const t = (k: number) => `${formatToBand(temperatureFromK(k, u.temperature), temperatureDifferenceFromK(thermometerLimitsK(instruments, k).combined, u.temperature))} ${lab(TEMPERATURE_UNITS, u.temperature)}`;
+  const pr = (pa: number) => `${formatToBand(pressureFromPa(pa, u.pressure), gaugeBand)} ${lab(PRESSURE_UNITS, u.pressure)}`;
   const pct = (x: number) => `${formatNumber(x * 100, 3)} %`;
   const most = p.largestTwoPhaseCharge;
   const main: Figure[] = [

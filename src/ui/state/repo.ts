@@ -1,7 +1,8 @@
 // The UI's only door to the store: small functions in the words the screens use.
 import * as store from '../../store/index.ts';
 import type { VesselSpec } from '../../core/index.ts';
-import type { CheckRecord, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
+import type { FittedForCheck, FittedInstrument } from '../../core/instrument/vessel-instruments.ts';
+import type { CheckRecord, InstrumentHistory, JsonValue, NewCheck, VesselRecord } from '../../store/index.ts';
 import { StoreError } from '../../store/index.ts';
 import type { AppSettings } from './settings-model.ts';
 
@@ -152,4 +153,60 @@ export async function exportFile(kind: 'backup' | 'csv'): Promise<{ name: string
   }
   const { exportBackupParts } = await import('../../store/transfer.ts');
   return { name: `tankside-backup-${stamp}.json`, blob: new Blob(await exportBackupParts(), { type: 'application/json' }) };
+}
+
+/** Saves a record of another kind (a cycle, a periodic test); `draftKey`'s draft is deleted in the same transaction. */
+export async function appendRecord(kind: store.RecordKind, record: store.NewKindRecord, draftKey?: string): Promise<store.KindRecord> {
+  // Through the on-demand surface, as exportFile: only the cycle and test screens save these, and
+  // their code stays out of the start-up JavaScript.
+  const { appendRecord: append } = await import('../../store/transfer.ts');
+  return append(kind, record, draftKey === undefined ? {} : { clearDraft: draftKey });
+}
+
+/** A register instrument as the core takes it: its spec and calibrations with their ids. */
+export function fittedOf(h: InstrumentHistory): FittedInstrument {
+  return { instrumentId: h.instrument.id, spec: h.instrument.spec, calibrations: h.calibrations.map((c) => ({ ...store.calibrationFigures(c), calibrationId: c.id })) };
+}
+
+/** The vessel's pressure and temperature instruments in force at `atMs` (now by default), for a check's band; {} for a vessel without a register. */
+export async function fittedForCheck(vesselId: string, atMs = Date.now()): Promise<FittedForCheck> {
+  const fitted = await store.fittedInstruments(vesselId, atMs);
+  const out: FittedForCheck = {};
+  if (fitted.pressure) out.pressure = fittedOf(fitted.pressure);
+  if (fitted.temperature) out.temperature = fittedOf(fitted.temperature);
+  return out;
+}
+
+/** What a vessel's drift estimate reads: its newest 1,000 checks (the store's page limit), its fittings and the whole register by id. */
+export async function driftInputs(vesselId: string): Promise<{ checks: CheckRecord[]; fittings: store.FittingRecord[]; register: Map<string, InstrumentHistory> }> {
+  const [page, fittings, register] = await Promise.all([store.checksForVessel(vesselId, { limit: 1000 }), store.fittingsOfVessel(vesselId), store.listRegister()]);
+  return { checks: page.checks, fittings, register: new Map(register.map((h) => [h.instrument.id, h])) };
+}
+
+/** The whole register, each instrument with its calibrations. */
+export function listRegister(): Promise<InstrumentHistory[]> {
+  return store.listRegister();
+}
+
+/** A vessel's fittings, oldest first. */
+export function fittingsOfVessel(vesselId: string): Promise<store.FittingRecord[]> {
+  return store.fittingsOfVessel(vesselId);
+}
+
+/** One instrument with its calibrations, and where it has been fitted (oldest first). */
+export async function instrumentPage(id: string): Promise<{ history: InstrumentHistory; fittings: store.FittingRecord[] } | undefined> {
+  const [history, fittings] = await Promise.all([store.instrumentHistory(id), store.fittingsOfInstrument(id)]);
+  return history && { history, fittings };
+}
+
+/** Records a calibration; resolves once it is saved. */
+export function addCalibration(c: store.NewCalibration): Promise<store.CalibrationEntry> {
+  return store.addCalibration(c);
+}
+
+/** The instrument register as a CSV file to download. */
+export async function registerCsvFile(): Promise<{ name: string; blob: Blob }> {
+  const stamp = store.formatIsoWithOffset(new Date()).slice(0, 10);
+  const { exportRegisterCsv } = await import('../../store/transfer.ts');
+  return { name: `tankside-instruments-${stamp}.csv`, blob: new Blob([await exportRegisterCsv()], { type: 'text/csv' }) };
 }

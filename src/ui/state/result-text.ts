@@ -9,6 +9,8 @@ import {
   isCurrentResult, thermometerLimitsK, type MassUnit, type PressureUnit, type StoredCheckResult, type TemperatureUnit, type VesselSpec,
 } from '../../core/index.ts';
 import type { StoredCaution as Caution } from '../../store/index.ts';
+import { CALIBRATION_DUE_WORDS } from '../../core/instrument/calibration-due.ts';
+import type { InstrumentUse } from '../../core/instrument/instrument-use.ts';
 import { saturationChartData } from './chart-data.ts';
 import { inPreferredUnits } from './caution-text.ts';
 import { formatNumber, formatToBand, formatWithBand } from './format.ts';
@@ -108,6 +110,14 @@ function bandParts(c: Partial<Record<string, number>>, f: Fmt): string {
   return names.filter(([key]) => (c[key] ?? 0) > 0).map(([key, name]) => `${name} ${f.p(c[key]!, c[key]!)}`).join('; ') || 'none';
 }
 
+/** One instrument a check used: its tag, its due state then, and the calibration it rested on. */
+export function instrumentUseText(use: InstrumentUse): string {
+  const day = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+  const cal = use.calibratedMs === null ? '' : `, calibration of ${day(use.calibratedMs)}`;
+  const due = use.dueMs === null ? '' : use.due === 'overdue' ? ` since ${day(use.dueMs)}` : `, due ${day(use.dueMs)}`;
+  return `${use.tag}: ${CALIBRATION_DUE_WORDS[use.due]}${due}${cal}`;
+}
+
 /** Everything the outcome strip and the full result show. `typed`: the units the reading was typed in. */
 export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs, typed: TypedUnits = {}): ResultView {
   const f = units(u, typed);
@@ -127,6 +137,10 @@ export function resultView(r: StoredCheckResult, spec: VesselSpec, u: UnitPrefs,
     { label: 'Temperature minus saturation', value: f.dt(s.temperatureDeviationK, s.temperatureBandK.plusMinus) },
     { label: 'Atmosphere used', value: `${f.p(r.reading.atmospherePa, c.atmosphere || spec.instruments.barometerTolerancePa)} (${r.reading.atmosphereSource === 'measured' ? 'barometer reading' : "vessel's site value"})` },
   ];
+  // The register's instruments the band came from (checks saved before the register, or on a vessel without one, have none).
+  if (spec.instrumentsUsed && spec.instrumentsUsed.length > 0) {
+    saturation.push({ label: 'Instruments used', value: spec.instrumentsUsed.map(instrumentUseText).join('; ') });
+  }
   if (s.verdict.verdict === 'pressure-above-saturation') {
     const g = s.verdict.noncondensableGas;
     saturation.push({ label: 'Gas partial pressure (estimate)', value: `${f.p(g.partialPressurePa, s.pressureBand.plusMinus)}, ${f.pct(g.moleFraction, s.pressureBand.plusMinus / s.absolutePressurePa)} by moles` });

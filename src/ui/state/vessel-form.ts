@@ -2,6 +2,7 @@
 import type { LengthUnit, MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from '../../core/basics.ts';
 import { isLengthUnit } from '../../core/basics.ts';
 import type { HeadKind, SensorChoice, Shape } from './vessel-spec.ts';
+import type { VesselHeating, VesselService } from '../../core/check/vessel-spec.ts';
 import type { UnitPrefs } from './settings-model.ts';
 import type { IntervalUnit } from './check-interval.ts';
 
@@ -19,7 +20,12 @@ export interface VesselForm {
   diameterUnit?: LengthUnit;
   straightLengthUnit?: LengthUnit;
   elevationUnit?: LengthUnit;
+  crownRadiusUnit?: LengthUnit;
+  knuckleRadiusUnit?: LengthUnit;
   head: HeadKind;
+  /** A torispherical head's crown and knuckle radii; both blank: standard F&D proportions. */
+  crownRadius: string;
+  knuckleRadius: string;
   volume: string;
   volumeUnit: VolumeUnit;
   volumeTolPercent: string;
@@ -30,13 +36,27 @@ export interface VesselForm {
   mawp: string;
   relief: string;
   vacuumRated: 'yes' | 'no';
+  vacuumBreaker: 'yes' | 'no';
+  /** ± % of set; blank: the engine's ±3 % (common practice). */
+  reliefTolPercent: string;
+  service: VesselService;
+  heating: VesselHeating;
   gaugeSpan: string;
   gaugeAccuracyPercent: string;
+  /** Blank: none (0). */
+  gaugeIndicatorPercent: string;
+  gaugeDriftPercent: string;
   temperatureUnit: TemperatureUnit;
   designTemperature: string;
   ambientTemperature: string;
   sensor: SensorChoice;
   sensorTol: string;
+  /** The thermometer's indicator and drift limits, ± in the temperature unit; blank: none. */
+  sensorIndicatorTol: string;
+  sensorDriftTol: string;
+  /** How the tare is known: weighed like the gross, or a nameplate or historic figure with its own ±. */
+  tareKnown: 'weighed-like-gross' | 'stated';
+  tareTol: string;
   atmosphereMode: 'elevation' | 'pressure';
   elevationM: string;
   atmosphere: string;
@@ -47,19 +67,21 @@ export interface VesselForm {
 }
 
 /** The typed fields (the per-field length units are not typed text). */
-export type FormField = Exclude<keyof VesselForm, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit' | 'checkEvery' | 'checkEveryUnit'>;
+export type FormField = Exclude<keyof VesselForm, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit' | 'crownRadiusUnit' | 'knuckleRadiusUnit' | 'checkEvery' | 'checkEveryUnit'>;
 
 /** A new vessel's form: common values filled in where the trade has a usual default. */
 export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: string; pressureText?: string }): VesselForm {
   const us = u.temperature === 'degF' || u.temperature === 'degR';
   return {
     tag: '', description: '', shape: 'vertical-cylinder', diameterM: '', straightLengthM: '', lengthUnit: u.length,
-    diameterUnit: u.length, straightLengthUnit: u.length, elevationUnit: u.length, head: 'semi-ellipsoidal-2-1',
+    diameterUnit: u.length, straightLengthUnit: u.length, elevationUnit: u.length, crownRadiusUnit: u.length, knuckleRadiusUnit: u.length,
+    head: 'semi-ellipsoidal-2-1', crownRadius: '', knuckleRadius: '',
     volume: '', volumeUnit: u.volume, volumeTolPercent: '2',
     tare: '', massUnit: u.mass, weightTol: '',
-    pressureUnit: u.pressure, mawp: '', relief: '', vacuumRated: 'no', gaugeSpan: '', gaugeAccuracyPercent: '1',
+    pressureUnit: u.pressure, mawp: '', relief: '', vacuumRated: 'no', vacuumBreaker: 'no', reliefTolPercent: '3',
+    service: 'not-stated', heating: 'not-stated', gaugeSpan: '', gaugeAccuracyPercent: '1', gaugeIndicatorPercent: '', gaugeDriftPercent: '',
     temperatureUnit: u.temperature, designTemperature: '', ambientTemperature: us ? '68' : '20',
-    sensor: 'B', sensorTol: '',
+    sensor: 'B', sensorTol: '', sensorIndicatorTol: '', sensorDriftTol: '', tareKnown: 'weighed-like-gross', tareTol: '',
     atmosphereMode: siteAtmosphere.elevationM !== undefined ? 'elevation' : 'pressure',
     elevationM: siteAtmosphere.elevationM ?? '', atmosphere: siteAtmosphere.pressureText ?? '',
     barometerTol: '0',
@@ -71,9 +93,11 @@ export function formLengthUnit(f: VesselForm): LengthUnit {
   return isLengthUnit(f.lengthUnit) ? f.lengthUnit : 'm';
 }
 
-export type LengthField = 'diameterM' | 'straightLengthM' | 'elevationM';
-const UNIT_OF: Record<LengthField, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit'> = {
+export type LengthField = 'diameterM' | 'straightLengthM' | 'elevationM' | 'crownRadius' | 'knuckleRadius';
+type LengthUnitKey = 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit' | 'crownRadiusUnit' | 'knuckleRadiusUnit';
+const UNIT_OF: Record<LengthField, LengthUnitKey> = {
   diameterM: 'diameterUnit', straightLengthM: 'straightLengthUnit', elevationM: 'elevationUnit',
+  crownRadius: 'crownRadiusUnit', knuckleRadius: 'knuckleRadiusUnit',
 };
 
 /** The unit one length field is typed in: its own, else the form's older shared one. */
@@ -105,4 +129,26 @@ export const SENSORS: readonly { id: SensorChoice; label: string }[] = [
   { id: 'A', label: 'RTD, IEC 60751 class A' },
   { id: 'B', label: 'RTD, IEC 60751 class B' },
   { id: 'stated', label: 'Stated tolerance' },
+];
+
+export const SERVICES: readonly { id: VesselService; label: string }[] = [
+  { id: 'not-stated', label: 'Not stated' },
+  { id: 'steriliser', label: 'Steriliser or autoclave chamber' },
+  { id: 'flash-tank', label: 'Flash tank' },
+  { id: 'condensate-receiver', label: 'Condensate receiver' },
+  { id: 'process-vessel', label: 'Process vessel' },
+];
+
+export const HEATINGS: readonly { id: VesselHeating; label: string }[] = [
+  { id: 'not-stated', label: 'Not stated' },
+  { id: 'steam-jacket', label: 'Steam jacket' },
+  { id: 'steam-coil', label: 'Steam coil' },
+  { id: 'direct-steam', label: 'Steam into the contents' },
+  { id: 'electric', label: 'Electric' },
+  { id: 'unheated', label: 'Not heated' },
+];
+
+export const TARE_KNOWN: readonly { id: VesselForm['tareKnown']; label: string }[] = [
+  { id: 'weighed-like-gross', label: 'Weighed on this scale, like the gross' },
+  { id: 'stated', label: 'From the nameplate or records (its own ±)' },
 ];

@@ -6,6 +6,7 @@ import {
   atmosphereFromElevation, elevationFromAtmosphere, headDepthM, lengthFromM, lengthToM, pressureFromPa, pressureToPa,
   vesselVolume, volumeFromM3, volumeToM3, LENGTH_UNITS, PRESSURE_UNITS, VOLUME_UNITS,
 } from '../../core/index.ts';
+import type { HeadSpec } from '../../core/check/vessel-geometry.ts';
 import { formatFixed, formatNumber, readNumber } from './format.ts';
 import { lengthUnitOf, type VesselForm } from './vessel-form.ts';
 import type { UnitPrefs } from './settings-model.ts';
@@ -31,7 +32,15 @@ export function shapePreview(f: VesselForm, u: UnitPrefs): ShapePreview {
     const d = tryRead(f.diameterM), l = tryRead(f.straightLengthM);
     if (d === undefined || l === undefined) return { volumeText: 'Enter the diameter and the straight length to see the inner volume.' };
     const D = lengthToM(d, lengthUnitOf(f, 'diameterM')), L = lengthToM(l, lengthUnitOf(f, 'straightLengthM'));
-    const head = { kind: f.head };
+    // A torispherical head's own radii where typed (blank or not yet readable: standard F&D).
+    const radius = (field: 'crownRadius' | 'knuckleRadius') => {
+      const x = f.head === 'torispherical' ? tryRead(f[field] ?? '') : undefined;
+      return x === undefined ? undefined : lengthToM(x, lengthUnitOf(f, field));
+    };
+    const crownRadiusM = radius('crownRadius'), knuckleRadiusM = radius('knuckleRadius');
+    const head: HeadSpec = f.head === 'torispherical'
+      ? { kind: 'torispherical', ...(crownRadiusM === undefined ? {} : { crownRadiusM }), ...(knuckleRadiusM === undefined ? {} : { knuckleRadiusM }) }
+      : { kind: f.head };
     const m3 = vesselVolume({ shape: f.shape, innerDiameterM: D, straightLengthM: L, head });
     return {
       volumeText: volumeText(m3, u),

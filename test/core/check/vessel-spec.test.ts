@@ -35,6 +35,9 @@ describe('validateVessel (issue 3, bad input)', () => {
     ['temperature tolerance negative', { instruments: { ...ins, temperatureSensor: { kind: 'stated', toleranceK: -0.1 } } }, 'temperature sensor tolerance'],
     ['weight tolerance negative', { instruments: { ...ins, weightToleranceKg: -1 } }, 'weight tolerance'],
     ['volume tolerance above 50 %', { instruments: { ...ins, volumeTolerancePercent: 60 } }, 'volume tolerance'],
+    ['a dimension unit the app does not have', { entryUnits: { diameter: 'furlong' as 'm' } }, 'dimension units'],
+    // US Standard Atmosphere 1976's troposphere formula, as units/atmosphere.ts uses it: −500 m to 11 000 m.
+    ['a site elevation above the troposphere formula', { siteElevationM: 12_000 }, 'site elevation'],
   ];
   for (const [what, change, field] of cases) {
     it(`refuses ${what}, naming "${field}" and the valid range`, () => {

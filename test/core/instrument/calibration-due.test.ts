@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CALIBRATION_DUE_WORDS, DEFAULT_DUE_SOON_WINDOW_MS, MS_PER_DAY, MS_PER_YEAR, calibrationDue, type InstrumentSpec } from '../../../src/core/index.ts';
+import { CALIBRATION_DUE_WORDS, DEFAULT_DUE_SOON_WINDOW_MS, MS_PER_DAY, MS_PER_YEAR, calibrationDue, type InstrumentSpec } from '../../../src/core/instrument/index.ts';
 import { expectInputError } from '../units/expect-input-error.ts';
 
 const NOW = Date.parse('2026-12-04T09:00:00Z');

@@ -15,7 +15,7 @@
 import fc from 'fast-check';
 import { SITE_ATMOSPHERE_TOLERANCE_PA, saturationPressure, temperatureToleranceK } from '../../../src/core/index.ts';
 import { saturationSlopePaPerK } from '../../../src/core/check/saturation-consistency.ts';
-import type { SaturatedCheck } from '../../../src/core/index.ts';
+import type { SaturatedCheck } from '../../../src/core/instrument/index.ts';
 import { normal, uniform } from '../statistics/normal-deviates.ts';
 
 export const DAY_MS = 86_400_000;

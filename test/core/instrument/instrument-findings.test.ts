@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { INSTRUMENT_RULES, MS_PER_DAY, calibrationFinding, driftFromLog, saturationPressure, type CautionQuantity, type SaturatedCheck } from '../../../src/core/index.ts';
+import { saturationPressure, type CautionQuantity } from '../../../src/core/index.ts';
+import { INSTRUMENT_RULES, MS_PER_DAY, calibrationFinding, driftFromLog, type SaturatedCheck } from '../../../src/core/instrument/index.ts';
 
 const START = Date.parse('2026-06-01T08:00:00Z');
 // Invented checks on an invented chamber at 121 °C, offsets in Pa (test data).

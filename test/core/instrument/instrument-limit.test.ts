@@ -1,9 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  DEFAULT_INSTRUMENT_SETTINGS, LIMIT_PARTS, MS_PER_DAY, MS_PER_YEAR, instrumentLimit,
-  type CalibrationRecord, type InstrumentSpec,
-} from '../../../src/core/index.ts';
+import { DEFAULT_INSTRUMENT_SETTINGS, LIMIT_PARTS, MS_PER_DAY, MS_PER_YEAR, instrumentLimit, type CalibrationRecord, type InstrumentSpec } from '../../../src/core/instrument/index.ts';
 import { expectInputError } from '../units/expect-input-error.ts';
 import { temperatureToleranceK } from '../../../src/core/check/uncertainty.ts';
 import { testVessel } from '../check/test-vessel.ts';

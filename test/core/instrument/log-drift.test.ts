@@ -1,9 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  DRIFT_MIN_CHECKS, DRIFT_REPORTED_CONFIDENCE, INSTRUMENT_RULES, driftFromLog, saturationPressure,
-  type LogDrift, type LogDriftEstimate, type SaturatedCheck,
-} from '../../../src/core/index.ts';
+import { saturationPressure } from '../../../src/core/index.ts';
+import { DRIFT_MIN_CHECKS, DRIFT_REPORTED_CONFIDENCE, INSTRUMENT_RULES, driftFromLog, type LogDrift, type LogDriftEstimate, type SaturatedCheck } from '../../../src/core/instrument/index.ts';
 import { expectInputError } from '../units/expect-input-error.ts';
 import { DAY_MS, GAUGE_LIMIT_PA, LOG_START_MS, MONTH_MS, buildLog, rawLog } from './generated-log.ts';
 

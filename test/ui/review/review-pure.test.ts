@@ -14,6 +14,8 @@ function record(result: unknown, cautions: CheckRecord['cautions'] = []): CheckR
 }
 
 describe('record facts', () => {
+  const NO_BANDS = { quality: null, liquidMassKg: null, pressureDeviationPa: null };
+
   it('reads verdict, quality, liquid mass and pressure deviation from a two-phase result', () => {
     const r = record(
       {
@@ -26,7 +28,7 @@ describe('record facts', () => {
         { signal: 'WARNING', message: 'w', rule: 'y' },
       ],
     );
-    expect(factsOf(r)).toEqual({ verdict: 'pressure-above-saturation', outcome: 'WARNING', quality: 0.0123, liquidMassKg: 812.4, pressureDeviationPa: 1520.5 });
+    expect(factsOf(r)).toEqual({ verdict: 'pressure-above-saturation', outcome: 'WARNING', quality: 0.0123, liquidMassKg: 812.4, pressureDeviationPa: 1520.5, bands: NO_BANDS });
   });
 
   it('judges a record by its findings: standing hazards and notes never make the outcome (a v1 record by its rule ids, a v2 one by its findings)', () => {
@@ -49,7 +51,7 @@ describe('record facts', () => {
     expect(factsOf(record({ inventory: { regime: 'liquid-full', quality: 0.5 } }))).toMatchObject({ quality: null, liquidMassKg: null, verdict: 'none' });
     for (const bad of [null, 3, 'x', [], { saturation: { verdict: 'consistent', pressureDeviationPa: 'NaN' } }]) {
       const f = factsOf(record(bad));
-      expect(f).toEqual({ verdict: 'none', outcome: 'none', quality: null, liquidMassKg: null, pressureDeviationPa: null });
+      expect(f).toEqual({ verdict: 'none', outcome: 'none', quality: null, liquidMassKg: null, pressureDeviationPa: null, bands: NO_BANDS });
     }
     expect(verdictOf(record({ saturation: { verdict: { verdict: 'made-up' } } }))).toBe('none');
     expect(outcomeOf(record({}, [{ signal: 'NOTICE', message: 'n', rule: 'standing-note' }]))).toBe('none');
