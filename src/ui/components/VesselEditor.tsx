@@ -75,8 +75,9 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
       {vessel && isDemoVessel(vessel) ? <p><span class="demo-tag">DEMO DATA</span> An invented vessel for trying the app.</p> : null}
       {vessel?.retired ? <p>Retired {vessel.retiredAt ? shortTime(vessel.retiredAt) : ''}. Its checks stay in the log.</p> : null}
       <VesselFields form={form} set={set} errors={errors} prefs={prefs} />
-      <CheckIntervalField text={form.checkEvery ?? stored.text} unit={form.checkEveryUnit ?? stored.unit} error={intervalError}
-        onChange={(checkEvery, checkEveryUnit) => set({ checkEvery, checkEveryUnit })} />
+      {/* Set once the vessel is saved: the new vessel's form stays within about two phone screens (field.test). */}
+      {vessel ? <CheckIntervalField text={form.checkEvery ?? stored.text} unit={form.checkEveryUnit ?? stored.unit} error={intervalError}
+        onChange={(checkEvery, checkEveryUnit) => set({ checkEvery, checkEveryUnit })} /> : null}
       <p aria-live="polite" class={status ? 'field-error' : ''}>{status}</p>
       <div class="row">
         {vessel?.retired ? null : <button type="submit" class="primary">Save vessel</button>}
