@@ -8,7 +8,7 @@ import type { CheckRecord, IsoDateTime, JsonObject, KindRecord, LogRecord, Publi
 import { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 import { parseIsoWithOffset } from './time.ts';
 import { FORBIDDEN_KEYS, HEX64, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
-import { DESCRIPTION_MAX, TAG_MAX, tagKeyOf } from './vessels.ts';
+import { DESCRIPTION_MAX, requireCheckInterval, TAG_MAX, tagKeyOf } from './vessels.ts';
 import { EMPTY_REGISTER, type BackupRegister } from './backup-register.ts';
 import { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, type CalibrationEntry, type FittingRecord, type InstrumentRecord } from './instrument-records.ts';
 
@@ -92,8 +92,8 @@ function requireObject(field: string, value: unknown): Record<string, unknown> {
 }
 
 /** Exactly these keys: none missing, none unknown. */
-function requireKeys(field: string, value: Record<string, unknown>, keys: readonly string[]): void {
-  for (const key of Object.keys(value)) if (!keys.includes(key)) throw bad(`${field}.${key}`, 'unknown field');
+function requireKeys(field: string, value: Record<string, unknown>, keys: readonly string[], optional: readonly string[] = []): void {
+  for (const key of Object.keys(value)) if (!keys.includes(key) && !optional.includes(key)) throw bad(`${field}.${key}`, 'unknown field');
   for (const key of keys) if (!(key in value)) throw bad(`${field}.${key}`, 'missing');
 }
 
@@ -134,12 +134,14 @@ const B64URL_64 = /^[A-Za-z0-9_-]{86}$/;
 /** One vessel record as BACKUP-FORMAT.md defines it. @throws StoreError('invalid-backup') naming the first bad field */
 export function validateVessel(field: string, value: unknown): VesselRecord {
   const v = requireObject(field, value);
-  requireKeys(field, v, VESSEL_KEYS);
+  // Since issue 14 a vessel may carry its check interval; one without it has none.
+  requireKeys(field, v, VESSEL_KEYS, ['checkIntervalS']);
   within(() => {
     requireUuid(`${field}.id`, v['id']);
     requireText(`${field}.tag`, v['tag'], 1, TAG_MAX);
     requireText(`${field}.description`, v['description'], 0, DESCRIPTION_MAX);
     requireJsonObject(`${field}.spec`, v['spec']);
+    if ('checkIntervalS' in v) requireCheckInterval(`${field}.checkIntervalS`, v['checkIntervalS']);
   });
   const tag = v['tag'] as string;
   if (tag.trim() !== tag) throw bad(`${field}.tag`, 'has spaces at the start or end');

@@ -4,7 +4,8 @@ import type { IDBPTransaction } from 'idb';
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
 import { outcomeOfRecord, signalMaskOf, worstSignalOfMask } from './facts.ts';
-import { blockPages, compareRows, countChecks, LOG_STORES, pageRows, readRecords, type MonthRow } from './log-layout.ts';
+import { blockPages, compareRows, countChecks, LOG_STORES, matchingRows, pageRows, readRecords, type MonthRow } from './log-layout.ts';
+import { windowOf, type CheckFilter } from './checks.ts';
 import { isCheckRecord, type CheckCursor, type CheckRecord, type LogRecord, type LongWorkOptions } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { requireUuid } from './validate.ts';
@@ -187,11 +188,18 @@ export function csvFromChecks(records: Iterable<CheckRecord>): string {
 
 const PAGE = 1000;
 
+/** What a CSV export covers: the whole log, one vessel's checks, or the checks a review filter lets through. */
+export interface CsvOptions extends LongWorkOptions {
+  vesselId?: string;
+  /** Only the checks this filter covers (the Review's filter); with `vesselId`, both apply. */
+  filter?: CheckFilter;
+}
+
 /**
- * The log (all of it, or one vessel's) as CSV text, oldest first, read from one snapshot.
- * @throws StoreError('invalid-record') for a bad vesselId; ('cancelled') if options.signal aborts
+ * The log (all of it, one vessel's, or a filter's selection) as CSV text, oldest first, read from one snapshot.
+ * @throws StoreError('invalid-record') for a bad vesselId or filter field; ('cancelled') if options.signal aborts
  */
-export async function exportCsv(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string> {
+export async function exportCsv(options: CsvOptions = {}): Promise<string> {
   return (await exportCsvParts(options)).join('');
 }
 
@@ -204,10 +212,14 @@ type LogReadTx = IDBPTransaction<TanksideDB, (typeof LOG_STORES)[number][], 'rea
  * As exportCsv, as pieces whose concatenation is the file: a Blob or File made from them skips
  * building one string of the whole file.
  */
-export async function exportCsvParts(options: LongWorkOptions & { vesselId?: string } = {}): Promise<string[]> {
+export async function exportCsvParts(options: CsvOptions = {}): Promise<string[]> {
   if (options.vesselId !== undefined) requireUuid('vesselId', options.vesselId);
+  const filter: CheckFilter = { ...options.filter, ...(options.vesselId !== undefined ? { vesselId: options.vesselId } : {}) };
+  const window = windowOf(filter);
+  const narrowed = window.match !== undefined || Number.isFinite(window.fromMs) || Number.isFinite(window.toMs);
   const tx = (await getDb()).transaction(LOG_STORES);
-  const pieces = options.vesselId === undefined ? await wholeLogPieces(tx, options) : await vesselPieces(tx, options.vesselId, options);
+  const pieces = narrowed ? await selectionPieces(tx, window, options)
+    : window.vesselId === null ? await wholeLogPieces(tx, options) : await vesselPieces(tx, window.vesselId, options);
   await tx.done;
   return [csvFromChecks([]), ...pieces];
 }
@@ -308,6 +320,26 @@ async function sortedByTime(tx: LogReadTx, signal: AbortSignal | undefined): Pro
   }
   keyed.sort((x, y) => x.timeMs - y.timeMs || (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
   return piecesOf(keyed.map((k) => k.text));
+}
+
+/**
+ * A filter's rows, oldest first: the matching month rows gathered and sorted once, then their
+ * records read a page at a time (each page's blocks once), so only the blocks of the selection open.
+ */
+async function selectionPieces(tx: LogReadTx, window: ReturnType<typeof windowOf>, options: LongWorkOptions): Promise<string[]> {
+  const { rows } = await matchingRows(tx, window);
+  rows.sort(compareRows);
+  const pieces: string[] = [];
+  for (let at = 0; at < rows.length; at += PAGE) {
+    throwIfAborted(options.signal);
+    const page = rows.slice(at, at + PAGE);
+    const records = await readRecords(tx, page.map((r) => ({ deviceId: r[2], seq: r[3] })));
+    const lines: string[] = [];
+    for (const r of records) if (r && isCheckRecord(r)) lines.push(csvRow(r));
+    pieces.push(...piecesOf(lines));
+    options.onProgress?.(Math.min(rows.length, at + PAGE), rows.length);
+  }
+  return pieces;
 }
 
 /** One vessel's rows, oldest first: its month buckets a page of rows at a time, each page's blocks read once. */

@@ -33,7 +33,7 @@ export type {
 } from './records.ts';
 
 // Vessels
-export { addVessel, updateVessel, retireVessel, getVessel, listVessels } from './vessels.ts';
+export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_INTERVAL_RANGE_S } from './vessels.ts';
 
 // Instrument register (calibrations and fittings append-only): its records' shapes and pure helpers
 // here; its reads and writes (instruments.ts) on the on-demand surface, ./transfer.ts, so the
@@ -46,6 +46,7 @@ export type {
 // Checks (append-only)
 export { appendCheck, getCheck, listChecks, checksForVessel, queryChecks, countStoredChecks, correctionsOf } from './checks.ts';
 export type { AppendOptions, CheckFilter, ListOptions } from './checks.ts';
+// The desk's reads (latestChecks, latestOfKind, sortChecks) are in ./desk.ts, loaded on demand.
 export {
   OUTCOME_IDS, SIGNAL_ORDER, VERDICT_IDS, findingMaskOf, isStandingRuleId, outcomeOfMask, outcomeOfRecord, signalMaskOf, verdictOfResult, worstSignalOfMask,
 } from './facts.ts';

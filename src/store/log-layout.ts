@@ -509,6 +509,46 @@ export async function countChecks(tx: LogTx<IDBTransactionMode>, vesselId?: stri
   return n;
 }
 
+/**
+ * The newest row of each vessel's month buckets (undefined for a vessel with none): one cursor step
+ * from the top of each vessel's parts, so the cost is one part per vessel, not the log.
+ */
+export async function latestRows(tx: LogTx<IDBTransactionMode>, vesselIds: readonly string[]): Promise<(MonthRow | undefined)[]> {
+  const store = tx.objectStore('logMonthParts');
+  return Promise.all(vesselIds.map(async (id) => {
+    let cursor = await store.openCursor(monthPartRange(id, -Infinity, Infinity), 'prev');
+    // A part is never written empty; the loop only guards a hand-edited store.
+    while (cursor && cursor.value.rows.length === 0) cursor = await cursor.continue();
+    const rows = cursor?.value.rows;
+    return rows?.[rows.length - 1];
+  }));
+}
+
+/**
+ * Every row in the window that `match` passes (all when absent), each with its vessel, from one
+ * snapshot of the month buckets: one vessel's parts, or every part in the months of the window.
+ */
+export async function matchingRows(
+  tx: LogTx<IDBTransactionMode>, q: { vesselId: string | null; fromMs: number; toMs: number; match?: ((row: MonthRow) => boolean) | undefined },
+): Promise<{ rows: MonthRow[]; vesselIds: string[] }> {
+  const store = tx.objectStore('logMonthParts');
+  const lowMonth = Number.isFinite(q.fromMs) ? monthOf(q.fromMs) : -Infinity;
+  const highMonth = Number.isFinite(q.toMs) ? monthOf(q.toMs) : Infinity;
+  const parts = q.vesselId !== null
+    ? await store.getAll(monthPartRange(q.vesselId, lowMonth, highMonth))
+    : await store.index('by-month').getAll(IDBKeyRange.bound(lowMonth, highMonth));
+  const rows: MonthRow[] = [];
+  const vesselIds: string[] = [];
+  for (const part of parts) {
+    for (const r of part.rows) {
+      if (r[0] < q.fromMs || r[0] > q.toMs || (q.match !== undefined && !q.match(r))) continue;
+      rows.push(r);
+      vesselIds.push(part.vesselId);
+    }
+  }
+  return { rows, vesselIds };
+}
+
 /** Which checks a listing covers. Times in ms; both ends inclusive. */
 export interface LogQuery {
   vesselId: string | null;

@@ -8,9 +8,11 @@
 /**
  * Kinds kept: `cycle`, a sterilising cycle's readings, limits, evaluation and cautions
  * (src/ui/cycles); `periodic-test`, one steam-supply or chamber test with its result (its
- * `values.test` names which).
+ * `values.test` names which); `review-note`, a supervisor's note on a vessel's findings: who
+ * (`technician`), when (`time`), what was decided (`note`), on which vessel and check (`values`:
+ * checkId, outcome, findingSignals, the check's time), written from the plant overview (src/ui/desk).
  */
-export const RECORD_KINDS = ['cycle', 'periodic-test'] as const;
+export const RECORD_KINDS = ['cycle', 'periodic-test', 'review-note'] as const;
 export type RecordKind = (typeof RECORD_KINDS)[number];
 
 /** The form a kind's name takes, as the plant server's rules require of a document's type (deploy/design). */

@@ -34,6 +34,11 @@ export interface VesselRecord {
   retiredAt: IsoDateTime | null;
   createdAt: IsoDateTime;
   updatedAt: IsoDateTime;
+  /**
+   * How often the plant wants the vessel checked, s (CHECK_INTERVAL_MIN_S to CHECK_INTERVAL_MAX_S of
+   * the core's check-due.ts); null or absent (every vessel saved before issue 14): none set.
+   */
+  checkIntervalS?: number | null;
 }
 
 /**
@@ -44,6 +49,8 @@ export interface NewVessel {
   tag: string;
   description?: string;
   spec: VesselSpec;
+  /** The check interval, s; none when absent or null. */
+  checkIntervalS?: number | null;
 }
 
 /** What the UI may change on a vessel (retire with retireVessel). */
@@ -51,6 +58,8 @@ export interface VesselPatch {
   tag?: string;
   description?: string;
   spec?: VesselSpec;
+  /** The check interval, s; null clears it. */
+  checkIntervalS?: number | null;
 }
 
 /** One input field as the technician typed it, before any conversion. */

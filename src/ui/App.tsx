@@ -22,6 +22,7 @@ const SteamTestsScreen = lazyScreen('Steam and chamber tests', () => import('./c
 const InstrumentsScreen = lazyScreen('Instruments', () => import('./instruments/InstrumentsScreen.tsx').then((m) => m.InstrumentsScreen));
 const SyncScreen = lazyScreen('Plant sync', () => import('./sync/SyncScreen.tsx').then((m) => m.SyncScreen));
 const ReviewScreen = lazyScreen('Review', () => import('./review/ReviewScreen.tsx').then((m) => m.ReviewScreen));
+const OverviewScreen = lazyScreen('Plant overview', () => import('./desk/OverviewScreen.tsx').then((m) => m.OverviewScreen));
 
 export function App() {
   const route = useRoute();
@@ -41,7 +42,7 @@ export function App() {
         <h1 ref={heading} tabIndex={-1}>{title}</h1>
         <span class="top-brand">Tankside</span>
       </header>
-      <main data-app-state={ready}>
+      <main data-app-state={ready} data-screen={route.screen}>
         {saveError ? <p class="panel field-error" role="alert">{saveError}</p> : null}
         {ready === 'opening' ? <p class="panel" aria-busy="true">Opening this device's records…</p> : <Screen route={route} />}
       </main>
@@ -56,7 +57,8 @@ function Screen({ route }: { route: Route }) {
     case 'vessels': return <VesselsScreen param={route.param} />;
     case 'fill': return <FillPlanScreen />;
     case 'log': return <LogScreen param={route.param} />;
-    case 'review': return <ReviewScreen />;
+    case 'review': return <ReviewScreen key={route.param ?? ''} param={route.param} />;
+    case 'overview': return <OverviewScreen />;
     case 'convert': return <ConvertScreen />;
     case 'settings': return <SettingsScreen />;
     case 'more': return <MoreScreen />;

@@ -7,7 +7,7 @@
 // more entry with `place: 'more'` and a group: neither the bar nor the More screen changes.
 import { useEffect, useState } from 'preact/hooks';
 
-export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'instruments' | 'settings' | 'sync' | 'cycles' | 'steam-tests';
+export type ScreenId = 'check' | 'vessels' | 'log' | 'convert' | 'more' | 'fill' | 'review' | 'labels' | 'instruments' | 'settings' | 'sync' | 'cycles' | 'steam-tests' | 'overview';
 
 /** Groups of the More screen, in the order it lists them. */
 export const MORE_GROUPS = ['Plan and review', 'Plant records', 'This device'] as const;
@@ -32,6 +32,7 @@ export const SCREENS: readonly ScreenEntry[] = [
   { id: 'log', label: 'Log', title: 'Log', place: 'bar' },
   { id: 'convert', label: 'Convert', title: 'Convert', place: 'bar' },
   { id: 'more', label: 'More', title: 'More', place: 'bar' },
+  { id: 'overview', label: 'Plant overview', title: 'Plant overview', place: 'more', group: 'Plan and review', summary: 'Each vessel\'s latest outcome, checks due and open findings.' },
   { id: 'fill', label: 'Fill plan', title: 'Fill plan', place: 'more', group: 'Plan and review', summary: 'How much water to charge for a target condition.' },
   { id: 'review', label: 'Review', title: 'Review', place: 'more', group: 'Plan and review', summary: 'Filter, count, chart and print the log; export and import.' },
   { id: 'cycles', label: 'Cycle record', title: 'Cycle record', place: 'more', group: 'Plant records', summary: 'A sterilising cycle, live or from a recorder file.' },
@@ -55,6 +56,18 @@ export function parseRoute(hash: string): Route {
   return param ? { screen: known.id, param } : { screen: known.id };
 }
 
+/** Display width from which the plant overview is the first screen (a supervisor's desk), CSS px. */
+export const WIDE_MIN_PX = 1024;
+
+/**
+ * The route to open with: the hash's own, or with no hash the plant overview on a display at least
+ * WIDE_MIN_PX wide (a supervisor's desk) and the new check elsewhere (a technician's phone).
+ */
+export function openingRoute(hash: string, widthPx: number): Route {
+  if (hash.replace(/^#\/?/, '') === '' && widthPx >= WIDE_MIN_PX) return { screen: 'overview' };
+  return parseRoute(hash);
+}
+
 export function hrefFor(screen: ScreenId, param?: string): string {
   return `#/${screen}${param ? '/' + encodeURIComponent(param) : ''}`;
 }
@@ -70,9 +83,9 @@ export function tabOf(screen: ScreenId): ScreenId {
 
 /** The current route, following hash changes. */
 export function useRoute(): Route {
-  const [route, setRoute] = useState(() => parseRoute(window.location.hash));
+  const [route, setRoute] = useState(() => openingRoute(window.location.hash, window.innerWidth));
   useEffect(() => {
-    const onHash = () => setRoute(parseRoute(window.location.hash));
+    const onHash = () => setRoute(openingRoute(window.location.hash, window.innerWidth));
     window.addEventListener('hashchange', onHash);
     // A hash that changed between the first render and this effect (a tap on the menu as the app
     // opens) fired its event before anyone listened: read it again now.

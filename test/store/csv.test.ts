@@ -110,6 +110,28 @@ describe('CSV export', () => {
     await expect(exportCsv({ signal: controller.signal })).rejects.toMatchObject({ code: 'cancelled' });
     expect(csvFromChecks([])).toBe(CSV_BOM + CSV_COLUMNS.map((c) => csvCell(c.header)).join(',') + '\r\n');
   });
+
+  it("exports a filter's selection only, oldest first (issue 14): outcome, technician, period, vessel", async () => {
+    const a = await addVessel({ tag: 'A', spec: SPEC });
+    const b = await addVessel({ tag: 'B', spec: SPEC });
+    const warn = [{ signal: 'WARNING' as const, message: 'A finding made up for the test.', rule: 'test-finding' }];
+    for (let i = 0; i < 30; i += 1) {
+      await appendCheck(sampleCheck(i % 2 ? a.id : b.id, {
+        takenAt: new Date(Date.UTC(2026, 9 + (i % 3), 1 + i)), technician: i % 5 ? 'R. Okafor' : 'M. Lind', cautions: i % 4 ? [] : warn,
+      }));
+    }
+    const read = async (o: Parameters<typeof exportCsv>[0]) => parse(await exportCsv(o)).data;
+    const warned = await read({ filter: { outcome: 'WARNING' } });
+    expect(warned).toHaveLength(8);
+    expect(warned.every((r) => r['outcome (worst signal word among the findings; none when none)'] === 'WARNING')).toBe(true);
+    const times = warned.map((r) => Date.parse(String(r['time (ISO 8601)'])));
+    expect(times).toEqual([...times].sort((x, y) => x - y));
+    expect(await read({ filter: { technician: 'lind' } })).toHaveLength(6);
+    const novemberOfA = await read({ vesselId: a.id, filter: { from: new Date(Date.UTC(2026, 10, 1)), to: new Date(Date.UTC(2026, 10, 30, 23, 59)) } });
+    expect(novemberOfA.length).toBeGreaterThan(0);
+    expect(novemberOfA.every((r) => r['vessel tag'] === 'A' && String(r['time (ISO 8601)']).startsWith('2026-11'))).toBe(true);
+    await expect(exportCsv({ filter: { outcome: 'SEVERE' as never } })).rejects.toMatchObject({ code: 'invalid-record', field: 'outcome' });
+  });
 });
 
 describe('CSV highest signal word', () => {

@@ -71,7 +71,7 @@ describe('appendRecord', () => {
 
   it('refuses bad input naming the field, and saves nothing', async () => {
     const v = await addVessel({ tag: 'AC-1', spec: SPEC });
-    await expect(appendRecord('review-note' as never, sampleCycle(v.id))).rejects.toMatchObject({ code: 'invalid-record', field: 'kind' });
+    await expect(appendRecord('no-such-kind' as never, sampleCycle(v.id))).rejects.toMatchObject({ code: 'invalid-record', field: 'kind' });
     await expect(appendRecord('cycle', sampleCycle('nope'))).rejects.toMatchObject({ code: 'invalid-record', field: 'vesselId' });
     await expect(appendRecord('cycle', sampleCycle(v.id, 0, { technician: ' ' }))).rejects.toMatchObject({ field: 'technician' });
     await expect(appendRecord('cycle', sampleCycle(v.id, 0, { values: { x: Number.NaN } }))).rejects.toMatchObject({ field: 'values.x' });

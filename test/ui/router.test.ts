@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { BAR_SCREENS, MORE_GROUPS, SCREENS, hrefFor, parseRoute, tabOf } from '../../src/ui/router.ts';
+import { BAR_SCREENS, MORE_GROUPS, SCREENS, hrefFor, openingRoute, parseRoute, tabOf } from '../../src/ui/router.ts';
 
 describe('hash routes', () => {
   it('round-trips every screen and a parameter', () => {
@@ -12,6 +12,16 @@ describe('hash routes', () => {
   it('falls back to the check screen for an unknown or empty hash', () => {
     expect(parseRoute('')).toEqual({ screen: 'check' });
     expect(parseRoute('#/nowhere')).toEqual({ screen: 'check' });
+  });
+});
+
+describe('the opening screen (issue 14)', () => {
+  it('is the plant overview on a display 1024 px or wider with no hash, the new check on a phone; a hash always wins', () => {
+    expect(openingRoute('', 1440)).toEqual({ screen: 'overview' });
+    expect(openingRoute('#/', 1024)).toEqual({ screen: 'overview' });
+    expect(openingRoute('', 1023)).toEqual({ screen: 'check' });
+    expect(openingRoute('', 390)).toEqual({ screen: 'check' });
+    expect(openingRoute('#/log', 1440)).toEqual({ screen: 'log' });
   });
 });
 

@@ -35,3 +35,5 @@ export { gaugeLimitsPa, SITE_ATMOSPHERE_TOLERANCE_PA, temperatureToleranceK, the
 export type { EnvelopeEvent, HeatUpEnvelope } from './heat-up-envelope.ts';
 export type { CooledState, FlashOnRelease, PressureMargin } from './hazards.ts';
 export type { IdealGasComparison } from './ideal-gas.ts';
+export { checkDue, CHECK_DUE_ORDER, CHECK_INTERVAL_MAX_S, CHECK_INTERVAL_MIN_S } from './check-due.ts';
+export type { CheckDue, CheckDueState } from './check-due.ts';

@@ -13,14 +13,21 @@ import { emptyVesselForm, type FormField, type VesselForm } from '../state/vesse
 import { formFromSpec, specFromForm } from '../state/vessel-spec.ts';
 import { isDemoVessel } from '../state/demo-label.ts';
 import { shortTime } from '../state/format.ts';
+import { CheckIntervalField } from './CheckIntervalField.tsx';
+import { intervalForm, readInterval } from '../state/check-interval.ts';
 
 export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) {
   const settings = useSettings();
   const prefs = unitsInForce(settings);
   // Kept as a draft like the check form: a reload, a closed tab or an update keeps what was typed.
   const draftKey = `vessel:${vessel ? vessel.id : 'new'}`;
-  const draft = useDraft<VesselForm>(draftKey, vessel ? formFromSpec(vessel.spec, prefs) : emptyVesselForm(prefs, atmosphereDefaults(settings, prefs)));
+  const stored = intervalForm(vessel?.checkIntervalS);
+  const draft = useDraft<VesselForm>(draftKey, {
+    ...(vessel ? formFromSpec(vessel.spec, prefs) : emptyVesselForm(prefs, atmosphereDefaults(settings, prefs))),
+    checkEvery: stored.text, checkEveryUnit: stored.unit,
+  });
   const form = draft.value;
+  const [intervalError, setIntervalError] = useState<string | undefined>(undefined);
   const setForm = draft.set;
   const [errors, setErrors] = useState<Partial<Record<FormField, string>>>({});
   const [status, setStatus] = useState('');
@@ -30,15 +37,17 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
   const save = async (ev: Event) => {
     ev.preventDefault();
     const built = specFromForm(form, vessel?.spec, vessel ? formFromSpec(vessel.spec, prefs) : undefined);
-    if (!built.ok) {
-      setErrors(built.errors);
-      setStatus(`Not saved: ${Object.values(built.errors)[0] ?? 'check the fields'}`);
+    const interval = readInterval(form.checkEvery ?? stored.text, form.checkEveryUnit ?? stored.unit);
+    setIntervalError(interval.ok ? undefined : interval.message);
+    if (!built.ok || !interval.ok) {
+      setErrors(built.ok ? {} : built.errors);
+      setStatus(`Not saved: ${built.ok ? '' : Object.values(built.errors)[0] ?? 'check the fields'}${!interval.ok ? (built.ok ? '' : ' ') + interval.message : ''}`);
       return;
     }
     setErrors({});
     try {
-      if (vessel) await repo.updateVessel(vessel.id, built.spec.tag, built.spec.description, built.spec);
-      else await repo.addVessel(built.spec.tag, built.spec.description, built.spec);
+      if (vessel) await repo.updateVessel(vessel.id, built.spec.tag, built.spec.description, built.spec, interval.intervalS);
+      else await repo.addVessel(built.spec.tag, built.spec.description, built.spec, interval.intervalS);
       await discardDraft(draftKey);
       await refreshVessels();
       navigate('vessels');
@@ -66,6 +75,9 @@ export function VesselEditor({ vessel }: { vessel?: VesselRecord | undefined }) 
       {vessel && isDemoVessel(vessel) ? <p><span class="demo-tag">DEMO DATA</span> An invented vessel for trying the app.</p> : null}
       {vessel?.retired ? <p>Retired {vessel.retiredAt ? shortTime(vessel.retiredAt) : ''}. Its checks stay in the log.</p> : null}
       <VesselFields form={form} set={set} errors={errors} prefs={prefs} />
+      {/* Set once the vessel is saved: the new vessel's form stays within about two phone screens (field.test). */}
+      {vessel ? <CheckIntervalField text={form.checkEvery ?? stored.text} unit={form.checkEveryUnit ?? stored.unit} error={intervalError}
+        onChange={(checkEvery, checkEveryUnit) => set({ checkEvery, checkEveryUnit })} /> : null}
       <p aria-live="polite" class={status ? 'field-error' : ''}>{status}</p>
       <div class="row">
         {vessel?.retired ? null : <button type="submit" class="primary">Save vessel</button>}

@@ -1,7 +1,8 @@
 // Review for supervisors: filter the log, page through it, totals, chain status per device, the
 // vessel report with its trend chart, export and import. Reads the store a page at a time.
 import { useEffect, useRef, useState } from 'preact/hooks';
-import type { VesselRecord } from '../../store/index.ts';
+import type { CheckRecord, VesselRecord } from '../../store/index.ts';
+import '../desk/wide-layout.css';
 import './review.css';
 import { ReviewFilters } from './ReviewFilters.tsx';
 import { ReviewList } from './ReviewList.tsx';
@@ -11,11 +12,13 @@ import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
 import { KindRecords } from './KindRecords.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
-import { ReviewPager, reviewVessels } from './review-query.ts';
+import { ReviewPager, reviewVessels, storeFilter } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
 import { rowView, type RowOrder, type RowView } from './row-view.ts';
 import { OUTCOMES, VERDICTS } from './record-facts.ts';
 import { refreshVessels } from '../state/app-state.ts';
+import { useWide } from '../state/wide.ts';
+import { WideReview } from './WideReview.tsx';
 
 const VERDICT_IDS = VERDICTS.map((v) => v.id);
 
@@ -23,10 +26,11 @@ function afterPaint(): Promise<void> {
   return new Promise((done) => requestAnimationFrame(() => setTimeout(done, 0)));
 }
 
-export function ReviewScreen() {
+/** `param`: a vessel id to open the Review on that vessel's history (the plant overview's rows link here). */
+export function ReviewScreen({ param }: { param?: string | undefined }) {
   const [vessels, setVessels] = useState<VesselRecord[]>([]);
-  const [form, setForm] = useState<FilterForm>(EMPTY_FORM);
-  const [filter, setFilter] = useState<ReviewFilter>(NO_FILTER);
+  const [form, setForm] = useState<FilterForm>(() => (param ? { ...EMPTY_FORM, vesselId: param } : EMPTY_FORM));
+  const [filter, setFilter] = useState<ReviewFilter>(() => (param ? { ...NO_FILTER, vesselId: param } : NO_FILTER));
   const [formError, setFormError] = useState<{ field: keyof FilterForm; message: string } | null>(null);
   const [rows, setRows] = useState<RowView[]>([]);
   const [more, setMore] = useState(false);
@@ -41,6 +45,7 @@ export function ReviewScreen() {
   // While an import writes, counting totals would only compete with it for the store.
   const [importing, setImporting] = useState(false);
   const pager = useRef<ReviewPager | null>(null);
+  const [openRecord, setOpenRecord] = useState<CheckRecord | null>(null);
   // Newest and oldest first come from the store (the whole match in that order); the other orders
   // sort the rows shown.
   const storeOrder = order === 'oldest' ? 'oldest' : 'newest';
@@ -106,16 +111,27 @@ export function ReviewScreen() {
     }
   };
   const vessel = filter.vesselId ? vessels.find((v) => v.id === filter.vesselId) : undefined;
+  const wide = useWide();
+  const filters = <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />;
+  const failure = readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null;
+  const totalsPanel = <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />;
 
   return (
     <div class="review-screen" data-shown={shown}>
-      <div class="no-print">
-        <ReviewFilters form={form} vessels={vessels} error={formError} onChange={changeForm} />
-        {readError ? <p class="panel field-error" role="alert">The log could not be read: {readError}</p> : null}
-        <ReviewTotals totals={totals.value} complete={totals.complete} paused={importing} />
-        <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+      {wide ? (
+        <div class="no-print">
+          <WideReview side={<>{filters}{failure}{totalsPanel}</>} filter={filter} generation={generation} open={openRecord} onOpen={setOpenRecord} />
         <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
-      </div>
+        </div>
+      ) : (
+        <div class="no-print">
+          {filters}
+          {failure}
+          {totalsPanel}
+          <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+          <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
+        </div>
+      )}
       {vessel && reportFor === vessel.id ? (
         <VesselReport vessel={vessel} fromMs={filter.fromMs} toMs={filter.toMs} from={form.from} to={form.to} />
       ) : vessel ? (
@@ -127,7 +143,7 @@ export function ReviewScreen() {
       )}
       <div class="no-print">
         <ChainPanel />
-        <TransferPanel onBusy={setImporting} onImported={() => {
+        <TransferPanel filter={storeFilter(filter)} onBusy={setImporting} onImported={() => {
           setGeneration((g) => g + 1);
           // The field screens' vessel list too: an import may have brought vessels.
           void refreshVessels().catch(() => undefined);

@@ -1,12 +1,13 @@
 // Export (CSV, JSON backup) and import of a backup from another device, with the import's report.
 import { useState } from 'preact/hooks';
-import { StoreError } from '../../store/index.ts';
+import { StoreError, type CheckFilter } from '../../store/index.ts';
 import { WorkProgress } from './WorkProgress.tsx';
 import { fileSizeText, importFile, makeExport, offerDownload, type ExportKind, type ImportOutcome } from './transfer.ts';
 import { useLongWork } from './use-long-work.ts';
 import { ImportReportView } from './ImportReportView.tsx';
 
-export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): void; onImported(): void }) {
+/** `filter`: the Review's filter as the store takes it; when it narrows the log, a CSV of its checks alone can be made too. */
+export function TransferPanel({ onBusy, onImported, filter = {} }: { onBusy(busy: boolean): void; onImported(): void; filter?: CheckFilter }) {
   const work = useLongWork();
   // What the last export came to, said in words and, for tests, in data-export-result.
   const [message, setMessage] = useState<{ text: string; result: 'ready' | 'cancelled' | 'failed' } | null>(null);
@@ -15,10 +16,12 @@ export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): v
   const [runs, setRuns] = useState(0);
   const busy = work.running !== null;
 
-  const exportAs = async (kind: ExportKind) => {
+  const narrowed = Object.keys(filter).length > 0;
+  const exportAs = async (kind: ExportKind, selection = false) => {
     setMessage(null);
     try {
-      const made = await work.run(kind === 'csv' ? 'Writing the CSV' : 'Writing the backup', (o) => makeExport(kind, o));
+      const label = kind === 'csv' ? (selection ? 'Writing the CSV of the filtered checks' : 'Writing the CSV') : 'Writing the backup';
+      const made = await work.run(label, (o) => makeExport(kind, selection ? { ...o, filter } : o));
       if (made) {
         offerDownload(made);
         setMessage({ text: `Ready: ${made.name} (${fileSizeText(made.size)}).`, result: 'ready' });
@@ -46,6 +49,7 @@ export function TransferPanel({ onBusy, onImported }: { onBusy(busy: boolean): v
       <h2 id="review-transfer-title">Export and import</h2>
       <div class="row">
         <button type="button" onClick={() => void exportAs('csv')} disabled={busy}>Download CSV</button>
+        {narrowed ? <button type="button" onClick={() => void exportAs('csv', true)} disabled={busy}>Filtered checks as CSV</button> : null}
         <button type="button" onClick={() => void exportAs('json')} disabled={busy}>Download JSON backup</button>
       </div>
       <p aria-live="polite" data-export-message data-export-result={message?.result}>{message?.text ?? ''}</p>

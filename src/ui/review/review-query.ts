@@ -2,6 +2,7 @@
 // dates, verdict, outcome, technician, device) from its month buckets and reads only the
 // records of each page, so nothing reads the whole log into memory.
 import { listVessels, queryChecks, type CheckCursor, type CheckFilter, type CheckRecord, type VesselRecord } from '../../store/index.ts';
+import { sortChecks, type CheckSortKey, type SortedChecks } from '../../store/desk.ts';
 import type { ReviewFilter } from './review-filter.ts';
 
 /** The review's filter as the store takes it. */
@@ -52,4 +53,34 @@ export class ReviewPager {
 /** Every vessel, retired ones too (their checks stay reviewable), for the filter's picker. */
 export function reviewVessels(): Promise<VesselRecord[]> {
   return listVessels({ includeRetired: true });
+}
+
+/** The wide table's order: a store order over the whole match; newest first by default. */
+export interface TableSort { by: CheckSortKey; descending: boolean }
+export const NEWEST_FIRST: TableSort = { by: 'time', descending: true };
+
+/**
+ * Pages of a filter's whole match in the table's order. Time order pages straight from the month
+ * buckets (the first rows cost the months they touch); any other order sorts the whole match's
+ * month rows once, in the store, and pages through that.
+ */
+export class TablePager {
+  private readonly byTime: ReviewPager | null;
+  private sorted: Promise<SortedChecks> | null = null;
+  private offset = 0;
+
+  constructor(private readonly filter: ReviewFilter, readonly sort: TableSort, private readonly pageSize = 50) {
+    this.byTime = sort.by === 'time' ? new ReviewPager(filter, pageSize, sort.descending ? 'newest' : 'oldest') : null;
+  }
+
+  /** The next page; `total` is the whole match's size when the order had to count it (null otherwise). */
+  async nextPage(signal?: AbortSignal): Promise<ReviewPage & { total: number | null }> {
+    if (this.byTime) return { ...(await this.byTime.nextPage(signal)), total: null };
+    if (signal?.aborted) return { rows: [], more: false, total: null };
+    this.sorted ??= sortChecks(storeFilter(this.filter), this.sort);
+    const sorted = await this.sorted;
+    const rows = await sorted.page(this.offset, this.pageSize);
+    this.offset += this.pageSize;
+    return { rows, more: this.offset < sorted.total, total: sorted.total };
+  }
 }

@@ -1,6 +1,6 @@
 // Export and import for the review screen: file names, downloads, reading a chosen file, and the
 // import report in words. The store does the work (exportBackupParts, exportCsvParts, importBackup).
-import { StoreError, type LongWorkOptions, type RefusedRecord } from '../../store/index.ts';
+import { StoreError, type CheckFilter, type LongWorkOptions, type RefusedRecord } from '../../store/index.ts';
 import { exportBackupParts, exportCsvParts, importBackupFile, type ImportReport } from '../../store/transfer.ts';
 
 export type ExportKind = 'csv' | 'json';
@@ -13,7 +13,7 @@ export function exportFileName(kind: ExportKind, now: Date): string {
 }
 
 /** Runs an export and returns the file to hand to the browser. */
-export async function makeExport(kind: ExportKind, options: LongWorkOptions & { vesselId?: string }): Promise<File> {
+export async function makeExport(kind: ExportKind, options: LongWorkOptions & { vesselId?: string; filter?: CheckFilter }): Promise<File> {
   // Pieces, not one string: the browser builds the file from them without a copy of it all.
   const parts = kind === 'csv' ? await exportCsvParts(options) : await exportBackupParts(options);
   const type = kind === 'csv' ? 'text/csv;charset=utf-8' : 'application/json';

@@ -43,13 +43,16 @@ export function getVessel(id: string): Promise<VesselRecord | undefined> {
   return store.getVessel(id);
 }
 
-export function addVessel(tag: string, description: string, spec: VesselSpec): Promise<VesselRecord> {
-  return store.addVessel({ tag, description, spec });
+/** `checkIntervalS`: how often the plant wants it checked, s; null for none. */
+export function addVessel(tag: string, description: string, spec: VesselSpec, checkIntervalS: number | null = null): Promise<VesselRecord> {
+  return store.addVessel({ tag, description, spec, checkIntervalS });
 }
 
-export function updateVessel(id: string, tag: string, description: string, spec: VesselSpec): Promise<VesselRecord> {
-  return store.updateVessel(id, { tag, description, spec });
+/** `checkIntervalS`: null clears it; absent keeps the stored one. */
+export function updateVessel(id: string, tag: string, description: string, spec: VesselSpec, checkIntervalS?: number | null): Promise<VesselRecord> {
+  return store.updateVessel(id, { tag, description, spec, ...(checkIntervalS === undefined ? {} : { checkIntervalS }) });
 }
+
 
 export function retireVessel(id: string): Promise<VesselRecord> {
   return store.retireVessel(id);

@@ -4,6 +4,7 @@ import { isLengthUnit } from '../../core/basics.ts';
 import type { HeadKind, SensorChoice, Shape } from './vessel-spec.ts';
 import type { VesselHeating, VesselService } from '../../core/check/vessel-spec.ts';
 import type { UnitPrefs } from './settings-model.ts';
+import type { IntervalUnit } from './check-interval.ts';
 
 export interface VesselForm {
   tag: string;
@@ -60,10 +61,13 @@ export interface VesselForm {
   elevationM: string;
   atmosphere: string;
   barometerTol: string;
+  /** The check interval as typed, and its unit (absent in a draft saved before issue 14: none). */
+  checkEvery?: string;
+  checkEveryUnit?: IntervalUnit;
 }
 
 /** The typed fields (the per-field length units are not typed text). */
-export type FormField = Exclude<keyof VesselForm, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit' | 'crownRadiusUnit' | 'knuckleRadiusUnit'>;
+export type FormField = Exclude<keyof VesselForm, 'diameterUnit' | 'straightLengthUnit' | 'elevationUnit' | 'crownRadiusUnit' | 'knuckleRadiusUnit' | 'checkEvery' | 'checkEveryUnit'>;
 
 /** A new vessel's form: common values filled in where the trade has a usual default. */
 export function emptyVesselForm(u: UnitPrefs, siteAtmosphere: { elevationM?: string; pressureText?: string }): VesselForm {
