@@ -35,12 +35,10 @@ export type {
 // Vessels
 export { addVessel, updateVessel, retireVessel, getVessel, listVessels, CHECK_INTERVAL_RANGE_S } from './vessels.ts';
 
-// Instrument register (calibrations and fittings append-only)
-export {
-  addInstrument, updateInstrument, retireInstrument, getInstrument, listInstruments, addCalibration, calibrationsOf, instrumentHistory,
-  listRegister, fitInstrument, fittingsOfVessel, fittingsOfInstrument, fittedAt, fittedInstruments,
-} from './instruments.ts';
-export { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE, calibrationFigures } from './instrument-records.ts';
+// Instrument register (calibrations and fittings append-only): its records' shapes and pure helpers
+// here; its reads and writes (instruments.ts) on the on-demand surface, ./transfer.ts, so the
+// Check screen's first paint does not wait for them.
+export { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE, calibrationFigures, fittedAt } from './instrument-records.ts';
 export type {
   CalibrationEntry, FittingRecord, InstrumentHistory, InstrumentOrigin, InstrumentRecord, InstrumentRole, NewCalibration, NewInstrument,
 } from './instrument-records.ts';

@@ -124,3 +124,16 @@ export function calibrationFigures(c: CalibrationEntry): CalibrationRecord {
   if (c.nextDueMs !== null) out.nextDueMs = c.nextDueMs;
   return out;
 }
+
+/** Fittings oldest first: by their from time, later entered last on a tie. */
+export function byFrom(a: FittingRecord, b: FittingRecord): number {
+  return a.fromMs - b.fromMs || (a.enteredAt < b.enteredAt ? -1 : a.enteredAt > b.enteredAt ? 1 : 0);
+}
+
+/** Of a vessel's fittings, the one in force for each role at `atMs`: the latest from at or before it, later entered winning a tie. */
+export function fittedAt(fittings: readonly FittingRecord[], atMs: number): Partial<Record<InstrumentRole, FittingRecord>> {
+  const out: Partial<Record<InstrumentRole, FittingRecord>> = {};
+  const ordered = [...fittings].sort(byFrom);
+  for (const f of ordered) if (f.fromMs <= atMs) out[f.role] = f;
+  return out;
+}

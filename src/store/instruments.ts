@@ -7,7 +7,7 @@
 import { getDb } from './connection.ts';
 import { StoreError, storeErrorFromWrite } from './errors.ts';
 import {
-  INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE,
+  INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, KINDS_OF_ROLE, byFrom, fittedAt,
   type CalibrationEntry, type FittingRecord, type InstrumentHistory, type InstrumentRecord, type InstrumentRole, type NewCalibration, type NewInstrument,
 } from './instrument-records.ts';
 import type { InstrumentSpec } from '../core/instrument/index.ts';
@@ -199,9 +199,6 @@ export async function fitInstrument(vesselId: string, role: InstrumentRole, inst
 }
 
 /** Fittings in the order they take effect: by `from`, the later entered after on a tie (ids are random, so the index alone would not say). */
-function byFrom(a: FittingRecord, b: FittingRecord): number {
-  return a.fromMs - b.fromMs || (a.enteredAt < b.enteredAt ? -1 : a.enteredAt > b.enteredAt ? 1 : 0);
-}
 
 /** A vessel's fittings, oldest first. */
 export async function fittingsOfVessel(vesselId: string): Promise<FittingRecord[]> {
@@ -215,14 +212,6 @@ export async function fittingsOfInstrument(instrumentId: string): Promise<Fittin
   requireUuid('instrument id', instrumentId);
   const rows = await (await getDb()).getAllFromIndex('fittings', 'by-instrument', instrumentId);
   return rows.sort(byFrom);
-}
-
-/** Of a vessel's fittings, the one in force for each role at `atMs`: the latest from at or before it, later entered winning a tie. */
-export function fittedAt(fittings: readonly FittingRecord[], atMs: number): Partial<Record<InstrumentRole, FittingRecord>> {
-  const out: Partial<Record<InstrumentRole, FittingRecord>> = {};
-  const ordered = [...fittings].sort(byFrom);
-  for (const f of ordered) if (f.fromMs <= atMs) out[f.role] = f;
-  return out;
 }
 
 /** A vessel's instruments in force now (or at `atMs`), each with its calibrations; a role taken off or never fitted is absent. */

@@ -17,6 +17,14 @@ export { isKnownKind, RECORD_KINDS } from './record-kinds.ts';
 // Also on index.ts; here for the screens that save them, so they load with those screens.
 export { appendRecord, listRecords } from './kind-records.ts';
 export type { CheckTally } from './tally.ts';
+// The instrument register's reads and writes: loaded when first asked for (a check's band once a
+// vessel is chosen, drift, the Instruments screens), not with the Check screen's first paint. A
+// surface of their own was measured and made the start larger (the bundler split the start-up
+// store into two chunks).
+export {
+  addInstrument, updateInstrument, retireInstrument, getInstrument, listInstruments, addCalibration, calibrationsOf, instrumentHistory,
+  listRegister, fitInstrument, fittingsOfVessel, fittingsOfInstrument, fittedInstruments,
+} from './instruments.ts';
 export {
   ownChainHead,
   ownRecords,

@@ -3,10 +3,10 @@
 // files of versions 1 and 2 (no register) still import. Invented test instruments and figures.
 import { afterEach, describe, expect, it } from 'vitest';
 import { IDBFactory } from 'fake-indexeddb';
+import { addVessel, closeStore, StoreError } from '../../src/store/index.ts';
 import {
-  addCalibration, addInstrument, addVessel, closeStore, fitInstrument, listRegister, fittingsOfVessel, StoreError,
-} from '../../src/store/index.ts';
-import { exportBackup, importBackup, exportRegisterCsv } from '../../src/store/transfer.ts';
+  addCalibration, addInstrument, exportBackup, exportRegisterCsv, fitInstrument, fittingsOfVessel, importBackup, listRegister,
+} from '../../src/store/transfer.ts';
 import { BACKUP_FORMAT_VERSION, parseBackup } from '../../src/store/backup.ts';
 import { dump, useDevice } from './backup-fixtures.ts';
 import { SPEC, sampleCheck } from './fixtures.ts';

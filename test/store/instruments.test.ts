@@ -3,10 +3,11 @@
 // invented test data.
 import { describe, expect, it } from 'vitest';
 import { INSTRUMENT_KINDS, type InstrumentSpec } from '../../src/core/instrument/index.ts';
+import { INSTRUMENT_KIND_IDS, StoreError, addVessel, fittedAt } from '../../src/store/index.ts';
 import {
-  INSTRUMENT_KIND_IDS, StoreError, addCalibration, addInstrument, addVessel, calibrationsOf, fitInstrument, fittedAt, fittedInstruments,
+  addCalibration, addInstrument, calibrationsOf, fitInstrument, fittedInstruments,
   fittingsOfInstrument, fittingsOfVessel, getInstrument, instrumentHistory, listInstruments, listRegister, retireInstrument, updateInstrument,
-} from '../../src/store/index.ts';
+} from '../../src/store/transfer.ts';
 import { SPEC, useFreshDatabase } from './fixtures.ts';
 
 useFreshDatabase();

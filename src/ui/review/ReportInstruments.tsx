@@ -2,7 +2,8 @@
 // and the drift the vessel's log shows for each gauge–thermometer pair (over all its saturated
 // checks since their last calibrations, not only the period's). data-report-instruments="ready" once read.
 import { useEffect, useState } from 'preact/hooks';
-import { checksForVessel, fittingsOfVessel, listRegister, type VesselRecord } from '../../store/index.ts';
+import { checksForVessel, type VesselRecord } from '../../store/index.ts';
+import * as repo from '../state/repo.ts';
 import { PairDriftView } from '../components/VesselInstruments.tsx';
 import type { PairDrift } from '../state/pair-drift.ts';
 import { instrumentsInPeriod, stateAtChecksText, type InstrumentInPeriod } from './report-instruments.ts';
@@ -17,7 +18,7 @@ export function ReportInstruments({ vessel, fromMs, toMs }: Props) {
     setData(null);
     (async () => {
       const [all, fittings, register, { pairDrifts }] = await Promise.all([
-        checksForVessel(vessel.id, { limit: 1000 }), fittingsOfVessel(vessel.id), listRegister(), import('../state/pair-drift.ts'),
+        checksForVessel(vessel.id, { limit: 1000 }), repo.fittingsOfVessel(vessel.id), repo.listRegister(), import('../state/pair-drift.ts'),
       ]);
       const byId = new Map(register.map((h) => [h.instrument.id, h]));
       const inPeriod = all.checks.filter((c) => (fromMs === null || c.timeMs >= fromMs) && (toMs === null || c.timeMs <= toMs));

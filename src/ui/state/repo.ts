@@ -168,9 +168,12 @@ export function fittedOf(h: InstrumentHistory): FittedInstrument {
   return { instrumentId: h.instrument.id, spec: h.instrument.spec, calibrations: h.calibrations.map((c) => ({ ...store.calibrationFigures(c), calibrationId: c.id })) };
 }
 
+/** The store's on-demand surface, where the register's reads and writes live (out of the start-up JavaScript). */
+const onDemand = () => import('../../store/transfer.ts');
+
 /** The vessel's pressure and temperature instruments in force at `atMs` (now by default), for a check's band; {} for a vessel without a register. */
 export async function fittedForCheck(vesselId: string, atMs = Date.now()): Promise<FittedForCheck> {
-  const fitted = await store.fittedInstruments(vesselId, atMs);
+  const fitted = await (await onDemand()).fittedInstruments(vesselId, atMs);
   const out: FittedForCheck = {};
   if (fitted.pressure) out.pressure = fittedOf(fitted.pressure);
   if (fitted.temperature) out.temperature = fittedOf(fitted.temperature);
@@ -179,29 +182,31 @@ export async function fittedForCheck(vesselId: string, atMs = Date.now()): Promi
 
 /** What a vessel's drift estimate reads: its newest 1,000 checks (the store's page limit), its fittings and the whole register by id. */
 export async function driftInputs(vesselId: string): Promise<{ checks: CheckRecord[]; fittings: store.FittingRecord[]; register: Map<string, InstrumentHistory> }> {
-  const [page, fittings, register] = await Promise.all([store.checksForVessel(vesselId, { limit: 1000 }), store.fittingsOfVessel(vesselId), store.listRegister()]);
-  return { checks: page.checks, fittings, register: new Map(register.map((h) => [h.instrument.id, h])) };
+  const register = await onDemand();
+  const [page, fittings, histories] = await Promise.all([store.checksForVessel(vesselId, { limit: 1000 }), register.fittingsOfVessel(vesselId), register.listRegister()]);
+  return { checks: page.checks, fittings, register: new Map(histories.map((h) => [h.instrument.id, h])) };
 }
 
 /** The whole register, each instrument with its calibrations. */
-export function listRegister(): Promise<InstrumentHistory[]> {
-  return store.listRegister();
+export async function listRegister(): Promise<InstrumentHistory[]> {
+  return (await onDemand()).listRegister();
 }
 
 /** A vessel's fittings, oldest first. */
-export function fittingsOfVessel(vesselId: string): Promise<store.FittingRecord[]> {
-  return store.fittingsOfVessel(vesselId);
+export async function fittingsOfVessel(vesselId: string): Promise<store.FittingRecord[]> {
+  return (await onDemand()).fittingsOfVessel(vesselId);
 }
 
 /** One instrument with its calibrations, and where it has been fitted (oldest first). */
 export async function instrumentPage(id: string): Promise<{ history: InstrumentHistory; fittings: store.FittingRecord[] } | undefined> {
-  const [history, fittings] = await Promise.all([store.instrumentHistory(id), store.fittingsOfInstrument(id)]);
+  const register = await onDemand();
+  const [history, fittings] = await Promise.all([register.instrumentHistory(id), register.fittingsOfInstrument(id)]);
   return history && { history, fittings };
 }
 
 /** Records a calibration; resolves once it is saved. */
-export function addCalibration(c: store.NewCalibration): Promise<store.CalibrationEntry> {
-  return store.addCalibration(c);
+export async function addCalibration(c: store.NewCalibration): Promise<store.CalibrationEntry> {
+  return (await onDemand()).addCalibration(c);
 }
 
 /** The instrument register as a CSV file to download. */
