@@ -173,7 +173,8 @@ async function reviewFigures(page: Page, url: string, count: string, devices: nu
 
 /** A browser on a fresh profile, the built app served, and a folder for the generated files. */
 async function session<T>(work: (page: Page, url: string, dir: string) => Promise<T>): Promise<T> {
-  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn', ...(PROFILE_DIR ? ['--minify', 'false'] : [])], { cwd: ROOT, stdio: 'inherit' });
+  // Built into the folder served (TANKSIDE_DIST when set), so a long run keeps its own build while the worktree builds again.
+  const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'warn', '--outDir', DIST, '--emptyOutDir', ...(PROFILE_DIR ? ['--minify', 'false'] : [])], { cwd: ROOT, stdio: 'inherit' });
   expect(build.status).toBe(0);
   const dir = mkdtempSync(join(tmpdir(), 'tankside-bench-'));
   const profile = tempProfile();

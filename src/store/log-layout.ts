@@ -35,8 +35,8 @@
 // A write touches a handful of values, whatever number of checks it adds; it runs only IndexedDB
 // requests inside its transaction, as every transaction here must.
 import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
-import { factsOfRecord, type StoredVerdict } from './facts.ts';
-import { isCheckRecord, type CheckCursor, type KindRecord, type LogRecord } from './records.ts';
+import { factsOfRecord, keyFiguresOf, type StoredVerdict } from './facts.ts';
+import { isCheckRecord, type CheckCursor, type CheckRecord, type KindRecord, type LogRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 
 /** Checks per block when a block is started; inserts below a device's head may pass it. */
@@ -63,7 +63,18 @@ export interface LogBlock {
  * SIGNAL_ORDER bit mask (its outcome is the most severe; 0 is outcome none; since schema v5, before
  * which it held every caution's words), and the technician.
  */
-export type MonthRow = [timeMs: number, id: string, deviceId: string, seq: number, verdict: StoredVerdict | null, signals: number, technician: string];
+export type MonthRow = [
+  timeMs: number, id: string, deviceId: string, seq: number, verdict: StoredVerdict | null, signals: number, technician: string,
+  // Since schema v10 (KEY_FIGURES_RUNG), the check's key figures (facts.ts KeyFigures), so the
+  // whole match sorts by them too; a row without them (a hand-edited store) sorts as having none.
+  temperatureK?: number | null, absolutePressurePa?: number | null, quality?: number | null, liquidMassKg?: number | null,
+];
+
+/** The month row of a check: where it is, and the facts and key figures the review reads without opening its block. */
+export function monthRowOf(r: CheckRecord): MonthRow {
+  const f = factsOfRecord(r);
+  return [r.timeMs, r.id, r.deviceId, r.seq, f.verdict, f.signals, f.technician, ...keyFiguresOf(r)];
+}
 
 /** A run of one vessel's checks in one UTC calendar month (a part of its month bucket). */
 export interface MonthBucket {
@@ -273,8 +284,7 @@ export async function addToLog(
     const key = `${monthMs}\u0000${r.vesselId}`;
     let m = months.get(key);
     if (!m) months.set(key, (m = { vesselId: r.vesselId, monthMs, rows: [] }));
-    const f = factsOfRecord(r);
-    m.rows.push([r.timeMs, r.id, r.deviceId, r.seq, f.verdict, f.signals, f.technician]);
+    m.rows.push(monthRowOf(r));
   }
   const idKeys = new Set<string>();
   for (const { record: r } of entries) {

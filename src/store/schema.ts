@@ -4,9 +4,9 @@
 // finished after open by sealMigratedChecks() in db.ts.
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
-import { findingMaskOfText } from './facts.ts';
+import { findingMaskOfText, keyFiguresOf, type KeyFigures } from './facts.ts';
 import { addToLog, MONTH_PART_TARGET, type IdBucket, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
-import type { CheckRecord, DeviceKey, IsoDateTime, JsonValue, KnownDeviceKey, VesselRecord } from './records.ts';
+import { isCheckRecord, type CheckRecord, type DeviceKey, type IsoDateTime, type JsonValue, type KnownDeviceKey, type LogRecord, type VesselRecord } from './records.ts';
 import type { CalibrationEntry, FittingRecord, InstrumentRecord } from './instrument-records.ts';
 import { registerFromVessel } from './instrument-upgrade.ts';
 import { formatIsoWithOffset } from './time.ts';
@@ -37,12 +37,20 @@ export const DB_NAME = 'tankside';
  *   (by-instrument on [instrumentId, timeMs, id]) and fittings (by-vessel on [vesselId, fromMs, id],
  *   by-instrument). Every vessel's typed gauge and thermometer become entries fitted to it
  *   (instrument-upgrade.ts); vessel records and checks stay as they were.
+ * - v10 (KEY_FIGURES_RUNG): every month row gains its check's key figures (temperature, absolute
+ *   pressure, quality, liquid mass; facts.ts keyFiguresOf), read from the stored texts, so the
+ *   whole match sorts by them. Derived data: no record, block or hash changes.
  */
 /** The rung that adds records of other kinds; one constant, so the number can move at a merge. */
 export const KINDS_RUNG = 7;
 /** The register's rung: one constant, so the number can move at a merge. */
 export const INSTRUMENT_REGISTER_RUNG = 8;
-export const DB_VERSION = INSTRUMENT_REGISTER_RUNG;
+/**
+ * The rung that gives every month row its check's key figures (v10; v9 is left to plant sync's
+ * work): one constant, so the number can move at a merge.
+ */
+export const KEY_FIGURES_RUNG = 10;
+export const DB_VERSION = KEY_FIGURES_RUNG;
 
 /** Keys in the settings store that belong to the store itself; putSetting refuses them. */
 export const RESERVED_SETTING_PREFIX = 'store:';
@@ -307,7 +315,66 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
       };
     },
   },
+  {
+    version: KEY_FIGURES_RUNG,
+    run(_db, tx, next) {
+      // As rung 5: every block a page at a time (only IndexedDB requests awaited), each check's
+      // figures from its text, then every month part whose rows lack them rewritten. A row that
+      // has them (written by today's addToLog in rung 4 just now) is left as it is.
+      const raw = unwrap(tx) as IDBTransaction;
+      const blocks = raw.objectStore('logBlocks');
+      const parts = raw.objectStore('logMonthParts');
+      const fill = async (): Promise<void> => {
+        const figures = new Map<string, KeyFigures>();
+        let range: IDBKeyRange | undefined;
+        for (;;) {
+          const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
+          for (const b of page) {
+            b.texts.forEach((text, i) => {
+              const r = JSON.parse(text) as LogRecord;
+              if (isCheckRecord(r)) figures.set(`${b.deviceId}\u0000${b.seqs[i]}`, keyFiguresOf(r));
+            });
+          }
+          if (page.length < REBUILD_PAGE) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
+        }
+        range = undefined;
+        const writes: Promise<unknown>[] = [];
+        for (;;) {
+          const page = await request<MonthBucket[]>(parts.getAll(range, MIGRATE_MONTHS));
+          for (const part of page) {
+            let changed = false;
+            part.rows = part.rows.map((row) => {
+              if (row.length >= MONTH_ROW_LENGTH) return row;
+              changed = true;
+              const f = figures.get(`${row[2]}\u0000${row[3]}`) ?? NO_FIGURES;
+              return [row[0], row[1], row[2], row[3], row[4], row[5], row[6], ...f];
+            });
+            if (changed) writes.push(request(parts.put(part)));
+          }
+          if (page.length < MIGRATE_MONTHS) break;
+          const last = page[page.length - 1]!;
+          range = IDBKeyRange.lowerBound([last.vesselId, last.monthMs, last.startMs, last.startId], true);
+        }
+        await Promise.all(writes);
+      };
+      fill().then(next, () => {
+        // Half-filled rows must not commit: abort, and the v8 database stays as it was.
+        try {
+          raw.abort();
+        } catch {
+          // Already finished.
+        }
+      });
+    },
+  },
 ];
+
+/** A month row's length with its key figures (log-layout.ts MonthRow). */
+const MONTH_ROW_LENGTH = 11;
+/** The figures of a row whose check is not stored (a hand-edited store): none. */
+const NO_FIGURES: KeyFigures = [null, null, null, null];
 
 /** A month bucket as v4 and v5 kept it: one value for the whole month. */
 interface V4MonthBucket {

@@ -1,5 +1,5 @@
 // The whole match of a filter in any order its month rows can give: time, vessel, outcome, verdict,
-// technician, device. The rows are gathered from one snapshot of the month buckets and sorted once;
+// technician, device, and the key figures (temperature, pressure, quality, liquid mass). The rows are gathered from one snapshot of the month buckets and sorted once;
 // pages then read only the blocks of the checks they show. So a supervisor's sort by outcome covers
 // every matching check, not only the rows read so far.
 import { getDb } from './connection.ts';
@@ -10,7 +10,7 @@ import { isCheckRecord, type CheckRecord } from './records.ts';
 import { invalid } from './validate.ts';
 
 /** What the whole match can be sorted by (every one a fact the month rows keep). */
-export const CHECK_SORT_KEYS = ['time', 'vessel', 'outcome', 'verdict', 'technician', 'device'] as const;
+export const CHECK_SORT_KEYS = ['time', 'vessel', 'outcome', 'verdict', 'technician', 'device', 'temperature', 'pressure', 'quality', 'liquid'] as const;
 export type CheckSortKey = (typeof CHECK_SORT_KEYS)[number];
 
 /** How to sort: `descending` turns the key's natural order round (newest, Z–A, least severe first). */
@@ -40,7 +40,9 @@ const text = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
 /**
  * The checks a filter covers, sorted over the whole match by `sort.by`: 'time' oldest first,
  * 'vessel' by tag (case-insensitive), 'outcome' most severe first, 'verdict' in the order of
- * VERDICT_IDS with none last, 'technician' and 'device' A–Z; `descending` reverses the key; ties
+ * VERDICT_IDS with none last, 'technician' and 'device' A–Z, 'temperature', 'pressure' (absolute),
+ * 'quality' and 'liquid' (mass) lowest first with checks lacking the figure last either way round
+ * (facts.ts keyFiguresOf, kept in the month rows since schema v10); `descending` reverses the key; ties
  * are always newest first, then by id. Reads the month buckets once, the vessel tags once.
  * @throws StoreError('invalid-record') naming a bad filter field or sort key
  */
@@ -54,7 +56,9 @@ export async function sortChecks(filter: CheckFilter, sort: CheckSort): Promise<
   const order = rows.map((_, i) => i);
   const key = keyOf(sort.by, rows, vesselIds, new Map(vessels.map((v) => [v.id, v.tagKey])));
   const newest = (a: number, b: number): number => rows[b]![0] - rows[a]![0] || text(rows[b]![1], rows[a]![1]);
-  order.sort((a, b) => sign * key(a, b) || newest(a, b));
+  // A check without the figure sorted by goes last either way round (it has nothing to compare).
+  const missing = FIGURE_AT[sort.by] === undefined ? null : rows.map((r) => (typeof r[FIGURE_AT[sort.by]!] === 'number' ? 0 : 1));
+  order.sort((a, b) => (missing ? missing[a]! - missing[b]! : 0) || sign * key(a, b) || newest(a, b));
   return {
     total: order.length,
     async page(offset: number, limit: number): Promise<CheckRecord[]> {
@@ -67,7 +71,15 @@ export async function sortChecks(filter: CheckFilter, sort: CheckSort): Promise<
   };
 }
 
+/** Where each key figure sits in a month row (log-layout.ts MonthRow, schema v10). */
+const FIGURE_AT: Partial<Record<CheckSortKey, 7 | 8 | 9 | 10>> = { temperature: 7, pressure: 8, quality: 9, liquid: 10 };
+
 function keyOf(by: CheckSortKey, rows: readonly MonthRow[], vesselIds: readonly string[], tags: ReadonlyMap<string, string>): (a: number, b: number) => number {
+  const at = FIGURE_AT[by];
+  if (at !== undefined) {
+    const value = Float64Array.from(rows, (r) => r[at] ?? 0);
+    return (a, b) => value[a]! - value[b]!;
+  }
   switch (by) {
     case 'time': return (a, b) => rows[a]![0] - rows[b]![0] || text(rows[a]![1], rows[b]![1]);
     case 'vessel': {
@@ -88,5 +100,6 @@ function keyOf(by: CheckSortKey, rows: readonly MonthRow[], vesselIds: readonly 
       return (a, b) => text(folded[a]!, folded[b]!);
     }
     case 'device': return (a, b) => text(rows[a]![2], rows[b]![2]);
+    default: throw invalid('sort.by', `expected one of ${CHECK_SORT_KEYS.join(', ')}`);
   }
 }

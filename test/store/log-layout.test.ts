@@ -14,6 +14,7 @@ import {
   LOG_STORES,
   LogConflict,
   monthOf,
+  monthRowOf,
   MONTH_PART_MAX,
   MONTH_PART_TARGET,
   pageRows,
@@ -274,7 +275,7 @@ describe('pageRows', () => {
           const vesselId = vessel === null ? null : VESSELS[vessel]!;
           const want = all
             .filter((r) => r.timeMs >= fromMs && r.timeMs <= toMs && (vesselId === null || r.vesselId === vesselId))
-            .map((r): MonthRow => [r.timeMs, r.id, r.deviceId, r.seq, null, 0, r.technician])
+            .map((r): MonthRow => monthRowOf(r))
             .sort(compareRows);
           if (order === 'newest') want.reverse();
           const got: MonthRow[] = [];

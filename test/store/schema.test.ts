@@ -11,7 +11,7 @@ import { appendRecord, countStoredChecks, listRecords, outcomeOfMask, queryCheck
 import { getDb } from '../../src/store/connection.ts';
 import { listVessels } from '../../src/store/index.ts';
 import { calibrationsOf, fittedInstruments, fittingsOfVessel, listInstruments } from '../../src/store/transfer.ts';
-import { DB_NAME, DB_VERSION, INSTRUMENT_REGISTER_RUNG, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
+import { DB_NAME, DB_VERSION, INSTRUMENT_REGISTER_RUNG, KEY_FIGURES_RUNG, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
 import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
 import { storedChecks } from './log-access.ts';
 import { failWritesOverQuota, sampleCheck } from './fixtures.ts';
@@ -157,7 +157,7 @@ describe('upgrade ladder', () => {
     await openStore();
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
-    expect(DB_VERSION).toBe(INSTRUMENT_REGISTER_RUNG);
+    expect(DB_VERSION).toBe(KEY_FIGURES_RUNG);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 

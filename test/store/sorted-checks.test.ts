@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SPEC, sampleCheck, useFreshDatabase } from './fixtures.ts';
+import { SPEC, loose, sampleCheck, useFreshDatabase } from './fixtures.ts';
 import { addVessel, appendCheck, listChecks, outcomeOfRecord, verdictOfResult, type CheckRecord } from '../../src/store/index.ts';
 import { sortChecks } from '../../src/store/desk.ts';
 
@@ -59,6 +59,48 @@ describe('sortChecks: the whole match in any order the month rows give (issue 14
     expect(byVerdict.map((r) => r.id)).toEqual([...every].sort((a, b) => verdictRank(a) - verdictRank(b) || newest(a, b)).map((r) => r.id));
   });
 
+  it('sorts the whole match by each key figure (schema v10 rows), checks without it last either way', async () => {
+    const v = await addVessel({ tag: 'FT-9', spec: SPEC });
+    // Invented test data: temperature, absolute pressure and, when two-phase, quality and liquid mass.
+    for (let i = 0; i < 40; i += 1) {
+      const twoPhase = i % 5 !== 0;
+      await appendCheck(sampleCheck(v.id, {
+        takenAt: new Date(Date.UTC(2026, i % 3, 1 + i)),
+        reading: loose.reading({ temperatureK: 400 + ((i * 13) % 40), pressure: { pressurePa: 2e5 + ((i * 7) % 40) * 1e3, reference: i % 2 ? 'gauge' : 'absolute' } }),
+        result: loose.result(i === 7 ? {} : {
+          reading: { absolutePressurePa: 3e5 + ((i * 11) % 40) * 1e3 },
+          inventory: twoPhase ? { regime: 'two-phase', quality: ((i * 17) % 40) / 1000, liquidMassKg: 900 + ((i * 3) % 40) } : { regime: 'liquid-full' },
+        }),
+      }));
+    }
+    const every = await allChecks();
+    const newest = (a: CheckRecord, b: CheckRecord) => b.timeMs - a.timeMs || (a.id < b.id ? 1 : -1);
+    type Loose = { reading?: { absolutePressurePa?: number }; inventory?: { regime?: string; quality?: number; liquidMassKg?: number } };
+    const res = (r: CheckRecord) => r.result as unknown as Loose;
+    const twoPhase = (r: CheckRecord) => res(r).inventory?.regime === 'two-phase';
+    const figure = {
+      temperature: (r: CheckRecord) => r.reading.temperatureK,
+      // The gauge reading sorts by the absolute pressure the engine used; the one without a result by none.
+      pressure: (r: CheckRecord) => res(r).reading?.absolutePressurePa ?? null,
+      quality: (r: CheckRecord) => (twoPhase(r) ? res(r).inventory!.quality! : null),
+      liquid: (r: CheckRecord) => (twoPhase(r) ? res(r).inventory!.liquidMassKg! : null),
+    };
+    for (const by of ['temperature', 'pressure', 'quality', 'liquid'] as const) {
+      for (const descending of [false, true]) {
+        const f = figure[by];
+        const expected = [...every].sort((a, b) => {
+          const x = f(a);
+          const y = f(b);
+          if (x === null || y === null) return (x === null ? 1 : 0) - (y === null ? 1 : 0) || newest(a, b);
+          return (descending ? y - x : x - y) || newest(a, b);
+        });
+        const got = await (await sortChecks({}, { by, descending })).page(0, 1000);
+        expect(got.map((r) => r.id), `${by}${descending ? ' descending' : ''}`).toEqual(expected.map((r) => r.id));
+      }
+    }
+    expect(every.filter((r) => figure.quality(r) === null).length).toBeGreaterThan(5);
+  });
+
   it('sorts only what the filter lets through', async () => {
     const a = await addVessel({ tag: 'A-1', spec: SPEC });
     const b = await addVessel({ tag: 'B-1', spec: SPEC });
@@ -69,7 +111,7 @@ describe('sortChecks: the whole match in any order the month rows give (issue 14
   });
 
   it('refuses a sort key, offset or limit it does not know, naming it', async () => {
-    await expect(sortChecks({}, { by: 'pressure' as never })).rejects.toMatchObject({ code: 'invalid-record', field: 'sort.by' });
+    await expect(sortChecks({}, { by: 'colour' as never })).rejects.toMatchObject({ code: 'invalid-record', field: 'sort.by' });
     const s = await sortChecks({}, { by: 'time' });
     await expect(s.page(-1, 10)).rejects.toMatchObject({ field: 'offset' });
     await expect(s.page(0, 1001)).rejects.toMatchObject({ field: 'limit' });

@@ -95,10 +95,10 @@ export function ReviewTable({ filter, generation, prefs, openId, onOpen }: Props
               {columns.map((c) => (
                 <th key={c.id} scope="col" aria-sort={c.sort === sort.by ? (sort.descending ? 'descending' : 'ascending') : undefined}>
                   {c.sort ? (
-                    <button type="button" class="sort-button" data-sort-column={c.sort} onClick={() => sortBy(c)}>
+                    <button type="button" class="sort-button" data-sort-column={c.sort} title={c.sortNote} onClick={() => sortBy(c)}>
                       {c.label}{c.sort === sort.by ? (sort.descending ? ' ▼' : ' ▲') : ''}
                     </button>
-                  ) : <span title="Key figures are not kept in the log's index, so this column does not sort">{c.label}</span>}
+                  ) : <span>{c.label}</span>}
                 </th>
               ))}
             </tr>

@@ -1,6 +1,7 @@
 // The wide review's columns: what each shows of a record, in the person's units, and which store
-// order (the whole match) it sorts by. The key figures are not kept in the month rows, so their
-// columns do not sort (the table says so); every other column sorts the whole match.
+// order (the whole match) it sorts by. Every column sorts the whole match: since schema v10 the
+// month rows keep the key figures too (the pressure column sorts by the absolute pressure, so a
+// gauge and an absolute reading of the same state sit together).
 import { formatNumber } from '../state/format.ts';
 import { massFromKg, pressureFromPa, temperatureFromK } from '../../core/basics.ts';
 import type { CheckRecord } from '../../store/index.ts';
@@ -16,6 +17,8 @@ export interface Column {
   label: string;
   /** The store's order for the whole match; absent: not sortable. */
   sort?: CheckSortKey;
+  /** What the sort goes by, when it is not what the cell shows. */
+  sortNote?: string;
   /** The cell's text. */
   text(r: CheckRecord, u: UnitPrefs): string;
 }
@@ -41,10 +44,10 @@ export const COLUMNS: readonly Column[] = [
   { id: 'vessel', label: 'Vessel', sort: 'vessel', text: (r) => r.vessel.tag },
   { id: 'outcome', label: 'Outcome', sort: 'outcome', text: (r) => factsOf(r).outcome },
   { id: 'verdict', label: 'Verdict', sort: 'verdict', text: (r) => verdictLabel(factsOf(r).verdict, 'short') },
-  { id: 'temperature', label: 'Temperature', text: temperatureText },
-  { id: 'pressure', label: 'Pressure', text: pressureText },
-  { id: 'quality', label: 'Quality', text: (r) => { const q = factsOf(r).quality; return q === null ? dash : `${formatNumber(q * 100, 3)} %`; } },
-  { id: 'liquid', label: 'Liquid mass', text: (r, u) => { const m = factsOf(r).liquidMassKg; return m === null ? dash : `${formatNumber(massFromKg(m, u.mass), 4)} ${unitLabel(u.mass)}`; } },
+  { id: 'temperature', label: 'Temperature', sort: 'temperature', text: temperatureText },
+  { id: 'pressure', label: 'Pressure', sort: 'pressure', sortNote: 'sorts by the absolute pressure', text: pressureText },
+  { id: 'quality', label: 'Quality', sort: 'quality', text: (r) => { const q = factsOf(r).quality; return q === null ? dash : `${formatNumber(q * 100, 3)} %`; } },
+  { id: 'liquid', label: 'Liquid mass', sort: 'liquid', text: (r, u) => { const m = factsOf(r).liquidMassKg; return m === null ? dash : `${formatNumber(massFromKg(m, u.mass), 4)} ${unitLabel(u.mass)}`; } },
   { id: 'technician', label: 'Technician', sort: 'technician', text: (r) => r.technician },
   { id: 'device', label: 'Device', sort: 'device', text: (r) => r.deviceId.slice(0, 8) },
 ];

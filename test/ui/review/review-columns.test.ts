@@ -28,8 +28,9 @@ describe("the wide review's columns (issue 14)", () => {
     expect(cell('verdict')).toBe('agrees');
     expect(cell('device')).toBe('abcdef12');
   });
-  it('the time column always stays; unknown ids are dropped; the figures do not sort, the rest do', () => {
+  it('the time column always stays; unknown ids are dropped; every column sorts the whole match, the figures too (schema v10)', () => {
     expect(chosenColumns(['vessel', 'nonsense']).map((c) => c.id)).toEqual(['time', 'vessel']);
-    expect(COLUMNS.filter((c) => c.sort === undefined).map((c) => c.id)).toEqual(['temperature', 'pressure', 'quality', 'liquid']);
+    expect(COLUMNS.filter((c) => c.sort === undefined).map((c) => c.id)).toEqual([]);
+    expect(COLUMNS.map((c) => c.sort)).toEqual(['time', 'vessel', 'outcome', 'verdict', 'temperature', 'pressure', 'quality', 'liquid', 'technician', 'device']);
   });
 });
