@@ -1,24 +1,27 @@
-// The matching checks, a page at a time ("Show more" reads the next page from the store).
+// The matching checks, a page at a time ("Show more" reads the next page from the store), in an
+// order over the whole match that the person picks (the store sorts; row-view.ts ROW_ORDERS).
 import { hrefFor } from '../router.ts';
-import { ROW_ORDERS, sortRows, type RowOrder, type RowView } from './row-view.ts';
+import { ROW_ORDERS, sortOfOrder, type RowOrder, type RowView } from './row-view.ts';
 
 interface Props {
   rows: readonly RowView[];
   order: RowOrder;
+  /** The order the rows shown are in (the one picked, once its first page has arrived). */
+  shownOrder: RowOrder;
   loading: boolean;
   more: boolean;
   onOrder(order: RowOrder): void;
   onMore(): void;
 }
 
-export function ReviewList({ rows, order, loading, more, onOrder, onMore }: Props) {
-  const shown = sortRows(rows, order);
+export function ReviewList({ rows, order, shownOrder, loading, more, onOrder, onMore }: Props) {
+  const sort = sortOfOrder(shownOrder);
   return (
     <section class="panel" aria-labelledby="review-list-title">
       <div class="review-list-head">
         <h2 id="review-list-title">Checks</h2>
         <div class="field">
-          <label for="rl-order">Order of the rows shown</label>
+          <label for="rl-order">Order (every matching check)</label>
           <select id="rl-order" value={order} onChange={(e) => onOrder((e.currentTarget as HTMLSelectElement).value as RowOrder)}>
             {ROW_ORDERS.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
           </select>
@@ -27,8 +30,8 @@ export function ReviewList({ rows, order, loading, more, onOrder, onMore }: Prop
       <p class="muted" aria-live="polite" data-review-state={loading ? 'loading' : 'ready'}>
         {loading ? 'Reading the log…' : rows.length === 0 ? 'No checks match this filter.' : `Showing ${rows.length.toLocaleString('en-GB')}${more ? ' (more below)' : ''}.`}
       </p>
-      <ul class="review-rows">
-        {shown.map((r) => (
+      <ul class="review-rows" data-sort-by={sort.by} data-sort-dir={sort.descending ? 'descending' : 'ascending'}>
+        {rows.map((r) => (
           <li key={r.id}>
             <a class="review-row" href={hrefFor('log', r.id)}>
               <span class="review-row-top">

@@ -12,9 +12,9 @@ import { TransferPanel } from './TransferPanel.tsx';
 import { VesselReport } from './VesselReport.tsx';
 import { KindRecords } from './KindRecords.tsx';
 import { EMPTY_FORM, NO_FILTER, readFilterForm, type FilterForm, type ReviewFilter } from './review-filter.ts';
-import { ReviewPager, reviewVessels, storeFilter } from './review-query.ts';
+import { TablePager, reviewVessels, storeFilter } from './review-query.ts';
 import { countTotals, type ReviewTotals as Totals } from './review-totals.ts';
-import { rowView, type RowOrder, type RowView } from './row-view.ts';
+import { rowView, sortOfOrder, type RowOrder, type RowView } from './row-view.ts';
 import { OUTCOMES, VERDICTS } from './record-facts.ts';
 import { refreshVessels } from '../state/app-state.ts';
 import { useWide } from '../state/wide.ts';
@@ -44,15 +44,15 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
   const [reportFor, setReportFor] = useState<string | null>(null);
   // While an import writes, counting totals would only compete with it for the store.
   const [importing, setImporting] = useState(false);
-  const pager = useRef<ReviewPager | null>(null);
+  const pager = useRef<TablePager | null>(null);
   const [openRecord, setOpenRecord] = useState<CheckRecord | null>(null);
-  // Newest and oldest first come from the store (the whole match in that order); the other orders
-  // sort the rows shown.
-  const storeOrder = order === 'oldest' ? 'oldest' : 'newest';
+  // Every order is the store's over the whole match: time pages straight from the month buckets,
+  // the others sort the match's month rows once (sortChecks) and page through that.
+  const [shownOrder, setShownOrder] = useState<RowOrder>(order);
 
   useEffect(() => {
     const stop = new AbortController();
-    const p = new ReviewPager(filter, 50, storeOrder);
+    const p = new TablePager(filter, sortOfOrder(order), 50);
     pager.current = p;
     setLoading(true);
     setReadError('');
@@ -65,6 +65,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
         performance.mark('tankside: first page read');
         setRows(first.rows.map(rowView));
         setMore(first.more);
+        setShownOrder(order);
         setLoading(false);
         setShown((n) => n + 1);
         // Totals walk the whole match once the first rows are painted, so they never delay them.
@@ -80,7 +81,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
       }
     })();
     return () => stop.abort();
-  }, [filter, generation, importing, storeOrder]);
+  }, [filter, generation, importing, order]);
 
   // Issued after the first page's read, so the picker's vessels never hold up the first rows.
   useEffect(() => { void reviewVessels().then(setVessels, () => setVessels([])); }, [generation]);
@@ -128,7 +129,7 @@ export function ReviewScreen({ param }: { param?: string | undefined }) {
           {filters}
           {failure}
           {totalsPanel}
-          <ReviewList rows={rows} order={order} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
+          <ReviewList rows={rows} order={order} shownOrder={shownOrder} loading={loading} more={more} onOrder={setOrder} onMore={() => void showMore()} />
           <KindRecords key={generation} vesselId={filter.vesselId ?? null} fromMs={filter.fromMs} toMs={filter.toMs} idPrefix="rk" title="Cycles and periodic tests" />
         </div>
       )}

@@ -1,7 +1,8 @@
-// One log row as the review list shows it, and its orders: newest and oldest first over the whole
-// match (the store pages in that order), the others over the rows shown so far.
+// One log row as the review list shows it, and its orders: every one over the whole match (the
+// store sorts the match's month rows, sortChecks, and pages through it).
 import type { CheckRecord } from '../../store/index.ts';
-import { OUTCOMES, factsOf, stampText, verdictLabel, type Outcome, type VerdictId } from './record-facts.ts';
+import { factsOf, stampText, verdictLabel, type Outcome, type VerdictId } from './record-facts.ts';
+import type { TableSort } from './review-query.ts';
 
 export interface RowView {
   id: string;
@@ -34,27 +35,24 @@ export function rowView(r: CheckRecord): RowView {
   };
 }
 
-export type RowOrder = 'newest' | 'oldest' | 'vessel' | 'severity' | 'technician';
+/** The phone list's orders: each a store order over the whole match (sortChecks), not only the rows read. */
+export type RowOrder = 'newest' | 'oldest' | 'vessel' | 'severity' | 'verdict' | 'technician' | 'device' | 'temperature' | 'pressure' | 'quality' | 'liquid';
 
-export const ROW_ORDERS: readonly { id: RowOrder; label: string }[] = [
-  { id: 'newest', label: 'Newest first' },
-  { id: 'oldest', label: 'Oldest first' },
-  { id: 'vessel', label: 'Vessel tag (rows shown)' },
-  { id: 'severity', label: 'Most severe outcome (rows shown)' },
-  { id: 'technician', label: 'Technician (rows shown)' },
+export const ROW_ORDERS: readonly { id: RowOrder; label: string; sort: TableSort }[] = [
+  { id: 'newest', label: 'Newest first', sort: { by: 'time', descending: true } },
+  { id: 'oldest', label: 'Oldest first', sort: { by: 'time', descending: false } },
+  { id: 'severity', label: 'Most severe outcome first', sort: { by: 'outcome', descending: false } },
+  { id: 'verdict', label: 'Verdict', sort: { by: 'verdict', descending: false } },
+  { id: 'vessel', label: 'Vessel tag A–Z', sort: { by: 'vessel', descending: false } },
+  { id: 'technician', label: 'Technician A–Z', sort: { by: 'technician', descending: false } },
+  { id: 'device', label: 'Device', sort: { by: 'device', descending: false } },
+  { id: 'temperature', label: 'Highest temperature first', sort: { by: 'temperature', descending: true } },
+  { id: 'pressure', label: 'Highest absolute pressure first', sort: { by: 'pressure', descending: true } },
+  { id: 'quality', label: 'Highest quality first', sort: { by: 'quality', descending: true } },
+  { id: 'liquid', label: 'Least liquid mass first', sort: { by: 'liquid', descending: false } },
 ];
 
-const severity = (o: Outcome) => OUTCOMES.indexOf(o);
-
-/** The rows in the chosen order; ties stay newest first. A new array; the input is untouched. */
-export function sortRows(rows: readonly RowView[], order: RowOrder): RowView[] {
-  const newest = (a: RowView, b: RowView) => b.timeMs - a.timeMs || (a.id < b.id ? 1 : -1);
-  const by: Record<RowOrder, (a: RowView, b: RowView) => number> = {
-    newest,
-    oldest: (a, b) => -newest(a, b),
-    vessel: (a, b) => a.vesselTag.localeCompare(b.vesselTag) || newest(a, b),
-    severity: (a, b) => severity(a.outcome) - severity(b.outcome) || newest(a, b),
-    technician: (a, b) => a.technician.localeCompare(b.technician) || newest(a, b),
-  };
-  return [...rows].sort(by[order]);
+/** The store order a row order stands for. */
+export function sortOfOrder(order: RowOrder): TableSort {
+  return (ROW_ORDERS.find((o) => o.id === order) ?? ROW_ORDERS[0]!).sort;
 }

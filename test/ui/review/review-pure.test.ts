@@ -5,7 +5,7 @@ import type { CheckRecord } from '../../../src/store/index.ts';
 import { factsOf, outcomeOf, verdictOf } from '../../../src/ui/review/record-facts.ts';
 import { dayEndMs, dayStartMs, EMPTY_FORM, monthDays, monthOfForm, readFilterForm, withMonth } from '../../../src/ui/review/review-filter.ts';
 import { niceTicks, trendGeometry, type TrendPoint } from '../../../src/ui/review/trend-data.ts';
-import { sortRows, type RowView } from '../../../src/ui/review/row-view.ts';
+import { ROW_ORDERS, sortOfOrder } from '../../../src/ui/review/row-view.ts';
 import { chainLine } from '../../../src/ui/review/chain-view.ts';
 
 /** A record carrying a result shaped as src/core/README.md documents CheckResult (invented values). */
@@ -133,15 +133,10 @@ describe('trend geometry', () => {
 });
 
 describe('rows and chains', () => {
-  const row = (id: string, timeMs: number, outcome: RowView['outcome'], vesselTag: string): RowView => ({
-    id, timeMs, when: '', vesselTag, verdict: 'consistent', verdictText: '', outcome, technician: 't', deviceShort: '', correction: false,
-  });
-  it('orders rows by outcome then newest, leaving the input untouched', () => {
-    const rows = [row('a', 1, 'none', 'B'), row('b', 2, 'CAUTION', 'A'), row('c', 3, 'DANGER', 'C'), row('d', 4, 'CAUTION', 'A')];
-    expect(sortRows(rows, 'severity').map((r) => r.id)).toEqual(['c', 'd', 'b', 'a']);
-    expect(sortRows(rows, 'vessel').map((r) => r.id)).toEqual(['d', 'b', 'a', 'c']);
-    expect(sortRows(rows, 'oldest').map((r) => r.id)).toEqual(['a', 'b', 'c', 'd']);
-    expect(rows.map((r) => r.id)).toEqual(['a', 'b', 'c', 'd']);
+  it('every phone order is a store order over the whole match, each once', () => {
+    expect(ROW_ORDERS.map((o) => `${o.sort.by}${o.sort.descending ? '↓' : '↑'}`)).toEqual(['time↓', 'time↑', 'outcome↑', 'verdict↑', 'vessel↑', 'technician↑', 'device↑', 'temperature↓', 'pressure↓', 'quality↓', 'liquid↑']);
+    expect(sortOfOrder('severity')).toEqual({ by: 'outcome', descending: false });
+    expect(sortOfOrder('nonsense' as never)).toEqual({ by: 'time', descending: true });
   });
   it('points a broken chain at its first bad record', () => {
     const line = chainLine({ deviceId: 'abcdef0123', status: 'broken', count: 9, at: { id: 'rec-5', seq: 5 }, problem: 'content-changed', detail: 'seq 5: content does not match its hash', signature: { state: 'unsigned' } });
