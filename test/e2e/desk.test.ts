@@ -1,7 +1,8 @@
 // The supervisor's desk (issue 14) in Chromium at a desk (1440×900) and on a phone (390×844): the
 // plant overview of a generated plant of invented demo vessels (labelled DEMO DATA) with 10,000
 // checks, its latest outcomes and due states against the clock the test sets (page.clock); the wide
-// review's sort by outcome over the whole match; the keyboard in the table. Waits only on the app's
+// review's sort by outcome and by the key figures over the whole match; the keyboard in the table;
+// the phone list's order picker over the whole match. Waits only on the app's
 // own states (data-overview-state, data-review-table-state, the import's result).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -11,7 +12,7 @@ import type { Page } from 'playwright-core';
 import { DIST, PHONE, launch, screenshot, startServer, tempProfile, verifyChainsOnScreen, type StaticServer } from './harness.ts';
 import { backupText, generatedChecks, generatedVessels } from '../../bench/generated-log.ts';
 import { checkDue, type CheckDueState } from '../../src/core/check/check-due.ts';
-import { outcomeOfRecord } from '../../src/store/facts.ts';
+import { keyFiguresOf, outcomeOfRecord } from '../../src/store/facts.ts';
 import type { CheckRecord, VesselRecord } from '../../src/store/index.ts';
 
 const HOUR_S = 3_600;
@@ -73,6 +74,16 @@ describe("the supervisor's desk", () => {
     profile.remove();
     rmSync(files, { recursive: true, force: true });
   });
+
+  /** The checks in the order of key figure `at` (keyFiguresOf: temperature, absolute pressure, quality, liquid mass), those without it last, ties newest first. */
+  function byFigure(at: 0 | 1 | 2 | 3, descending: boolean): CheckRecord[] {
+    return [...checks].sort((a, b) => {
+      const x = keyFiguresOf(a)[at];
+      const y = keyFiguresOf(b)[at];
+      if (x === null || y === null) return (x === null ? 1 : 0) - (y === null ? 1 : 0) || newest(a, b);
+      return (descending ? y - x : x - y) || newest(a, b);
+    });
+  }
 
   async function overviewRows(page: Page): Promise<Map<string, { outcome: string; due: string; group: string }>> {
     await page.locator('[data-overview-state="ready"]').waitFor();
@@ -159,6 +170,29 @@ describe("the supervisor's desk", () => {
     }
   });
 
+  it('at 1440×900 the key figures sort the whole match too (schema v10 month rows): temperature up, pressure down, checks without a figure last', async () => {
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.clock.setFixedTime(NOW);
+      await page.setViewportSize({ width: 1440, height: 900 });
+      await page.goto(`${server.url}#/review`);
+      const table = page.locator('.review-table');
+      await page.locator('[data-review-table-state="ready"]').waitFor();
+      const shownIds = () => table.locator('tbody tr').evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-check-id') ?? ''));
+      await table.locator('[data-sort-column="temperature"]').click();
+      await page.locator('.review-table[data-sort-by="temperature"][data-sort-dir="ascending"][data-review-table-state="ready"]').waitFor();
+      expect(await shownIds()).toEqual(byFigure(0, false).slice(0, 50).map((c) => c.id));
+      await table.locator('[data-sort-column="pressure"]').click();
+      await page.locator('.review-table[data-sort-by="pressure"][data-sort-dir="ascending"][data-review-table-state="ready"]').waitFor();
+      await table.locator('[data-sort-column="pressure"]').click();
+      await page.locator('.review-table[data-sort-by="pressure"][data-sort-dir="descending"][data-review-table-state="ready"]').waitFor();
+      expect(await shownIds()).toEqual(byFigure(1, true).slice(0, 50).map((c) => c.id));
+    } finally {
+      await ctx.close();
+    }
+  });
+
   it('at 1440×900 a review note clears a flag, and the note verifies in this device\'s chain', async () => {
     const ctx = await launch(profile.dir);
     try {
@@ -214,6 +248,19 @@ describe("the supervisor's desk", () => {
       await page.locator('[data-review-state="ready"]').waitFor();
       expect(await page.locator('.review-table').count()).toBe(0);
       expect(await page.locator('.review-row').count()).toBeGreaterThan(0);
+
+      // The phone's order picker sorts the whole 10,000-check match, not only the rows read.
+      const shownIds = () => page.locator('.review-row').evaluateAll((as) => as.map((a) => a.getAttribute('data-check-id') ?? ''));
+      await page.selectOption('#rl-order', 'severity');
+      await page.locator('.review-rows[data-sort-by="outcome"][data-sort-dir="ascending"]').waitFor();
+      await page.locator('[data-review-state="ready"]').waitFor();
+      const bySeverity = [...checks].sort((a, b) => SEVERITY.indexOf(outcomeOfRecord(a)) - SEVERITY.indexOf(outcomeOfRecord(b)) || newest(a, b));
+      expect(await shownIds()).toEqual(bySeverity.slice(0, 50).map((c) => c.id));
+      await page.selectOption('#rl-order', 'liquid');
+      await page.locator('.review-rows[data-sort-by="liquid"][data-sort-dir="ascending"]').waitFor();
+      await page.locator('[data-review-state="ready"]').waitFor();
+      expect(await shownIds()).toEqual(byFigure(3, false).slice(0, 50).map((c) => c.id));
+      await screenshot(page, 'desk-review-sorted-390');
     } finally {
       await ctx.close();
     }

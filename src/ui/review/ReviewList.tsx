@@ -33,7 +33,7 @@ export function ReviewList({ rows, order, shownOrder, loading, more, onOrder, on
       <ul class="review-rows" data-sort-by={sort.by} data-sort-dir={sort.descending ? 'descending' : 'ascending'}>
         {rows.map((r) => (
           <li key={r.id}>
-            <a class="review-row" href={hrefFor('log', r.id)}>
+            <a class="review-row" href={hrefFor('log', r.id)} data-check-id={r.id}>
               <span class="review-row-top">
                 <strong>{r.vesselTag}</strong>
                 <span>{r.when}</span>
