@@ -211,41 +211,11 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
         next();
         return;
       }
-      const blocks = raw.objectStore('logBlocks');
-      const months = raw.objectStore('logMonths');
-      const rebuild = async (): Promise<void> => {
-        const masks = new Map<string, number>();
-        let range: IDBKeyRange | undefined;
-        for (;;) {
-          const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
-          for (const b of page) b.texts.forEach((text, i) => masks.set(`${b.deviceId}\u0000${b.seqs[i]}`, findingMaskOfText(text)));
-          if (page.length < REBUILD_PAGE) break;
-          const last = page[page.length - 1]!;
-          range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
-        }
-        const buckets = await request<V4MonthBucket[]>(months.getAll());
-        const writes: Promise<unknown>[] = [];
-        for (const bucket of buckets) {
-          let changed = false;
-          for (const row of bucket.rows) {
-            const mask = masks.get(`${row[2]}\u0000${row[3]}`);
-            if (mask !== undefined && mask !== row[5]) {
-              row[5] = mask;
-              changed = true;
-            }
-          }
-          if (changed) writes.push(request(months.put(bucket)));
-        }
-        await Promise.all(writes);
-      };
-      rebuild().then(next, () => {
-        // Half-rebuilt rows must not commit: abort, and the v4 database stays as it was.
-        try {
-          raw.abort();
-        } catch {
-          // Already finished.
-        }
-      });
+      rebuildRows(raw, 'logMonths', findingMaskOfText, (row, mask) => {
+        if (mask === undefined || mask === row[5]) return false;
+        row[5] = mask;
+        return true;
+      }, next);
     },
   },
   {
@@ -318,58 +288,59 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
   {
     version: KEY_FIGURES_RUNG,
     run(_db, tx, next) {
-      // As rung 5: every block a page at a time (only IndexedDB requests awaited), each check's
-      // figures from its text, then every month part whose rows lack them rewritten. A row that
-      // has them (written by today's addToLog in rung 4 just now) is left as it is.
-      const raw = unwrap(tx) as IDBTransaction;
-      const blocks = raw.objectStore('logBlocks');
-      const parts = raw.objectStore('logMonthParts');
-      const fill = async (): Promise<void> => {
-        const figures = new Map<string, KeyFigures>();
-        let range: IDBKeyRange | undefined;
-        for (;;) {
-          const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
-          for (const b of page) {
-            b.texts.forEach((text, i) => {
-              const r = JSON.parse(text) as LogRecord;
-              if (isCheckRecord(r)) figures.set(`${b.deviceId}\u0000${b.seqs[i]}`, keyFiguresOf(r));
-            });
-          }
-          if (page.length < REBUILD_PAGE) break;
-          const last = page[page.length - 1]!;
-          range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
-        }
-        range = undefined;
-        const writes: Promise<unknown>[] = [];
-        for (;;) {
-          const page = await request<MonthBucket[]>(parts.getAll(range, MIGRATE_MONTHS));
-          for (const part of page) {
-            let changed = false;
-            part.rows = part.rows.map((row) => {
-              if (row.length >= MONTH_ROW_LENGTH) return row;
-              changed = true;
-              const f = figures.get(`${row[2]}\u0000${row[3]}`) ?? NO_FIGURES;
-              return [row[0], row[1], row[2], row[3], row[4], row[5], row[6], ...f];
-            });
-            if (changed) writes.push(request(parts.put(part)));
-          }
-          if (page.length < MIGRATE_MONTHS) break;
-          const last = page[page.length - 1]!;
-          range = IDBKeyRange.lowerBound([last.vesselId, last.monthMs, last.startMs, last.startId], true);
-        }
-        await Promise.all(writes);
-      };
-      fill().then(next, () => {
-        // Half-filled rows must not commit: abort, and the v8 database stays as it was.
-        try {
-          raw.abort();
-        } catch {
-          // Already finished.
-        }
-      });
+      // As rung 5, each check's figures from its text; a row that has them (written by today's
+      // addToLog in rung 4 just now) is left as it is.
+      rebuildRows(unwrap(tx) as IDBTransaction, 'logMonthParts', (text) => {
+        const r = JSON.parse(text) as LogRecord;
+        return isCheckRecord(r) ? keyFiguresOf(r) : undefined;
+      }, (row, figures) => {
+        if (row.length >= MONTH_ROW_LENGTH) return false;
+        row.push(...(figures ?? NO_FIGURES));
+        return true;
+      }, next);
     },
   },
 ];
+
+/**
+ * Rows rebuilt from the stored texts, on the upgrade transaction (only IndexedDB requests awaited):
+ * every block a page at a time gives `derive(text)` for each record it holds; then `update` sees
+ * each row of `storeName` with what its record gave (undefined: no such record) and says whether
+ * it changed it; changed buckets are put back. The blocks, and so every record and hash, stay byte
+ * for byte. Calls `next` when done; on a failure aborts, so the older database stays as it was.
+ */
+function rebuildRows<T>(
+  raw: IDBTransaction, storeName: 'logMonths' | 'logMonthParts', derive: (text: string) => T | undefined,
+  update: (row: MonthRow, derived: T | undefined) => boolean, next: () => void,
+): void {
+  const blocks = raw.objectStore('logBlocks');
+  const buckets = raw.objectStore(storeName);
+  const rebuild = async (): Promise<void> => {
+    const derived = new Map<string, T | undefined>();
+    let range: IDBKeyRange | undefined;
+    for (;;) {
+      const page = await request<LogBlock[]>(blocks.getAll(range, REBUILD_PAGE));
+      for (const b of page) b.texts.forEach((text, i) => derived.set(`${b.deviceId}\u0000${b.seqs[i]}`, derive(text)));
+      if (page.length < REBUILD_PAGE) break;
+      const last = page[page.length - 1]!;
+      range = IDBKeyRange.lowerBound([last.deviceId, last.firstSeq], true);
+    }
+    const writes: Promise<unknown>[] = [];
+    for (const bucket of await request<{ rows: MonthRow[] }[]>(buckets.getAll())) {
+      let changed = false;
+      for (const row of bucket.rows) if (update(row, derived.get(`${row[2]}\u0000${row[3]}`))) changed = true;
+      if (changed) writes.push(request(buckets.put(bucket)));
+    }
+    await Promise.all(writes);
+  };
+  rebuild().then(next, () => {
+    try {
+      raw.abort();
+    } catch {
+      // Already finished.
+    }
+  });
+}
 
 /** A month row's length with its key figures (log-layout.ts MonthRow). */
 const MONTH_ROW_LENGTH = 11;

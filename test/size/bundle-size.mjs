@@ -12,7 +12,10 @@
 //    src/store/transfer.ts (fittedAt moved beside the record shapes): 46.72 KB, and 47.37 KB with main's plant overview
 //    and check interval since; so 47.5 KB until the
 //    rest of the register's start-up part (rung 8's vessel entries, instrument-upgrade.ts, reached
-//    by schema.ts and addVessel) also loads on demand and 45 KB holds again (issue 11's target);
+//    by schema.ts and addVessel) also loads on demand and 45 KB holds again (issue 11's target).
+//    Issue 14's schema v10 (every month row keeps its check's key figures, written by every save,
+//    and the rung that fills them in, sharing rung 5's row rebuild) took it from 47.41 to 47.66 KB:
+//    47.75 KB until then;
 //  - on demand: chunks behind a dynamic import (every screen but Check, the engine, the long jobs), at most 20 KB each,
 //    but the check engine's chunk (`core-*.js`), at most 26 KB: issue 9's findings (40 rules and
 //    their wording, the edge states, the stored region 3 starting values) took it from 15.4 to
@@ -34,7 +37,7 @@ import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 
 const DIST = resolve(import.meta.dirname, '../../dist');
-const START_BUDGET_BYTES = 47.5 * 1024;
+const START_BUDGET_BYTES = 47.75 * 1024;
 const ON_DEMAND_BUDGET_BYTES = 20 * 1024;
 const ENGINE_CHUNK_BUDGET_BYTES = 26 * 1024;
 const IMPORT_WORKER_BUDGET_BYTES = 22 * 1024;
