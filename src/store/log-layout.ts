@@ -202,26 +202,49 @@ export async function firstSeqsOf(tx: LogTx<IDBTransactionMode>, deviceId: strin
  * block once however many of its checks are asked for, and parses only the texts asked for.
  */
 export async function readRecords(tx: LogTx<IDBTransactionMode>, refs: readonly CheckRef[]): Promise<(LogRecord | undefined)[]> {
-  const devices = [...new Set(refs.map((r) => r.deviceId))];
-  const firstSeqs = new Map(await Promise.all(devices.map(async (d) => [d, await firstSeqsOf(tx, d)] as const)));
-  const wanted = new Map<string, [string, number]>();
-  const blockKeyOf = refs.map((r) => {
-    const first = blockFor(firstSeqs.get(r.deviceId)!, r.seq);
-    if (first === undefined) return null;
-    const key = `${first}\u0000${r.deviceId}`;
-    wanted.set(key, [r.deviceId, first]);
-    return key;
-  });
-  const blocks = new Map<string, LogBlock | undefined>();
-  await Promise.all([...wanted].map(async ([key, k]) => blocks.set(key, await tx.objectStore('logBlocks').get(k))));
-  return refs.map((r, i) => {
-    const key = blockKeyOf[i];
-    const block = key === null || key === undefined ? undefined : blocks.get(key);
-    if (!block) return undefined;
-    const at = seqIndex(block.seqs, r.seq);
-    return at < 0 ? undefined : (JSON.parse(block.texts[at]!) as LogRecord);
+  const seqsOf = new Map<string, Set<number>>();
+  for (const r of refs) {
+    let set = seqsOf.get(r.deviceId);
+    if (!set) seqsOf.set(r.deviceId, (set = new Set()));
+    set.add(r.seq);
+  }
+  const blocksOf = new Map<string, LogBlock[]>();
+  await Promise.all([...seqsOf].map(async ([deviceId, seqs]) => blocksOf.set(deviceId, await blocksHolding(tx, deviceId, [...seqs]))));
+  return refs.map((r) => {
+    for (const block of blocksOf.get(r.deviceId)!) {
+      const at = seqIndex(block.seqs, r.seq);
+      if (at >= 0) return JSON.parse(block.texts[at]!) as LogRecord;
+    }
+    return undefined;
   });
 }
+
+/**
+ * The blocks of one device that hold `seqs`. A few seqs (a review page spread over many devices
+ * has one or two per device) are found with one request each, a cursor stepping back from the
+ * seq to its block, which reads the block at once; more, with the device's block keys first and
+ * one request per block, so no block is read twice. In Chromium a request costs about the same
+ * whatever it returns, and the first page of a 50-device log asks for 50 blocks
+ * (bench/review-scale.bench-run.ts; src/store/README.md).
+ */
+async function blocksHolding(tx: LogTx<IDBTransactionMode>, deviceId: string, seqs: readonly number[]): Promise<LogBlock[]> {
+  const store = tx.objectStore('logBlocks');
+  if (seqs.length <= FEW_SEQS) {
+    const found = await Promise.all(seqs.map(async (seq) => (await store.openCursor(IDBKeyRange.bound([deviceId, -Infinity], [deviceId, seq]), 'prev'))?.value));
+    return found.filter((b): b is LogBlock => b !== undefined);
+  }
+  const firstSeqs = await firstSeqsOf(tx, deviceId);
+  const wanted = new Set<number>();
+  for (const seq of seqs) {
+    const first = blockFor(firstSeqs, seq);
+    if (first !== undefined) wanted.add(first);
+  }
+  const found = await Promise.all([...wanted].map((first) => store.get([deviceId, first])));
+  return found.filter((b): b is LogBlock => b !== undefined);
+}
+
+/** Seqs of one device that readRecords finds a request each (blocksHolding). */
+const FEW_SEQS = 2;
 
 /** Where ids are stored, from logIds (absent ids are left out). */
 export async function locateIds(tx: LogTx<IDBTransactionMode>, ids: readonly string[]): Promise<Map<string, IdEntry>> {
