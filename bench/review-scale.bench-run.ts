@@ -16,7 +16,7 @@ import { expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DIST, ROOT, launch, startServer, tempProfile } from '../test/e2e/harness.ts';
 import { generatedBackup } from './generated-log.ts';
-import { browserCpuS } from './browser-cpu.ts';
+import { browserCpuSplit } from './browser-cpu.ts';
 
 // BENCH_CHECKS lets a quick run use a smaller log while changing the benchmark itself.
 const CHECKS = Number(process.env['BENCH_CHECKS'] ?? 100_000);
@@ -79,16 +79,18 @@ async function jobMs(page: Page, label: string): Promise<number> {
 function noteJob(what: string, ms: number): void {
   console.log(`    ${what.padEnd(64)} ${(ms / 1000).toFixed(3).padStart(8)} s`);
   console.log(`    ${'CPU used by all browser processes during the click'.padEnd(64)} ${lastCpuS.toFixed(3).padStart(8)} s`);
+  console.log(`    ${'… of which the renderer (the page and its workers)'.padEnd(64)} ${lastRendererCpuS.toFixed(3).padStart(8)} s`);
 }
 
-/** CPU seconds of the browser's processes during the last timed click. */
+/** CPU seconds of the browser's processes during the last timed click, and of its renderers. */
 let lastCpuS = NaN;
+let lastRendererCpuS = NaN;
 
 /** The profile folder of the running browser, so its processes can be found. */
 let profileDir = '';
 
 /** CPU seconds used so far by every process of the running browser. */
-const browserCpuSNow = (): number => browserCpuS(profileDir);
+const browserCpuSNow = () => browserCpuSplit(profileDir);
 
 // BENCH_PROFILE=<folder> records a CPU profile of the page around each timed click (and builds
 // without minifying, so the profile names functions); the figures of such a run are not comparable.
@@ -105,7 +107,9 @@ async function timeClick(page: Page, name: string, until: () => Promise<unknown>
   const cpu0 = browserCpuSNow();
   await Promise.all([until(), page.getByRole('button', { name }).click()]);
   const ms = Date.now() - t0;
-  lastCpuS = browserCpuSNow() - cpu0;
+  const cpu1 = browserCpuSNow();
+  lastCpuS = cpu1.total - cpu0.total;
+  lastRendererCpuS = cpu1.renderers - cpu0.renderers;
   if (cdp && PROFILE_DIR) {
     const { profile } = await cdp.send('Profiler.stop');
     mkdirSync(PROFILE_DIR, { recursive: true });

@@ -232,6 +232,48 @@ describe("the supervisor's desk", () => {
     }
   });
 
+  it('at 1440×900 verification on the workers finds one changed stored record, at its seq, and finds the chain whole again once it is put back', async () => {
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.setViewportSize({ width: 1440, height: 900 });
+      await page.goto(`${server.url}#/review`);
+      await page.locator('[data-review-table-state="ready"]').waitFor();
+      // Changed behind the app's back, in IndexedDB itself: one letter of seq 4,321's technician.
+      const edit = (restore: boolean) => page.evaluate(async ([deviceId, put]) => {
+        const db = await new Promise<IDBDatabase>((ok, fail) => {
+          const r = indexedDB.open('tankside');
+          r.onsuccess = () => ok(r.result);
+          r.onerror = () => fail(r.error);
+        });
+        const tx = db.transaction('logBlocks', 'readwrite');
+        const store = tx.objectStore('logBlocks');
+        const cursor = await new Promise<IDBCursorWithValue | null>((ok) => {
+          const r = store.openCursor(IDBKeyRange.bound([deviceId, -Infinity], [deviceId, 4321]), 'prev');
+          r.onsuccess = () => ok(r.result);
+        });
+        const block = cursor!.value as { seqs: number[]; texts: string[] };
+        const at = block.seqs.indexOf(4321);
+        block.texts[at] = put ? block.texts[at]!.replace('"technician":"Demo Tech ', '"technician":"Demo tech ') : block.texts[at]!.replace('"technician":"Demo tech ', '"technician":"Demo Tech ');
+        cursor!.update(block);
+        await new Promise((ok) => { tx.oncomplete = ok; });
+        db.close();
+        return at;
+      }, ['a1b2c3d4-0000-4000-8000-000000000014', !restore] as const);
+      expect(await edit(false)).toBeGreaterThanOrEqual(0);
+      const changed = await verifyChainsOnScreen(page);
+      expect(changed.state).toBe('done');
+      const line = changed.lines.find((l) => l.chain !== 'ok');
+      expect(line?.text).toContain('seq 4321');
+      expect(changed.lines.filter((l) => l.chain === 'ok')).toHaveLength(1);
+      await edit(true);
+      const whole = await verifyChainsOnScreen(page);
+      expect(whole.lines.map((l) => l.chain)).toEqual(['ok', 'ok']);
+    } finally {
+      await ctx.close();
+    }
+  });
+
   it('at 390×844 the overview is one tap from More and lists the same; the review keeps its phone list', async () => {
     const ctx = await launch(profile.dir);
     try {

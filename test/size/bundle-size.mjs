@@ -24,9 +24,11 @@
 //    room stays out of it (src/core/index.ts says how), but the drift estimator's statistics
 //    (Student's t, the serial trend) are reached through the core's index by the periodic-test
 //    room as well, so the bundler keeps them here;
-//  - the long jobs' surface (`transfer-*.js`), at most 22 KB: since it carries the instrument
+//  - the long jobs' surface (`transfer-*.js`), at most 22.5 KB: since it carries the instrument
 //    register's reads and writes (21.37 KB, 21.60 KB with main's sorted review since; 19.64 KB without them). A surface of the register's own
 //    was measured and made the start larger (47.76 KB: the bundler split the start-up store in two);
+//    issue 14's long jobs on workers (sharing the devices between two verifying workers, and their
+//    orchestration on the page) took it to 22.06 KB, so 22.5 KB;
 //  - the import worker (`import-worker-*.js`), at most 22 KB: it carries the whole store (the schema
 //    ladder with its upgrade rungs) and the reader of every backup format version; issue 13's
 //    instrument register (its upgrade rung, format version 3's lists and their merge) took it
@@ -41,7 +43,7 @@ const START_BUDGET_BYTES = 47.75 * 1024;
 const ON_DEMAND_BUDGET_BYTES = 20 * 1024;
 const ENGINE_CHUNK_BUDGET_BYTES = 26 * 1024;
 const IMPORT_WORKER_BUDGET_BYTES = 22 * 1024;
-const TRANSFER_CHUNK_BUDGET_BYTES = 22 * 1024;
+const TRANSFER_CHUNK_BUDGET_BYTES = 22.5 * 1024;
 const budgetOf = (file) => (/^assets\/core-[\w-]+\.js$/.test(file) ? ENGINE_CHUNK_BUDGET_BYTES
   : /^assets\/import-worker-[\w-]+\.js$/.test(file) ? IMPORT_WORKER_BUDGET_BYTES
   : /^assets\/transfer-[\w-]+\.js$/.test(file) ? TRANSFER_CHUNK_BUDGET_BYTES : ON_DEMAND_BUDGET_BYTES);
