@@ -3,188 +3,15 @@
 import type { IDBPTransaction } from 'idb';
 import { getDb } from './connection.ts';
 import { throwIfAborted } from './integrity.ts';
-import { outcomeOfRecord, signalMaskOf, worstSignalOfMask } from './facts.ts';
+import { csvFromChecks, csvRow } from './csv-rows.ts';
 import { blockPages, compareRows, countChecks, LOG_STORES, matchingRows, pageRows, readRecords, type MonthRow } from './log-layout.ts';
 import { windowOf, type CheckFilter } from './checks.ts';
 import { isCheckRecord, type CheckCursor, type CheckRecord, type LogRecord, type LongWorkOptions } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { requireUuid } from './validate.ts';
+import { onLogWorkers } from './log-workers.ts';
 
-type Cell = string | number | boolean | null;
-
-/** Reads a value at a path (keys) inside plain JSON, or undefined (a stored record may be older or damaged: nothing is assumed of its shape). */
-function at(value: unknown, path: readonly string[]): unknown {
-  let v: unknown = value;
-  for (const key of path) {
-    if (v === null || typeof v !== 'object' || Array.isArray(v) || !Object.hasOwn(v, key)) return undefined;
-    v = (v as Record<string, unknown>)[key];
-  }
-  return v;
-}
-
-/** A scalar from the record's JSON, or null (empty cell) for anything else or nothing. */
-function scalar(value: unknown): Cell {
-  return typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' ? value : null;
-}
-
-/** A cell reading a dotted path of the record's reading or result (the path split once, not per row). */
-function fromReading(path: string): (r: CheckRecord) => Cell {
-  const keys = path.split('.');
-  return (r) => scalar(at(r.reading, keys));
-}
-function fromResult(path: string): (r: CheckRecord) => Cell {
-  const keys = path.split('.');
-  return (r) => scalar(at(r.result, keys));
-}
-
-/**
- * Decimals that show a ± band to one or two significant digits (two when it starts with 1 or 2):
- * the screen's rule (src/ui/state/format.ts decimalsForBand; a test keeps the two equal), kept
- * here because the store takes nothing but types from the rest of the app.
- */
-function decimalsForBand(band: number): number {
-  const [mantissa, exponent] = Math.abs(band).toExponential(1).split('e') as [string, string];
-  return Math.min(12, Math.max(0, (Number(mantissa) < 3 ? 2 : 1) - 1 - Number(exponent)));
-}
-
-/** `value` × `scale` rounded to the place its band resolves, as the screen shows it; 4 significant digits without a band. */
-export function roundedAsShown(value: number | null, band: number | null, scale = 1, offset = 0): number | null {
-  if (value === null || !Number.isFinite(value)) return null;
-  const v = value * scale + offset;
-  if (band === null || !Number.isFinite(band) || band === 0) return Number(v.toPrecision(4));
-  return Number(v.toFixed(decimalsForBand(band * scale))) || 0;
-}
-
-function num(value: unknown): number | null {
-  return typeof value === 'number' && Number.isFinite(value) ? value : null;
-}
-
-/** A rounded column: the record's value at `path` (SI) shown as on screen, with the band found by `band`. */
-function shownFromResult(path: string, band: (r: CheckRecord) => number | null, scale = 1, offset = 0): (r: CheckRecord) => Cell {
-  const keys = path.split('.');
-  return (r) => roundedAsShown(num(at(r.result, keys)), band(r), scale, offset);
-}
-
-const bandAt = (path: string) => {
-  const keys = path.split('.');
-  return (r: CheckRecord) => num(at(r.result, keys));
-};
-/** The thermometer's ± limit, K: its contribution to the pressure band over the saturation slope. */
-const temperatureBandK = (r: CheckRecord): number | null => {
-  const c = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'temperatureSensor']));
-  const slope = num(at(r.result, ['saturation', 'saturationSlopePaPerK']));
-  return c !== null && slope !== null && slope > 0 ? c / slope : null;
-};
-/** The gauge and atmosphere limits on the absolute pressure, Pa. */
-const absoluteBandPa = (r: CheckRecord): number | null => {
-  const g = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'pressureGauge']));
-  const a = num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'atmosphere']));
-  return g === null ? null : Math.hypot(g, a ?? 0);
-};
-/** The atmosphere's part of the band, else the vessel's barometer limit, Pa (as the screen's "Atmosphere used"). */
-const atmosphereBandPa = (r: CheckRecord): number | null =>
-  num(at(r.result, ['saturation', 'pressureBand', 'contributions', 'atmosphere'])) || num(at(r.vessel.spec, ['instruments', 'barometerTolerancePa']));
-function highestSignal(r: CheckRecord): Cell {
-  return worstSignalOfMask(signalMaskOf(r.cautions));
-}
-
-/**
- * The columns, in order. Result paths follow the check engine's CheckResult (src/core/README.md);
- * a path a record does not have gives an empty cell, so older records export too.
- */
-export const CSV_COLUMNS: readonly { header: string; cell: (r: CheckRecord) => Cell }[] = [
-  { header: 'time (ISO 8601)', cell: (r) => r.time },
-  { header: 'vessel tag', cell: (r) => r.vessel.tag },
-  { header: 'technician', cell: (r) => r.technician },
-  { header: 'verdict', cell: fromResult('saturation.verdict.verdict') },
-  { header: 'highest signal word (standing note left out)', cell: highestSignal },
-  { header: 'temperature (K)', cell: fromReading('temperatureK') },
-  { header: 'temperature (°C, as shown)', cell: (r) => roundedAsShown(num(at(r.reading, ['temperatureK'])), temperatureBandK(r), 1, -273.15) },
-  { header: 'pressure as entered (Pa)', cell: fromReading('pressure.pressurePa') },
-  { header: 'pressure reference', cell: fromReading('pressure.reference') },
-  { header: 'absolute pressure (Pa)', cell: fromResult('reading.absolutePressurePa') },
-  { header: 'absolute pressure (kPa, as shown)', cell: shownFromResult('reading.absolutePressurePa', absoluteBandPa, 1e-3) },
-  { header: 'atmosphere (Pa)', cell: fromResult('reading.atmospherePa') },
-  { header: 'saturation pressure at temperature (Pa)', cell: fromResult('saturation.saturationPressurePa') },
-  { header: 'saturation pressure at temperature (kPa, as shown)', cell: shownFromResult('saturation.saturationPressurePa', bandAt('saturation.pressureBand.contributions.temperatureSensor'), 1e-3) },
-  { header: 'pressure deviation from saturation (Pa)', cell: fromResult('saturation.pressureDeviationPa') },
-  { header: 'pressure deviation from saturation (kPa, as shown)', cell: shownFromResult('saturation.pressureDeviationPa', bandAt('saturation.pressureBand.plusMinus'), 1e-3) },
-  { header: 'pressure band plus/minus (Pa)', cell: fromResult('saturation.pressureBand.plusMinus') },
-  { header: 'net mass (kg)', cell: fromResult('reading.netMassKg') },
-  { header: 'regime', cell: fromResult('inventory.regime') },
-  { header: 'quality (kg/kg)', cell: fromResult('inventory.quality') },
-  { header: 'quality (%, as shown)', cell: shownFromResult('inventory.quality', bandAt('inventoryBands.quality.plusMinus'), 100) },
-  { header: 'liquid mass (kg)', cell: fromResult('inventory.liquidMassKg') },
-  { header: 'liquid mass (kg, as shown)', cell: shownFromResult('inventory.liquidMassKg', bandAt('inventoryBands.liquidMassKg.plusMinus')) },
-  { header: 'vapour mass (kg)', cell: fromResult('inventory.vaporMassKg') },
-  { header: 'liquid level (m)', cell: fromResult('inventory.liquidLevel.levelM') },
-  { header: 'liquid level (m, as shown)', cell: shownFromResult('inventory.liquidLevel.levelM', bandAt('inventoryBands.liquidLevelM.plusMinus')) },
-  {
-    header: 'inputs as typed',
-    cell: (r) =>
-      Object.entries(r.inputs)
-        .map(([name, i]) => `${name}=${i.text} ${i.unit}${i.reference ? ` ${i.reference}` : ''}`)
-        .join('; '),
-  },
-  { header: 'cautions', cell: (r) => r.cautions.map((c) => `${c.signal}: ${c.message}`).join(' | ') },
-  { header: 'note', cell: (r) => r.note },
-  { header: 'corrects check id', cell: (r) => r.corrects },
-  { header: 'correction reason', cell: (r) => r.reason },
-  { header: 'check id', cell: (r) => r.id },
-  { header: 'vessel id', cell: (r) => r.vesselId },
-  { header: 'device id', cell: (r) => r.deviceId },
-  { header: 'seq', cell: (r) => r.seq },
-  { header: 'app version', cell: (r) => r.appVersion },
-  { header: 'formulation', cell: (r) => r.formulationId },
-  { header: 'hash (SHA-256)', cell: (r) => r.hash },
-  // Added after the first release, at the end so every earlier column keeps its place.
-  { header: 'outcome (worst signal word among the findings; none when none)', cell: (r) => outcomeOfRecord(r) },
-  // Rounded beside the SI columns above, as the check screen shows them (its bands: the gauge and
-  // atmosphere on the gauge reading, the scale on the net contents, the liquid mass's band on the
-  // vapour mass, the barometer's on the atmosphere).
-  { header: 'gauge pressure (kPa, as shown)', cell: shownFromResult('reading.gaugePressurePa', absoluteBandPa, 1e-3) },
-  { header: 'atmosphere (kPa, as shown)', cell: shownFromResult('reading.atmospherePa', atmosphereBandPa, 1e-3) },
-  { header: 'net mass (kg, as shown)', cell: shownFromResult('reading.netMassKg', (r) => num(at(r.vessel.spec, ['instruments', 'weightToleranceKg']))) },
-  { header: 'vapour mass (kg, as shown)', cell: shownFromResult('inventory.vaporMassKg', bandAt('inventoryBands.liquidMassKg.plusMinus')) },
-];
-
-/**
- * One CSV cell. Numbers are written as numbers (ECMAScript shortest form, which general CSV
- * readers parse back exactly); text beginning with = + - @, tab or CR gets a leading apostrophe so
- * a spreadsheet shows it instead of running it as a formula (common practice, OWASP "CSV
- * injection"); text with a comma, quote or line break is quoted, quotes doubled (RFC 4180).
- */
-export function csvCell(value: Cell): string {
-  if (value === null) return '';
-  if (typeof value === 'number') return Number.isFinite(value) ? (Object.is(value, -0) ? '0' : String(value)) : '';
-  if (typeof value === 'boolean') return value ? 'true' : 'false';
-  if (value === '') return '';
-  const text = FORMULA_START.test(value) ? `'${value}` : value;
-  return NEEDS_QUOTES.test(text) || text !== text.trim() ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-const FORMULA_START = /^[=+\-@\t\r]/;
-const NEEDS_QUOTES = /[",\r\n]/;
-
-/** One row of cells, without its line end. */
-function csvRow(r: CheckRecord): string {
-  let row = '';
-  for (let i = 0; i < CSV_COLUMNS.length; i += 1) row += (i > 0 ? ',' : '') + csvCell(CSV_COLUMNS[i]!.cell(r));
-  return row;
-}
-
-/**
- * The UTF-8 byte-order mark the file starts with: without it some spreadsheets read the file as
- * their local 8-bit code page and garble "°" and "−" (common practice).
- */
-export const CSV_BOM = '\uFEFF';
-
-/** CSV text (byte-order mark, header, one row per record) for records already in hand. */
-export function csvFromChecks(records: Iterable<CheckRecord>): string {
-  const rows = [CSV_BOM + CSV_COLUMNS.map((c) => csvCell(c.header)).join(',')];
-  for (const r of records) rows.push(csvRow(r));
-  return rows.join('\r\n') + '\r\n';
-}
+export { CSV_BOM, CSV_COLUMNS, csvCell, csvFromChecks, roundedAsShown } from './csv-rows.ts';
 
 const PAGE = 1000;
 
@@ -217,9 +44,9 @@ export async function exportCsvParts(options: CsvOptions = {}): Promise<string[]
   const filter: CheckFilter = { ...options.filter, ...(options.vesselId !== undefined ? { vesselId: options.vesselId } : {}) };
   const window = windowOf(filter);
   const narrowed = window.match !== undefined || Number.isFinite(window.fromMs) || Number.isFinite(window.toMs);
+  if (!narrowed && window.vesselId === null) return [csvFromChecks([]), ...(await wholeLogPieces(options))];
   const tx = (await getDb()).transaction(LOG_STORES);
-  const pieces = narrowed ? await selectionPieces(tx, window, options)
-    : window.vesselId === null ? await wholeLogPieces(tx, options) : await vesselPieces(tx, window.vesselId, options);
+  const pieces = narrowed ? await selectionPieces(tx, window, options) : await vesselPieces(tx, window.vesselId!, options);
   await tx.done;
   return [csvFromChecks([]), ...pieces];
 }
@@ -238,8 +65,50 @@ function piecesOf(rows: readonly string[]): string[] {
  * walk), each record parsed once and its row put straight on its line, and each piece of lines
  * joined as soon as it is full, so the rows written are held as a few large strings and nothing is
  * sorted beside them (bench/review-scale.bench-run.ts measured the ways; src/store/README.md).
+ * The reading, parsing and writing of rows runs on the log workers where they can be made
+ * (log-worker.ts: whole devices each, both cores), this thread only putting rows on their lines.
  */
-async function wholeLogPieces(tx: LogReadTx, options: LongWorkOptions): Promise<string[]> {
+async function wholeLogPieces(options: LongWorkOptions): Promise<string[]> {
+  const db = await getDb();
+  const table = await lineTable(db.transaction(LOG_STORES), options);
+  const onWorkers = await onLogWorkers(db, 'csv-rows', options.signal, (news) => {
+    if (news.type !== 'rows') return;
+    for (const b of news.blocks) {
+      for (let i = 0; i < b.rows.length; i += 1) if (!table.place(b.deviceId, b.seqs[i]!, b.ids[i]!, b.rows[i]!)) return 'stop';
+    }
+    table.progress();
+  });
+  if (onWorkers) return table.pieces();
+  // Here instead, from one snapshot (the table again, as the workers may have stopped half-way).
+  const tx = db.transaction(LOG_STORES);
+  const here = await lineTable(tx, options);
+  for await (const page of blockPages(tx)) {
+    throwIfAborted(options.signal);
+    for (const block of page) {
+      for (let i = 0; i < block.texts.length; i += 1) {
+        const r = JSON.parse(block.texts[i]!) as LogRecord;
+        // Records of other kinds are not checks: they have no month row and no line here.
+        if (!isCheckRecord(r)) continue;
+        if (!here.place(block.deviceId, block.seqs[i]!, r.id, csvRow(r))) return sortedByTime(tx, options.signal);
+      }
+    }
+    here.progress();
+  }
+  return here.pieces();
+}
+
+/** The whole log's lines: where each check's row goes, the rows placed so far, the pieces joined. */
+interface LineTable {
+  /** Puts a check's row on its line; false for a check the month buckets do not list (a hand-edited store) or one placed twice. */
+  place(deviceId: string, seq: number, id: string, row: string): boolean;
+  /** Reports rows placed so far to options.onProgress. */
+  progress(): void;
+  /** Every piece, joined (a row the buckets list but no block holds leaves no line). */
+  pieces(): string[];
+}
+
+/** The line table of the whole log, its order read from the month buckets in `tx`. */
+async function lineTable(tx: LogReadTx, options: LongWorkOptions): Promise<LineTable> {
   const order: MonthRow[] = [];
   for (const bucket of await tx.objectStore('logMonthParts').getAll()) for (const r of bucket.rows) order.push(r);
   order.sort(compareRows);
@@ -258,26 +127,20 @@ async function wholeLogPieces(tx: LogReadTx, options: LongWorkOptions): Promise<
     return out.length === 0 ? '' : out.join('\r\n') + '\r\n';
   };
   let done = 0;
-  for await (const page of blockPages(tx)) {
-    throwIfAborted(options.signal);
-    for (const block of page) {
-      for (let i = 0; i < block.texts.length; i += 1) {
-        const r = JSON.parse(block.texts[i]!) as LogRecord;
-        // Records of other kinds are not checks: they have no month row and no line here.
-        if (!isCheckRecord(r)) continue;
-        const line = lineOf(block.deviceId, block.seqs[i]!);
-        const p = Math.floor(line / ROWS_PER_PART);
-        // A stored record the buckets do not list (only a hand-edited store has one).
-        if (line < 0 || order[line]![1] !== r.id || pieces[p] !== null || lines[line] !== undefined) return sortedByTime(tx, options.signal);
-        lines[line] = csvRow(r);
-        done += 1;
-        filled[p] = filled[p]! + 1;
-        if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
-      }
-    }
-    options.onProgress?.(done, total);
-  }
-  return pieces.map((piece, p) => piece ?? joinPiece(p)).filter((piece) => piece !== '');
+  return {
+    place(deviceId, seq, id, row) {
+      const line = lineOf(deviceId, seq);
+      const p = Math.floor(line / ROWS_PER_PART);
+      if (line < 0 || order[line]![1] !== id || pieces[p] !== null || lines[line] !== undefined) return false;
+      lines[line] = row;
+      done += 1;
+      filled[p] = filled[p]! + 1;
+      if (filled[p] === Math.min(ROWS_PER_PART, total - p * ROWS_PER_PART)) pieces[p] = joinPiece(p);
+      return true;
+    },
+    progress: () => options.onProgress?.(done, total),
+    pieces: () => pieces.map((piece, p) => piece ?? joinPiece(p)).filter((piece) => piece !== ''),
+  };
 }
 
 /** The line of each (deviceId, seq) in `order`, or −1. */

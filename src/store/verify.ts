@@ -1,9 +1,9 @@
 // Chain verification over the stored log, a page of blocks at a time (a large log never sits in
 // memory), then each device's signatures (signatures.ts). Where workers can be made, the devices
-// are shared between two verifying workers that read the blocks themselves (verify-worker.ts);
+// are shared between two log workers that read the blocks themselves (log-worker.ts);
 // otherwise (Node, a refused worker) this thread reads and a hashing worker, or this thread, hashes.
 import type { IDBPDatabase } from 'idb';
-import { getDb, storeName } from './connection.ts';
+import { getDb } from './connection.ts';
 import { readPublicKeys } from './device-keys.ts';
 import { hashTextsAside } from './hash-texts.ts';
 import { ChainVerifier, throwIfAborted, type ChainStatus } from './integrity.ts';
@@ -13,7 +13,7 @@ import type { LongWorkOptions } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 import { signatureCoverage, verifyingKey, type SignatureStatus, type VerifyingKey } from './signatures.ts';
 import { judgePage, preparePage, type PreparedPage, type Signed } from './verify-pages.ts';
-import { StoreError } from './errors.ts';
+import { onLogWorkers } from './log-workers.ts';
 
 /** A device's chain as verifyStoredChains reports it: its links, and how far its signatures vouch for it. */
 export type StoredChainStatus = ChainStatus & { signature: SignatureStatus };
@@ -102,72 +102,21 @@ async function walkHere(db: IDBPDatabase<TanksideDB>, total: number, options: Lo
   return { chains: verifier.results(), signed };
 }
 
-/** Verifying workers at most (a small phone has two cores). */
-const WORKERS = 2;
-/** Blocks per page a verifying worker reads (about 100 records each). */
-const WORKER_PAGE = 40;
-
 /**
- * The walk on verifying workers, each given whole devices of about the same number of blocks (one
- * device's chain is judged by one worker, in order). Null where no worker can be made or one fails
- * before it reports, or when a record filed under one worker's device names another's (only a
- * hand-edited store has one): then the walk runs here instead, and says exactly what it finds.
+ * The walk on the log workers (log-workers.ts). Null where no worker can be made or one fails, or
+ * when a record filed under one worker's device names another's (only a hand-edited store has
+ * one): then the walk runs here instead, and says exactly what it finds.
  */
 async function walkOnWorkers(db: IDBPDatabase<TanksideDB>, total: number, options: LongWorkOptions): Promise<Walked | null> {
-  if (typeof Worker === 'undefined') return null;
-  const keys = await db.getAllKeys('logBlocks');
-  if (keys.length === 0) return null;
-  const groups: [lower: [string, number], upper: [string, number]][] = [];
-  let start = 0;
-  for (let i = 0; i < keys.length; i += 1) {
-    const last = i === keys.length - 1;
-    const deviceEnds = last || keys[i + 1]![0] !== keys[i]![0];
-    if (deviceEnds && (last || (groups.length < WORKERS - 1 && i + 1 >= (keys.length * (groups.length + 1)) / WORKERS))) {
-      groups.push([keys[start]!, keys[i]!]);
-      start = i + 1;
-    }
-  }
-  const workers: Worker[] = [];
-  const stopAll = () => workers.forEach((w) => w.terminate());
-  const doneOf = new Array<number>(groups.length).fill(0);
-  try {
-    const results = await Promise.all(groups.map(([lower, upper], g) => new Promise<Walked | null>((resolve, reject) => {
-      let w: Worker;
-      try {
-        w = new Worker(new URL('./verify-worker.ts', import.meta.url));
-      } catch {
-        resolve(null);
-        return;
-      }
-      workers.push(w);
-      const onAbort = () => reject(new StoreError('cancelled', 'Cancelled; nothing was changed.'));
-      options.signal?.addEventListener('abort', onAbort, { once: true });
-      w.onmessage = (e: MessageEvent<{ type: 'progress'; done: number } | { type: 'done'; chains: ChainStatus[]; signed: [string, Signed][] } | { type: 'failed'; message: string }>) => {
-        const m = e.data;
-        if (m.type === 'progress') {
-          doneOf[g] = m.done;
-          options.onProgress?.(doneOf.reduce((a, b) => a + b, 0), total);
-          return;
-        }
-        options.signal?.removeEventListener('abort', onAbort);
-        if (m.type === 'done') resolve({ chains: m.chains, signed: new Map(m.signed) });
-        else resolve(null);
-      };
-      w.onerror = (e) => {
-        e.preventDefault();
-        options.signal?.removeEventListener('abort', onAbort);
-        resolve(null);
-      };
-      w.postMessage({ dbName: storeName(), lower, upper, page: WORKER_PAGE });
-    })));
-    throwIfAborted(options.signal);
-    if (results.some((r) => r === null)) return null;
-    const chains = results.flatMap((r) => r!.chains);
-    const devices = new Set(chains.map((c) => c.deviceId));
-    if (devices.size !== chains.length) return null;
-    chains.sort((a, b) => (a.deviceId < b.deviceId ? -1 : a.deviceId > b.deviceId ? 1 : 0));
-    return { chains, signed: new Map(results.flatMap((r) => [...r!.signed])) };
-  } finally {
-    stopAll();
-  }
+  const doneOf: number[] = [];
+  const results = await onLogWorkers(db, 'verify', options.signal, (news, g) => {
+    if (news.type !== 'progress') return;
+    doneOf[g] = news.done;
+    options.onProgress?.(doneOf.reduce((a, b) => a + (b ?? 0), 0), total);
+  });
+  if (!results) return null;
+  const chains = results.flatMap((r) => r.chains ?? []);
+  if (new Set(chains.map((c) => c.deviceId)).size !== chains.length) return null;
+  chains.sort((a, b) => (a.deviceId < b.deviceId ? -1 : a.deviceId > b.deviceId ? 1 : 0));
+  return { chains, signed: new Map(results.flatMap((r) => r.signed ?? [])) };
 }

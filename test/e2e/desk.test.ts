@@ -5,7 +5,7 @@
 // the phone list's order picker over the whole match. Waits only on the app's
 // own states (data-overview-state, data-review-table-state, the import's result).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
@@ -13,6 +13,8 @@ import { DIST, PHONE, launch, screenshot, startServer, tempProfile, verifyChains
 import { backupText, generatedChecks, generatedVessels } from '../../bench/generated-log.ts';
 import { checkDue, type CheckDueState } from '../../src/core/check/check-due.ts';
 import { keyFiguresOf, outcomeOfRecord } from '../../src/store/facts.ts';
+import { csvFromChecks } from '../../src/store/csv-rows.ts';
+import { canonicalJson } from '../../src/store/integrity.ts';
 import type { CheckRecord, VesselRecord } from '../../src/store/index.ts';
 
 const HOUR_S = 3_600;
@@ -269,6 +271,24 @@ describe("the supervisor's desk", () => {
       await edit(true);
       const whole = await verifyChainsOnScreen(page);
       expect(whole.lines.map((l) => l.chain)).toEqual(['ok', 'ok']);
+    } finally {
+      await ctx.close();
+    }
+  });
+
+  it('at 1440×900 the whole log\'s CSV, written on the workers, is byte for byte the CSV of the 10,000 checks', async () => {
+    const ctx = await launch(profile.dir);
+    try {
+      const page = ctx.pages()[0] ?? (await ctx.newPage());
+      await page.setViewportSize({ width: 1440, height: 900 });
+      await page.goto(`${server.url}#/review`);
+      await page.locator('[data-review-table-state="ready"]').waitFor();
+      const [dl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download CSV' }).click()]);
+      const path = join(files, 'log.csv');
+      await dl.saveAs(path);
+      const oldest = [...checks].sort((a, b) => a.timeMs - b.timeMs || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+      // As stored: each record's canonical JSON (keys sorted, so "inputs as typed" lists pressure first).
+      expect(readFileSync(path, 'utf8')).toBe(csvFromChecks(oldest.map((c) => JSON.parse(canonicalJson(c)) as CheckRecord)));
     } finally {
       await ctx.close();
     }
