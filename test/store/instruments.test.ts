@@ -108,6 +108,18 @@ describe('instrument register', () => {
     await expectStoreError(fitInstrument(crypto.randomUUID(), 'temperature', t.id), 'vesselId', 'not-found');
     expect(await fittingsOfVessel(vessel.id)).toEqual([]);
   });
+
+  it('a barometer takes the atmosphere place and a weighing system the weight place, neither the other\'s', async () => {
+    const vessel = await addVessel({ tag: 'V-3', spec: SPEC });
+    const baro = await addInstrument({ spec: { tag: 'PB-1', kind: 'barometer', range: { low: 80e3, high: 110e3 }, tolerance: { kind: 'stated', plusMinus: 50 } }, displayUnit: 'hPa' });
+    const scale = await addInstrument({ spec: { tag: 'WI-1', kind: 'weighing-system', range: { low: 0, high: 5000 }, tolerance: { kind: 'percent-of-span', percentOfSpan: 0.1 } }, displayUnit: 'kg' });
+    await expectStoreError(fitInstrument(vessel.id, 'weight', baro.id), 'role');
+    await expectStoreError(fitInstrument(vessel.id, 'atmosphere', scale.id), 'role');
+    await fitInstrument(vessel.id, 'atmosphere', baro.id);
+    await fitInstrument(vessel.id, 'weight', scale.id);
+    const fitted = await fittedInstruments(vessel.id);
+    expect([fitted.atmosphere?.instrument.tag, fitted.weight?.instrument.tag]).toEqual(['PB-1', 'WI-1']);
+  });
 });
 
 describe('a new vessel joins the register', () => {
