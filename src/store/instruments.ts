@@ -92,12 +92,43 @@ export async function updateInstrument(id: string, patch: { spec?: InstrumentSpe
   return record;
 }
 
-/** Retires an instrument (scrapped, sent away): it stays in the register with its history. @throws StoreError('not-found' | 'write-failed') */
+/**
+ * Retires an instrument (scrapped, sent away): it stays in the register with its history, and in
+ * the same transaction it is taken off every vessel place it holds now (a fitting to none, reason
+ * "retired"), so no later check rests on it. Already retired: returned as it is.
+ * @throws StoreError('not-found' | 'quota-exceeded' | 'write-failed')
+ */
 export async function retireInstrument(id: string): Promise<InstrumentRecord> {
   const existing = await requireInstrument(id);
   if (existing.retired) return existing;
-  const record = { ...existing, retired: true, updatedAt: now() };
-  await put('instruments', record, `Retiring instrument ${existing.tag}`);
+  const at = new Date();
+  const stamp = now();
+  const record = { ...existing, retired: true, updatedAt: stamp };
+  const db = await getDb();
+  const tx = db.transaction(['instruments', 'fittings'], 'readwrite', STRICT);
+  const fittings = tx.objectStore('fittings');
+  // Awaited below; caught here too so a failed read before then leaves no unhandled rejection.
+  tx.done.catch(() => undefined);
+  try {
+    const own = await fittings.index('by-instrument').getAll(id);
+    const vessels = [...new Set(own.map((f) => f.vesselId))];
+    // IndexedDB reads only between here and the writes: the transaction stays alive.
+    const rows = await Promise.all(vessels.map((v) => fittings.index('by-vessel').getAll(IDBKeyRange.bound([v, -Infinity, ''], [v, Infinity, '\uffff']))));
+    const writes: Promise<unknown>[] = [tx.objectStore('instruments').put(record)];
+    rows.forEach((vesselRows, i) => {
+      for (const [role, f] of Object.entries(fittedAt(vesselRows, at.getTime()))) {
+        if (f?.instrumentId !== id) continue;
+        const off: FittingRecord = {
+          id: crypto.randomUUID(), vesselId: vessels[i]!, role: role as InstrumentRole, instrumentId: null,
+          from: formatIsoWithOffset(at), fromMs: at.getTime(), reason: 'retired', enteredAt: stamp,
+        };
+        writes.push(fittings.put(off));
+      }
+    });
+    await Promise.all([...writes, tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, `Retiring instrument ${existing.tag}`);
+  }
   return record;
 }
 

@@ -101,6 +101,23 @@ describe('instrument register', () => {
     expect(await fittingsOfVessel(vessel.id)).toHaveLength(4);
   });
 
+  it('retiring an instrument takes it off the places it holds now, in the same save; its history and the vessel\'s stay', async () => {
+    const vessel = await addVessel({ tag: 'V-4', spec: SPEC });
+    const other = await addVessel({ tag: 'V-5', spec: SPEC });
+    const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
+    const b = await addInstrument({ spec: { ...GAUGE, tag: 'PI-102' }, displayUnit: 'kPa' });
+    await fitInstrument(other.id, 'pressure', g.id, { from: day('2026-01-01') });
+    await fitInstrument(other.id, 'pressure', b.id, { from: day('2026-02-01'), reason: 'swapped' });
+    await fitInstrument(vessel.id, 'pressure', g.id, { from: day('2026-03-01') });
+    const retired = await retireInstrument(g.id);
+    expect(retired.retired).toBe(true);
+    expect((await fittedInstruments(vessel.id)).pressure).toBeUndefined();
+    expect((await fittedInstruments(other.id)).pressure?.instrument.tag).toBe('PI-102');
+    expect((await fittingsOfVessel(vessel.id)).map((f) => [f.instrumentId, f.reason])).toEqual([[g.id, ''], [null, 'retired']]);
+    expect(await fittingsOfVessel(other.id)).toHaveLength(2);
+    expect((await getInstrument(g.id))?.retired).toBe(true);
+  });
+
   it('an instrument of the wrong kind cannot take a role; an unknown vessel is not found', async () => {
     const vessel = await addVessel({ tag: 'V-2', spec: SPEC });
     const t = await addInstrument({ spec: RTD, displayUnit: 'degC' });

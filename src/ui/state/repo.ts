@@ -217,3 +217,4 @@ export async function registerCsvFile(): Promise<{ name: string; blob: Blob }> {
   const { exportRegisterCsv } = await import('../../store/transfer.ts');
   return { name: `tankside-instruments-${stamp}.csv`, blob: new Blob([await exportRegisterCsv()], { type: 'text/csv' }) };
 }
+
