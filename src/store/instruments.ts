@@ -21,6 +21,12 @@ const STRICT = { durability: 'strict' } as const;
 const FAMILY = { 'pressure-gauge': 'Pa', 'pressure-transmitter': 'Pa', barometer: 'Pa', thermometer: 'K', rtd: 'K', 'weighing-system': 'kg' } as const;
 
 const now = () => formatIsoWithOffset(new Date(), undefined, true);
+/**
+ * A date kept beside its ms (calibration, due, fitting times): with its milliseconds when it has
+ * any, so the text and the ms agree (the backup's validator and plant sync's pull hold them equal);
+ * a whole second stays as it was written before.
+ */
+const exactIso = (d: Date) => formatIsoWithOffset(d, undefined, d.getTime() % 1000 !== 0);
 
 function requireSpec(s: InstrumentSpec): InstrumentSpec {
   requireJsonObject('spec', s);
@@ -120,7 +126,7 @@ export async function retireInstrument(id: string): Promise<InstrumentRecord> {
         if (f?.instrumentId !== id) continue;
         const off: FittingRecord = {
           id: crypto.randomUUID(), vesselId: vessels[i]!, role: role as InstrumentRole, instrumentId: null,
-          from: formatIsoWithOffset(at), fromMs: at.getTime(), reason: 'retired', enteredAt: stamp,
+          from: exactIso(at), fromMs: at.getTime(), reason: 'retired', enteredAt: stamp,
         };
         writes.push(fittings.put(off));
       }
@@ -164,12 +170,12 @@ export async function addCalibration(input: NewCalibration): Promise<Calibration
   const entry: CalibrationEntry = {
     id: crypto.randomUUID(),
     instrumentId: instrument.id,
-    time: formatIsoWithOffset(at),
+    time: exactIso(at),
     timeMs: at.getTime(),
     asFoundError: requireFinite('as-found error', input.asFoundError, span),
     asLeftError: input.asLeftError === undefined ? null : requireFinite('as-left error', input.asLeftError, span),
     referenceValue: input.referenceValue === undefined ? null : requireFinite('reference value', input.referenceValue, Number.MAX_VALUE),
-    nextDue: due === null ? null : formatIsoWithOffset(due),
+    nextDue: due === null ? null : exactIso(due),
     nextDueMs: due === null ? null : due.getTime(),
     who: requireText('calibrated by', typeof input.who === 'string' ? input.who.trim() : input.who, 1, INSTRUMENT_TEXT_LIMITS.who),
     certificate: requireText('certificate', (input.certificate ?? '').trim(), 0, INSTRUMENT_TEXT_LIMITS.certificate),
@@ -222,7 +228,7 @@ export async function fitInstrument(vesselId: string, role: InstrumentRole, inst
   }
   const from = requireDate('from', options.from ?? new Date());
   const record: FittingRecord = {
-    id: crypto.randomUUID(), vesselId, role, instrumentId, from: formatIsoWithOffset(from), fromMs: from.getTime(),
+    id: crypto.randomUUID(), vesselId, role, instrumentId, from: exactIso(from), fromMs: from.getTime(),
     reason: requireText('reason', options.reason ?? '', 0, INSTRUMENT_TEXT_LIMITS.reason), enteredAt: now(),
   };
   await put('fittings', record, 'Saving the fitting');

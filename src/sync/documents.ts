@@ -11,8 +11,13 @@
 //   needs no place in the text, and records saved before their device signed (or by an older
 //   version of the app) have none.
 // tankside-plant: one document per version of a vessel definition and author,
-//   _id "vessel:<vesselId>:<version, 6 digits>:<author>", { type: "vessel", vesselId, version, author, text }.
+//   _id "vessel:<vesselId>:<version, 6 digits>:<author>", { type: "vessel", vesselId, version, author, text };
+//   and the instrument register: one document per instrument edit and author,
+//   _id "instrument:<id>:<revision, 15 digits>:<author>" (revision: the edit's time, ms), and one per
+//   calibration or fitting, _id "calibration:<id>" / "fitting:<id>" (append-only: written once),
+//   each { type, recordId, revision, author, text }, text the record's canonical JSON.
 import type { OwnRecord, VesselVersion } from '../store/transfer.ts';
+import type { RegisterDocType, RegisterItem } from '../store/register-sync.ts';
 
 export const CHECKS_DB = 'tankside-checks';
 export const PLANT_DB = 'tankside-plant';
@@ -43,6 +48,45 @@ export interface VesselDoc {
   version: number;
   author: string;
   text: string;
+}
+
+/** A register record as the server holds it. */
+export interface RegisterDoc {
+  _id: string;
+  _rev?: string;
+  type: RegisterDocType;
+  recordId: string;
+  /** An instrument's edit time, ms; 0 for calibrations and fittings. */
+  revision: number;
+  author: string;
+  text: string;
+}
+
+export const REGISTER_DOC_TYPES: readonly RegisterDocType[] = ['instrument', 'calibration', 'fitting'];
+
+export function registerDocId(type: RegisterDocType, recordId: string, revision: number, author: string): string {
+  return type === 'instrument' ? `instrument:${recordId}:${String(revision).padStart(15, '0')}:${author}` : `${type}:${recordId}`;
+}
+
+/** The document for one register record published from this device. */
+export function registerDoc(item: RegisterItem, author: string): RegisterDoc {
+  return { _id: registerDocId(item.type, item.recordId, item.revision, author), type: item.type, recordId: item.recordId, revision: item.revision, author, text: item.text };
+}
+
+/** As envelopeProblem, for a register record: its id made of its members, its text's id and (an instrument) edit time equal to them. */
+export function registerEnvelopeProblem(doc: RegisterDoc): string | null {
+  if (typeof doc.text !== 'string') return 'no text';
+  const id = registerDocId(doc.type, doc.recordId, doc.revision, doc.author);
+  if (doc._id !== id) return `_id is not ${id}`;
+  let record: Record<string, unknown>;
+  try {
+    record = JSON.parse(doc.text) as Record<string, unknown>;
+  } catch {
+    return 'text is not JSON';
+  }
+  if (record?.['id'] !== doc.recordId) return 'recordId differs from the text';
+  if (doc.type === 'instrument' && Date.parse(String(record['updatedAt'])) !== doc.revision) return 'revision differs from the instrument\'s edit time in the text';
+  return null;
 }
 
 export function recordDocId(deviceId: string, seq: number): string {

@@ -3,8 +3,9 @@
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
 import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyRegisterRecords } from '../store/register-sync.ts';
 import { answerError, type Couch } from './couch.ts';
-import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
+import { CHECKS_DB, envelopeProblem, PLANT_DB, REGISTER_DOC_TYPES, registerEnvelopeProblem, vesselEnvelopeProblem, type RecordDoc, type RegisterDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
 
 /**
@@ -156,21 +157,30 @@ export async function pullChecks(
 
 /**
  * A device's pull of the plant inventory (tankside-plant): the newest version of each vessel is
- * applied, clashing edits are reported (PlantReport.conflicts), never merged.
+ * applied, clashing edits are reported (PlantReport.conflicts), never merged; the instrument
+ * register's documents are merged as a backup's register is (`register`: added, updated).
  */
 export async function pullPlant(
   couch: Couch,
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined } = {},
-): Promise<PlantReport & { read: number }> {
-  const result: PlantReport & { read: number } = { read: 0, applied: [], skipped: 0, refused: [], conflicts: [] };
+): Promise<PlantReport & { read: number; register: { added: number; updated: number } }> {
+  const result: PlantReport & { read: number; register: { added: number; updated: number } } = {
+    read: 0, applied: [], skipped: 0, refused: [], conflicts: [], register: { added: 0, updated: 0 },
+  };
   const conflicts = new Map<string, PlantReport['conflicts'][number]>();
-  result.read = await pullFeed<VesselDoc>(couch, PLANT_DB, async (docs) => {
+  result.read = await pullFeed<VesselDoc | RegisterDoc>(couch, PLANT_DB, async (docs) => {
     const versions: { label: string; text: string }[] = [];
+    const register: { label: string; type: RegisterDoc['type']; text: string }[] = [];
     for (const doc of docs) {
-      const problem = doc.type === 'vessel' ? vesselEnvelopeProblem(doc) : null;
-      if (doc.type !== 'vessel') continue; // other kinds of plant document, from a later version
-      if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
-      else versions.push({ label: doc._id, text: doc.text });
+      if (doc.type === 'vessel') {
+        const problem = vesselEnvelopeProblem(doc);
+        if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+        else versions.push({ label: doc._id, text: doc.text });
+      } else if ((REGISTER_DOC_TYPES as readonly string[]).includes(doc.type)) {
+        const problem = registerEnvelopeProblem(doc);
+        if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+        else register.push({ label: doc._id, type: doc.type, text: doc.text });
+      } // other kinds of plant document, from a later version: left for it
     }
     const report = await applyVesselVersions(versions);
     result.applied.push(...report.applied);
@@ -178,6 +188,12 @@ export async function pullPlant(
     result.skipped += report.skipped;
     result.refused.push(...report.refused);
     for (const c of report.conflicts) conflicts.set(c.vesselId, c); // the latest word on each vessel
+    if (register.length > 0) {
+      const r = await applyRegisterRecords(register);
+      result.register.added += r.added;
+      result.register.updated += r.updated;
+      result.refused.push(...r.refused);
+    }
   }, options);
   result.conflicts = [...conflicts.values()];
   return result;

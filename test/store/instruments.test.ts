@@ -56,6 +56,18 @@ describe('instrument register', () => {
     expect((await listRegister()).map((h) => [h.instrument.tag, h.calibrations.length])).toEqual([['PI-101', 2]]);
   });
 
+  it('a calibration or fitting at a time with milliseconds keeps them in its text, so text and ms agree (the backup and plant sync check it)', async () => {
+    const vessel = await addVessel({ tag: 'V-MS', spec: SPEC });
+    const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
+    const at = new Date(Date.parse('2026-11-30T08:15:42.137Z'));
+    const c = await addCalibration({ instrumentId: g.id, calibratedAt: at, asFoundError: 100, who: 'Test lab', enteredUnit: 'kPa', nextDueAt: new Date(at.getTime() + 1000) });
+    const f = await fitInstrument(vessel.id, 'pressure', g.id, { from: at });
+    expect([Date.parse(c.time), Date.parse(c.nextDue!), Date.parse(f.from)]).toEqual([c.timeMs, c.nextDueMs, f.fromMs]);
+    expect(c.timeMs).toBe(at.getTime());
+    const whole = await addCalibration({ instrumentId: g.id, calibratedAt: day('2026-11-01'), asFoundError: 100, who: 'Test lab', enteredUnit: 'kPa' });
+    expect(whole.time).not.toContain('.');
+  });
+
   it('bad input names the field and saves nothing', async () => {
     const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
     const base = { instrumentId: g.id, calibratedAt: day('2026-06-01'), asFoundError: 100, who: 'Test Lab', enteredUnit: 'kPa' };
