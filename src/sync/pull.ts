@@ -2,9 +2,9 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport, type PulledRecord } from '../store/transfer.ts';
 import { answerError, type Couch } from './couch.ts';
-import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
+import { CHECKS_DB, PLANT_DB, readEnvelope, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
 
 /**
@@ -114,18 +114,19 @@ export async function pullChecks(
   const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [], keysLearnt: [] };
   const touched = new Map<string, { fromSeq: number; toSeq: number }>();
   result.read = await pullFeed<RecordDoc>(couch, CHECKS_DB, async (docs) => {
-    const records: { label: string; text: string; signature?: string }[] = [];
+    const records: PulledRecord[] = [];
     const keys: { label: string; text: string }[] = [];
     const seqOf = new Map<string, RecordDoc>();
     for (const doc of docs) {
-      const problem = envelopeProblem(doc);
-      if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+      const { problem, parsed } = readEnvelope(doc);
+      if (problem !== null) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
       else if (doc.seq === 0) {
         result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
         keys.push({ label: doc._id, text: doc.text });
       } else if (doc.type !== 'check' && !isKnownKind(doc.type)) result.unknownKinds += 1;
       else {
-        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature } : { label: doc._id, text: doc.text });
+        // The text was parsed for its envelope: the merge takes that, and checks it against the text.
+        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature, parsed } : { label: doc._id, text: doc.text, parsed });
         seqOf.set(doc.id!, doc);
       }
     }
