@@ -114,30 +114,32 @@ export function vesselDoc(entry: VesselVersion, text: string): VesselDoc {
 }
 
 /**
- * Why a pulled record document cannot be taken (null when its envelope is sound): the server's
- * rules should have refused it, so one that gets here was written past them (by an administrator,
- * or by a server without the rules) and is reported, not stored.
+ * Why a pulled record document cannot be taken (`problem`, null when its envelope is sound), and
+ * its text as parsed here (`parsed`), which the store's merge takes instead of parsing the text
+ * again. The server's rules should have refused a bad envelope, so one that gets here was written
+ * past them (by an administrator, or by a server without the rules) and is reported, not stored.
  */
-export function envelopeProblem(doc: RecordDoc): string | null {
-  if (typeof doc.text !== 'string') return 'no text';
-  if (typeof doc.deviceId !== 'string' || !Number.isSafeInteger(doc.seq)) return 'no deviceId or seq';
-  if (doc._id !== recordDocId(doc.deviceId, doc.seq)) return `_id is not ${recordDocId(doc.deviceId, doc.seq)}`;
+export function readEnvelope(doc: RecordDoc): { problem: string; parsed?: undefined } | { problem: null; parsed: Record<string, unknown> } {
+  const refuse = (problem: string) => ({ problem });
+  if (typeof doc.text !== 'string') return refuse('no text');
+  if (typeof doc.deviceId !== 'string' || !Number.isSafeInteger(doc.seq)) return refuse('no deviceId or seq');
+  if (doc._id !== recordDocId(doc.deviceId, doc.seq)) return refuse(`_id is not ${recordDocId(doc.deviceId, doc.seq)}`);
   if (doc.signature !== undefined && (typeof doc.signature !== 'string' || !SIGNATURE_PATTERN.test(doc.signature) || doc.seq === 0)) {
-    return 'signature is not 86 base64url characters on a record of seq 1 or more';
+    return refuse('signature is not 86 base64url characters on a record of seq 1 or more');
   }
   let record: Record<string, unknown>;
   try {
     record = JSON.parse(doc.text) as Record<string, unknown>;
   } catch {
-    return 'text is not JSON';
+    return refuse('text is not JSON');
   }
-  if (typeof record !== 'object' || record === null) return 'text is not a JSON object';
-  if (record['deviceId'] !== doc.deviceId || record['seq'] !== doc.seq) return 'deviceId or seq differ from the text';
-  if (doc.seq === 0) return doc.type === 'device-key' ? null : 'seq 0 is not a device-key record';
-  if (record['id'] !== doc.id || record['hash'] !== doc.hash) return 'id or hash differ from the text';
+  if (typeof record !== 'object' || record === null) return refuse('text is not a JSON object');
+  if (record['deviceId'] !== doc.deviceId || record['seq'] !== doc.seq) return refuse('deviceId or seq differ from the text');
+  if (doc.seq === 0) return doc.type === 'device-key' ? { problem: null, parsed: record } : refuse('seq 0 is not a device-key record');
+  if (record['id'] !== doc.id || record['hash'] !== doc.hash) return refuse('id or hash differ from the text');
   const kind = record['kind'] === undefined ? 'check' : record['kind'];
-  if (kind !== doc.type) return `type ${doc.type} differs from the record's kind ${String(kind)}`;
-  return null;
+  if (kind !== doc.type) return refuse(`type ${doc.type} differs from the record's kind ${String(kind)}`);
+  return { problem: null, parsed: record };
 }
 
 /** As envelopeProblem, for a vessel version. */
