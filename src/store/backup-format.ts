@@ -1,6 +1,6 @@
 // The "tankside-backup" file as a reader takes it (BACKUP-FORMAT.md is the reference): its shapes,
 // its limits, and validation that refuses the whole file at the first field that breaks a rule.
-// Reads format versions 1, 2 and 3; writes (backup.ts) BACKUP_FORMAT_VERSION.
+// Reads format versions 1 to 4; writes (backup.ts) BACKUP_FORMAT_VERSION.
 import { StoreError } from './errors.ts';
 import { requireCautions, requireInputs, TEXT_LIMITS } from './checks.ts';
 import { breathe, throwIfAborted } from './integrity.ts';
@@ -13,10 +13,15 @@ import { EMPTY_REGISTER, type BackupRegister } from './backup-register.ts';
 import { INSTRUMENT_KIND_IDS, INSTRUMENT_ROLES, INSTRUMENT_TEXT_LIMITS, type CalibrationEntry, type FittingRecord, type InstrumentRecord } from './instrument-records.ts';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-/** The version this app writes; it reads this one and every one before it. 3: the instrument register (renumbered at merge if another room took 3 first). */
-export const BACKUP_FORMAT_VERSION = 3;
+/**
+ * The version this app writes; it reads this one and every one before it. 3: the instrument
+ * register; 4: a fitting's role may be `atmosphere` (the barometer's place), which a version-3
+ * reader refuses, so such a reader now says the file is newer instead (renumbered at merge if
+ * another room took 4 first).
+ */
+export const BACKUP_FORMAT_VERSION = 4;
 /** The first version with the instrument register's lists. */
-export const REGISTER_FORMAT_VERSION = BACKUP_FORMAT_VERSION;
+export const REGISTER_FORMAT_VERSION = 3;
 /** Refused before parsing: a file longer than maxChars (UTF-16 code units), or holding more records. */
 export interface BackupLimits {
   maxChars: number;

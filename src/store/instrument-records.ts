@@ -13,8 +13,8 @@ export const INSTRUMENT_KIND_IDS = [
 /** Text limits of the register's fields, characters. */
 export const INSTRUMENT_TEXT_LIMITS = { tag: 64, description: 2000, displayUnit: 16, who: 120, certificate: 120, note: 500, reason: 500 } as const;
 
-/** The place an instrument takes on a vessel: its gauge (or transmitter), its thermometer (or RTD), its scale. */
-export const INSTRUMENT_ROLES = ['pressure', 'temperature', 'weight'] as const;
+/** The place an instrument takes on a vessel: its gauge (or transmitter), its thermometer (or RTD), its scale, the barometer its gauge readings are converted with. */
+export const INSTRUMENT_ROLES = ['pressure', 'temperature', 'weight', 'atmosphere'] as const;
 export type InstrumentRole = (typeof INSTRUMENT_ROLES)[number];
 
 /** The kinds that may take each role. */
@@ -22,6 +22,7 @@ export const KINDS_OF_ROLE: Readonly<Record<InstrumentRole, readonly InstrumentK
   pressure: ['pressure-gauge', 'pressure-transmitter'],
   temperature: ['thermometer', 'rtd'],
   weight: ['weighing-system'],
+  atmosphere: ['barometer'],
 };
 
 /** Where a register entry came from. */

@@ -21,6 +21,12 @@ const STRICT = { durability: 'strict' } as const;
 const FAMILY = { 'pressure-gauge': 'Pa', 'pressure-transmitter': 'Pa', barometer: 'Pa', thermometer: 'K', rtd: 'K', 'weighing-system': 'kg' } as const;
 
 const now = () => formatIsoWithOffset(new Date(), undefined, true);
+/**
+ * A date kept beside its ms (calibration, due, fitting times): with its milliseconds when it has
+ * any, so the text and the ms agree (the backup's validator and plant sync's pull hold them equal);
+ * a whole second stays as it was written before.
+ */
+const exactIso = (d: Date) => formatIsoWithOffset(d, undefined, d.getTime() % 1000 !== 0);
 
 function requireSpec(s: InstrumentSpec): InstrumentSpec {
   requireJsonObject('spec', s);
@@ -92,12 +98,43 @@ export async function updateInstrument(id: string, patch: { spec?: InstrumentSpe
   return record;
 }
 
-/** Retires an instrument (scrapped, sent away): it stays in the register with its history. @throws StoreError('not-found' | 'write-failed') */
+/**
+ * Retires an instrument (scrapped, sent away): it stays in the register with its history, and in
+ * the same transaction it is taken off every vessel place it holds now (a fitting to none, reason
+ * "retired"), so no later check rests on it. Already retired: returned as it is.
+ * @throws StoreError('not-found' | 'quota-exceeded' | 'write-failed')
+ */
 export async function retireInstrument(id: string): Promise<InstrumentRecord> {
   const existing = await requireInstrument(id);
   if (existing.retired) return existing;
-  const record = { ...existing, retired: true, updatedAt: now() };
-  await put('instruments', record, `Retiring instrument ${existing.tag}`);
+  const at = new Date();
+  const stamp = now();
+  const record = { ...existing, retired: true, updatedAt: stamp };
+  const db = await getDb();
+  const tx = db.transaction(['instruments', 'fittings'], 'readwrite', STRICT);
+  const fittings = tx.objectStore('fittings');
+  // Awaited below; caught here too so a failed read before then leaves no unhandled rejection.
+  tx.done.catch(() => undefined);
+  try {
+    const own = await fittings.index('by-instrument').getAll(id);
+    const vessels = [...new Set(own.map((f) => f.vesselId))];
+    // IndexedDB reads only between here and the writes: the transaction stays alive.
+    const rows = await Promise.all(vessels.map((v) => fittings.index('by-vessel').getAll(IDBKeyRange.bound([v, -Infinity, ''], [v, Infinity, '\uffff']))));
+    const writes: Promise<unknown>[] = [tx.objectStore('instruments').put(record)];
+    rows.forEach((vesselRows, i) => {
+      for (const [role, f] of Object.entries(fittedAt(vesselRows, at.getTime()))) {
+        if (f?.instrumentId !== id) continue;
+        const off: FittingRecord = {
+          id: crypto.randomUUID(), vesselId: vessels[i]!, role: role as InstrumentRole, instrumentId: null,
+          from: exactIso(at), fromMs: at.getTime(), reason: 'retired', enteredAt: stamp,
+        };
+        writes.push(fittings.put(off));
+      }
+    });
+    await Promise.all([...writes, tx.done]);
+  } catch (error) {
+    throw storeErrorFromWrite(error, `Retiring instrument ${existing.tag}`);
+  }
   return record;
 }
 
@@ -133,12 +170,12 @@ export async function addCalibration(input: NewCalibration): Promise<Calibration
   const entry: CalibrationEntry = {
     id: crypto.randomUUID(),
     instrumentId: instrument.id,
-    time: formatIsoWithOffset(at),
+    time: exactIso(at),
     timeMs: at.getTime(),
     asFoundError: requireFinite('as-found error', input.asFoundError, span),
     asLeftError: input.asLeftError === undefined ? null : requireFinite('as-left error', input.asLeftError, span),
     referenceValue: input.referenceValue === undefined ? null : requireFinite('reference value', input.referenceValue, Number.MAX_VALUE),
-    nextDue: due === null ? null : formatIsoWithOffset(due),
+    nextDue: due === null ? null : exactIso(due),
     nextDueMs: due === null ? null : due.getTime(),
     who: requireText('calibrated by', typeof input.who === 'string' ? input.who.trim() : input.who, 1, INSTRUMENT_TEXT_LIMITS.who),
     certificate: requireText('certificate', (input.certificate ?? '').trim(), 0, INSTRUMENT_TEXT_LIMITS.certificate),
@@ -191,7 +228,7 @@ export async function fitInstrument(vesselId: string, role: InstrumentRole, inst
   }
   const from = requireDate('from', options.from ?? new Date());
   const record: FittingRecord = {
-    id: crypto.randomUUID(), vesselId, role, instrumentId, from: formatIsoWithOffset(from), fromMs: from.getTime(),
+    id: crypto.randomUUID(), vesselId, role, instrumentId, from: exactIso(from), fromMs: from.getTime(),
     reason: requireText('reason', options.reason ?? '', 0, INSTRUMENT_TEXT_LIMITS.reason), enteredAt: now(),
   };
   await put('fittings', record, 'Saving the fitting');

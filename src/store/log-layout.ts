@@ -1,5 +1,5 @@
-// How the check log sits in IndexedDB (schema v4, rows' facts as of v5); this file and log-walks.ts are the only code
-// that reads or writes it.
+// How the check log sits in IndexedDB (schema v4, rows' facts as of v5, id buckets as of v9); this
+// file and log-walks.ts are the only code that reads or writes it (log-ids.ts shapes the id buckets).
 //
 // Why not one IndexedDB record per check: in Chromium every stored value and every index entry
 // costs about the same whatever its size, and a log of 100,000 checks made one value plus four
@@ -26,7 +26,8 @@
 // - logIds, key: the last two hex digits of a check id: where each id is stored, and the ids of
 //   the checks that correct it. A v4 UUID is random there, so 256 values share the log evenly.
 //   Records of other kinds (cycles, periodic tests) are listed here too, so an id is unique
-//   across every record of the log.
+//   across every record of the log. Since schema v9 each value is a few flat arrays (log-ids.ts
+//   says why: a pull's batch reads and writes every bucket).
 // - logKinds (schema v7), key [kind, vesselKey, timeMs, id], index by-kind-time [kind, timeMs, id]:
 //   one small row per record of another kind (KindRow), for listing a kind per vessel and time.
 //   One value per record, not buckets: such records come a few a day, not thousands a month.
@@ -36,6 +37,7 @@
 // requests inside its transaction, as every transaction here must.
 import type { IDBPDatabase, IDBPTransaction, StoreNames } from 'idb';
 import { factsOfRecord, keyFiguresOf, type StoredVerdict } from './facts.ts';
+import { DuplicateId, emptyIdBucket, idEntryOf, withIds, type IdBucket, type IdEntry } from './log-ids.ts';
 import { isCheckRecord, type CheckCursor, type CheckRecord, type KindRecord, type LogRecord } from './records.ts';
 import type { TanksideDB } from './schema.ts';
 
@@ -98,14 +100,7 @@ export function monthPartRange(vesselId: string, lowMonth: number, highMonth: nu
   return IDBKeyRange.bound([vesselId, lowMonth], [vesselId, highMonth, Infinity]);
 }
 
-/** Where a check id is stored (`at`), and the ids of checks that correct it (`by`), either may be absent. */
-export interface IdEntry {
-  at?: [deviceId: string, seq: number];
-  by?: string[];
-}
-
-/** Entries of the ids that end in one pair of hex digits. */
-export type IdBucket = Record<string, IdEntry>;
+export type { IdBucket, IdEntry } from './log-ids.ts';
 
 /**
  * Where a record of another kind is listed (logKinds): its kind, its vessel ('' for none), its
@@ -253,7 +248,8 @@ export async function locateIds(tx: LogTx<IDBTransactionMode>, ids: readonly str
   const byBucket = new Map(buckets.map((b, i) => [b, found[i]]));
   const out = new Map<string, IdEntry>();
   for (const id of ids) {
-    const entry = byBucket.get(idBucketOf(id))?.[id];
+    const bucket = byBucket.get(idBucketOf(id));
+    const entry = bucket ? idEntryOf(bucket, id) : undefined;
     if (entry) out.set(id, entry);
   }
   return out;
@@ -337,27 +333,32 @@ export async function addToLog(
       const from = holder ? [holder.value.startMs, holder.value.startId] : [m.monthMs, ''];
       return monthsStore.getAll(IDBKeyRange.bound([m.vesselId, m.monthMs, ...from], [m.vesselId, m.monthMs, hi[0], hi[1]]));
     })),
-    Promise.all([...idKeys].map(async (k) => [k, (await idsStore.get(k)) ?? {}] as const)),
+    Promise.all([...idKeys].map(async (k) => [k, (await idsStore.get(k)) ?? emptyIdBucket()] as const)),
   ]);
 
-  // ids: refuse one already stored; note where each new one goes and who corrects whom.
-  const ids = new Map<string, IdBucket>(idBuckets);
-  const entryOf = (id: string): IdEntry => {
-    // Ids are validated UUIDs; this one name would set a plain object's prototype instead.
-    if (id === '__proto__') throw new LogConflict('"__proto__" is not a check id');
-    const bucket = ids.get(idBucketOf(id))!;
-    // Own properties only: a bucket is a plain object read back from the store.
-    return Object.hasOwn(bucket, id) ? bucket[id]! : (bucket[id] = {});
-  };
+  // ids: refuse one already stored; note where each new one goes and who corrects whom, each
+  // bucket merged once (log-ids.ts).
+  const idAdds = new Map<string, { id: string; deviceId: string; seq: number }[]>();
+  const idFixes = new Map<string, [string, string][]>();
   for (const { record: r } of entries) {
-    const entry = entryOf(r.id);
-    if (entry.at) throw new LogConflict(`check ${r.id} is already stored`);
-    entry.at = [r.deviceId, r.seq];
-  }
-  for (const { record: r } of entries) {
+    const k = idBucketOf(r.id);
+    let list = idAdds.get(k);
+    if (!list) idAdds.set(k, (list = []));
+    list.push({ id: r.id, deviceId: r.deviceId, seq: r.seq });
     if (!isCheckRecord(r) || r.corrects === null) continue;
-    const entry = entryOf(r.corrects);
-    (entry.by ??= []).push(r.id);
+    const c = idBucketOf(r.corrects);
+    let fixes = idFixes.get(c);
+    if (!fixes) idFixes.set(c, (fixes = []));
+    fixes.push([r.corrects, r.id]);
+  }
+  const ids = new Map<string, IdBucket>();
+  for (const [k, bucket] of idBuckets) {
+    try {
+      ids.set(k, withIds(bucket, idAdds.get(k) ?? [], idFixes.get(k) ?? []));
+    } catch (error) {
+      if (error instanceof DuplicateId) throw new LogConflict(error.message);
+      throw error;
+    }
   }
 
   // blocks: each record into the block the rule gives it, or a new one.

@@ -5,9 +5,10 @@
 import { unwrap, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from 'idb';
 import { canonicalJson } from './integrity.ts';
 import { findingMaskOfText, keyFiguresOf, type KeyFigures } from './facts.ts';
-import { addToLog, MONTH_PART_TARGET, type IdBucket, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
+import { addToLog, MONTH_PART_TARGET, type KindRow, type LogBlock, type MonthBucket, type MonthRow, type NewLogEntry } from './log-layout.ts';
 import { isCheckRecord, type CheckRecord, type DeviceKey, type IsoDateTime, type JsonValue, type KnownDeviceKey, type LogRecord, type VesselRecord } from './records.ts';
 import type { CalibrationEntry, FittingRecord, InstrumentRecord } from './instrument-records.ts';
+import { idBucketFromV8, isIdBucket, type IdBucket, type V8IdBucket } from './log-ids.ts';
 import { registerFromVessel } from './instrument-upgrade.ts';
 import { formatIsoWithOffset } from './time.ts';
 
@@ -37,6 +38,10 @@ export const DB_NAME = 'tankside';
  *   (by-instrument on [instrumentId, timeMs, id]) and fittings (by-vessel on [vesselId, fromMs, id],
  *   by-instrument). Every vessel's typed gauge and thermometer become entries fitted to it
  *   (instrument-upgrade.ts); vessel records and checks stay as they were.
+ * - v9 (ID_BUCKETS_RUNG): each logIds value becomes flat arrays (log-ids.ts: the ids ascending,
+ *   their devices and seqs, the corrections apart) instead of one member per id, so a pulled batch's
+ *   merge, which touches every bucket, no longer re-reads and rewrites an object per stored id.
+ *   The same ids, places and corrections; nothing else changes.
  * - v10 (KEY_FIGURES_RUNG): every month row gains its check's key figures (temperature, absolute
  *   pressure, quality, liquid mass; facts.ts keyFiguresOf), read from the stored texts, so the
  *   whole match sorts by them. Derived data: no record, block or hash changes.
@@ -45,10 +50,9 @@ export const DB_NAME = 'tankside';
 export const KINDS_RUNG = 7;
 /** The register's rung: one constant, so the number can move at a merge. */
 export const INSTRUMENT_REGISTER_RUNG = 8;
-/**
- * The rung that gives every month row its check's key figures (v10; v9 is left to plant sync's
- * work): one constant, so the number can move at a merge.
- */
+/** The id buckets' flat arrays (log-ids.ts); one constant, so the number can move at a merge. */
+export const ID_BUCKETS_RUNG = 9;
+/** The rung that gives every month row its check's key figures; one constant, so the number can move at a merge. */
 export const KEY_FIGURES_RUNG = 10;
 export const DB_VERSION = KEY_FIGURES_RUNG;
 
@@ -281,6 +285,25 @@ const RUNGS: readonly { version: number; run: Rung }[] = [
         const made = registerFromVessel(c.value as VesselRecord, now, () => crypto.randomUUID());
         for (const i of made.instruments) raw.objectStore('instruments').put(i);
         for (const f of made.fittings) raw.objectStore('fittings').put(f);
+        c.continue();
+      };
+    },
+  },
+  {
+    version: ID_BUCKETS_RUNG,
+    run(_db, tx, next) {
+      // 256 values at most: one cursor, each bucket rewritten as it is read. A bucket already in
+      // the new shape (today's v4 rung moves an old log with today's addToLog) is left as it is.
+      const raw = unwrap(tx) as IDBTransaction;
+      const cursor = raw.objectStore('logIds').openCursor();
+      cursor.onsuccess = () => {
+        const c = cursor.result;
+        if (!c) {
+          next();
+          return;
+        }
+        const value = c.value as unknown;
+        if (!isIdBucket(value)) c.update(idBucketFromV8((value ?? {}) as V8IdBucket));
         c.continue();
       };
     },

@@ -80,6 +80,12 @@ export interface PulledRecord {
   text: string;
   /** The record's chain-head signature as the server carries it; '' or absent for none. */
   signature?: string;
+  /**
+   * JSON.parse(text), when the caller has parsed it already (the pull, for the envelope): taken
+   * instead of parsing again. Safe whatever is passed: the record it validates to must still
+   * write out as exactly `text` (the canonical form check), or it is refused.
+   */
+  parsed?: unknown;
 }
 
 /** What mergePulledRecords did. */
@@ -110,8 +116,8 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
   const labels: string[] = [];
   const signatures: BackupDocument['signatures'] = [];
   const inBatch = new Map<string, string>(); // id -> text
-  for (const { label, text, signature } of records) {
-    const why = problemOfPulled(text);
+  for (const { label, text, signature, parsed } of records) {
+    const why = problemOfPulled(text, parsed);
     if (typeof why === 'string') {
       report.refused.push({ label, why });
       continue;
@@ -152,14 +158,16 @@ export async function mergePulledRecords(records: readonly PulledRecord[], optio
   return report;
 }
 
-/** The pulled text as a check or a record of a kind this version keeps, or why it cannot be one. */
-function problemOfPulled(text: string): LogRecord | string {
+/** The pulled text (`parsed`: its JSON.parse, when known) as a check or a record of a kind this version keeps, or why it cannot be one. */
+function problemOfPulled(text: string, parsed?: unknown): LogRecord | string {
   if (typeof text !== 'string') return 'the text is not a string';
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    return 'the text is not JSON';
+  let value: unknown = parsed;
+  if (value === undefined) {
+    try {
+      value = JSON.parse(text);
+    } catch {
+      return 'the text is not JSON';
+    }
   }
   let record: LogRecord;
   try {

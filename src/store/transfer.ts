@@ -37,6 +37,7 @@ export {
   recordPublished,
 } from './sync-log.ts';
 export { learnDeviceKeys, ownDeviceKeyText } from './sync-keys.ts';
+
 export type { DeviceKeyRecord, KeyLearnReport } from './sync-keys.ts';
 export type {
   LastSync,

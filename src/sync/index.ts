@@ -8,6 +8,7 @@ import { SyncError } from './errors.ts';
 import { publishVesselEdits, type PublishResult } from './plant.ts';
 import { pullChecks, pullPlant, refusedSummary, type ChecksPullResult, type PullProgress } from './pull.ts';
 import { pushOwnChain, type PushProgress, type PushResult } from './push.ts';
+import { publishRegister, type RegisterPublishResult } from './register.ts';
 
 export { SyncError } from './errors.ts';
 export type { SyncErrorKind } from './errors.ts';
@@ -17,6 +18,8 @@ export { CHECKS_DB, PLANT_DB, recordDocId, vesselDocId } from './documents.ts';
 export type { PushResult } from './push.ts';
 export type { ChecksPullResult } from './pull.ts';
 export type { PublishResult } from './plant.ts';
+export type { RegisterPublishResult } from './register.ts';
+export { registerDocId } from './documents.ts';
 
 /** Which part of a sync is running. */
 export type SyncStep = 'sign-in' | 'push' | 'publish' | 'pull-plant' | 'pull-checks';
@@ -51,6 +54,8 @@ export interface SyncReport {
   push: PushResult;
   /** A supervisor's vessel edits sent as new versions; null on a technician's device. */
   publish: PublishResult | null;
+  /** The register's records sent: a supervisor's instruments, fittings and calibrations; a technician's calibrations. */
+  registerPublished: RegisterPublishResult;
   plant: Awaited<ReturnType<typeof pullPlant>>;
   /** A supervisor's pull of every device's records; null on a technician's device. */
   checks: ChecksPullResult | null;
@@ -77,8 +82,9 @@ export async function enrol(enrolment: Enrolment): Promise<SyncState> {
 }
 
 /**
- * One sync: sign in, push this device's new records, (supervisor) publish vessel edits, pull the
- * plant inventory, (supervisor) pull every device's records. Saves the outcome as lastSync.
+ * One sync: sign in, push this device's new records, (supervisor) publish vessel edits, publish the
+ * register's new records (a technician's device: its calibrations), pull the plant inventory and
+ * register, (supervisor) pull every device's records. Saves the outcome as lastSync.
  * @throws SyncError with a plain-worded message (kind: offline, credentials, refused,
  *   chain-differs, server, cancelled, not-enrolled); StoreError from a local write
  */
@@ -110,10 +116,11 @@ export async function syncNow(options: SyncOptions): Promise<SyncReport> {
     pushed = push.pushed;
     serverHead = push.serverHead;
     const publish = supervisor ? await publishVesselEdits(couch, state.account, options.authorName ?? '') : null;
+    const registerPublished = await publishRegister(couch, state.account, supervisor);
     const plant = await pullPlant(couch, { signal: options.signal, onProgress: progress('pull-plant') });
     const checks = supervisor ? await pullChecks(couch, { signal: options.signal, onProgress: progress('pull-checks'), batch: options.pullBatch }) : null;
     pulled = checks?.added.length ?? 0;
-    const report: SyncReport = { push, publish, plant, checks, message: summary(push, plant, checks) };
+    const report: SyncReport = { push, publish, registerPublished, plant, checks, message: summary(push, plant, checks) };
     await saveOutcome({ outcome: 'ok', pushed, pulled, message: report.message, ...(serverHead === undefined ? {} : { serverHead }) });
     return report;
   } catch (error) {
@@ -131,6 +138,8 @@ function summary(push: PushResult, plant: SyncReport['plant'], checks: ChecksPul
       : `${push.pushed} record${push.pushed === 1 ? '' : 's'} sent (checks, cycles, tests); all ${push.localHead} of this device's are on the server`,
   ];
   if (plant.applied.length > 0) parts.push(`${plant.applied.length} vessel definition${plant.applied.length === 1 ? '' : 's'} updated`);
+  const reg = plant.register.added + plant.register.updated;
+  if (reg > 0) parts.push(`${reg} instrument register record${reg === 1 ? '' : 's'} received (instruments, calibrations, fittings)`);
   if (plant.conflicts.length > 0) parts.push(`${plant.conflicts.length} vessel definition${plant.conflicts.length === 1 ? '' : 's'} need a supervisor (two edits of one version, or an edit here)`);
   if (checks) {
     parts.push(`${checks.added.length} record${checks.added.length === 1 ? '' : 's'} received`);

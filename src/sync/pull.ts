@@ -2,20 +2,23 @@
 // handed to the store and committed there before the server's last_seq is saved as the
 // checkpoint, so a sync cut off between the two pulls the batch again, and the store skips what
 // it already holds as identical.
-import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport } from '../store/transfer.ts';
+import { applyVesselVersions, getSyncState, isKnownKind, learnDeviceKeys, linksAround, mergePulledRecords, updateSyncState, type LinkProblem, type PlantReport, type PulledRecord } from '../store/transfer.ts';
+import { applyRegisterRecords } from '../store/register-sync.ts';
 import { answerError, type Couch } from './couch.ts';
-import { CHECKS_DB, envelopeProblem, PLANT_DB, vesselEnvelopeProblem, type RecordDoc, type VesselDoc } from './documents.ts';
+import { CHECKS_DB, PLANT_DB, readEnvelope, REGISTER_DOC_TYPES, registerEnvelopeProblem, vesselEnvelopeProblem, type RecordDoc, type RegisterDoc, type VesselDoc } from './documents.ts';
 import { throwIfCancelled } from './errors.ts';
 
 /**
- * Changes per request. Each batch's merge reads and rewrites the store's 256 id buckets, whose size
- * grows with the log, so a first pull costs about (records)² / (batch) there: a supervisor's first
- * pull of 100,000 in Chromium took 37.0 s of the browser's CPU with 2,000 per request and 14.7 s
- * with 10,000 (the stand-in's CPU 9.3 s either way; bench/sync-browser.bench-run.ts, load average
- * 13, so wall times 83 s and 47 s). 10,000 of these documents are about 23 MB of JSON per answer:
- * a phone parses that in a fraction of a second, and a sync of a few new checks asks for no more
- * than there is. (Node and fake-indexeddb, before: 500, 1,000 and 2,000 gave 2,266, 4,694 and
- * 5,708 checks/s on 10,000.)
+ * Changes per request. Each batch's merge reads and rewrites the store's 256 id buckets; until
+ * schema v8 they held an object per id, so a first pull cost about (records)² / (batch) there: a
+ * supervisor's first pull of 100,000 in Chromium took 37.0 s of the browser's CPU with 2,000 per
+ * request and 14.7 s with 10,000 (bench/sync-browser.bench-run.ts, load average 13). Since v9 they
+ * are flat arrays (src/store/log-ids.ts) and that term is small, and 10,000 is kept: at 10,000
+ * checks, 2,500, 5,000 and 10,000 per request took 7.1, 4.9 and 3.3 s (load 17), and asking for
+ * 1,250 first and twice as many each time after, so that merging starts sooner, gained 0.06 s of
+ * 2.4–2.8 s for 0.5 s more of the browser's CPU (load 12): dropped. 10,000 of these documents are
+ * about 23 MB of JSON per answer: a phone parses that in a fraction of a second, and a sync of a
+ * few new checks asks for no more than there is.
  */
 export const PULL_BATCH = 10_000;
 
@@ -114,18 +117,19 @@ export async function pullChecks(
   const result: ChecksPullResult = { read: 0, added: [], skipped: 0, refused: [], gaps: [], unknownKinds: 0, deviceKeys: [], keysLearnt: [] };
   const touched = new Map<string, { fromSeq: number; toSeq: number }>();
   result.read = await pullFeed<RecordDoc>(couch, CHECKS_DB, async (docs) => {
-    const records: { label: string; text: string; signature?: string }[] = [];
+    const records: PulledRecord[] = [];
     const keys: { label: string; text: string }[] = [];
     const seqOf = new Map<string, RecordDoc>();
     for (const doc of docs) {
-      const problem = envelopeProblem(doc);
-      if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+      const { problem, parsed } = readEnvelope(doc);
+      if (problem !== null) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
       else if (doc.seq === 0) {
         result.deviceKeys.push({ deviceId: doc.deviceId, text: doc.text });
         keys.push({ label: doc._id, text: doc.text });
       } else if (doc.type !== 'check' && !isKnownKind(doc.type)) result.unknownKinds += 1;
       else {
-        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature } : { label: doc._id, text: doc.text });
+        // The text was parsed for its envelope: the merge takes that, and checks it against the text.
+        records.push(doc.signature ? { label: doc._id, text: doc.text, signature: doc.signature, parsed } : { label: doc._id, text: doc.text, parsed });
         seqOf.set(doc.id!, doc);
       }
     }
@@ -156,21 +160,30 @@ export async function pullChecks(
 
 /**
  * A device's pull of the plant inventory (tankside-plant): the newest version of each vessel is
- * applied, clashing edits are reported (PlantReport.conflicts), never merged.
+ * applied, clashing edits are reported (PlantReport.conflicts), never merged; the instrument
+ * register's documents are merged as a backup's register is (`register`: added, updated).
  */
 export async function pullPlant(
   couch: Couch,
   options: { signal?: AbortSignal | undefined; onProgress?: ((p: PullProgress) => void) | undefined } = {},
-): Promise<PlantReport & { read: number }> {
-  const result: PlantReport & { read: number } = { read: 0, applied: [], skipped: 0, refused: [], conflicts: [] };
+): Promise<PlantReport & { read: number; register: { added: number; updated: number } }> {
+  const result: PlantReport & { read: number; register: { added: number; updated: number } } = {
+    read: 0, applied: [], skipped: 0, refused: [], conflicts: [], register: { added: 0, updated: 0 },
+  };
   const conflicts = new Map<string, PlantReport['conflicts'][number]>();
-  result.read = await pullFeed<VesselDoc>(couch, PLANT_DB, async (docs) => {
+  result.read = await pullFeed<VesselDoc | RegisterDoc>(couch, PLANT_DB, async (docs) => {
     const versions: { label: string; text: string }[] = [];
+    const register: { label: string; type: RegisterDoc['type']; text: string }[] = [];
     for (const doc of docs) {
-      const problem = doc.type === 'vessel' ? vesselEnvelopeProblem(doc) : null;
-      if (doc.type !== 'vessel') continue; // other kinds of plant document, from a later version
-      if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
-      else versions.push({ label: doc._id, text: doc.text });
+      if (doc.type === 'vessel') {
+        const problem = vesselEnvelopeProblem(doc);
+        if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+        else versions.push({ label: doc._id, text: doc.text });
+      } else if ((REGISTER_DOC_TYPES as readonly string[]).includes(doc.type)) {
+        const problem = registerEnvelopeProblem(doc);
+        if (problem) result.refused.push({ label: doc._id, why: `envelope: ${problem}` });
+        else register.push({ label: doc._id, type: doc.type, text: doc.text });
+      } // other kinds of plant document, from a later version: left for it
     }
     const report = await applyVesselVersions(versions);
     result.applied.push(...report.applied);
@@ -178,6 +191,12 @@ export async function pullPlant(
     result.skipped += report.skipped;
     result.refused.push(...report.refused);
     for (const c of report.conflicts) conflicts.set(c.vesselId, c); // the latest word on each vessel
+    if (register.length > 0) {
+      const r = await applyRegisterRecords(register);
+      result.register.added += r.added;
+      result.register.updated += r.updated;
+      result.refused.push(...r.refused);
+    }
   }, options);
   result.conflicts = [...conflicts.values()];
   return result;

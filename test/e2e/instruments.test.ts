@@ -2,8 +2,11 @@
 // page.clock): a calibration entered for a demo vessel's gauge, a bad entry refused naming its field,
 // the instrument listed as due soon, then the clock moved past its due date: the next check carries
 // the calibration-overdue finding naming the gauge, and Review's report shows the gauge overdue at
-// that check. Waits only on the app's own states (data attributes), never a fixed time. The vessels
-// and the calibration are the invented demo plant (DEMO DATA).
+// that check. Then a new gauge is added (a bad range refused first, naming the field), swapped in
+// for the demo vessel's gauge (the next check names the new one; the old one keeps its history),
+// and retired (it comes off the vessel; the next check no longer rests on it). Waits only on the
+// app's own states (data attributes), never a fixed time. The vessels, the calibration and the
+// added gauge are the invented demo plant (DEMO DATA).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { DIST, launch, pickVessel, screenshot, startServer, tempProfile, waitForControl, type StaticServer } from './harness.ts';
@@ -101,5 +104,56 @@ describe('instruments: a calibration, its due date passing, the finding on the n
     await expect.poll(() => page.locator('.review-row').count()).toBe(1);
     expect(await page.textContent('.review-row')).toMatch(/CAUTION/);
     await screenshot(page, 'review-instruments');
+  });
+
+  const usedLine = () => page.locator('#result dt', { hasText: 'Instruments used' }).locator('xpath=following-sibling::dd[1]').textContent();
+
+  it('a gauge is added to the register: a range high below its low is refused naming the field, then it is saved and its page opens', async () => {
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('[data-register-state="ready"]').waitFor();
+    await page.getByRole('link', { name: 'Add an instrument' }).click();
+    await page.fill('#inst-tag', 'DEMO-PI-NEW');
+    await page.selectOption('#inst-unit', 'kPa');
+    await page.fill('#inst-low', '0');
+    await page.fill('#inst-high', '-5');
+    await page.fill('#inst-class', '1');
+    await page.getByRole('button', { name: 'Add to the register' }).click();
+    await page.locator('form[data-instrument-save="refused"]').waitFor();
+    expect(await page.textContent('#inst-high-error')).toBe('range high: -5 kPa must be above the range low (0 kPa).');
+    await page.fill('#inst-high', '400');
+    await page.getByRole('button', { name: 'Add to the register' }).click();
+    await page.locator('[data-instrument-state="ready"][data-status="no-calibration"]').waitFor();
+    expect(await page.textContent('main h2')).toBe('DEMO-PI-NEW');
+  });
+
+  it('swapped in for the demo vessel\'s gauge: the next check names the new gauge; the old one keeps its calibration and fitting', async () => {
+    await page.selectOption('#fit-vessel', { label: 'DEMO-ST-01' });
+    await page.locator('[data-place-holder="DEMO-ST-01 PI"]').waitFor();
+    await page.getByRole('button', { name: 'Swap in for DEMO-ST-01 PI' }).click();
+    await page.locator('[data-fit-state="saved"]').waitFor();
+    await screenshot(page, 'instrument-swap');
+    await checkOn('DEMO-ST-01');
+    expect(await usedLine()).toMatch(/DEMO-PI-NEW: no calibration on record/);
+    expect(await usedLine()).not.toMatch(/DEMO-ST-01 PI:/);
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('li[data-tag="DEMO-ST-01 PI"] a').click();
+    await page.locator('[data-instrument-state="ready"]').waitFor();
+    expect(await page.locator('tr[data-calibration]').count()).toBe(1);
+    expect(await page.textContent('section[aria-labelledby="fit-h"]')).toMatch(/DEMO-ST-01 from/);
+  });
+
+  it('the new gauge retired: it stays in the register as retired and comes off the vessel; the next check no longer rests on it', async () => {
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('li[data-tag="DEMO-PI-NEW"] a').click();
+    await page.locator('[data-instrument-state="ready"]').waitFor();
+    await page.getByRole('button', { name: 'Retire this instrument…' }).click();
+    await page.getByRole('button', { name: 'Retire DEMO-PI-NEW' }).click();
+    await page.locator('[data-instrument-state="ready"][data-status="retired"]').waitFor();
+    await page.goto(`${server.url}#/instruments`);
+    await page.locator('[data-register-state="ready"]').waitFor();
+    expect(await page.getAttribute('li[data-tag="DEMO-PI-NEW"]', 'data-status')).toBe('retired');
+    await checkOn('DEMO-ST-01');
+    expect(await usedLine()).not.toMatch(/DEMO-PI-NEW/);
+    expect(await usedLine()).toMatch(/DEMO-ST-01 TI/);
   });
 });

@@ -204,13 +204,16 @@ describe('every screen', () => {
     await inspect('12-labels');
   });
 
-  it('Instruments, and one instrument\'s page', async () => {
+  it('Instruments, one instrument\'s page, and the form that adds one', async () => {
     await page.goto(`${server.url}#/instruments`);
     await page.locator('[data-register-state="ready"]').waitFor();
     await inspect('16-instruments');
     await page.locator('li[data-tag] a').first().click();
     await page.locator('[data-instrument-state="ready"]').waitFor();
     await inspect('17-instrument');
+    await page.goto(`${server.url}#/instruments/new`);
+    await page.locator('form[data-instrument-save="idle"]').waitFor();
+    await inspect('17-instrument-new');
   });
 
   it('Plant sync, not enrolled: the enrolment form, and the footer\'s promise kept', async () => {

@@ -286,11 +286,14 @@ describe('upgrade from schema v6 in Chromium', () => {
       await page.locator('.kind-records[data-kind-records="1"]').waitFor();
       const version = await page.evaluate(async () => {
         const db = await new Promise<IDBDatabase>((ok) => { const r = indexedDB.open('tankside'); r.onsuccess = () => ok(r.result); });
-        const out = { version: db.version, kinds: [...db.objectStoreNames].includes('logKinds') };
+        // The v9 rung's id buckets: flat arrays, every id of the log once (the 30 checks and the test).
+        const buckets = await new Promise<unknown[]>((ok) => { const r = db.transaction('logIds').objectStore('logIds').getAll(); r.onsuccess = () => ok(r.result); });
+        const ids = buckets.flatMap((b) => ((b as { ids?: unknown }).ids as string[] | undefined) ?? ['not the v9 shape']);
+        const out = { version: db.version, kinds: [...db.objectStoreNames].includes('logKinds'), ids: ids.length, distinct: new Set(ids).size };
         db.close();
         return out;
       });
-      expect(version).toEqual({ version: DB_VERSION, kinds: true });
+      expect(version).toEqual({ version: DB_VERSION, kinds: true, ids: 31, distinct: 31 });
       const chains = await verifyChainsOnScreen(page);
       expect(chains.lines.map((l) => l.chain)).toEqual(['ok']);
       expect(chains.lines[0]!.text).toContain('31 records, seq 1 to 31');

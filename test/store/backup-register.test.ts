@@ -33,7 +33,7 @@ describe('the register in the backup', () => {
   it(`format version ${BACKUP_FORMAT_VERSION}: instruments, calibrations and fittings, one per line, carried to another device with nothing lost`, async () => {
     const { backup, vesselId } = await deviceWithRegister();
     const doc = parseBackup(backup);
-    expect(doc.formatVersion).toBe(3);
+    expect(doc.formatVersion).toBe(4);
     expect(doc.register!.instruments.map((i) => i.tag).sort()).toEqual(['PI-7', 'TI-7']);
     expect(doc.register!.calibrations).toHaveLength(1);
     expect(doc.register!.fittings).toHaveLength(2);
@@ -84,6 +84,20 @@ describe('the register in the backup', () => {
     }
     expect(await dump()).toEqual(before);
     expect(await listRegister()).toEqual([]);
+  });
+
+  it('a file of format version 3 (the register, no barometer place) still imports with its register; version 4 carries an atmosphere fitting', async () => {
+    const { backup, vesselId } = await deviceWithRegister();
+    const v3 = { ...(JSON.parse(backup) as Record<string, unknown>), formatVersion: 3 };
+    await useDevice(new IDBFactory());
+    expect((await importBackup(JSON.stringify(v3))).register.added).toBe(5);
+    expect(await fittingsOfVessel(vesselId)).toHaveLength(2);
+    const baro = await addInstrument({ spec: { tag: 'PB-7', kind: 'barometer', range: { low: 80e3, high: 110e3 }, tolerance: { kind: 'stated', plusMinus: 50 } }, displayUnit: 'hPa' });
+    await fitInstrument(vesselId, 'atmosphere', baro.id, { from: new Date('2026-06-01T09:00:00Z') });
+    const again = await exportBackup();
+    await useDevice(new IDBFactory());
+    await importBackup(again);
+    expect((await fittingsOfVessel(vesselId)).map((f) => f.role).sort()).toEqual(['atmosphere', 'pressure', 'temperature']);
   });
 
   it('files of format versions 1 and 2 (no register) still import', async () => {

@@ -39,13 +39,13 @@ describe('export and import', () => {
     const doc = parseBackup(backup);
     expect(doc.format).toBe('tankside-backup');
     expect(doc.formatVersion).toBe(BACKUP_FORMAT_VERSION);
-    expect(BACKUP_FORMAT_VERSION).toBe(3);
+    expect(BACKUP_FORMAT_VERSION).toBe(4);
     expect(doc.exportedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(Z|[+-]\d\d:\d\d)$/);
     // Header, then each section with one record per line (2 vessels, 3 checks, 3 signatures, 1 chain head; the test vessels have no typed instruments, so no register records).
     const recordLines = backup.split('\n').filter((l) => l.startsWith('{"') && !l.startsWith('{"format"'));
     expect(recordLines).toHaveLength(2 + 3 + 3 + 1);
     for (const line of recordLines) expect(() => JSON.parse(line.replace(/,$/, ''))).not.toThrow();
-    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":3,"exportedAt":')).toBe(true);
+    expect(backup.startsWith('{"format":"tankside-backup","formatVersion":4,"exportedAt":')).toBe(true);
     expect(backup).toContain('\n"instruments":[],\n"calibrations":[],\n"fittings":[],\n');
   });
 
@@ -231,7 +231,7 @@ describe('hostile and damaged files change nothing', () => {
 
   it('names a newer format version so the user knows to update', async () => {
     const { backup } = await makeDeviceWithBackup(1);
-    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = 4)))).rejects.toThrow(/4 was written by a newer Tankside/);
+    await expect(importBackup(edit(backup, (d) => void (d['formatVersion'] = BACKUP_FORMAT_VERSION + 1)))).rejects.toThrow(new RegExp(`${BACKUP_FORMAT_VERSION + 1} was written by a newer Tankside`));
   });
 
   it('refuses a file over the size or count limits before parsing it', async () => {

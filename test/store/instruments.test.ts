@@ -56,6 +56,18 @@ describe('instrument register', () => {
     expect((await listRegister()).map((h) => [h.instrument.tag, h.calibrations.length])).toEqual([['PI-101', 2]]);
   });
 
+  it('a calibration or fitting at a time with milliseconds keeps them in its text, so text and ms agree (the backup and plant sync check it)', async () => {
+    const vessel = await addVessel({ tag: 'V-MS', spec: SPEC });
+    const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
+    const at = new Date(Date.parse('2026-11-30T08:15:42.137Z'));
+    const c = await addCalibration({ instrumentId: g.id, calibratedAt: at, asFoundError: 100, who: 'Test lab', enteredUnit: 'kPa', nextDueAt: new Date(at.getTime() + 1000) });
+    const f = await fitInstrument(vessel.id, 'pressure', g.id, { from: at });
+    expect([Date.parse(c.time), Date.parse(c.nextDue!), Date.parse(f.from)]).toEqual([c.timeMs, c.nextDueMs, f.fromMs]);
+    expect(c.timeMs).toBe(at.getTime());
+    const whole = await addCalibration({ instrumentId: g.id, calibratedAt: day('2026-11-01'), asFoundError: 100, who: 'Test lab', enteredUnit: 'kPa' });
+    expect(whole.time).not.toContain('.');
+  });
+
   it('bad input names the field and saves nothing', async () => {
     const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
     const base = { instrumentId: g.id, calibratedAt: day('2026-06-01'), asFoundError: 100, who: 'Test Lab', enteredUnit: 'kPa' };
@@ -101,12 +113,41 @@ describe('instrument register', () => {
     expect(await fittingsOfVessel(vessel.id)).toHaveLength(4);
   });
 
+  it('retiring an instrument takes it off the places it holds now, in the same save; its history and the vessel\'s stay', async () => {
+    const vessel = await addVessel({ tag: 'V-4', spec: SPEC });
+    const other = await addVessel({ tag: 'V-5', spec: SPEC });
+    const g = await addInstrument({ spec: GAUGE, displayUnit: 'kPa' });
+    const b = await addInstrument({ spec: { ...GAUGE, tag: 'PI-102' }, displayUnit: 'kPa' });
+    await fitInstrument(other.id, 'pressure', g.id, { from: day('2026-01-01') });
+    await fitInstrument(other.id, 'pressure', b.id, { from: day('2026-02-01'), reason: 'swapped' });
+    await fitInstrument(vessel.id, 'pressure', g.id, { from: day('2026-03-01') });
+    const retired = await retireInstrument(g.id);
+    expect(retired.retired).toBe(true);
+    expect((await fittedInstruments(vessel.id)).pressure).toBeUndefined();
+    expect((await fittedInstruments(other.id)).pressure?.instrument.tag).toBe('PI-102');
+    expect((await fittingsOfVessel(vessel.id)).map((f) => [f.instrumentId, f.reason])).toEqual([[g.id, ''], [null, 'retired']]);
+    expect(await fittingsOfVessel(other.id)).toHaveLength(2);
+    expect((await getInstrument(g.id))?.retired).toBe(true);
+  });
+
   it('an instrument of the wrong kind cannot take a role; an unknown vessel is not found', async () => {
     const vessel = await addVessel({ tag: 'V-2', spec: SPEC });
     const t = await addInstrument({ spec: RTD, displayUnit: 'degC' });
     await expectStoreError(fitInstrument(vessel.id, 'pressure', t.id), 'role');
     await expectStoreError(fitInstrument(crypto.randomUUID(), 'temperature', t.id), 'vesselId', 'not-found');
     expect(await fittingsOfVessel(vessel.id)).toEqual([]);
+  });
+
+  it('a barometer takes the atmosphere place and a weighing system the weight place, neither the other\'s', async () => {
+    const vessel = await addVessel({ tag: 'V-3', spec: SPEC });
+    const baro = await addInstrument({ spec: { tag: 'PB-1', kind: 'barometer', range: { low: 80e3, high: 110e3 }, tolerance: { kind: 'stated', plusMinus: 50 } }, displayUnit: 'hPa' });
+    const scale = await addInstrument({ spec: { tag: 'WI-1', kind: 'weighing-system', range: { low: 0, high: 5000 }, tolerance: { kind: 'percent-of-span', percentOfSpan: 0.1 } }, displayUnit: 'kg' });
+    await expectStoreError(fitInstrument(vessel.id, 'weight', baro.id), 'role');
+    await expectStoreError(fitInstrument(vessel.id, 'atmosphere', scale.id), 'role');
+    await fitInstrument(vessel.id, 'atmosphere', baro.id);
+    await fitInstrument(vessel.id, 'weight', scale.id);
+    const fitted = await fittedInstruments(vessel.id);
+    expect([fitted.atmosphere?.instrument.tag, fitted.weight?.instrument.tag]).toEqual(['PB-1', 'WI-1']);
   });
 });
 

@@ -25,6 +25,7 @@ import {
   type MonthRow,
 } from '../../src/store/log-layout.ts';
 import type { CheckRecord } from '../../src/store/records.ts';
+import { idEntriesOf, idEntryOf } from '../../src/store/log-ids.ts';
 
 useFreshDatabase();
 
@@ -93,7 +94,7 @@ async function expectLayoutHolds(expected: CheckRecord[]): Promise<void> {
   expect(rows.map((r) => r[1]).sort()).toEqual(expected.map((r) => r.id).sort());
   // Id buckets: each id where it is stored.
   const ids = new Map<string, unknown>();
-  for (const bucket of await db.getAll('logIds')) for (const [id, entry] of Object.entries(bucket)) if (entry.at) ids.set(id, entry.at);
+  for (const bucket of await db.getAll('logIds')) for (const [id, entry] of idEntriesOf(bucket)) if (entry.at) ids.set(id, entry.at);
   expect(ids).toEqual(new Map(expected.map((r) => [r.id, [r.deviceId, r.seq]])));
 }
 
@@ -160,7 +161,7 @@ describe('addToLog', () => {
     await add([fix]);
     await add([original]);
     const buckets = await (await getDb()).getAll('logIds');
-    const entry = buckets.map((b) => b[original.id]).find((e) => e !== undefined);
+    const entry = buckets.map((b) => idEntryOf(b, original.id)).find((e) => e !== undefined);
     expect(entry).toEqual({ at: [original.deviceId, 1], by: [fix.id] });
   });
 

@@ -11,7 +11,8 @@ import { appendRecord, countStoredChecks, listRecords, outcomeOfMask, queryCheck
 import { getDb } from '../../src/store/connection.ts';
 import { listVessels } from '../../src/store/index.ts';
 import { calibrationsOf, fittedInstruments, fittingsOfVessel, listInstruments } from '../../src/store/transfer.ts';
-import { DB_NAME, DB_VERSION, INSTRUMENT_REGISTER_RUNG, KEY_FIGURES_RUNG, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
+import { DB_NAME, DB_VERSION, ID_BUCKETS_RUNG, INSTRUMENT_REGISTER_RUNG, KEY_FIGURES_RUNG, SETTING_DEVICE_ID, SETTING_SEAL_PENDING } from '../../src/store/schema.ts';
+import { idEntriesOf, isIdBucket } from '../../src/store/log-ids.ts';
 import { canonicalJson, computeCheckHash } from '../../src/store/integrity.ts';
 import { storedChecks } from './log-access.ts';
 import { failWritesOverQuota, sampleCheck } from './fixtures.ts';
@@ -158,6 +159,7 @@ describe('upgrade ladder', () => {
     const db = await getDb();
     expect(db.version).toBe(DB_VERSION);
     expect(DB_VERSION).toBe(KEY_FIGURES_RUNG);
+    expect(KEY_FIGURES_RUNG).toBeGreaterThan(ID_BUCKETS_RUNG);
     expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
   });
 
@@ -588,5 +590,81 @@ describe('the instrument register rung (v6 → current)', () => {
     const saved = await appendCheck(sampleCheck(A.id));
     expect((await listChecks()).checks.map((c) => c.id)).toEqual([saved.id]);
     expect(await verifyStoredChains()).toMatchObject([{ status: 'ok', count: 1 }]);
+  });
+});
+
+/** Schema v8 exactly as it shipped (a fresh v8 install: v6, the kinds' list, the register). */
+function createV8(db: IDBDatabase): void {
+  createV6(db);
+  db.createObjectStore('logKinds', { keyPath: ['kind', 'vesselKey', 'timeMs', 'id'] }).createIndex('by-kind-time', ['kind', 'timeMs', 'id']);
+  db.createObjectStore('instruments', { keyPath: 'id' }).createIndex('by-tag', 'tagKey');
+  db.createObjectStore('calibrations', { keyPath: 'id' }).createIndex('by-instrument', ['instrumentId', 'timeMs', 'id']);
+  const fittings = db.createObjectStore('fittings', { keyPath: 'id' });
+  fittings.createIndex('by-vessel', ['vesselId', 'fromMs', 'id']);
+  fittings.createIndex('by-instrument', 'instrumentId');
+}
+
+describe(`the id buckets' rung (v8 → current, rung ${ID_BUCKETS_RUNG})`, () => {
+  it('every id keeps its place and its corrections; lookups, corrections, chains and new saves as before', async () => {
+    const DEVICE = 'd8000000-0000-4000-8000-00000000d8d8';
+    const MISSING = 'd8000000-0000-4000-8000-0000000000ff'; // corrected by seq 3, never stored here
+    const t0 = Date.UTC(2026, 10, 2, 8);
+    const records: Record<string, unknown>[] = [];
+    let prevHash = GENESIS_HASH;
+    // 300 checks over three blocks; seq 2 corrects seq 1, seq 3 corrects a check not stored here.
+    for (let seq = 1; seq <= 300; seq += 1) {
+      const { vesselId: _v, takenAt: _t, corrects: _c, reason: _r, ...rest } = sampleCheck(VESSEL_ID);
+      const corrects = seq === 2 ? records[0]!['id'] : seq === 3 ? MISSING : null;
+      const unsigned = {
+        ...rest, id: `d8000000-0000-4000-8000-${String(seq).padStart(12, '0')}`, deviceId: DEVICE, seq,
+        time: new Date(t0 + seq * 60_000).toISOString().replace('.000Z', 'Z'), timeMs: t0 + seq * 60_000,
+        vesselId: VESSEL_ID, vessel: { tag: 'CR-3', spec: SPEC }, note: `v8 ${seq}`, corrects, reason: corrects === null ? null : 'typed the wrong gauge', prevHash,
+      };
+      const hash = await computeCheckHash(unsigned as never);
+      records.push({ ...unsigned, hash });
+      prevHash = hash;
+    }
+    const texts = records.map((r) => canonicalJson(r));
+    const blocks = [0, 100, 200].map((start) => ({ deviceId: DEVICE, firstSeq: start + 1, seqs: records.slice(start, start + 100).map((r) => r['seq']), texts: texts.slice(start, start + 100) }));
+    const rows = records.map((r) => [r['timeMs'], r['id'], DEVICE, r['seq'], null, 0b1000, r['technician']]);
+    // The v8 id buckets: one member per id, { at, by }.
+    const ids: Record<string, Record<string, { at?: [string, number]; by?: string[] }>> = {};
+    for (const r of records) ((ids[(r['id'] as string).slice(-2)] ??= {})[r['id'] as string] = { at: [DEVICE, r['seq'] as number] });
+    ids[(records[0]!['id'] as string).slice(-2)]![records[0]!['id'] as string]!.by = [records[1]!['id'] as string];
+    (ids['ff'] ??= {})[MISSING] = { by: [records[2]!['id'] as string] };
+    const old = await rawOpen(8, createV8);
+    await rawWrite(old, [
+      ['vessels', vesselV1()],
+      ['settings', DEVICE, SETTING_DEVICE_ID],
+      ...blocks.map((b): [string, unknown] => ['logBlocks', b]),
+      ['logMonthParts', { vesselId: VESSEL_ID, monthMs: Date.UTC(2026, 10, 1), startMs: Date.UTC(2026, 10, 1), startId: '', rows }],
+      ...Object.entries(ids).map(([key, bucket]): [string, unknown, IDBValidKey] => ['logIds', bucket, key]),
+    ]);
+    old.close();
+
+    await openStore({ onEvent: (e) => events.push(e) });
+    const db = await getDb();
+    expect(db.version).toBe(DB_VERSION);
+    expect(describeSchema(db as unknown as IDBDatabase)).toEqual(CURRENT_SCHEMA);
+    // The same keys, each value in the new shape saying exactly what the old one said.
+    expect((await db.getAllKeys('logIds')).sort()).toEqual(Object.keys(ids).sort());
+    for (const [key, bucket] of Object.entries(ids)) {
+      const now = await db.get('logIds', key);
+      expect(isIdBucket(now)).toBe(true);
+      expect(idEntriesOf(now!)).toEqual(new Map(Object.entries(bucket)));
+    }
+    // Blocks and rows untouched; lookups and corrections as before.
+    expect(await db.getAll('logBlocks')).toEqual(blocks);
+    for (const r of [records[0]!, records[150]!, records[299]!]) expect(canonicalJson((await getCheck(r['id'] as string))!)).toBe(canonicalJson(r));
+    expect((await correctionsOf(records[0]!['id'] as string)).map((c) => c.id)).toEqual([records[1]!['id']]);
+    expect((await correctionsOf(MISSING)).map((c) => c.id)).toEqual([records[2]!['id']]);
+    expect(await verifyStoredChains()).toMatchObject([{ deviceId: DEVICE, status: 'ok', count: 300, headSeq: 300 }]);
+    // The chain carries on, and the new check is found through the new buckets.
+    const next = await appendCheck(sampleCheck(VESSEL_ID, { corrects: records[0]!['id'] as string, reason: 'second look' }));
+    expect(next).toMatchObject({ seq: 301, prevHash: records[299]!['hash'] });
+    expect((await getCheck(next.id))?.id).toBe(next.id);
+    expect((await correctionsOf(records[0]!['id'] as string)).map((c) => c.id)).toEqual([records[1]!['id'], next.id]);
+    expect(await countStoredChecks()).toBe(301);
+    expect(events).toEqual([]);
   });
 });

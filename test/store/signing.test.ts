@@ -131,7 +131,7 @@ describe('signed backups', () => {
     const source = await makeDeviceWithBackup(4);
     const fingerprint = await jwkThumbprint({ ...(await deviceSigningKey(await getDb()))!.publicJwk });
     const doc = JSON.parse(source.backup) as Doc;
-    expect(doc.formatVersion).toBe(3);
+    expect(doc.formatVersion).toBe(4);
     expect(doc.signatures.map((s) => s.seq)).toEqual([1, 2, 3, 4, 5]);
     expect(doc.chains[0]!.publicKey).toMatchObject({ crv: 'P-256', kty: 'EC' });
     await useDevice(new IDBFactory());

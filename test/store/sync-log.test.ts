@@ -73,6 +73,20 @@ describe('records pulled from the server', () => {
     expect(again.gaps).toHaveLength(1); // seq 4 came without seq 2 and 3
   });
 
+  it('take the text as already parsed when given, and still hold the record to the text', async () => {
+    const chain = await otherDevicesChain(3);
+    const texts = chain.map((c) => canonicalJson(c));
+    const other = JSON.parse(texts[1]!.replace('"note":""', '"note":"not what the text says"')) as unknown;
+    const report = await mergePulledRecords([
+      { label: 'r1', text: texts[0]!, parsed: JSON.parse(texts[0]!) },
+      { label: 'r2', text: texts[1]!, parsed: other }, // a parse that is not the text's
+      { label: 'r3', text: texts[2]!, parsed: JSON.parse(texts[2]!) },
+    ]);
+    expect(report.refused.map((r) => [r.label, r.why])).toEqual([['r2', 'the text is not in canonical form (re-serialised or edited after it was saved)']]);
+    expect(report.added).toEqual([chain[0]!.id, chain[2]!.id]);
+    expect(report.gaps).toHaveLength(1); // seq 3 came without seq 2
+  });
+
   it('linksAround shows gaps and broken links once the pull is over', async () => {
     const chain = await otherDevicesChain(6);
     const text = (i: number) => ({ label: `r${i}`, text: canonicalJson(chain[i]) });

@@ -20,5 +20,5 @@ export type { DriftContext, Interval, LogDrift, LogDriftEstimate, SaturatedCheck
 export { INSTRUMENT_RULES, calibrationFinding } from './instrument-findings.ts';
 export type { InstrumentPair, InstrumentRule } from './instrument-findings.ts';
 export { vesselWithInstruments, withInstrumentFindings } from './vessel-instruments.ts';
-export type { FittedForCheck, FittedInstrument, VesselForCheck } from './vessel-instruments.ts';
+export type { CheckInstrumentOptions, FittedForCheck, FittedInstrument, VesselForCheck } from './vessel-instruments.ts';
 export type { InstrumentRole, InstrumentUse } from './instrument-use.ts';

@@ -4,8 +4,8 @@
 import type { CalibrationDueState } from './calibration-due.ts';
 import type { InstrumentKind } from './instrument-kind.ts';
 
-/** The place an instrument takes on a vessel (stored ids). */
-export type InstrumentRole = 'pressure' | 'temperature' | 'weight';
+/** The place an instrument takes on a vessel (stored ids): its gauge, its thermometer, its scale, the barometer its gauge readings are converted with. */
+export type InstrumentRole = 'pressure' | 'temperature' | 'weight' | 'atmosphere';
 
 export interface InstrumentUse {
   role: InstrumentRole;
@@ -19,7 +19,11 @@ export interface InstrumentUse {
   /** The due state at the check's time, and the due date (ms) when there is one. */
   due: CalibrationDueState;
   dueMs: number | null;
-  /** The limit parts the band used, in the kind's SI unit (Pa or K); `plusMinus` is their root-sum-square. */
+  /**
+   * The limit parts the band used, in the kind's SI unit (Pa, K or kg); `plusMinus` is their
+   * root-sum-square. For a weighing system or a barometer `class` is the larger of its class and
+   * the figure typed for the vessel (that figure may hold the installation's share; see vessel-instruments.ts).
+   */
   limit: { class: number; indicator: number; calibration: number; drift: number; plusMinus: number };
   /** Where the drift part came from: the rate of the kind or the instrument, the last interval's, or (no calibration on record) the drift typed for the vessel. */
   driftSource: 'kind-setting' | 'instrument-setting' | 'last-interval' | 'vessel';

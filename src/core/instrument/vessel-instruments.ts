@@ -5,11 +5,22 @@
 // limit parts go into the fields it already combines by root-sum-square (class → accuracy,
 // indicator → indicator, calibration and drift → drift), so the band equals the RSS of the
 // register limit's parts exactly.
+//
+// The scale and the barometer have one field each in the engine (weightToleranceKg,
+// barometerTolerancePa), so their whole limit goes there: √(max(class, typed)² + indicator² +
+// calibration² + drift²). The figure typed for the vessel stays as a floor under the class
+// because it is meant to hold the installation's share (a vessel scale's piping restraint and
+// tare drift, field-practice.md §3.4, from memory), which no load cell's class includes; taking
+// the larger rather than adding both avoids counting the scale's own accuracy twice. So a fitted
+// scale or barometer can only widen the band the vessel already had. Each enters only when the
+// check uses it: the scale when the reading is weighed, the barometer when a gauge reading is
+// converted with a measured atmosphere (the site value has its own allowance, check/uncertainty.ts).
 
 import { InputError } from '../errors.ts';
 import { outcomeOf, sortedCautions } from '../check/cautions.ts';
 import type { Caution, CheckResult } from '../check/check-result.ts';
 import { VESSEL_LIMITS, type TemperatureSensorTolerance, type VesselSpec } from '../check/vessel-spec.ts';
+import type { Reading } from '../check/reading.ts';
 import { calibrationDue, type InstrumentOptions } from './calibration-due.ts';
 import { calibrationFinding } from './instrument-findings.ts';
 import { instrumentLimit, type InstrumentLimit } from './instrument-limit.ts';
@@ -23,8 +34,14 @@ export interface FittedInstrument {
   calibrations: readonly (CalibrationRecord & { calibrationId: string })[];
 }
 
-/** The fitted instruments that enter a check's band: the pressure place and the temperature place. */
-export type FittedForCheck = Partial<Record<Extract<InstrumentRole, 'pressure' | 'temperature'>, FittedInstrument>>;
+/** The fitted instruments that may enter a check's band, by the place each takes. */
+export type FittedForCheck = Partial<Record<InstrumentRole, FittedInstrument>>;
+
+/** The date of the check, and what of its reading decides whether the scale and the barometer enter its band. */
+export interface CheckInstrumentOptions extends InstrumentOptions {
+  /** The reading: weighed or not, gauge or absolute, with a measured atmosphere or the site's. Absent: neither the scale nor the barometer enters. */
+  reading?: Pick<Reading, 'pressure' | 'weight' | 'atmospherePa'>;
+}
 
 export interface VesselForCheck {
   /** The vessel with the register's limits in its instrument figures and `instrumentsUsed` set (the same vessel when none is fitted). */
@@ -36,17 +53,24 @@ export interface VesselForCheck {
 
 const PRESSURE_KINDS = ['pressure-gauge', 'pressure-transmitter'];
 const TEMPERATURE_KINDS = ['thermometer', 'rtd'];
+const WEIGHT_KINDS = ['weighing-system'];
+const ATMOSPHERE_KINDS = ['barometer'];
 
 /**
  * The vessel as a check at `options.nowMs` (the check's own time, not the clock) uses it. A
  * calibration dated after the check is left out (a check recomputed later keeps its band). With no
  * calibration on record the drift typed for the vessel stays (nothing is known to replace it).
- * Throws InputError naming the field for a bad instrument or calibration (the core's validation),
- * ('instrument role') for a kind in the wrong place, and ('instrument limit') when a limit part is
- * beyond what the engine takes (10 % of span for a gauge, 50 K for a thermometer).
+ * The scale enters when `options.reading` is weighed, the barometer when it is a gauge reading
+ * with a measured atmosphere. Throws InputError naming the field for a bad instrument or
+ * calibration (the core's validation), ('instrument role') for a kind in the wrong place, and
+ * ('instrument limit') when a limit is beyond what the engine takes (10 % of span for a gauge,
+ * 50 K for a thermometer, 100 t for a scale, 10 kPa for a barometer).
  */
-export function vesselWithInstruments(vessel: VesselSpec, fitted: FittedForCheck, options: InstrumentOptions): VesselForCheck {
-  if (fitted.pressure === undefined && fitted.temperature === undefined) return { vessel, uses: [], findings: [] };
+export function vesselWithInstruments(vessel: VesselSpec, fitted: FittedForCheck, options: CheckInstrumentOptions): VesselForCheck {
+  const reading = options.reading;
+  const weighs = fitted.weight !== undefined && reading !== undefined && reading.weight.kind !== 'not-weighed';
+  const barometer = fitted.atmosphere !== undefined && reading !== undefined && reading.pressure.reference === 'gauge' && reading.atmospherePa !== undefined;
+  if (fitted.pressure === undefined && fitted.temperature === undefined && !weighs && !barometer) return { vessel, uses: [], findings: [] };
   const instruments = { ...vessel.instruments };
   const uses: InstrumentUse[] = [];
   const findings: Caution[] = [];
@@ -105,7 +129,41 @@ export function vesselWithInstruments(vessel: VesselSpec, fitted: FittedForCheck
     uses.push(use);
     if (finding) findings.push(finding);
   }
+  if (weighs) {
+    const w = fitted.weight!;
+    requireKind(w, WEIGHT_KINDS, 'weight');
+    const { limit, use, finding } = useOf('weight', w, options, undefined);
+    instruments.weightToleranceKg = flooredLimit(use, limit, vessel.instruments.weightToleranceKg, VESSEL_LIMITS.weightToleranceKg);
+    uses.push(use);
+    if (finding) findings.push(finding);
+  }
+  if (barometer) {
+    const a = fitted.atmosphere!;
+    requireKind(a, ATMOSPHERE_KINDS, 'atmosphere');
+    const { limit, use, finding } = useOf('atmosphere', a, options, undefined);
+    instruments.barometerTolerancePa = flooredLimit(use, limit, vessel.instruments.barometerTolerancePa, VESSEL_LIMITS.barometerTolerancePa);
+    uses.push(use);
+    if (finding) findings.push(finding);
+  }
   return { vessel: { ...vessel, instruments, instrumentsUsed: uses }, uses, findings };
+}
+
+/**
+ * A scale's or barometer's whole limit for the engine's one field: the larger of its class and the
+ * figure typed for the vessel, RSS with its indicator, calibration and drift parts (the file's
+ * header says why). The use records the class part so taken. Throws InputError ('instrument limit')
+ * beyond what the engine takes.
+ */
+function flooredLimit(use: InstrumentUse, limit: InstrumentLimit, typed: number, max: { max: number; unit: string }): number {
+  const parts = limit.band.contributions;
+  const classPart = Math.max(parts.class, typed);
+  const plusMinus = Math.hypot(classPart, parts.indicator, parts.calibration, parts.drift);
+  if (plusMinus > max.max) {
+    throw new InputError('instrument limit', 'out-of-range', plusMinus, { min: 0, max: max.max, unit: max.unit },
+      `instrument limit (${use.tag}): its limit is ${plusMinus.toPrecision(4)} ${max.unit}, beyond the ${max.max} ${max.unit} a check takes; calibrate or replace it.`);
+  }
+  use.limit = { ...use.limit, class: classPart, plusMinus };
+  return plusMinus;
 }
 
 /** With no calibration on record the drift typed for the vessel is the drift part (nothing known replaces it). */

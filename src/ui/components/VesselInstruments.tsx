@@ -9,6 +9,9 @@ import type { PairDrift } from '../state/pair-drift.ts';
 import { fittedAt, type FittingRecord, type InstrumentHistory } from '../../store/index.ts';
 import { dueTextOf, driftFigures } from '../state/instrument-view.ts';
 
+/** Each place's word on the vessel page (and the fitting panel). */
+export const ROLE_WORDS: Readonly<Record<string, string>> = { pressure: 'Pressure', temperature: 'Temperature', weight: 'Weight', atmosphere: 'Barometer' };
+
 interface Loaded { fitted: { role: string; history: InstrumentHistory }[]; pairs: PairDrift[] }
 
 export function VesselInstruments({ vesselId }: { vesselId: string }) {
@@ -35,7 +38,7 @@ export function VesselInstruments({ vesselId }: { vesselId: string }) {
           {loaded.fitted.map(({ role, history }) => (
             <li key={role}>
               <a class="button list-button" href={hrefFor('instruments', history.instrument.id)}>
-                {role === 'pressure' ? 'Pressure' : role === 'temperature' ? 'Temperature' : 'Weight'}: {history.instrument.tag} · {dueTextOf(history)}
+                {ROLE_WORDS[role] ?? role}: {history.instrument.tag} · {dueTextOf(history)}
               </a>
             </li>
           ))}

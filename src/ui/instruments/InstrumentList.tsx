@@ -16,7 +16,8 @@ export function InstrumentList() {
   const rows = sortedRegister(r.register, now);
   return (
     <div data-register-state={r.state}>
-      <p>Every gauge and thermometer the checks rest on, with its calibrations. The band of each check uses the instrument's class, its last calibration and a drift allowance growing with time since.</p>
+      <p>Every gauge, thermometer, scale and barometer the checks rest on, with its calibrations. The band of each check uses the instrument's class, its last calibration and a drift allowance growing with time since.</p>
+      <p><a class="button" href={hrefFor('instruments', 'new')}>Add an instrument</a></p>
       {r.error ? <p class="field-error">{r.error}</p> : null}
       {r.state === 'ready' && rows.length === 0 ? <p>No instruments yet: a vessel's gauge and thermometer join the register when the vessel is saved.</p> : null}
       <ul class="list" aria-label="Instruments">

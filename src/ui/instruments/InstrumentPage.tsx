@@ -1,6 +1,7 @@
 // One instrument: what it is, its status, where it has been fitted, its calibrations, a chart of
 // its as-found errors and the offset the log shows for each pair it belongs to, the drift found,
-// and the calibration form. data-instrument-state="ready" once all of it is read.
+// the calibration form, and what can be done to it (change, fit or swap, retire).
+// data-instrument-state="ready" once all of it is read.
 import { useEffect, useState } from 'preact/hooks';
 import * as repo from '../state/repo.ts';
 import { useVessels } from '../state/app-state.ts';
@@ -13,6 +14,7 @@ import { InstrumentFacts } from './InstrumentFacts.tsx';
 import { CalibrationTable } from './CalibrationTable.tsx';
 import { ErrorChart } from './ErrorChart.tsx';
 import { CalibrationForm } from './CalibrationForm.tsx';
+import { InstrumentActions } from './InstrumentActions.tsx';
 
 interface Loaded { history: InstrumentHistory; fittings: FittingRecord[]; pairs: PairDrift[] }
 
@@ -69,6 +71,7 @@ export function InstrumentPage({ instrumentId }: { instrumentId: string }) {
         </section>
       ) : null}
       <CalibrationForm history={history} onSaved={() => setVersion((v) => v + 1)} />
+      <InstrumentActions key={history.instrument.updatedAt} instrument={history.instrument} onChanged={() => setVersion((v) => v + 1)} />
     </div>
   );
 }

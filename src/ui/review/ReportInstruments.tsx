@@ -4,7 +4,7 @@
 import { useEffect, useState } from 'preact/hooks';
 import { checksForVessel, type VesselRecord } from '../../store/index.ts';
 import * as repo from '../state/repo.ts';
-import { PairDriftView } from '../components/VesselInstruments.tsx';
+import { PairDriftView, ROLE_WORDS } from '../components/VesselInstruments.tsx';
 import type { PairDrift } from '../state/pair-drift.ts';
 import { instrumentsInPeriod, stateAtChecksText, type InstrumentInPeriod } from './report-instruments.ts';
 
@@ -36,7 +36,7 @@ export function ReportInstruments({ vessel, fromMs, toMs }: Props) {
         <ul class="list" aria-label={`Instruments of ${vessel.tag} in the period`}>
           {data.lines.map((l) => (
             <li key={l.instrumentId} data-instrument-tag={l.tag} data-state-at-checks={l.worstAtCheck ?? 'unrecorded'}>
-              <strong>{l.tag}</strong> ({l.role}): {stateAtChecksText(l)}; now {l.now}.
+              <strong>{l.tag}</strong> ({(ROLE_WORDS[l.role] ?? l.role).toLowerCase()}): {stateAtChecksText(l)}; now {l.now}.
             </li>
           ))}
         </ul>

@@ -65,7 +65,7 @@ export function evaluateDraft(
   if (span) return { kind: 'input-error', errors: { pressure: span } };
   try {
     // The band of the reading's own time: a calibration entered later, or one overdue by then, counts as it stood.
-    const forCheck = vesselWithInstruments(spec, fitted, { nowMs: Date.parse(r.reading.time) });
+    const forCheck = vesselWithInstruments(spec, fitted, { nowMs: Date.parse(r.reading.time), reading: r.reading });
     const result = withInstrumentFindings(evaluateCheck(forCheck.vessel, r.reading), forCheck.findings);
     const typed = { pressure: d.pressure.unit, temperature: d.temperature.unit, mass: d.gross.unit };
     let view: ResultView | undefined;

@@ -171,12 +171,14 @@ export function fittedOf(h: InstrumentHistory): FittedInstrument {
 /** The store's on-demand surface, where the register's reads and writes live (out of the start-up JavaScript). */
 const onDemand = () => import('../../store/transfer.ts');
 
-/** The vessel's pressure and temperature instruments in force at `atMs` (now by default), for a check's band; {} for a vessel without a register. */
+/** The vessel's instruments in force at `atMs` (now by default), each place's, for a check's band; {} for a vessel without a register. */
 export async function fittedForCheck(vesselId: string, atMs = Date.now()): Promise<FittedForCheck> {
   const fitted = await (await onDemand()).fittedInstruments(vesselId, atMs);
   const out: FittedForCheck = {};
-  if (fitted.pressure) out.pressure = fittedOf(fitted.pressure);
-  if (fitted.temperature) out.temperature = fittedOf(fitted.temperature);
+  for (const role of store.INSTRUMENT_ROLES) {
+    const h = fitted[role];
+    if (h) out[role] = fittedOf(h);
+  }
   return out;
 }
 
@@ -215,3 +217,4 @@ export async function registerCsvFile(): Promise<{ name: string; blob: Blob }> {
   const { exportRegisterCsv } = await import('../../store/transfer.ts');
   return { name: `tankside-instruments-${stamp}.csv`, blob: new Blob([await exportRegisterCsv()], { type: 'text/csv' }) };
 }
+

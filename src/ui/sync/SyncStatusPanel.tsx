@@ -60,7 +60,7 @@ function RunLine({ run }: { run: SyncRun }) {
   if (run.state === 'running') {
     const known = run.total !== null && run.total > 0;
     return (
-      <div class="work-progress" role="status">
+      <div class="work-progress" role="status" data-sync-step={run.step} data-sync-done={run.done}>
         <label class="label" for="sync-progress">{STEP_WORDS[run.step]}{known ? `: ${run.done.toLocaleString('en-GB')} of ${run.total!.toLocaleString('en-GB')}` : '…'}</label>
         {known ? <progress id="sync-progress" max={run.total!} value={run.done} /> : <progress id="sync-progress" />}
       </div>
