@@ -140,21 +140,20 @@ function finiteOrNull(value: unknown): number | null {
 
 /**
  * A check's key figures as the month rows keep them (schema v10), SI, each null where the record
- * has none: the temperature read (K), the absolute pressure the engine worked with (Pa; a gauge
- * reading sorts by what it stands for, so gauge and absolute readings sort together), and, when
+ * has none: the temperature read (K), the absolute pressure the engine worked with (Pa, its
+ * result's reading; a gauge reading sorts by what it stands for, so gauge and absolute readings
+ * sort together; a record without a result has none), and, when
  * the contents were two-phase, the quality (kg/kg) and the liquid mass (kg), as the Review shows them.
  */
 export type KeyFigures = [temperatureK: number | null, absolutePressurePa: number | null, quality: number | null, liquidMassKg: number | null];
 
 /** The key figures of a stored check (KeyFigures), read defensively: an older or damaged record gives nulls. */
 export function keyFiguresOf(r: { reading: unknown; result: unknown }): KeyFigures {
-  const pressure = field(r.reading, 'pressure');
-  const enteredAbsolute = field(pressure, 'reference') === 'absolute' ? finiteOrNull(field(pressure, 'pressurePa')) : null;
   const inventory = field(r.result, 'inventory');
   const twoPhase = field(inventory, 'regime') === 'two-phase';
   return [
     finiteOrNull(field(r.reading, 'temperatureK')),
-    finiteOrNull(field(field(r.result, 'reading'), 'absolutePressurePa')) ?? enteredAbsolute,
+    finiteOrNull(field(field(r.result, 'reading'), 'absolutePressurePa')),
     twoPhase ? finiteOrNull(field(inventory, 'quality')) : null,
     twoPhase ? finiteOrNull(field(inventory, 'liquidMassKg')) : null,
   ];
