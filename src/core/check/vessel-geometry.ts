@@ -408,31 +408,51 @@ export function levelSolver(geometry: CylinderGeometry): (volumeM3: number) => n
   const span = vesselLevelSpanM(geometry);
   const shape = levelShape(geometry);
   const t = shape.horizontal ? shape.head.t : null;
-  // The last level this solver found and its volume. The level band's solves lie close to one
-  // another, so each starts from the one before, a step of ΔV over the surface's area: the start
-  // decides only where V(h) is evaluated, never the level returned (see bisectionResult; the
-  // torispherical solve's own note says what it changes there).
+  // The first level this solver found (a check's own level), its volume and the surface's area
+  // there; the second and third solves add the curvature of h(V) and its next term (divided
+  // differences on the first volume taken twice, then the second and third). The level band's six
+  // solves lie close to the first, so each starts from that cubic: the start decides only where
+  // V(h) is evaluated, never the level returned (see bisectionResult; the torispherical solve's
+  // own note says what it changes there).
   let anchorM3 = Number.NaN;
   let anchorM = Number.NaN;
   let anchorAreaM2 = 0;
+  let curvature = 0;
+  let cubic = 0;
+  let secondM3 = Number.NaN;
+  let secondM = Number.NaN;
+  let solves = 0;
   return (volumeM3) => {
     if (!Number.isFinite(volumeM3)) throw new InputError('liquid volume', 'not-a-number', volumeM3, range);
     if (volumeM3 < 0 || volumeM3 > total * (1 + 1e-12)) throw new InputError('liquid volume', 'out-of-range', volumeM3, range);
-    const guess = anchorAreaM2 > 0 ? anchorM + (volumeM3 - anchorM3) / anchorAreaM2 : firstGuessM(shape, volumeM3, total, span);
+    const d = volumeM3 - anchorM3;
+    const near = anchorAreaM2 > 0 ? anchorM + d / anchorAreaM2 + d * d * (curvature + (cubic === 0 ? 0 : cubic * (volumeM3 - secondM3))) : Number.NaN;
+    const guess = near >= 0 && near <= span ? near : firstGuessM(shape, volumeM3, total, span);
     let level: number;
     if (t !== null) {
       level = horizontalTorisphericalLevel(shape, t, volumeM3, span, guess);
-      anchorAreaM2 = TORISPHERICAL_LAST_SLOPE[0] as number;
     } else {
       // The result of plain bisection (80 steps or 1e-12 of the span), from fewer evaluations
       // (bisection.ts); V(h) is a sum of a few closed forms, within 1e-13 of the total volume (a
       // few hundred ulp).
       const start = guess > 0 && guess < span ? { x: guess, slope: surfaceAreaM2(shape, guess) } : undefined;
       level = bisectionResult((h) => volumeOfShape(shape, h) - volumeM3, 0, span, 80, 1e-12 * span, () => 1e-13 * total, 1e-14 * span, start);
-      anchorAreaM2 = surfaceAreaM2(shape, level);
     }
-    anchorM3 = volumeM3;
-    anchorM = level;
+    if (solves === 0) {
+      anchorM3 = volumeM3;
+      anchorM = level;
+      anchorAreaM2 = t !== null ? (TORISPHERICAL_LAST_SLOPE[0] as number) : surfaceAreaM2(shape, level);
+    } else if (solves === 1 && d !== 0 && anchorAreaM2 > 0) {
+      curvature = (level - anchorM - d / anchorAreaM2) / (d * d);
+      if (!Number.isFinite(curvature)) curvature = 0;
+      secondM3 = volumeM3;
+      secondM = level;
+    } else if (solves === 2 && d !== 0 && volumeM3 !== secondM3 && secondM3 !== anchorM3 && anchorAreaM2 > 0) {
+      const through = ((level - secondM) / (volumeM3 - secondM3) - (secondM - anchorM) / (secondM3 - anchorM3)) / d;
+      cubic = (through - curvature) / d;
+      if (!Number.isFinite(cubic)) cubic = 0;
+    }
+    solves++;
     return level;
   };
 }
@@ -505,7 +525,8 @@ function horizontalTorisphericalLevel(g: LevelShape, t: Torus, volumeM3: number,
   const R = g.R;
   let lo = 0;
   let hi = span;
-  let h = clamp(startM, 0, span);
+  // A start outside the vessel (or NaN) would stall the solve: then a plain cylinder's level.
+  let h = startM >= 0 && startM <= span ? startM : cylinderFractionLevelM(R, span, volumeM3 / total);
   for (let k = 0; k < 100; k++) {
     const y = h - R;
     torisphericalSegments(g.head, t, y);
