@@ -4,8 +4,9 @@
 // half where f changes sign), and their results are stored: a supervisor's recomputation must give
 // the same doubles. Plain bisection evaluates f at every midpoint (40 to 60 of them), which made the
 // first check in a fresh process slow (every evaluation runs cold there). This one first closes in
-// on the sign change with the Illinois variant of regula falsi (a handful of evaluations), then
-// replays the bisection: a midpoint more than a margin below the last point where f was found
+// on the sign change (from the caller's estimate or known points when it has them, else a few
+// halvings, then secant steps aimed just past the root: a handful of evaluations), then replays
+// the bisection: a midpoint more than a margin below the last point where f was found
 // negative must be negative too (f rises), one more than the margin above the first point where f
 // was found non-negative must be non-negative, and only midpoints within the margin of the sign
 // change are evaluated. If the computed f is within ±fNoise of the true f, a midpoint x below the
