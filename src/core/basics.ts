@@ -5,8 +5,8 @@
 export { InputError, requireInRange } from './errors.ts';
 export type { InputProblem } from './errors.ts';
 export * from './units/index.ts';
-export { STANDING_NOTE } from './check/cautions.ts';
-export type { SignalWord } from './check/cautions.ts';
+export { STANDING_NOTE_MESSAGE } from './check/standing-note.ts';
+export type { SignalWord } from './check/check-result.ts';
 // The check's due state is small and needs nothing else: the Vessels screen and the overview take it from here.
 export { checkDue, CHECK_DUE_ORDER, CHECK_INTERVAL_MAX_S, CHECK_INTERVAL_MIN_S } from './check/check-due.ts';
 export type { CheckDue, CheckDueState } from './check/check-due.ts';

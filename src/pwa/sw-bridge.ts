@@ -5,7 +5,9 @@
 // <html data-worker-state> says where this page stands ("registering", then "current" once the
 // registration has settled with this page controlled and no newer worker installing or waiting,
 // "update-ready", "reloading"): browser tests wait on it, never on a fixed time.
-import { Workbox } from 'workbox-window';
+// workbox-window (2.5 KB gzip) is loaded only when registering: nothing before the first paint needs
+// it, and the registration already waits for the store to open.
+import type { Workbox } from 'workbox-window';
 
 /** Saves whatever is being typed; must resolve only once it is stored. */
 export type FlushBeforeReload = () => Promise<void>;
@@ -13,6 +15,7 @@ export type FlushBeforeReload = () => Promise<void>;
 const UPDATE_POLL_MS = 60 * 60 * 1000;
 
 let workbox: Workbox | undefined;
+let starting = false;
 let updateReady = false;
 let reloadRequested = false;
 let flushBeforeReload: FlushBeforeReload = () => Promise.resolve();
@@ -44,9 +47,14 @@ function settle(registration: ServiceWorkerRegistration): void {
  */
 export function startServiceWorker(flush: FlushBeforeReload): void {
   flushBeforeReload = flush;
-  if (workbox || !('serviceWorker' in navigator) || import.meta.env.DEV) return;
-  workbox = new Workbox('./sw.js', { scope: './' });
+  if (starting || !('serviceWorker' in navigator) || import.meta.env.DEV) return;
+  starting = true;
   setWorkerState('registering');
+  void import('workbox-window').then(({ Workbox }) => register(new Workbox('./sw.js', { scope: './' })), () => undefined);
+}
+
+function register(wb: Workbox): void {
+  workbox = wb;
   // 'waiting' covers both a worker installed during this visit and one left waiting by an
   // earlier visit or another tab (event.wasWaitingBeforeRegister).
   workbox.addEventListener('waiting', () => {

@@ -32,7 +32,7 @@ import {
   type TypedInput,
 } from './records.ts';
 import { SETTING_SEAL_PENDING, type TanksideDB } from './schema.ts';
-import { askPersistenceOnce, deviceId } from './settings.ts';
+import { askPersistenceOnce, deviceId, dropDraftMirror } from './settings.ts';
 import { deviceSigningKey, signChainHead } from './signing.ts';
 import { formatIsoWithOffset } from './time.ts';
 import { cloneJson, invalid, requireJson, requireJsonObject, requireText, requireUuid } from './validate.ts';
@@ -203,6 +203,9 @@ export async function appendToChain(db: IDBPDatabase<TanksideDB>, base: ChainBas
     const signature = key ? await signChainHead(key, device, record.seq, record.hash).catch(() => '') : '';
 
     const scope: StoreNames<TanksideDB>[] = options.clearDraft === undefined ? [...LOG_STORES] : [...LOG_STORES, 'drafts'];
+    // The draft's mirror goes now: once this commits the entry must not come back in the form, and
+    // should it not commit, the draft in IndexedDB (deleted only with the record) still holds it.
+    if (options.clearDraft !== undefined) dropDraftMirror(options.clearDraft);
     const tx = db.transaction(scope, 'readwrite', STRICT);
     const done = tx.done;
     done.catch(() => {}); // observed below; keeps an abort from surfacing as unhandled

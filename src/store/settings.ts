@@ -38,20 +38,76 @@ export async function putSetting(key: string, value: JsonValue): Promise<void> {
   }
 }
 
+// Drafts are mirrored in localStorage as well, written synchronously before the IndexedDB write is
+// issued. A transaction whose commit was asked for can still be aborted when the page goes away
+// before the browser's database thread has run it (seen under heavy load: a close straight after
+// the last keystrokes lost the last two fields), while a localStorage write is in the browser's
+// hands once the call returns and is flushed at an orderly shutdown. The mirror is only ever the
+// newest copy: it is removed (not left stale) whenever its write fails or the IndexedDB draft is
+// deleted, so a mirror that is present always wins over the IndexedDB draft.
+const MIRROR_PREFIX = 'tankside.draft.';
+/** What a discarded draft leaves in the mirror, so an IndexedDB delete cut short cannot bring it back. */
+const DISCARDED = 'discarded';
+
+type StoredDraft = { value: JsonValue; savedAt: IsoDateTime };
+
+function mirror(): Storage | undefined {
+  try {
+    return typeof localStorage === 'undefined' ? undefined : localStorage;
+  } catch {
+    return undefined; // a browser that refuses storage access throws on reading the property
+  }
+}
+
+function writeMirror(key: string, text: string | undefined): void {
+  const m = mirror();
+  if (!m) return;
+  try {
+    if (text === undefined) m.removeItem(MIRROR_PREFIX + key);
+    else m.setItem(MIRROR_PREFIX + key, text);
+  } catch {
+    try { m.removeItem(MIRROR_PREFIX + key); } catch { /* the IndexedDB copy stands alone */ }
+  }
+}
+
+function readMirror(key: string): StoredDraft | 'discarded' | undefined {
+  let text: string | null | undefined;
+  try { text = mirror()?.getItem(MIRROR_PREFIX + key); } catch { return undefined; }
+  if (text === null || text === undefined) return undefined;
+  if (text === DISCARDED) return 'discarded';
+  try {
+    const parsed = JSON.parse(text) as StoredDraft;
+    return parsed && typeof parsed === 'object' && 'value' in parsed && typeof parsed.savedAt === 'string' ? parsed : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Forgets the mirror of `key` at once: called as a save that deletes the draft in its own
+ * transaction opens. Should that transaction not commit, the IndexedDB draft is still there.
+ */
+export function dropDraftMirror(key: string): void {
+  writeMirror(key, undefined);
+}
+
 /**
  * Saves a draft under `key` (e.g. "new-check"), replacing the previous one. Call it as the user
  * types: drafts live in IndexedDB, so they survive a reload, a closed tab and an app update. Once
  * the store is open, the write is issued and its commit asked for within the task that calls this
- * (only microtasks come between), so a page closed straight after still has it written.
+ * (only microtasks come between), so a page closed straight after still has it written; the
+ * localStorage mirror is written before this returns its promise.
  * @throws StoreError('invalid-record' | 'quota-exceeded' | 'write-failed')
  */
 export async function saveDraft(key: string, value: JsonValue): Promise<void> {
   requireText('draft key', key, 1, 100);
   requireJson(`draft ${key}`, value);
+  const stored: StoredDraft = { value, savedAt: formatIsoWithOffset(new Date(), undefined, true) };
+  writeMirror(key, JSON.stringify(stored));
   const db = await getDb();
   const tx = db.transaction('drafts', 'readwrite', STRICT);
   try {
-    const put = tx.store.put({ value, savedAt: formatIsoWithOffset(new Date(), undefined, true) }, key);
+    const put = tx.store.put(stored, key);
     // Without this the commit waits for the put's success event to come back to this page: a
     // page closed in between loses the write (an uncommitted transaction is aborted with it).
     tx.commit();
@@ -62,14 +118,18 @@ export async function saveDraft(key: string, value: JsonValue): Promise<void> {
 }
 
 /** The draft saved under `key`, with when it was saved, or undefined. */
-export async function loadDraft(key: string): Promise<{ value: JsonValue; savedAt: IsoDateTime } | undefined> {
+export async function loadDraft(key: string): Promise<StoredDraft | undefined> {
   requireText('draft key', key, 1, 100);
-  return (await getDb()).get('drafts', key);
+  const mirrored = readMirror(key);
+  const stored = await (await getDb()).get('drafts', key);
+  if (mirrored === 'discarded') return undefined;
+  return mirrored ?? stored;
 }
 
 /** Removes the draft under `key` (after the check it held was saved, or the user discarded it). */
 export async function clearDraft(key: string): Promise<void> {
   requireText('draft key', key, 1, 100);
+  writeMirror(key, DISCARDED);
   const db = await getDb();
   const tx = db.transaction('drafts', 'readwrite', STRICT);
   try {

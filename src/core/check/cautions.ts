@@ -21,6 +21,7 @@
 // cause minor or moderate injury; NOTICE, practices not related to personal injury.
 
 import type { Caution, CautionPart, CautionQuantity, Outcome, SignalWord } from './check-result.ts';
+import { STANDING_NOTE_MESSAGE } from './standing-note.ts';
 
 export type { Caution, CautionPart, CautionQuantity, Outcome, SignalWord } from './check-result.ts';
 
@@ -201,13 +202,8 @@ export function caution(rule: CautionRule, wording: string | CautionWording): Ca
     : { signal, message: wording.message, rule, parts: wording.parts };
 }
 
-/** The note every result carries (issue 3, item 7; wording ours). */
-export const STANDING_NOTE: Caution = caution(
-  'standing-note',
-  'Advisory figures only. This app does not replace the vessel\'s inspection regime, local codes ' +
-    '(such as ASME BPVC Section VIII, PED 2014/68/EU and national rules), lockout/tagout procedures ' +
-    'or licensed practice. Nameplate limits and the competent person\'s instructions take precedence.',
-);
+/** The note every result carries, worded in standing-note.ts. */
+export const STANDING_NOTE: Caution = caution('standing-note', STANDING_NOTE_MESSAGE);
 
 /** Most severe first, stable within a level. */
 function bySeverity(list: readonly Caution[]): Caution[] {
