@@ -7,9 +7,11 @@
 //    loads only when the worker registers (after the store opens), the module-preload polyfill is
 //    off (every browser the app runs in preloads modules itself) and the standing note's wording
 //    left the rule catalogue (basics.ts had pulled all of cautions.ts in for one string): 44.3 KB;
+//    the v9 id buckets (log-ids.ts) added 0.5 KB, and the full result's card with its chart and
+//    sketch now loads with the engine (check-session.ts), which it always waited for: 43.2 KB;
 //    issue 14's schema v10 (every month row keeps its check's key figures, written by every save,
-//    and the rung that fills them in, sharing rung 5's row rebuild) and readRecords' one request per block add about 0.25 KB
-//    (45.00 KB with main's register screens and sync since: at the budget);
+//    and the rung that fills them in, sharing rung 5's row rebuild) and readRecords' one request
+//    per block add about 0.25 KB;
 //  - on demand: chunks behind a dynamic import (every screen but Check, the engine, the long jobs), at most 20 KB each,
 //    but the check engine's chunk (`core-*.js`), at most 26 KB: issue 9's findings (40 rules and
 //    their wording, the edge states, the stored region 3 starting values) took it from 15.4 to

@@ -16,7 +16,7 @@ import { resolveReading, type Reading, type ResolvedReading } from './reading.ts
 import { checkSaturation, type SaturationCheck } from './saturation-consistency.ts';
 import { gaugeLimitsPa, inventoryBands, netMassToleranceKg, pressureTolerancesPa, SITE_ATMOSPHERE_TOLERANCE_PA, thermometerLimitsK } from './uncertainty.ts';
 import { requireFiniteData } from './finite-data.ts';
-import { vesselVolume } from './vessel-geometry.ts';
+import { levelSolver, vesselVolume } from './vessel-geometry.ts';
 import { validateVessel, type VesselSpec } from './vessel-spec.ts';
 
 export type { CheckResult, Hazards } from './check-result.ts';
@@ -46,6 +46,8 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
   const temperatureLimitK = thermometerLimitsK(vessel.instruments, T).combined;
   const massToleranceKg = reading.weight.kind === 'not-weighed' ? 0 : netMassToleranceKg(vessel, reading.weight.kind);
 
+  // One level solver for the check's level and the level band's six: each solve starts from the last.
+  const levelAt = vessel.geometry.shape === 'stated-volume' ? undefined : levelSolver(vessel.geometry);
   const inventory: CheckResult['inventory'] =
     r.netMassKg === null
       ? { regime: 'not-weighed' }
@@ -62,6 +64,7 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
           massRelativeTolerance: massToleranceKg / r.netMassKg,
           volumeRelativeTolerance: vessel.instruments.volumeTolerancePercent / 100,
           temperatureToleranceK: temperatureLimitK,
+          levelAt,
         });
   const liquidPresent = inventory.regime === 'not-weighed' ? null : inventory.regime !== 'superheated';
   const saturationCheck = checkSaturation(vessel, r, reading.pressure.reference, liquidPresent);
@@ -76,6 +79,7 @@ export function evaluateCheck(vessel: VesselSpec, reading: Reading): CheckResult
           massToleranceKg,
           temperatureToleranceK: temperatureLimitK,
           volumeToleranceM3: (vessel.instruments.volumeTolerancePercent / 100) * V,
+          levelAt,
         })
       : null;
   if (inventory.regime === 'two-phase' && bands) inventory.liquidFullWithinBand = bands.quality.low <= 0;

@@ -127,6 +127,8 @@ export function inventoryOf(args: {
   volumeRelativeTolerance?: number;
   /** ± limit of the temperature, K; 0 if unknown. */
   temperatureToleranceK?: number;
+  /** levelSolver(geometry), when the caller shares it with the level band (its solves then start from this level); one of its own otherwise. */
+  levelAt?: (volumeM3: number) => number;
 }): Inventory {
   const { geometry, volumeM3: V, netMassKg: m, temperatureK: T, atmospherePa } = args;
   const v = V / m;
@@ -155,7 +157,8 @@ export function inventoryOf(args: {
       geometry.shape === 'stated-volume'
         ? null
         : (() => {
-            const levelM = liquidLevelFromVolume(geometry, Math.min(Math.max(liquidVolumeM3, 0), V));
+            const liquidM3 = Math.min(Math.max(liquidVolumeM3, 0), V);
+            const levelM = args.levelAt ? args.levelAt(liquidM3) : liquidLevelFromVolume(geometry, liquidM3);
             return { levelM, levelFraction: levelM / vesselLevelSpanM(geometry) };
           })();
     return {

@@ -151,6 +151,8 @@ export function inventoryBands(args: {
   massToleranceKg: number;
   temperatureToleranceK: number;
   volumeToleranceM3: number;
+  /** levelSolver(geometry), shared with the check's own level solve so the band's solves start near it; one of its own otherwise. */
+  levelAt?: (volumeM3: number) => number;
 }): InventoryBands {
   const { temperatureK: T, massKg: m, volumeM3: V } = args;
   const at = (t: number) => {
@@ -214,12 +216,12 @@ function clamp01(x: number): number {
  */
 function levelBand(
   geometry: Exclude<VesselGeometry, { shape: 'stated-volume' }>,
-  args: { temperatureK: number; massKg: number; volumeM3: number; massToleranceKg: number; temperatureToleranceK: number; volumeToleranceM3: number },
+  args: { temperatureK: number; massKg: number; volumeM3: number; massToleranceKg: number; temperatureToleranceK: number; volumeToleranceM3: number; levelAt?: (volumeM3: number) => number },
   vfHere: number,
   vgHere: number,
 ): Band<'weight' | 'temperature' | 'volume'> {
   const drawn = vesselVolume(geometry);
-  const levelAt = levelSolver(geometry);
+  const levelAt = args.levelAt ?? levelSolver(geometry);
   const { temperatureK: T, massKg: m, volumeM3: V } = args;
   // v_f and v_g at the reading's own T (vfHere, vgHere, m³/kg, as inventoryBands has them) serve
   // four of the six levels (the weight and volume limits).

@@ -408,34 +408,88 @@ export function levelSolver(geometry: CylinderGeometry): (volumeM3: number) => n
   const span = vesselLevelSpanM(geometry);
   const shape = levelShape(geometry);
   const t = shape.horizontal ? shape.head.t : null;
+  // The first level this solver found (a check's own level), its volume and the surface's area
+  // there; the second and third solves add the curvature of h(V) and its next term (divided
+  // differences on the first volume taken twice, then the second and third). The level band's six
+  // solves lie close to the first, so each starts from that cubic: the start decides only where
+  // V(h) is evaluated, never the level returned (see bisectionResult; the torispherical solve's
+  // own note says what it changes there).
+  let anchorM3 = Number.NaN;
+  let anchorM = Number.NaN;
+  let anchorAreaM2 = 0;
+  let curvature = 0;
+  let cubic = 0;
+  let secondM3 = Number.NaN;
+  let secondM = Number.NaN;
+  let solves = 0;
   return (volumeM3) => {
     if (!Number.isFinite(volumeM3)) throw new InputError('liquid volume', 'not-a-number', volumeM3, range);
     if (volumeM3 < 0 || volumeM3 > total * (1 + 1e-12)) throw new InputError('liquid volume', 'out-of-range', volumeM3, range);
-    if (t !== null) return horizontalTorisphericalLevel(shape, t, volumeM3, span);
-    // The result of plain bisection (80 steps or 1e-12 of the span), from fewer evaluations
-    // (bisection.ts); V(h) is a sum of a few closed forms or a Simpson sum, within 1e-13 of the
-    // total volume (a few hundred ulp).
-    return bisectionResult((h) => volumeOfShape(shape, h) - volumeM3, 0, span, 80, 1e-12 * span, () => 1e-13 * total, 1e-14 * span);
+    const d = volumeM3 - anchorM3;
+    const near = anchorAreaM2 > 0 ? anchorM + d / anchorAreaM2 + d * d * (curvature + (cubic === 0 ? 0 : cubic * (volumeM3 - secondM3))) : Number.NaN;
+    const guess = near >= 0 && near <= span ? near : firstGuessM(shape, volumeM3, total, span);
+    let level: number;
+    if (t !== null) {
+      level = horizontalTorisphericalLevel(shape, t, volumeM3, span, guess);
+    } else {
+      // The result of plain bisection (80 steps or 1e-12 of the span), from fewer evaluations
+      // (bisection.ts); V(h) is a sum of a few closed forms, within 1e-13 of the total volume (a
+      // few hundred ulp).
+      const start = guess > 0 && guess < span ? { x: guess, slope: surfaceAreaM2(shape, guess) } : undefined;
+      level = bisectionResult((h) => volumeOfShape(shape, h) - volumeM3, 0, span, 80, 1e-12 * span, () => 1e-13 * total, 1e-14 * span, start);
+    }
+    if (solves === 0) {
+      anchorM3 = volumeM3;
+      anchorM = level;
+      anchorAreaM2 = t !== null ? (TORISPHERICAL_LAST_SLOPE[0] as number) : surfaceAreaM2(shape, level);
+    } else if (solves === 1 && d !== 0 && anchorAreaM2 > 0) {
+      curvature = (level - anchorM - d / anchorAreaM2) / (d * d);
+      if (!Number.isFinite(curvature)) curvature = 0;
+      secondM3 = volumeM3;
+      secondM = level;
+    } else if (solves === 2 && d !== 0 && volumeM3 !== secondM3 && secondM3 !== anchorM3 && anchorAreaM2 > 0) {
+      const through = ((level - secondM) / (volumeM3 - secondM3) - (secondM - anchorM) / (secondM3 - anchorM3)) / d;
+      cubic = (through - curvature) / d;
+      if (!Number.isFinite(cubic)) cubic = 0;
+    }
+    solves++;
+    return level;
   };
 }
 
-/**
- * Level of a horizontal vessel with torispherical heads, m: Newton's method on V(h) with its
- * derivative (the liquid surface's area, from the same quadrature), kept inside a bracket that
- * bisection takes over whenever a step would leave it; to 1e-13 of the span. Each evaluation
- * integrates the heads, so the 40 evaluations of a plain bisection cost more than the rest of a
- * check (9.5 ms against 40 µs with Simpson's rule); Newton needs about five.
- */
-function horizontalTorisphericalLevel(g: LevelShape, t: Torus, volumeM3: number, span: number): number {
-  const total = volumeOfShape(g, span);
-  if (volumeM3 <= 0) return 0;
-  if (volumeM3 >= total) return span;
+/** Area of the liquid surface at level h, m² (dV/dh): where a level solve's Newton steps aim. */
+function surfaceAreaM2(g: LevelShape, h: number): number {
   const R = g.R;
-  let lo = 0;
-  let hi = span;
-  // Start where a plain cylinder would hold this fraction (a few cheap Newton steps on the
-  // circular segment): the heads bend the relation only a little, so the steps below are few.
-  const fraction = volumeM3 / total;
+  const head = g.head;
+  if (g.horizontal) {
+    const y = h - R;
+    const chord = 2 * Math.sqrt(Math.max(0, R * R - y * y));
+    // d/dh of two heads' π·a·h²·(3R − h)/(6R), the closed form horizontalVolume uses (0 when
+    // flat). Torispherical heads are not asked: their solve carries its own slope.
+    const hh = clamp(h, 0, head.D);
+    return chord * g.straightLengthM + (Math.PI * head.a * hh * (2 * R - hh)) / R;
+  }
+  const hd = head.depth;
+  if (h <= hd) return hd > 0 ? Math.PI * square(sliceRadius(head, h)) : Math.PI * R * R;
+  if (h < hd + g.straightLengthM) return Math.PI * R * R;
+  const z = hd + g.straightLengthM + hd - h;
+  return hd > 0 ? Math.PI * square(sliceRadius(head, Math.max(0, z))) : Math.PI * R * R;
+}
+
+/** A first estimate of the level for a volume, m, with no level solved yet on this vessel. */
+function firstGuessM(g: LevelShape, volumeM3: number, total: number, span: number): number {
+  const R = g.R;
+  if (g.horizontal) return cylinderFractionLevelM(R, span, volumeM3 / total);
+  const hd = g.head.depth;
+  const full = g.full;
+  // A head fills about as the square of its depth near its apex; the shell in between is linear.
+  if (volumeM3 < full) return hd * Math.sqrt(volumeM3 / full);
+  if (volumeM3 > total - full) return span - hd * Math.sqrt(Math.max(0, total - volumeM3) / full);
+  return hd + (volumeM3 - full) / (Math.PI * R * R);
+}
+
+/** Level of a plain horizontal cylinder of radius R holding this fraction of its volume, m (a few Newton steps on the circular segment). */
+function cylinderFractionLevelM(R: number, span: number, fraction: number): number {
   const disk = Math.PI * R * R;
   let h = span * fraction;
   for (let k = 0; k < 8; k++) {
@@ -444,11 +498,41 @@ function horizontalTorisphericalLevel(g: LevelShape, t: Torus, volumeM3: number,
     if (!(w > 0)) break;
     h = clamp(h - (circleAreaBelow(R, y) - fraction * disk) / w, 0, span);
   }
+  return h;
+}
+
+function square(x: number): number {
+  return x * x;
+}
+
+/** Scratch output of horizontalTorisphericalLevel: [dV/dh at the last level evaluated, m²]. */
+const TORISPHERICAL_LAST_SLOPE = new Float64Array(1);
+
+/**
+ * Level of a horizontal vessel with torispherical heads, m: Newton's method on V(h) with its
+ * derivative (the liquid surface's area, from the same quadrature), kept inside a bracket that
+ * bisection takes over whenever a step would leave it; to 1e-13 of the span. Each evaluation
+ * integrates the heads, so the 40 evaluations of a plain bisection cost more than the rest of a
+ * check (9.5 ms against 40 µs with Simpson's rule); Newton needs about five from a plain
+ * cylinder's level for this fill, three from a neighbouring solve's level (`startM`). Where it
+ * ends depends on where it starts, by at most the last step (1e-13 of the span).
+ */
+function horizontalTorisphericalLevel(g: LevelShape, t: Torus, volumeM3: number, span: number, startM: number): number {
+  const total = volumeOfShape(g, span);
+  TORISPHERICAL_LAST_SLOPE[0] = 0;
+  if (volumeM3 <= 0) return 0;
+  if (volumeM3 >= total) return span;
+  const R = g.R;
+  let lo = 0;
+  let hi = span;
+  // A start outside the vessel (or NaN) would stall the solve: then a plain cylinder's level.
+  let h = startM >= 0 && startM <= span ? startM : cylinderFractionLevelM(R, span, volumeM3 / total);
   for (let k = 0; k < 100; k++) {
     const y = h - R;
     torisphericalSegments(g.head, t, y);
     const V = circleAreaBelow(R, y) * g.straightLengthM + 2 * (SEGMENTS[0] as number);
     const dV = 2 * Math.sqrt(Math.max(0, R * R - y * y)) * g.straightLengthM + 2 * (SEGMENTS[1] as number);
+    TORISPHERICAL_LAST_SLOPE[0] = dV;
     const f = V - volumeM3;
     // An exact root ends the solve. Before, f = 0 moved the bracket's top onto h, so the Newton
     // step (h itself) was not strictly inside and bisection walked up from the bottom of the

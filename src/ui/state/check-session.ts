@@ -18,6 +18,10 @@ import { isDemo } from './demo-label.ts';
 import type { Figure, ResultView } from './result-view.ts';
 import type { UnitPrefs } from './settings-model.ts';
 
+// The full result's card is drawn only from an evaluation, so it loads with the engine (the Check
+// screen takes it from here) rather than at start.
+export { ResultCard } from '../components/ResultCard.tsx';
+
 export type Evaluation =
   | { kind: 'incomplete'; message: string }
   | { kind: 'input-error'; errors: Partial<Record<ReadingField, string>>; general?: string }

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { bisectionResult } from '../../../src/core/check/bisection.ts';
 import { allVaporTemperatureK, liquidFullTemperatureK } from '../../../src/core/check/heat-up-envelope.ts';
-import { liquidLevelFromVolume, liquidVolumeFromLevel, vesselLevelSpanM, vesselVolume, type CylinderGeometry, type HeadSpec } from '../../../src/core/check/vessel-geometry.ts';
+import { levelSolver, liquidLevelFromVolume, liquidVolumeFromLevel, vesselLevelSpanM, vesselVolume, type CylinderGeometry, type HeadSpec } from '../../../src/core/check/vessel-geometry.ts';
 import { saturation } from '../../../src/core/steam/index.ts';
 
 /** The plain bisection bisectionResult promises to reproduce. */
@@ -34,6 +34,38 @@ describe('bisectionResult lands exactly where plain bisection lands', () => {
       ),
       { numRuns: 300 },
     );
+  });
+  it('from any start: an estimate with a slope, good, poor or wrong, or two known points (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -5, max: 5, noNaN: true }),
+        fc.double({ min: 0.01, max: 50, noNaN: true }),
+        fc.double({ min: -10, max: 10, noNaN: true }),
+        fc.constantFrom(1, 3),
+        fc.double({ min: -1, max: 1, noNaN: true }),
+        fc.oneof(fc.double({ min: -10, max: 10, noNaN: true }), fc.constantFrom(0, 1e-300, Infinity)),
+        fc.boolean(),
+        (lo, width, root, power, offset, slope, known) => {
+          const hi = lo + width;
+          const f = (x: number) => (power === 1 ? x - root : (x - root) * (x - root) * (x - root));
+          const start = known
+            ? { below: Math.max(lo, root - Math.abs(offset)), fBelow: f(Math.max(lo, root - Math.abs(offset))), above: Math.min(hi, root + Math.abs(offset)), fAbove: f(Math.min(hi, root + Math.abs(offset))) }
+            : { x: root + offset * width, slope };
+          expect(bisectionResult(f, lo, hi, 60, 0, () => 1e-14 * (1 + Math.abs(lo) + width) ** power, 1e-12 * width, start)).toBe(plain(f, lo, hi, 60, 0));
+        },
+      ),
+      { numRuns: 400 },
+    );
+  });
+  it('from a close start, in a handful of evaluations (a straight line: the estimate, one step past the root, one back)', () => {
+    let n = 0;
+    const f = (x: number) => {
+      n++;
+      return 2 * x - 1.3;
+    };
+    const got = bisectionResult(f, 0, 2, 80, 2e-12, () => 1e-13, 1e-14, { x: 0.6, slope: 2 });
+    expect(got).toBe(plain((x) => 2 * x - 1.3, 0, 2, 80, 2e-12));
+    expect(n).toBeLessThanOrEqual(6);
   });
   it('with far fewer evaluations than plain bisection (60 steps on [277.14, 647.096] K)', () => {
     let n = 0;
@@ -75,6 +107,23 @@ describe('the engine solves that use it give plain bisection\'s doubles', () => 
         expect(liquidLevelFromVolume(g, V)).toBe(expected);
       }),
       { numRuns: 300 },
+    );
+  });
+  it('one solver over a run of nearby fills, each solve starting from the last level (the level band), gives each fill\'s own level (fast-check)', () => {
+    const head = fc.constantFrom<HeadSpec>({ kind: 'flat' }, { kind: 'semi-ellipsoidal-2-1' }, { kind: 'hemispherical' }, { kind: 'torispherical' });
+    fc.assert(
+      fc.property(fc.constantFrom('vertical-cylinder' as const, 'horizontal-cylinder' as const), head, fc.double({ min: 0.3, max: 3, noNaN: true }), fc.double({ min: 0, max: 6, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), fc.array(fc.double({ min: -2e-3, max: 2e-3, noNaN: true }), { minLength: 1, maxLength: 7 }), (shape, h, D, L, share, steps) => {
+        if (shape === 'horizontal-cylinder' && h.kind === 'torispherical') return;
+        const g: CylinderGeometry = { shape, innerDiameterM: D, straightLengthM: h.kind === 'flat' ? Math.max(L, 0.01) : L, head: h };
+        const total = vesselVolume(g);
+        const span = vesselLevelSpanM(g);
+        const solve = levelSolver(g);
+        for (const step of [0, ...steps]) {
+          const V = Math.min(1, Math.max(0, share + step)) * total;
+          expect(solve(V)).toBe(plain((x) => liquidVolumeFromLevel(g, x) - V, 0, span, 80, 1e-12 * span));
+        }
+      }),
+      { numRuns: 200 },
     );
   });
 });

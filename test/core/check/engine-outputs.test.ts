@@ -38,7 +38,7 @@ const CHANGED: readonly { path: RegExp; cases?: readonly string[]; why: string; 
       'horizontal-cylinder, torispherical: two-phase 134 °C', 'horizontal-cylinder, torispherical: low fill, 160 °C, air',
       'horizontal-cylinder, torispherical (custom radii): two-phase 134 °C', 'horizontal-cylinder, torispherical (custom radii): low fill, 160 °C, air',
     ],
-    why: 'the horizontal torispherical level solve returns an exact root when it meets one, where it used to bisect on to a midpoint 1e-13 of the span below it (§5 speed): levels move by at most 2e-16 of their value, the level band\'s parts (differences of levels) by at most 4e-9',
+    why: 'the horizontal torispherical level solve (Newton\'s method, to 1e-13 of the span) returns an exact root when it meets one, where it used to bisect on to a midpoint 1e-13 of the span below it, and the level band\'s six solves start from the check\'s own level (a cubic in the volume) instead of a plain cylinder\'s (§5 speed); where Newton\'s method ends depends on where it starts: levels move by at most 2e-16 of their value, the level band\'s parts (differences of levels) by at most 4e-9 (3.9e-9 measured)',
     relative: 1e-8,
   },
 ];
