@@ -11,7 +11,7 @@
 // is missing. Every wait is on the app's own data attributes or on the held request itself.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page, Route } from 'playwright-core';
-import { DIST, launch, tempProfile, verifyChainsOnScreen, waitForControl } from './harness.ts';
+import { DIST, LONG_JOB_MS, launch, tempProfile, verifyChainsOnScreen, waitForControl } from './harness.ts';
 import { startSite, type NginxSite } from '../sync/nginx.ts';
 import { StandIn } from '../sync/stand-in.ts';
 import { makeDevice, seedChain } from '../sync/devices.ts';
@@ -58,6 +58,9 @@ describe('cancelling a supervisor\'s pull', () => {
     site = await startSite(DIST, couch.port);
     ctx = await launch(profile.dir);
     page = ctx.pages()[0] ?? (await ctx.newPage());
+    // Every wait below is on the app's own state; on a loaded CI machine a batch of 10,000 can take
+    // longer to merge than Playwright's default 30 s, which once failed a gate here.
+    page.setDefaultTimeout(LONG_JOB_MS);
   });
   afterAll(async () => {
     await ctx?.close();
